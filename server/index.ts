@@ -1,0 +1,29 @@
+/** Starts the HTTP server and the outbox worker. */
+import { createApp, closeSessionPool } from './app';
+import { config } from './config';
+import { logger } from './logger';
+import { migrateUp } from './db/migrator';
+import { sequelize } from './db/sequelize';
+import { startOutboxWorker } from './services/mail/outbox';
+
+if (process.env.MIGRATE_ON_START !== 'false') {
+  const applied = await migrateUp();
+  if (applied.length) logger.info({ applied }, 'migrations applied');
+}
+
+const app = createApp();
+const server = app.listen(config.port, config.host, () => {
+  logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
+});
+const stopOutbox = startOutboxWorker();
+
+async function shutdown(signal: string) {
+  logger.info({ signal }, 'shutting down');
+  stopOutbox();
+  server.close();
+  await closeSessionPool().catch(() => undefined);
+  await sequelize.close().catch(() => undefined);
+  process.exit(0);
+}
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+process.on('SIGINT', () => void shutdown('SIGINT'));

@@ -1,0 +1,21 @@
+/** All models and their associations. Import models from here. */
+import { Firm } from './firm';
+import { Client } from './client';
+import { User } from './user';
+import { Property } from './property';
+import { AuthToken } from './auth-token';
+import { OutboxMessage } from './outbox-message';
+import { AuditEvent } from './audit-event';
+
+Firm.hasMany(User, { foreignKey: 'firmId' });
+User.belongsTo(Firm, { foreignKey: 'firmId' });
+Firm.hasMany(Client, { foreignKey: 'firmId' });
+Client.belongsTo(Firm, { foreignKey: 'firmId' });
+Client.hasMany(Property, { foreignKey: 'clientId', as: 'properties' });
+Property.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
+Client.hasMany(User, { foreignKey: 'clientId', as: 'contacts' });
+User.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
+AuthToken.belongsTo(User, { foreignKey: 'userId' });
+
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent };
+export type { OutboxAttachment } from './outbox-message';

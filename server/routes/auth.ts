@@ -1,0 +1,111 @@
+/** Sign-in, sign-out, the current user, CSRF token, invitations and password reset. */
+import type { NextFunction, Request, Response } from 'express';
+import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
+import { z } from 'zod';
+import { defineRoutes } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { csrfToken } from '../middlewares/csrf';
+import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
+import { passport } from '../services/auth/passport';
+import { LoginSchema, PasswordResetRequestSchema, TokenPasswordSchema, type SessionUser } from '../../shared/schemas/auth';
+import { tooManyRequests, unauthorized } from '../errors';
+import { config } from '../config';
+import { findLiveToken, requestPasswordReset, setPasswordFromToken } from '../commands/password-setter';
+import { toSessionUser } from '../services/auth/passport';
+import { Firm } from '../models';
+import { recordAudit } from '../commands/audit-recorder';
+
+const r = defineRoutes('/auth');
+
+const publicUser = (u: SessionUser) => ({ id: u.id, email: u.email, name: u.name, role: u.role, firmId: u.firmId, firmName: u.firmName, clientId: u.clientId });
+
+/** Signs the user in on a fresh session (passport regenerates it) and answers the user and CSRF token. */
+function signIn(req: Request, res: Response, next: NextFunction, user: SessionUser, status = 200) {
+  req.login(user, (err) => {
+    if (err) return next(err);
+    const token = csrfToken(req);
+    req.session.save((saveErr) => {
+      if (saveErr) return next(saveErr);
+      const body = publicUser(user);
+      res.status(status).json({ user: body, data: { user: body }, csrfToken: token });
+    });
+  });
+}
+
+const loginLimiter = rateLimit({
+  windowMs: config.loginRateLimit.windowMs,
+  limit: config.loginRateLimit.max,
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  skipSuccessfulRequests: true,
+  store: new PostgresRateLimitStore('login:'),
+  keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
+  handler: (_req, _res, next) => next(tooManyRequests('Too many sign-in attempts. Wait a few minutes, then try again or reset your password.')),
+});
+
+const resetLimiter = rateLimit({
+  windowMs: 15 * 60 * 1000,
+  limit: 20,
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  store: new PostgresRateLimitStore('reset:'),
+  handler: (_req, _res, next) => next(tooManyRequests('Too many requests. Wait a few minutes and try again.')),
+});
+
+r.get('/csrf', 'public', (req, res) => {
+  res.json({ csrfToken: csrfToken(req), data: { csrfToken: csrfToken(req) } });
+});
+
+r.post('/login', 'public', validate({ body: LoginSchema }), loginLimiter, (req, res, next) => {
+  passport.authenticate('local', (err: unknown, user: SessionUser | false) => {
+    if (err) return next(err);
+    if (!user) return next(unauthorized('That e-mail and password do not match an account. Check both, or reset your password.'));
+    void recordAudit({ firmId: user.firmId, userId: user.id, action: 'user.signed-in', ip: req.ip ?? null }).catch(() => undefined);
+    signIn(req, res, next, user);
+  })(req, res, next);
+});
+
+r.post('/logout', 'signed-in', (req, res, next) => {
+  req.logout((err) => {
+    if (err) return next(err);
+    req.session.destroy(() => {
+      res.clearCookie('browseline.sid');
+      res.status(204).end();
+    });
+  });
+});
+
+r.get('/me', 'signed-in', (req, res) => {
+  const user = publicUser(req.user!);
+  res.json({ user, data: { user } });
+});
+
+const TokenParams = z.object({ token: z.string().min(20).max(200) });
+
+r.get('/invitations/:token', 'public', validate({ params: TokenParams }), async (req, res) => {
+  const { user } = await findLiveToken(String(req.params.token), 'invite');
+  const firm = await Firm.findByPk(user.firmId);
+  res.json({ data: { name: user.name, email: user.email, role: user.role, firmName: firm?.name ?? '' } });
+});
+
+r.post('/invitations/accept', 'public', resetLimiter, validate({ body: TokenPasswordSchema }), async (req, res, next) => {
+  const user = await setPasswordFromToken(req.body.token, 'invite', req.body.password, req.ip ?? null);
+  signIn(req, res, next, await toSessionUser(user), 201);
+});
+
+r.post('/password-reset', 'public', resetLimiter, validate({ body: PasswordResetRequestSchema }), async (req, res) => {
+  await requestPasswordReset(req.body.email);
+  res.status(202).json({ data: { message: 'If that address belongs to an account, a reset link is on its way. It expires in an hour.' } });
+});
+
+r.get('/password-reset/:token', 'public', validate({ params: TokenParams }), async (req, res) => {
+  const { user } = await findLiveToken(String(req.params.token), 'reset');
+  res.json({ data: { email: user.email } });
+});
+
+r.post('/password-reset/complete', 'public', resetLimiter, validate({ body: TokenPasswordSchema }), async (req, res) => {
+  await setPasswordFromToken(req.body.token, 'reset', req.body.password, req.ip ?? null);
+  res.json({ data: { message: 'Your password is changed. Sign in with the new one.' } });
+});
+
+export const authRouter = r.router;

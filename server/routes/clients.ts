@@ -1,0 +1,58 @@
+/** Clients of the firm. */
+import { Op, QueryTypes, type WhereOptions } from 'sequelize';
+import { defineRoutes, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { Client } from '../models';
+import { sequelize } from '../db/sequelize';
+import { ClientCreateSchema, ClientListQuerySchema, ClientUpdateSchema } from '../../shared/schemas/client';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { presentClient } from '../presenters/client';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { recordAudit } from '../commands/audit-recorder';
+
+const r = defineRoutes('/clients');
+
+/** Property count and acres per client of a firm, in one query. */
+async function clientStats(firmId: number, clientIds?: number[]): Promise<Map<number, { propertyCount: number; totalAcres: number }>> {
+  const rows = await sequelize.query<{ client_id: number; n: string; acres: string | null }>(
+    `SELECT client_id, count(*) AS n, sum(acres) AS acres FROM properties WHERE firm_id = :firmId ${clientIds ? 'AND client_id IN (:clientIds)' : ''} GROUP BY client_id`,
+    { replacements: { firmId, clientIds: clientIds?.length ? clientIds : [0] }, type: QueryTypes.SELECT },
+  );
+  return new Map(rows.map((row) => [row.client_id, { propertyCount: Number(row.n), totalAcres: Number(row.acres ?? 0) }]));
+}
+const NONE = { propertyCount: 0, totalAcres: 0 };
+
+r.get('/', STAFF, validate({ query: ClientListQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { q } = req.validQuery as { q?: string };
+  const where: WhereOptions = q ? { firmId, [Op.or]: [{ name: { [Op.iLike]: `%${q}%` } }, { email: { [Op.iLike]: `%${q}%` } }] } : { firmId };
+  const [clients, stats] = await Promise.all([Client.findAll({ where, order: [['name', 'ASC']] }), clientStats(firmId)]);
+  res.json({ data: clients.map((c) => presentClient(c, stats.get(c.id) ?? NONE)) });
+});
+
+r.post('/', STAFF, validate({ body: ClientCreateSchema }), async (req, res) => {
+  const me = actor(req);
+  const client = await sequelize.transaction(async (transaction) => {
+    const created = await Client.create({ firmId: me.firmId, name: req.body.name, email: req.body.email ?? null, phone: req.body.phone ?? null, address: req.body.address ?? null, notes: req.body.notes ?? null }, { transaction });
+    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'client.created', subjectType: 'Client', subjectId: created.id, ip: req.ip ?? null }, transaction);
+    return created;
+  });
+  res.status(201).json({ data: presentClient(client, NONE) });
+});
+
+r.get('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const client = await findInFirm(Client, Number(req.params.id), firmId, 'That client');
+  const stats = await clientStats(firmId, [client.id]);
+  res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
+});
+
+r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ClientUpdateSchema }), async (req, res) => {
+  const me = actor(req);
+  const client = await findInFirm(Client, Number(req.params.id), me.firmId, 'That client');
+  await client.update(req.body);
+  const stats = await clientStats(me.firmId, [client.id]);
+  res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
+});
+
+export const clientsRouter = r.router;

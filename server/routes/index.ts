@@ -1,0 +1,21 @@
+/** The API routers and their mount paths under /api. Add new routers here. */
+import type { Router } from 'express';
+import { healthRouter } from './health';
+import { authRouter } from './auth';
+import { teamRouter } from './team';
+import { clientsRouter } from './clients';
+import { deskRouter } from './desk';
+import { portalRouter } from './portal';
+import { fieldRouter } from './field';
+import { devMailRouter } from './dev-mail';
+
+export const apiRouters: { path: string; router: Router }[] = [
+  { path: '/health', router: healthRouter },
+  { path: '/auth', router: authRouter },
+  { path: '/team', router: teamRouter },
+  { path: '/clients', router: clientsRouter },
+  { path: '/desk', router: deskRouter },
+  { path: '/portal', router: portalRouter },
+  { path: '/field', router: fieldRouter },
+  { path: '/dev/mail', router: devMailRouter },
+];

@@ -1,0 +1,15 @@
+/** Migrates, then seeds the demo scenario (idempotent; refused in production). */
+import { migrateUp } from '../db/migrator';
+import { sequelize } from '../db/sequelize';
+import { seedDemo } from '../db/seeds/demo';
+
+try {
+  await migrateUp();
+  const firm = await seedDemo();
+  console.log(`demo data ready for ${firm.name}`);
+} catch (err) {
+  console.error((err as Error).message);
+  process.exitCode = 1;
+} finally {
+  await sequelize.close();
+}

@@ -1,0 +1,66 @@
+import { z } from 'zod';
+import { LIMITS } from '../limits';
+
+export const ROLES = ['owner', 'consultant', 'crew', 'client'] as const;
+export type Role = (typeof ROLES)[number];
+export const STAFF_ROLES: readonly Role[] = ['owner', 'consultant'];
+
+const email = z.string().trim().toLowerCase().max(LIMITS.emailMax).email({ message: 'enter an e-mail address like name@example.com' });
+const password = z
+  .string()
+  .min(LIMITS.passwordMin, { message: `use at least ${LIMITS.passwordMin} characters` })
+  .max(LIMITS.passwordMax, { message: `use at most ${LIMITS.passwordMax} characters` });
+
+export const LoginSchema = z.object({
+  email,
+  password: z.string().min(1, { message: 'enter your password' }).max(LIMITS.passwordMax),
+});
+export type LoginInput = z.infer<typeof LoginSchema>;
+
+/** The signed-in user as every auth answer shows it. */
+export const SessionUserSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+  firmId: z.number().int(),
+  firmName: z.string(),
+  clientId: z.number().int().nullable(),
+});
+export type SessionUser = z.infer<typeof SessionUserSchema>;
+
+export const InviteCreateSchema = z
+  .object({
+    email,
+    name: z.string().trim().min(1, { message: 'enter the person’s name' }).max(LIMITS.nameMax),
+    role: z.enum(['consultant', 'crew', 'client']),
+    clientId: z.number().int().positive().optional(),
+  })
+  .refine((v) => v.role !== 'client' || v.clientId !== undefined, {
+    message: 'choose the client this contact belongs to',
+    path: ['clientId'],
+  });
+export type InviteCreateInput = z.infer<typeof InviteCreateSchema>;
+
+export const TokenPasswordSchema = z
+  .object({
+    token: z.string().min(20).max(200),
+    password,
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.password === v.confirmPassword, { message: 'the two passwords differ', path: ['confirmPassword'] });
+export type TokenPasswordInput = z.infer<typeof TokenPasswordSchema>;
+
+export const PasswordResetRequestSchema = z.object({ email });
+export type PasswordResetRequestInput = z.infer<typeof PasswordResetRequestSchema>;
+
+export const TeamMemberSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+  clientId: z.number().int().nullable(),
+  status: z.enum(['active', 'invited', 'disabled']),
+  lastSignInAt: z.string().nullable(),
+});
+export type TeamMember = z.infer<typeof TeamMemberSchema>;

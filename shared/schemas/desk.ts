@@ -1,0 +1,30 @@
+import { z } from 'zod';
+
+export const DeskSummarySchema = z.object({
+  firm: z.object({ name: z.string(), region: z.string() }),
+  counts: z.object({ clients: z.number().int(), properties: z.number().int(), totalAcres: z.number(), pendingInvitations: z.number().int(), crew: z.number().int() }),
+  recentProperties: z.array(z.object({ id: z.number().int(), name: z.string(), clientName: z.string(), acres: z.number().nullable(), county: z.string().nullable(), state: z.string().nullable(), updatedAt: z.string() })),
+  activity: z.array(z.object({ id: z.number().int(), action: z.string(), actorName: z.string().nullable(), subjectType: z.string().nullable(), subjectId: z.number().nullable(), createdAt: z.string() })),
+});
+export type DeskSummary = z.infer<typeof DeskSummarySchema>;
+
+export const PortalPropertySummarySchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  acres: z.number().nullable(),
+  county: z.string().nullable(),
+  state: z.string().nullable(),
+  objectives: z.string().nullable(),
+});
+export const PortalHomeSchema = z.object({
+  client: z.object({ id: z.number().int(), name: z.string() }),
+  firm: z.object({ name: z.string(), email: z.string().nullable(), phone: z.string().nullable() }),
+  properties: z.array(PortalPropertySummarySchema),
+});
+export type PortalHome = z.infer<typeof PortalHomeSchema>;
+
+export const FieldHomeSchema = z.object({
+  firm: z.object({ name: z.string(), phone: z.string().nullable() }),
+  contacts: z.array(z.object({ name: z.string(), role: z.string(), email: z.string(), phone: z.string().nullable() })),
+});
+export type FieldHome = z.infer<typeof FieldHomeSchema>;

@@ -1,0 +1,22 @@
+import { renderEmail, type RenderedEmail } from './layout';
+
+const ROLE_WORDS: Record<string, string> = {
+  consultant: 'plan and price habitat work',
+  crew: 'see your field tasks and mark them done',
+  client: 'see the plan for your land, its progress, proposals and invoices',
+};
+
+/** The invitation to join a firm's Browseline workspace. */
+export function invitationEmail(input: { firmName: string; inviterName: string; name: string; role: string; url: string; ttlHours: number }): RenderedEmail {
+  return renderEmail({
+    subject: `${input.inviterName} invited you to ${input.firmName} on Browseline`,
+    firmName: input.firmName,
+    greeting: `Hello ${input.name},`,
+    paragraphs: [
+      `${input.inviterName} of ${input.firmName} has invited you to Browseline, where you can ${ROLE_WORDS[input.role] ?? 'work together'}.`,
+      'Choose a password to finish setting up your account.',
+    ],
+    action: { label: 'Set your password', url: input.url },
+    footnote: `This link works once and expires in ${input.ttlHours} hours. If you did not expect it, you can ignore this message.`,
+  });
+}
