@@ -1,0 +1,72 @@
+import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import { useMe } from '../features/auth/api/get-me';
+import { homeFor, paths } from '../config/paths';
+import { RequireRole } from '../components/layouts/require-role';
+import { ConsultantLayout } from '../components/layouts/consultant-layout';
+import { FieldLayout } from '../components/layouts/field-layout';
+import { PortalLayout } from '../components/layouts/portal-layout';
+import { Loading } from '../components/ui/card';
+import { LoginPage } from './routes/auth/login';
+import { ForgotPasswordPage } from './routes/auth/forgot-password';
+import { ResetPasswordPage } from './routes/auth/reset-password';
+import { AcceptInvitePage } from './routes/auth/accept-invite';
+import { DeskPage } from './routes/desk/desk';
+import { ClientsPage } from './routes/clients/clients';
+import { TeamPage } from './routes/settings/team';
+import { MailPage } from './routes/settings/mail';
+import { FieldHomePage } from './routes/field/field-home';
+import { PortalHomePage } from './routes/portal/portal-home';
+import { NotFoundPage, RouteErrorPage } from './routes/not-found';
+
+function RootRedirect() {
+  const me = useMe();
+  if (me.isPending) return <Loading />;
+  return <Navigate to={me.data ? homeFor(me.data.role) : paths.login} replace />;
+}
+
+const STAFF = ['owner', 'consultant'] as const;
+
+const router = createBrowserRouter([
+  { path: '/', element: <RootRedirect />, errorElement: <RouteErrorPage /> },
+  { path: paths.login, element: <LoginPage />, errorElement: <RouteErrorPage /> },
+  { path: paths.forgotPassword, element: <ForgotPasswordPage />, errorElement: <RouteErrorPage /> },
+  { path: paths.resetPassword(), element: <ResetPasswordPage />, errorElement: <RouteErrorPage /> },
+  { path: paths.acceptInvite(), element: <AcceptInvitePage />, errorElement: <RouteErrorPage /> },
+  {
+    element: (
+      <RequireRole roles={STAFF}>
+        <ConsultantLayout />
+      </RequireRole>
+    ),
+    errorElement: <RouteErrorPage />,
+    children: [
+      { path: paths.desk, element: <DeskPage /> },
+      { path: paths.clients, element: <ClientsPage /> },
+      { path: paths.team, element: <TeamPage /> },
+      { path: paths.mail, element: <MailPage /> },
+    ],
+  },
+  {
+    element: (
+      <RequireRole roles={['crew', 'owner', 'consultant']}>
+        <FieldLayout />
+      </RequireRole>
+    ),
+    errorElement: <RouteErrorPage />,
+    children: [{ path: paths.field, element: <FieldHomePage /> }],
+  },
+  {
+    element: (
+      <RequireRole roles={['client']}>
+        <PortalLayout />
+      </RequireRole>
+    ),
+    errorElement: <RouteErrorPage />,
+    children: [{ path: paths.portal, element: <PortalHomePage /> }],
+  },
+  { path: '*', element: <NotFoundPage /> },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

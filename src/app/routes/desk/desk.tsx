@@ -1,0 +1,88 @@
+import { Link } from 'react-router-dom';
+import { useDesk } from '../../../features/desk/api/get-desk';
+import { useMe } from '../../../features/auth/api/get-me';
+import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
+import { describeAction, formatAcres, formatRelative } from '../../../lib/format';
+import { paths } from '../../../config/paths';
+
+function Figure({ label, value }: { label: string; value: string }) {
+  return (
+    <div className="rounded-md border border-rule bg-card px-4 py-3">
+      <p className="text-xs uppercase tracking-wide text-slate">{label}</p>
+      <p className="figure text-2xl font-bold text-ink">{value}</p>
+    </div>
+  );
+}
+
+/** The consultant's home: the firm at a glance and what changed lately. */
+export function DeskPage() {
+  const me = useMe();
+  const desk = useDesk();
+  if (desk.isPending) return <Loading />;
+  if (desk.isError) return <ErrorPanel error={desk.error} />;
+  const d = desk.data;
+  const firstName = me.data?.name.split(' ')[0] ?? '';
+  return (
+    <div className="flex flex-col gap-6">
+      <div>
+        <h1 className="text-2xl font-bold">Desk</h1>
+        <p className="text-slate">Good to see you, {firstName}. Here is {d.firm.name} this week.</p>
+      </div>
+      <div className="grid grid-cols-2 gap-3 lg:grid-cols-4">
+        <Figure label="Clients" value={String(d.counts.clients)} />
+        <Figure label="Properties" value={String(d.counts.properties)} />
+        <Figure label="Acres under plan" value={d.counts.totalAcres.toLocaleString('en-US')} />
+        <Figure label="Crew members" value={String(d.counts.crew)} />
+      </div>
+      <div className="grid gap-4 lg:grid-cols-3">
+        <Card title="Properties" className="lg:col-span-2" action={<Link to={paths.clients} className="text-sm text-moss-deep hover:underline">All clients</Link>}>
+          {d.recentProperties.length === 0 ? (
+            <EmptyState title="No properties yet">Add a client, then map their property boundary.</EmptyState>
+          ) : (
+            <table className="w-full text-sm">
+              <thead>
+                <tr className="border-b border-rule text-left text-xs uppercase tracking-wide text-slate">
+                  <th className="py-2 font-semibold">Property</th>
+                  <th className="py-2 font-semibold">Client</th>
+                  <th className="py-2 font-semibold">County</th>
+                  <th className="py-2 text-right font-semibold">Acres</th>
+                </tr>
+              </thead>
+              <tbody>
+                {d.recentProperties.map((p) => (
+                  <tr key={p.id} className="border-b border-rule/60 last:border-0">
+                    <td className="py-2 font-semibold text-ink">{p.name}</td>
+                    <td className="py-2 text-slate">{p.clientName}</td>
+                    <td className="py-2 text-slate">{[p.county, p.state].filter(Boolean).join(', ') || '—'}</td>
+                    <td className="py-2 text-right tabular-nums">{formatAcres(p.acres)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          )}
+        </Card>
+        <Card title="Lately">
+          {d.activity.length === 0 ? (
+            <EmptyState title="Nothing yet">Invite your crew and add clients from Settings and Clients.</EmptyState>
+          ) : (
+            <ul className="flex flex-col gap-2 text-sm">
+              {d.activity.map((a) => (
+                <li key={a.id} className="flex justify-between gap-2">
+                  <span>
+                    <span className="font-semibold">{a.actorName ?? 'Someone'}</span> {describeAction(a.action)}
+                  </span>
+                  <span className="shrink-0 text-xs text-slate">{formatRelative(a.createdAt)}</span>
+                </li>
+              ))}
+            </ul>
+          )}
+          {d.counts.pendingInvitations > 0 ? (
+            <p className="mt-3 rounded bg-ochre/15 px-3 py-2 text-sm text-ink">
+              {d.counts.pendingInvitations} invitation{d.counts.pendingInvitations === 1 ? '' : 's'} not yet accepted. <Link className="text-moss-deep underline" to={paths.team}>See the team</Link>
+            </p>
+          ) : null}
+        </Card>
+      </div>
+    </div>
+  );
+}

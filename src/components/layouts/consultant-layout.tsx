@@ -1,0 +1,65 @@
+import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { useState, type FormEvent } from 'react';
+import { Brand } from './brand';
+import { UserMenu } from './user-menu';
+import { useMe } from '../../features/auth/api/get-me';
+import { paths } from '../../config/paths';
+
+const PLACES = [
+  { to: paths.desk, label: 'Desk' },
+  { to: paths.clients, label: 'Clients' },
+  { to: paths.team, label: 'Settings' },
+];
+
+/** The consultant's shell: a slim top bar and a left column of places. */
+export function ConsultantLayout() {
+  const me = useMe();
+  const navigate = useNavigate();
+  const [q, setQ] = useState('');
+  const search = (e: FormEvent) => {
+    e.preventDefault();
+    navigate(`${paths.clients}?q=${encodeURIComponent(q)}`);
+  };
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="flex items-center gap-4 border-b border-rule bg-card px-4 py-2">
+        <Brand />
+        <span className="hidden border-l border-rule pl-4 text-sm text-slate md:inline">{me.data?.firmName}</span>
+        <form onSubmit={search} role="search" className="ml-auto hidden sm:block">
+          <label className="sr-only" htmlFor="global-search">
+            Search clients
+          </label>
+          <input
+            id="global-search"
+            value={q}
+            onChange={(e) => setQ(e.target.value)}
+            placeholder="Search clients…"
+            className="w-56 rounded border border-rule bg-paper px-3 py-1.5 text-sm focus:border-moss focus:outline-none"
+          />
+        </form>
+        <UserMenu />
+      </header>
+      <div className="flex flex-1">
+        <nav aria-label="Places" className="w-44 shrink-0 border-r border-rule bg-paper px-2 py-4">
+          <ul className="flex flex-col gap-1">
+            {PLACES.map((p) => (
+              <li key={p.to}>
+                <NavLink
+                  to={p.to}
+                  className={({ isActive }) =>
+                    `block rounded px-3 py-2 text-sm ${isActive ? 'bg-moss/10 font-semibold text-moss-deep' : 'text-ink hover:bg-rule/40'}`
+                  }
+                >
+                  {p.label}
+                </NavLink>
+              </li>
+            ))}
+          </ul>
+        </nav>
+        <main className="min-w-0 flex-1 px-6 py-6">
+          <Outlet />
+        </main>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,30 @@
+import { useNavigate } from 'react-router-dom';
+import { useLogout } from '../../features/auth/api/login';
+import { useMe } from '../../features/auth/api/get-me';
+import { paths } from '../../config/paths';
+
+const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Landowner' };
+
+/** The signed-in person and a sign-out button. */
+export function UserMenu({ compact = false }: { compact?: boolean }) {
+  const me = useMe();
+  const logout = useLogout();
+  const navigate = useNavigate();
+  if (!me.data) return null;
+  return (
+    <div className="flex items-center gap-3 text-sm">
+      {!compact ? (
+        <span className="hidden text-right leading-tight sm:block">
+          <span className="block font-semibold text-ink">{me.data.name}</span>
+          <span className="block text-xs text-slate">{ROLE_LABEL[me.data.role]}</span>
+        </span>
+      ) : null}
+      <button
+        className="rounded border border-rule px-3 py-1.5 text-slate hover:border-moss hover:text-moss-deep"
+        onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}
+      >
+        Sign out
+      </button>
+    </div>
+  );
+}

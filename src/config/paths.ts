@@ -1,0 +1,21 @@
+/** Every client route in one place. */
+export const paths = {
+  login: '/login',
+  forgotPassword: '/forgot-password',
+  resetPassword: (token = ':token') => `/reset-password/${token}`,
+  acceptInvite: (token = ':token') => `/invite/${token}`,
+  desk: '/desk',
+  clients: '/clients',
+  client: (id: number | string = ':id') => `/clients/${id}`,
+  team: '/settings/team',
+  mail: '/settings/mail',
+  field: '/field',
+  portal: '/portal',
+} as const;
+
+/** The home of each role after sign-in. */
+export function homeFor(role: string): string {
+  if (role === 'crew') return paths.field;
+  if (role === 'client') return paths.portal;
+  return paths.desk;
+}

@@ -1,0 +1,25 @@
+/** Display helpers for the client. */
+
+export const formatAcres = (acres: number | null | undefined, digits = 1): string =>
+  acres === null || acres === undefined ? '—' : `${acres.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })} ac`;
+
+export const formatDate = (iso: string): string => new Date(iso).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric' });
+
+export const formatRelative = (iso: string): string => {
+  const minutes = Math.round((Date.now() - new Date(iso).getTime()) / 60000);
+  if (minutes < 1) return 'just now';
+  if (minutes < 60) return `${minutes} min ago`;
+  const hours = Math.round(minutes / 60);
+  if (hours < 24) return `${hours} h ago`;
+  return formatDate(iso);
+};
+
+const ACTION_WORDS: Record<string, string> = {
+  'client.created': 'added a client',
+  'user.invited': 'sent an invitation',
+  'user.joined': 'joined the firm',
+  'user.password-reset': 'reset a password',
+  'user.disabled': 'disabled an account',
+  'user.enabled': 'enabled an account',
+};
+export const describeAction = (action: string): string => ACTION_WORDS[action] ?? action.replace(/[.-]/g, ' ');

@@ -1,0 +1,44 @@
+/** The app under test and signed-in supertest agents. */
+import request from 'supertest';
+import type { Express } from 'express';
+import { createApp } from '../../server/app';
+
+let app: Express | null = null;
+
+/** One app per test file (createApp without listen). */
+export function testApp(): Express {
+  if (!app) app = createApp();
+  return app;
+}
+
+export type Agent = ReturnType<typeof request.agent> & { csrf: string };
+
+/** A cookie-keeping agent with a CSRF token, not signed in. */
+export async function anonymousAgent(): Promise<Agent> {
+  const agent = request.agent(testApp()) as Agent;
+  const res = await agent.get('/api/auth/csrf').expect(200);
+  agent.csrf = res.body.csrfToken;
+  return agent;
+}
+
+/** An agent signed in as the given user; its csrf field holds the new session's token. */
+export async function signedInAgent(email: string, password: string): Promise<Agent> {
+  const agent = request.agent(testApp()) as Agent;
+  const res = await agent.post('/api/auth/login').send({ email, password });
+  if (res.status !== 200) throw new Error(`sign-in failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`);
+  agent.csrf = res.body.csrfToken;
+  return agent;
+}
+
+/** Messages the SMTP capture server holds for an address, newest first. */
+export async function capturedMailTo(address: string): Promise<{ id: number; subject: string; to: string[] }[]> {
+  const res = await fetch(`${process.env.MAIL_CAPTURE_URL}/messages`);
+  const body = (await res.json()) as { data: { id: number; subject: string; to: string[] }[] };
+  return body.data.filter((m) => m.to.includes(address));
+}
+
+/** The full text of a captured message. */
+export async function capturedMessage(id: number): Promise<{ text: string; subject: string; attachments: { filename: string }[] }> {
+  const res = await fetch(`${process.env.MAIL_CAPTURE_URL}/messages/${id}`);
+  return ((await res.json()) as { data: { text: string; subject: string; attachments: { filename: string }[] } }).data;
+}
