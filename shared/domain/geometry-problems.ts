@@ -44,6 +44,12 @@ const SUPPORTED = ['Point', 'MultiPoint', 'LineString', 'MultiLineString', 'Poly
 
 type Path = (string | number)[];
 
+const EMPTY_MULTI_MESSAGES: Record<string, string> = {
+  MultiPoint: 'The shape has no points: place at least one point or delete it.',
+  MultiLineString: 'The line has no parts: draw the line or delete it.',
+  MultiPolygon: 'The outline has no parts: draw the outline or delete it.',
+};
+
 /** Array levels above the positions (a Point's coordinates are the position itself). */
 const NESTING_DEPTH: Record<string, number> = {
   Point: 0,
@@ -94,6 +100,12 @@ export function findGeometryProblems(geom: Geometry, options: GeometryCheckOptio
       message: `The shape has ${vertices.toLocaleString('en-US')} corners; the limit is ${options.maxVertices.toLocaleString('en-US')}: simplify it (fewer corners along smooth edges) and try again.`,
       path: ['coordinates'],
     });
+  }
+
+  const emptyMulti = EMPTY_MULTI_MESSAGES[geom.type];
+  if (emptyMulti && (coords as unknown[]).length === 0) {
+    problems.push({ code: 'too-few-positions', message: emptyMulti, path: ['coordinates'] });
+    return problems;
   }
 
   if (geom.type === 'LineString' || geom.type === 'MultiLineString') {

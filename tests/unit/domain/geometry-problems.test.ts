@@ -146,6 +146,13 @@ describe('findGeometryProblems', () => {
     expect(p.message).toContain('keep holes inside it');
   });
 
+  it('refuses Multi- shapes without parts', () => {
+    expect(codes({ type: 'MultiPolygon', coordinates: [] })).toEqual(['too-few-positions']);
+    expect(codes({ type: 'MultiLineString', coordinates: [] })).toEqual(['too-few-positions']);
+    expect(codes({ type: 'MultiPoint', coordinates: [] })).toEqual(['too-few-positions']);
+    expect(codes({ type: 'Polygon', coordinates: [] })).toEqual(['too-few-positions']);
+  });
+
   it('refuses an outline whose corners lie on one line', () => {
     const flat: Polygon = { type: 'Polygon', coordinates: [[[-90.5, 44], [-90.49, 44], [-90.48, 44], [-90.5, 44]]] };
     expect(codes(flat)).toEqual(['no-area']);
