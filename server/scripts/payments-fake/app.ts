@@ -394,6 +394,9 @@ function maskKey(key: string): string {
   return key.length <= 12 ? `${key.slice(0, 3)}****` : `${key.slice(0, 8)}****${key.slice(-4)}`;
 }
 
+// The hosted service keeps keys for 24 hours; a local fake only needs a bound.
+const MAX_IDEMPOTENCY_KEYS = 10_000;
+
 type IdempotencyStore = Map<string, { fingerprint: string; statusCode: number; body: unknown }>;
 
 function idempotencyGuard(store: IdempotencyStore) {
@@ -424,6 +427,8 @@ function idempotencyGuard(store: IdempotencyStore) {
     res.json = (payload: unknown) => {
       if (res.statusCode < 400 || res.statusCode === 402) {
         store.set(scopedKey, { fingerprint, statusCode: res.statusCode, body: payload });
+        // The SDK keys every POST, so bound the memory: forget the oldest keys first.
+        if (store.size > MAX_IDEMPOTENCY_KEYS) store.delete(store.keys().next().value as string);
       }
       return sendJson(payload);
     };
