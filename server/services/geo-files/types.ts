@@ -1,0 +1,72 @@
+/** Shapes shared by the geometry-file readers and writers. */
+import type { LineString, MultiLineString, MultiPolygon, Point, Polygon } from 'geojson';
+import type { KindFamily, UnitKind } from '../../../shared/domain/unit-kinds';
+
+export type ImportFormat = 'geojson' | 'kml' | 'kmz' | 'gpx' | 'shapefile';
+export type ExportFormat = 'geojson' | 'kml' | 'gpx' | 'csv';
+export type PlanGeometry = Polygon | MultiPolygon | LineString | MultiLineString | Point;
+export type AreaGeometry = Polygon | MultiPolygon;
+
+export interface GeoFileInput {
+  filename: string;
+  buffer: Buffer | Uint8Array;
+}
+
+export interface ReadGeoFileOptions {
+  /** Guard on the number of features (found plus skipped); defaults to DEFAULT_MAX_FEATURES. */
+  maxFeatures?: number;
+  /** Guard on the bytes one archive entry may expand to; defaults to DEFAULT_MAX_UNZIPPED_BYTES. */
+  maxUnzippedBytes?: number;
+}
+
+export interface ImportedFeature {
+  /** Position of the source feature in the file (0-based, in the order the file was read). */
+  index: number;
+  /** Set when one source feature gave several features (a mixed GeometryCollection, a MultiPoint). */
+  part?: number;
+  name: string;
+  geometry: PlanGeometry;
+  family: KindFamily;
+  /** The unit kind the file states (a `kind` property, KML ExtendedData, GPX <type>), when it fits the family. */
+  kind?: UnitKind;
+  properties: Record<string, unknown>;
+  /** What the importer changed or noticed (ring closed, elevations dropped, …). */
+  notes: string[];
+}
+
+export interface SkippedFeature {
+  index: number;
+  part?: number;
+  name?: string;
+  reason: string;
+}
+
+export interface GeoFileReadResult {
+  format: ImportFormat;
+  features: ImportedFeature[];
+  skipped: SkippedFeature[];
+  /** File-level remarks, e.g. an extension that does not match the content. */
+  warnings: string[];
+}
+
+export interface ExportUnit {
+  id: string | number;
+  name: string;
+  kind: UnitKind;
+  geometry: PlanGeometry;
+  acres?: number | null;
+  lengthFt?: number | null;
+  notes?: string | null;
+}
+
+export interface PlanExport {
+  propertyName: string;
+  boundary?: AreaGeometry | null;
+  units: ExportUnit[];
+}
+
+export interface GeoFileOutput {
+  contentType: string;
+  filename: string;
+  body: string | Buffer;
+}
