@@ -20,7 +20,7 @@ export function LoginPage() {
   const login = useLogin();
   const form = useForm<z.input<typeof LoginSchema>, unknown, z.output<typeof LoginSchema>>({ resolver: zodResolver(LoginSchema), defaultValues: { email: '', password: '' } });
 
-  if (me.data) return <Navigate to={homeFor(me.data.role)} replace />;
+  if (me.data) return <Navigate to={safeNext(params.get('next')) ?? homeFor(me.data.role)} replace />;
 
   const submit = form.handleSubmit((values) =>
     login.mutate(values, { onSuccess: (user) => navigate(safeNext(params.get('next')) ?? homeFor(user.role), { replace: true }) }),

@@ -1,0 +1,43 @@
+/** Headless Chromium (Debian's) through playwright-core, and helpers for journeys. */
+import fs from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { expect } from 'vitest';
+
+const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+export const SCREENSHOTS = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
+
+/** Launches headless Chromium with a fresh profile and no background networking. */
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: CHROMIUM,
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+export const DEMO_PASSWORD = 'demo-browseline';
+
+/** Signs in through the form, as a person would. */
+export async function signIn(page: Page, baseUrl: string, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto(`${baseUrl}/login`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Saves a screenshot under tests/.artifacts/screenshots for a person to look at. */
+export async function screenshot(page: Page, name: string): Promise<void> {
+  fs.mkdirSync(SCREENSHOTS, { recursive: true });
+  await page.screenshot({ path: path.join(SCREENSHOTS, `${name}.png`), fullPage: true });
+}
+
+/** Fails the test on any uncaught page error or failed same-origin request. */
+export function watchPage(page: Page): { errors: string[]; assertClean: () => void } {
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(`pageerror: ${e.message}`));
+  page.on('console', (m) => {
+    if (m.type() === 'error' && !/Failed to load resource: the server responded with a status of 4\d\d/.test(m.text())) errors.push(`console: ${m.text()}`);
+  });
+  return { errors, assertClean: () => expect(errors).toEqual([]) };
+}
