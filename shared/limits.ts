@@ -9,3 +9,18 @@ export const LIMITS = {
   inviteTtlHours: 72,
   resetTtlMinutes: 60,
 } as const;
+
+/** Geometry limits shared by the server's validation and the map editor. */
+export const GEOMETRY_LIMITS = {
+  /** Corners of a property boundary (a surveyed or GPS-traced outline can be long). */
+  boundaryMaxVertices: 50_000,
+  /** Corners of one plan unit. */
+  unitMaxVertices: 10_000,
+  /** Above this the self-crossing check runs in PostGIS instead of the browser and zod. */
+  crossingCheckMaxVertices: 5_000,
+  /** Units on one property. */
+  unitsPerProperty: 2_000,
+  /** Upload sizes. */
+  importMaxBytes: 25 * 1024 * 1024,
+  overlayMaxBytes: 40 * 1024 * 1024,
+} as const;

@@ -35,6 +35,11 @@ export interface GeometryCheckOptions {
    * skipped when the cap is exceeded.
    */
   maxVertices: number;
+  /**
+   * Above this many vertices the quadratic self-crossing test is left to the database (PostGIS
+   * `ST_IsValid`), which answers the same question in n·log n. Default: no limit.
+   */
+  crossingCheckMaxVertices?: number;
 }
 
 /** Out-of-range positions reported one by one before a summary line takes over. */
@@ -128,14 +133,14 @@ export function findGeometryProblems(geom: Geometry, options: GeometryCheckOptio
     polygons.forEach((rings, p) => {
       const base: Path = multi ? ['coordinates', p] : ['coordinates'];
       const partName = multi ? `part ${p + 1} of the outline` : 'the outline';
-      if (ranges.malformed === 0) checkPolygon(rings, base, partName, !overCap && ranges.count === 0, problems);
+      if (ranges.malformed === 0) checkPolygon(rings, base, partName, !overCap && ranges.count === 0, vertices <= (options.crossingCheckMaxVertices ?? Infinity), problems);
     });
   }
   return problems;
 }
 
 /** Ring size and closure, then (when the ring structure is sound) crossings, holes and area. */
-function checkPolygon(rings: Position[][], base: Path, partName: string, deepChecks: boolean, problems: GeometryProblem[]): void {
+function checkPolygon(rings: Position[][], base: Path, partName: string, deepChecks: boolean, crossingCheck: boolean, problems: GeometryProblem[]): void {
   const Part = capitalise(partName);
   if (rings.length === 0) {
     problems.push({ code: 'too-few-positions', message: `${Part} has no rings: draw the outline or delete the part.`, path: base });
@@ -170,7 +175,7 @@ function checkPolygon(rings: Position[][], base: Path, partName: string, deepChe
   if (!ringsSound || !deepChecks) return;
 
   const polygon: Polygon = { type: 'Polygon', coordinates: rings.map(dropRepeats) };
-  const crossings = kinks(polygon).features;
+  const crossings = crossingCheck ? kinks(polygon).features : [];
   if (crossings.length > 0) {
     const [lon, lat] = crossings[0].geometry.coordinates;
     problems.push({
