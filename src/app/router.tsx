@@ -1,4 +1,4 @@
-import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import { createBrowserRouter, Navigate, Outlet, RouterProvider } from 'react-router-dom';
 import { useMe } from '../features/auth/api/get-me';
 import { homeFor, paths } from '../config/paths';
 import { RequireRole } from '../components/layouts/require-role';
@@ -44,7 +44,18 @@ const router = createBrowserRouter([
       { path: paths.clients, element: <ClientsPage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
+      // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
+      { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), handle: { fullBleed: true } },
     ],
+  },
+  {
+    element: (
+      <RequireRole roles={STAFF}>
+        <Outlet />
+      </RequireRole>
+    ),
+    errorElement: <RouteErrorPage />,
+    children: [{ path: paths.planPrint(), lazy: () => import('./routes/properties/plan-print') }],
   },
   {
     element: (

@@ -26,6 +26,11 @@ async function fetchCsrfToken(): Promise<string> {
   return csrfToken;
 }
 
+/** The CSRF token for a write made outside `api` (an XMLHttpRequest upload with progress). */
+export async function getCsrfToken(refresh = false): Promise<string> {
+  return !refresh && csrfToken ? csrfToken : fetchCsrfToken();
+}
+
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 interface RequestOptions {

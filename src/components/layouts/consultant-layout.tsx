@@ -1,4 +1,4 @@
-import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
 import { useState, type FormEvent } from 'react';
 import { Brand } from './brand';
 import { UserMenu } from './user-menu';
@@ -16,12 +16,14 @@ export function ConsultantLayout() {
   const me = useMe();
   const navigate = useNavigate();
   const [q, setQ] = useState('');
+  // A page whose route has `handle: { fullBleed: true }` (the plan map) fills the content area edge to edge.
+  const fullBleed = useMatches().some((m) => (m.handle as { fullBleed?: boolean } | undefined)?.fullBleed);
   const search = (e: FormEvent) => {
     e.preventDefault();
     navigate(`${paths.clients}?q=${encodeURIComponent(q)}`);
   };
   return (
-    <div className="flex min-h-screen flex-col">
+    <div className={`flex flex-col ${fullBleed ? 'h-screen' : 'min-h-screen'}`}>
       <header className="flex items-center gap-4 border-b border-rule bg-card px-4 py-2">
         <Brand />
         <span className="hidden border-l border-rule pl-4 text-sm text-slate md:inline">{me.data?.firmName}</span>
@@ -39,7 +41,7 @@ export function ConsultantLayout() {
         </form>
         <UserMenu />
       </header>
-      <div className="flex flex-1">
+      <div className={`flex flex-1 ${fullBleed ? 'min-h-0' : ''}`}>
         <nav aria-label="Places" className="w-44 shrink-0 border-r border-rule bg-paper px-2 py-4">
           <ul className="flex flex-col gap-1">
             {PLACES.map((p) => (
@@ -56,7 +58,7 @@ export function ConsultantLayout() {
             ))}
           </ul>
         </nav>
-        <main className="min-w-0 flex-1 px-6 py-6">
+        <main className={fullBleed ? 'flex min-h-0 min-w-0 flex-1 flex-col' : 'min-w-0 flex-1 px-6 py-6'}>
           <Outlet />
         </main>
       </div>

@@ -1,0 +1,507 @@
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import type { Geometry, MultiPolygon, Polygon } from 'geojson';
+import { KIND_STYLES } from '../../../../shared/domain/unit-kinds';
+import { bboxOf, centroidOf } from '../../../../shared/domain/geometry';
+import type { UnitDto, UnitUpdateInput } from '../../../../shared/schemas/unit';
+import { ApiError } from '../../../lib/api-client';
+import { paths } from '../../../config/paths';
+import { Button } from '../../../components/ui/button';
+import { ErrorPanel, Loading } from '../../../components/ui/card';
+import { useToast } from '../../../components/ui/toast';
+import { useProperty } from '../../../features/plan-map/api/get-property';
+import { useUnits } from '../../../features/plan-map/api/get-units';
+import { usePlan } from '../../../features/plan-map/api/get-plan';
+import { useFirm } from '../../../features/plan-map/api/get-firm';
+import { useOverlays } from '../../../features/plan-map/api/get-overlays';
+import { useUpdateOverlay } from '../../../features/plan-map/api/update-overlay';
+import { useCreateUnit } from '../../../features/plan-map/api/create-unit';
+import { useCreateUnitsBulk } from '../../../features/plan-map/api/create-units-bulk';
+import { useUpdateUnit } from '../../../features/plan-map/api/update-unit';
+import { useDeleteUnit } from '../../../features/plan-map/api/delete-unit';
+import { useUpdatePropertyBoundary } from '../../../features/plan-map/api/update-property-boundary';
+import { useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
+import { usePlanUndo } from '../../../features/plan-map/hooks/use-plan-undo';
+import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
+import { DrawChips } from '../../../features/plan-map/components/draw-chips';
+import { PlanLedger } from '../../../features/plan-map/components/plan-ledger';
+import { UnitDetail } from '../../../features/plan-map/components/unit-detail';
+import { ImportPanel } from '../../../features/plan-map/components/import-panel';
+import { MapLegend } from '../../../features/plan-map/components/map-legend';
+import { ExportMenu } from '../../../features/plan-map/components/export-menu';
+import { OverlayPanel } from '../../../features/plan-map/components/overlay-panel';
+import type { DrawTarget, MeasureReading, PlanMapController, PlanMapCallbacks } from '../../../features/plan-map/lib/plan-map-controller';
+import { defaultUnitName, kindsPresent, unitsToCollections } from '../../../features/plan-map/lib/unit-features';
+import { defaultImportChoice, planImportSave, type ImportChoice } from '../../../features/plan-map/lib/import-choices';
+import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../../../features/plan-map/lib/measure-format';
+
+/** The first field message of a 422 answer, or the error's own message. */
+function errorText(err: unknown): string {
+  if (err instanceof ApiError && Array.isArray(err.details) && err.details.length > 0) {
+    const first = err.details[0] as { path?: string; message?: string };
+    if (first.message) return `${err.message}: ${first.message}`;
+  }
+  return err instanceof Error ? err.message : 'Something went wrong. Please try again.';
+}
+
+function isTyping(target: EventTarget | null): boolean {
+  const el = target as HTMLElement | null;
+  return !!el && (el.tagName === 'INPUT' || el.tagName === 'TEXTAREA' || el.tagName === 'SELECT' || el.isContentEditable);
+}
+
+function MeasureReadout({ reading, onClear }: { reading: MeasureReading; onClear: () => void }) {
+  const what =
+    reading.target.type === 'measure'
+      ? reading.drawing
+        ? 'Measuring'
+        : 'Measured'
+      : reading.target.type === 'boundary'
+        ? 'Boundary'
+        : KIND_STYLES[reading.target.kind].label;
+  return (
+    <div role="status" aria-label="Measure" className="flex items-center gap-3 rounded border border-sky/50 bg-card/95 px-3 py-1.5 text-sm shadow-sm">
+      <span className="text-slate">{what}</span>
+      {reading.shape === 'line' ? (
+        <span className="figure font-bold text-ink">
+          {formatFeet(reading.lengthFt)} · {formatMiles(reading.lengthMi)}
+        </span>
+      ) : (
+        <span className="figure font-bold text-ink">
+          {formatAcresShort(reading.acres)} · {formatHectares(reading.hectares)} · perimeter {formatFeet(reading.perimeterFt)}
+        </span>
+      )}
+      {!reading.drawing && reading.target.type === 'measure' ? (
+        <button type="button" onClick={onClear} className="text-moss-deep hover:underline">
+          Clear
+        </button>
+      ) : null}
+    </div>
+  );
+}
+
+interface ImportState {
+  fileName: string;
+  preview: ImportPreviewDto;
+  choices: ImportChoice[];
+  hover: number | null;
+}
+
+/** The plan map: the consultant's drafting table for one property. */
+export function PlanMapPage() {
+  const params = useParams();
+  const propertyId = Number(params.id);
+  const toast = useToast();
+  const property = useProperty(propertyId);
+  const units = useUnits(propertyId);
+  const plan = usePlan(propertyId);
+  const firm = useFirm();
+  const overlays = useOverlays(propertyId);
+  const createUnit = useCreateUnit(propertyId);
+  const createBulk = useCreateUnitsBulk(propertyId);
+  const updateUnit = useUpdateUnit(propertyId);
+  const deleteUnit = useDeleteUnit(propertyId);
+  const updateBoundary = useUpdatePropertyBoundary(propertyId);
+  const updateOverlay = useUpdateOverlay(propertyId);
+  const importFile = useImportFile(propertyId);
+
+  const [controller, setController] = useState<PlanMapController | null>(null);
+  const [selectedId, setSelectedId] = useState<number | null>(null);
+  const [editingBoundary, setEditingBoundary] = useState(false);
+  const [drawTarget, setDrawTarget] = useState<DrawTarget | null>(null);
+  const [measure, setMeasure] = useState<MeasureReading | null>(null);
+  const [importState, setImportState] = useState<ImportState | null>(null);
+  const [uploadProgress, setUploadProgress] = useState<number | null | undefined>(undefined);
+  const fileInput = useRef<HTMLInputElement>(null);
+
+  const unitList = useMemo(() => units.data ?? [], [units.data]);
+  const selected = useMemo(() => unitList.find((u) => u.id === selectedId) ?? null, [unitList, selectedId]);
+  const boundary = property.data?.boundary ?? null;
+
+  const undo = usePlanUndo(propertyId, {
+    onUnitGone: (id) => setSelectedId((cur) => (cur === id ? null : cur)),
+  });
+
+  // Map data, memoised so that the sources are only rewritten when the units change.
+  const collections = useMemo(() => unitsToCollections(unitList), [unitList]);
+  const legendKinds = useMemo(() => kindsPresent(unitList), [unitList]);
+  const boundaryBox = useMemo(() => (boundary ? bboxOf([boundary]) : null), [boundary]);
+
+  useEffect(() => controller?.setUnits(collections), [controller, collections]);
+  useEffect(() => controller?.setBoundary(boundary, boundaryBox ?? bboxOf(unitList.map((u) => u.geometry))), [controller, boundary, boundaryBox, unitList]);
+
+  // Fit once per property, when the boundary (or, without one, the units) first arrive.
+  const fitted = useRef<number | null>(null);
+  useEffect(() => {
+    if (!controller || fitted.current === propertyId || !property.data || !units.data) return;
+    const box = boundaryBox ?? bboxOf(units.data.map((u) => u.geometry));
+    controller.fitTo(box);
+    fitted.current = propertyId;
+  }, [controller, propertyId, property.data, units.data, boundaryBox]);
+
+  useEffect(() => controller?.setOverlays(overlays.data ?? []), [controller, overlays.data]);
+  const tileTemplate = firm.data?.settings.tileUrlTemplate ?? null;
+  const tileAttribution = firm.data?.settings.tileAttribution ?? null;
+  useEffect(() => controller?.setTiles(tileTemplate, tileAttribution), [controller, tileTemplate, tileAttribution]);
+
+  // The selected unit (or the boundary) is handed to terra-draw for editing.
+  useEffect(() => {
+    if (!controller) return;
+    if (editingBoundary && boundary) controller.setEditing({ type: 'boundary', geometry: boundary });
+    else if (selected && !drawTarget) controller.setEditing({ type: 'unit', unitId: selected.id, kind: selected.kind, geometry: selected.geometry });
+    else controller.setEditing(null);
+  }, [controller, selected, editingBoundary, boundary, drawTarget]);
+
+  useEffect(() => {
+    if (!controller) return;
+    if (!selected) return controller.setNameTag(null);
+    const c = centroidOf(selected.geometry);
+    controller.setNameTag({ lon: c.lon, lat: c.lat, text: selected.name });
+  }, [controller, selected]);
+
+  useEffect(() => {
+    if (!controller) return;
+    controller.setPreview(
+      importState ? importState.preview.features.map((f, i) => ({ geometry: f.geometry, choice: importState.choices[i], highlight: importState.hover === i })) : [],
+    );
+  }, [controller, importState]);
+
+  const chooseTool = useCallback(
+    (target: DrawTarget | null) => {
+      if (target) {
+        setSelectedId(null);
+        setEditingBoundary(false);
+      }
+      setDrawTarget(target);
+      setMeasure(null);
+      controller?.startDraw(target);
+    },
+    [controller],
+  );
+
+  const saveDrawn = async (target: DrawTarget, geometry: Geometry) => {
+    setDrawTarget(null);
+    if (target.type === 'unit') {
+      const name = defaultUnitName(target.kind, unitList);
+      try {
+        const unit = await createUnit.mutateAsync({ kind: target.kind, name, geometry });
+        undo.record({ type: 'create', unitId: unit.id, name: unit.name });
+        setSelectedId(unit.id);
+        const measureText = unit.acres !== null ? ` (${formatAcresShort(unit.acres)})` : unit.lengthFt !== null ? ` (${formatFeet(unit.lengthFt)})` : '';
+        toast('success', `${unit.name} added${measureText}.`);
+      } catch (err) {
+        toast('error', `${name} was not saved. ${errorText(err)}`);
+      }
+      return;
+    }
+    if (target.type === 'boundary') {
+      if (geometry.type !== 'Polygon') return;
+      if (boundary && !window.confirm('Replace the property boundary with the one you drew? You can undo it.')) return;
+      try {
+        const before = boundary;
+        const saved = await updateBoundary.mutateAsync(geometry);
+        undo.record({ type: 'boundary', before });
+        toast('success', `Boundary saved: ${formatAcresShort(saved.acres ?? 0)}.`);
+      } catch (err) {
+        toast('error', `The boundary was not saved. ${errorText(err)}`);
+      }
+    }
+  };
+
+  const saveEdited: PlanMapCallbacks['onEdited'] = async (target, geometry) => {
+    if (target.type === 'boundary') {
+      try {
+        const before = boundary;
+        await updateBoundary.mutateAsync(geometry as Polygon | MultiPolygon);
+        undo.record({ type: 'boundary', before });
+      } catch (err) {
+        toast('error', `The boundary change was not saved. ${errorText(err)}`);
+        controller?.setEditing(null);
+        setEditingBoundary(false);
+      }
+      return;
+    }
+    const before = unitList.find((u) => u.id === target.unitId);
+    if (!before) return;
+    try {
+      await updateUnit.mutateAsync({ unitId: target.unitId, input: { geometry } });
+      undo.record({ type: 'update', unitId: before.id, name: before.name, before: { geometry: before.geometry } });
+    } catch (err) {
+      toast('error', `The new shape of ${before.name} was not saved. ${errorText(err)}`);
+      // Put the saved shape back in the editor.
+      controller?.setEditing(null);
+      controller?.setEditing({ type: 'unit', unitId: before.id, kind: before.kind, geometry: before.geometry });
+    }
+  };
+
+  const callbacks: PlanMapCallbacks = {
+    onDrawn: (t, g) => void saveDrawn(t, g),
+    onEdited: (t, g) => void saveEdited?.(t, g),
+    onPick: (id) => {
+      setSelectedId(id);
+      if (id !== null) setEditingBoundary(false);
+    },
+    onMeasure: setMeasure,
+    onDrawCancelled: () => {
+      setDrawTarget(null);
+      setMeasure(null);
+    },
+  };
+
+  const saveDetails = async (unit: UnitDto, input: UnitUpdateInput) => {
+    try {
+      const saved = await updateUnit.mutateAsync({ unitId: unit.id, input });
+      undo.record({ type: 'update', unitId: unit.id, name: saved.name, before: { name: unit.name, kind: unit.kind, notes: unit.notes } });
+      toast('success', `${saved.name} saved.`);
+    } catch (err) {
+      toast('error', errorText(err));
+      throw err;
+    }
+  };
+
+  const removeUnit = useCallback(
+    async (unit: UnitDto) => {
+      if (!window.confirm(`Delete “${unit.name}”? You can undo it.`)) return;
+      try {
+        await deleteUnit.mutateAsync(unit.id);
+        undo.record({ type: 'delete', unitId: unit.id, name: unit.name, unit: { kind: unit.kind, name: unit.name, notes: unit.notes, geometry: unit.geometry } });
+        setSelectedId(null);
+        toast('success', `${unit.name} deleted.`);
+      } catch (err) {
+        toast('error', errorText(err));
+      }
+    },
+    [deleteUnit, undo, toast],
+  );
+
+  const runUndo = useCallback(async () => {
+    try {
+      const what = await undo.undo();
+      if (what) toast('success', `Undone: ${what}.`);
+    } catch (err) {
+      toast('error', `Could not undo. ${errorText(err)}`);
+    }
+  }, [undo, toast]);
+
+  // Keyboard: Delete removes the selected unit, Ctrl+Z undoes, Escape stops drawing or deselects.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (isTyping(e.target)) return;
+      if ((e.key === 'Delete' || e.key === 'Backspace') && selected && !drawTarget) {
+        e.preventDefault();
+        void removeUnit(selected);
+      } else if ((e.ctrlKey || e.metaKey) && !e.shiftKey && e.key.toLowerCase() === 'z' && !drawTarget) {
+        e.preventDefault();
+        void runUndo();
+      } else if (e.key === 'Escape') {
+        if (drawTarget) controller?.cancelDraw();
+        else {
+          setSelectedId(null);
+          setEditingBoundary(false);
+        }
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [selected, drawTarget, controller, removeUnit, runUndo]);
+
+  const startImport = async (file: File) => {
+    setUploadProgress(0);
+    try {
+      const preview = await importFile.mutateAsync({ file, onProgress: (p) => setUploadProgress(p) });
+      setSelectedId(null);
+      setImportState({ fileName: file.name, preview, choices: preview.features.map((f) => defaultImportChoice(f)), hover: null });
+      const box = bboxOf(preview.features.map((f) => f.geometry));
+      if (box) controller?.fitTo(boundaryBox ? [Math.min(box[0], boundaryBox[0]), Math.min(box[1], boundaryBox[1]), Math.max(box[2], boundaryBox[2]), Math.max(box[3], boundaryBox[3])] : box, true);
+    } catch (err) {
+      toast('error', `${file.name} could not be imported. ${errorText(err)}`);
+    } finally {
+      setUploadProgress(undefined);
+      if (fileInput.current) fileInput.current.value = '';
+    }
+  };
+
+  const importPlan = useMemo(() => (importState ? planImportSave(importState.preview.features, importState.choices) : null), [importState]);
+  const [savingImport, setSavingImport] = useState(false);
+  const saveImport = async () => {
+    if (!importState || !importPlan || importPlan.problems.length > 0) return;
+    if (importPlan.boundary && boundary && !window.confirm('Replace the property boundary with the imported one? You can undo it.')) return;
+    setSavingImport(true);
+    try {
+      const parts: string[] = [];
+      if (importPlan.boundary) {
+        const before = boundary;
+        const saved = await updateBoundary.mutateAsync(importPlan.boundary);
+        undo.record({ type: 'boundary', before });
+        parts.push(`boundary (${formatAcresShort(saved.acres ?? 0)})`);
+      }
+      if (importPlan.units.length > 0) {
+        const created = await createBulk.mutateAsync(importPlan.units);
+        undo.record({ type: 'create-many', unitIds: created.map((u) => u.id) });
+        parts.push(`${created.length} unit${created.length === 1 ? '' : 's'}`);
+      }
+      setImportState(null);
+      toast('success', `Imported ${parts.join(' and ')}.`);
+    } catch (err) {
+      toast('error', `The import was not saved. ${errorText(err)}`);
+    } finally {
+      setSavingImport(false);
+    }
+  };
+
+  if (!Number.isInteger(propertyId) || propertyId <= 0) return <ErrorPanel error={new Error('This address does not name a property.')} />;
+  if (property.isError) {
+    return (
+      <div className="p-6">
+        <ErrorPanel error={property.error} />
+      </div>
+    );
+  }
+
+  const p = property.data;
+  return (
+    <div className="flex h-full min-h-0 flex-col">
+      <header className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-rule bg-card px-4 py-2">
+        <div className="min-w-0">
+          <p className="text-xs text-slate">
+            <Link to={paths.clients} className="hover:underline">
+              Clients
+            </Link>
+            {p ? <> · {p.clientName}</> : null}
+          </p>
+          <h1 className="truncate text-xl font-bold leading-tight">{p ? p.name : 'Plan map'}</h1>
+        </div>
+        {p?.acres ? (
+          <p className="figure text-sm text-slate">
+            <span className="text-lg font-bold text-ink">{formatAcresShort(p.acres)}</span> · {formatHectares(p.hectares ?? 0)}
+          </p>
+        ) : null}
+        <div className="ml-auto flex flex-wrap items-center gap-2">
+          <Button variant="secondary" className="!px-3 !py-1.5" onClick={() => void runUndo()} disabled={!undo.canUndo} busy={undo.busy} title={`${undo.title} (Ctrl+Z)`}>
+            Undo
+          </Button>
+          {boundary ? (
+            <Button
+              variant="secondary"
+              className="!px-3 !py-1.5"
+              aria-pressed={editingBoundary}
+              onClick={() => {
+                chooseTool(null);
+                setSelectedId(null);
+                setEditingBoundary((v) => !v);
+              }}
+            >
+              {editingBoundary ? 'Done with boundary' : 'Edit boundary'}
+            </Button>
+          ) : null}
+          <input
+            ref={fileInput}
+            type="file"
+            className="sr-only"
+            id="plan-import-file"
+            accept=".geojson,.json,.kml,.kmz,.gpx,.zip"
+            onChange={(e) => {
+              const file = e.target.files?.[0];
+              if (file) void startImport(file);
+            }}
+          />
+          <Button variant="secondary" className="!px-3 !py-1.5" busy={uploadProgress !== undefined} onClick={() => fileInput.current?.click()}>
+            {uploadProgress === undefined ? 'Import file' : uploadProgress === null ? 'Reading file…' : `Uploading ${Math.round(uploadProgress * 100)} %`}
+          </Button>
+          <ExportMenu propertyId={propertyId} />
+        </div>
+      </header>
+      <div className="flex min-h-0 flex-1">
+        <div className="relative min-w-0 flex-1">
+          <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
+          <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
+            <div className="pointer-events-auto max-w-full">
+              <DrawChips active={drawTarget} onChoose={chooseTool} />
+            </div>
+            {drawTarget ? (
+              <p role="status" className="pointer-events-auto rounded bg-ink/85 px-3 py-1 text-xs text-white">
+                {drawTarget.type === 'unit' && KIND_STYLES[drawTarget.kind].family === 'point'
+                  ? 'Click the map to place it. Esc to stop.'
+                  : drawTarget.type === 'unit' && KIND_STYLES[drawTarget.kind].family === 'line'
+                    ? 'Click to add points; click the last point again (or press Enter) to finish. Esc to stop.'
+                    : drawTarget.type === 'measure' && drawTarget.shape === 'line'
+                      ? 'Click to add points; click the last point again to finish. Nothing is saved.'
+                      : 'Click to add corners; click the first corner to close the shape. Esc to stop.'}
+              </p>
+            ) : null}
+            {measure ? (
+              <div className="pointer-events-auto">
+                <MeasureReadout
+                  reading={measure}
+                  onClear={() => {
+                    controller?.clearMeasure();
+                    setMeasure(null);
+                  }}
+                />
+              </div>
+            ) : null}
+            {editingBoundary ? (
+              <p role="status" className="pointer-events-auto rounded bg-ink/85 px-3 py-1 text-xs text-white">
+                Drag the boundary’s corners or the whole outline; each change is saved.
+              </p>
+            ) : null}
+          </div>
+          <div className="pointer-events-none absolute bottom-9 left-2 z-10 flex flex-col items-start gap-2">
+            <div className="pointer-events-auto">
+              <OverlayPanel
+                overlays={overlays.data ?? []}
+                onPreview={(id, opacity) => controller?.setOverlayOpacity(id, opacity)}
+                onCommit={(id, opacity) => updateOverlay.mutate({ overlayId: id, input: { opacity } }, { onError: (err) => toast('error', errorText(err)) })}
+              />
+            </div>
+            <div className="pointer-events-auto">
+              <MapLegend kinds={legendKinds} hasBoundary={!!boundary} />
+            </div>
+          </div>
+          {p && !boundary && unitList.length === 0 && !drawTarget && !importState ? (
+            <div className="pointer-events-none absolute inset-0 z-0 flex items-center justify-center">
+              <div className="pointer-events-auto max-w-sm rounded-md border border-rule bg-card/95 px-5 py-4 text-center shadow-sm">
+                <p className="font-serif text-ink">No boundary yet</p>
+                <p className="mt-1 text-sm text-slate">Choose “Boundary” above and click its corners on the map, or import a KML, GPX, GeoJSON or shapefile.</p>
+              </div>
+            </div>
+          ) : null}
+        </div>
+        <aside aria-label="Plan ledger" className="w-[22rem] shrink-0 overflow-y-auto border-l border-rule bg-card px-4 py-4">
+          {importState && importPlan ? (
+            <ImportPanel
+              fileName={importState.fileName}
+              preview={importState.preview}
+              choices={importState.choices}
+              problems={importPlan.problems}
+              saving={savingImport}
+              onChoose={(i, c) => setImportState((s) => (s ? { ...s, choices: s.choices.map((old, j) => (j === i ? c : old)) } : s))}
+              onHover={(i) => setImportState((s) => (s && s.hover !== i ? { ...s, hover: i } : s))}
+              onSave={() => void saveImport()}
+              onCancel={() => setImportState(null)}
+            />
+          ) : units.isPending || property.isPending ? (
+            <Loading />
+          ) : units.isError ? (
+            <ErrorPanel error={units.error} />
+          ) : selected ? (
+            <UnitDetail
+              key={selected.id}
+              unit={selected}
+              saving={updateUnit.isPending}
+              deleting={deleteUnit.isPending}
+              onSave={(input) => saveDetails(selected, input)}
+              onDelete={() => void removeUnit(selected)}
+              onBack={() => setSelectedId(null)}
+              onZoom={() => controller?.fitTo(bboxOf([selected.geometry]), true)}
+            />
+          ) : (
+            <PlanLedger units={unitList} plan={plan.data} planError={plan.error} selectedId={selectedId} onSelect={setSelectedId} />
+          )}
+        </aside>
+      </div>
+    </div>
+  );
+}
+
+/** Route module for React Router's lazy loading. */
+export const Component = PlanMapPage;

@@ -1,0 +1,464 @@
+/**
+ * The plan map outside React: one MapLibre map and one terra-draw instance for the page's life.
+ * React hands it data (units, boundary, overlays, preview) and it calls back on clicks, drawings
+ * and edits. Units are drawn by our own layers; only the shape being drawn or edited lives in
+ * terra-draw, so 500 units cost three GeoJSON sources, not 500 editable features.
+ */
+import { LngLatBounds, Map as MapLibreMap, Marker, NavigationControl, ScaleControl, AttributionControl } from 'maplibre-gl';
+import './maplibre-worker';
+import {
+  TerraDraw,
+  TerraDrawLineStringMode,
+  TerraDrawPointMode,
+  TerraDrawPolygonMode,
+  TerraDrawSelectMode,
+  type GeoJSONStoreFeatures,
+  type HexColor,
+} from 'terra-draw';
+import { TerraDrawMapLibreGLAdapter } from 'terra-draw-maplibre-gl-adapter';
+import type { BBox, Geometry, LineString, MultiPolygon, Polygon } from 'geojson';
+import { KIND_STYLES, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
+import { measureArea, measureLine } from '../../../../shared/domain/geometry';
+import { CARD, INK, MOSS_DEEP, OCHRE, SKY, offlineStyle } from './map-style';
+import {
+  UNIT_LAYERS,
+  addPlanLayers,
+  hideBoundary,
+  hideUnit,
+  setBackgroundTiles,
+  setBoundaryData,
+  setOverlayOpacity,
+  setPreviewData,
+  setUnitData,
+  syncOverlays,
+  type MapOverlay,
+} from './plan-layers';
+import type { FamilyCollections } from './unit-features';
+
+
+/** What a drawing tool makes. */
+export type DrawTarget = { type: 'unit'; kind: UnitKind } | { type: 'boundary' } | { type: 'measure'; shape: 'line' | 'area' };
+
+/** What is being edited: a unit's shape or the boundary. */
+export type EditTarget = { type: 'unit'; unitId: number; kind: UnitKind; geometry: Geometry } | { type: 'boundary'; geometry: Polygon | MultiPolygon };
+
+/** A live measure of the shape being drawn (or the last measured one). */
+export type MeasureReading =
+  | { shape: 'line'; lengthFt: number; lengthMi: number; drawing: boolean; target: DrawTarget }
+  | { shape: 'area'; acres: number; hectares: number; perimeterFt: number; drawing: boolean; target: DrawTarget };
+
+export interface PlanMapCallbacks {
+  onReady?: () => void;
+  /** A unit or boundary shape was finished. */
+  onDrawn?: (target: DrawTarget, geometry: Geometry) => void;
+  /** The edited shape was changed (vertex dragged, inserted or deleted, or the shape moved). */
+  onEdited?: (target: EditTarget, geometry: Geometry) => void;
+  /** A click picked a unit (or empty map: null). */
+  onPick?: (unitId: number | null) => void;
+  onMeasure?: (reading: MeasureReading | null) => void;
+  /** The drawing tool ended without a shape (Escape). */
+  onDrawCancelled?: () => void;
+}
+
+const MODE = {
+  select: 'select',
+  polygon: 'unit-polygon',
+  line: 'unit-line',
+  point: 'unit-point',
+  boundary: 'boundary',
+  measureLine: 'measure-line',
+  measureArea: 'measure-area',
+} as const;
+
+const FAMILY_MODE: Record<KindFamily, string> = { area: MODE.polygon, line: MODE.line, point: MODE.point };
+
+const hex = (c: string) => c as HexColor;
+
+/** True when terra-draw can edit the geometry's vertices (single parts only). */
+export function isEditableGeometry(geometry: Geometry): boolean {
+  return geometry.type === 'Polygon' || geometry.type === 'LineString' || geometry.type === 'Point' || (geometry.type === 'MultiPolygon' && geometry.coordinates.length === 1);
+}
+
+function singlePart(geometry: Geometry): Polygon | LineString | Geometry {
+  if (geometry.type === 'MultiPolygon' && geometry.coordinates.length === 1) return { type: 'Polygon', coordinates: geometry.coordinates[0] };
+  return geometry;
+}
+
+export class PlanMapController {
+  readonly map: MapLibreMap;
+  private draw: TerraDraw | null = null;
+  private ready = false;
+  private callbacks: PlanMapCallbacks;
+  private drawTarget: DrawTarget | null = null;
+  private drawKind: UnitKind | null = null;
+  private editing: { target: EditTarget; featureId: string | number; signature: string } | null = null;
+  private measureFeatureId: string | number | null = null;
+  private nameMarker: Marker | null = null;
+  private pending: (() => void)[] = [];
+  private destroyed = false;
+
+  constructor(container: HTMLElement, callbacks: PlanMapCallbacks, options: { preserveDrawingBuffer?: boolean } = {}) {
+    this.callbacks = callbacks;
+    this.map = new MapLibreMap({
+      container,
+      style: offlineStyle(),
+      center: [-90.5, 43.5],
+      zoom: 6,
+      maxZoom: 20,
+      attributionControl: false,
+      dragRotate: false,
+      pitchWithRotate: false,
+      canvasContextAttributes: { preserveDrawingBuffer: options.preserveDrawingBuffer ?? false },
+    });
+    this.map.touchZoomRotate.disableRotation();
+    this.map.addControl(new NavigationControl({ showCompass: false }), 'bottom-right');
+    this.map.addControl(new ScaleControl({ unit: 'imperial', maxWidth: 140 }), 'bottom-left');
+    this.map.on('load', () => this.onLoad());
+    this.map.on('click', (e) => this.onClick(e.point.x, e.point.y, e.lngLat));
+    for (const layer of UNIT_LAYERS) {
+      this.map.on('mouseenter', layer, () => {
+        if (this.isIdle()) this.map.getCanvas().style.cursor = 'pointer';
+      });
+      this.map.on('mouseleave', layer, () => {
+        if (this.isIdle()) this.map.getCanvas().style.cursor = '';
+      });
+    }
+  }
+
+  /** Replaces the callbacks (the page's handlers change with its state). */
+  setCallbacks(callbacks: PlanMapCallbacks): void {
+    this.callbacks = callbacks;
+  }
+
+  private whenReady(fn: () => void): void {
+    if (this.ready) fn();
+    else this.pending.push(fn);
+  }
+
+  private onLoad(): void {
+    if (this.destroyed) return;
+    addPlanLayers(this.map, { labels: true });
+    this.draw = this.createDraw();
+    this.draw.start();
+    this.draw.setMode(MODE.select);
+    this.ready = true;
+    for (const fn of this.pending.splice(0)) fn();
+    this.callbacks.onReady?.();
+  }
+
+  private kindColour(feature: GeoJSONStoreFeatures | undefined, field: 'fill' | 'stroke', fallback: string): HexColor {
+    const kind = (feature?.properties?.kind as UnitKind | undefined) ?? this.drawKind;
+    return hex(kind ? KIND_STYLES[kind][field] : fallback);
+  }
+
+  private createDraw(): TerraDraw {
+    const fill = (f: GeoJSONStoreFeatures) => this.kindColour(f, 'fill', OCHRE);
+    const stroke = (f: GeoJSONStoreFeatures) => this.kindColour(f, 'stroke', INK);
+    const vertex = { coordinatePointColor: hex(CARD), coordinatePointOutlineColor: hex(INK), coordinatePointWidth: 4, coordinatePointOutlineWidth: 1.5 };
+    const closing = { closingPointColor: hex(CARD), closingPointOutlineColor: hex(INK), closingPointWidth: 5, closingPointOutlineWidth: 2 };
+    const editFlags = { feature: { draggable: true, coordinates: { draggable: true, midpoints: true, deletable: true } } };
+    const adapter = new TerraDrawMapLibreGLAdapter({ map: this.map, coordinatePrecision: 9 });
+    const draw = new TerraDraw({
+      adapter,
+      modes: [
+        new TerraDrawSelectMode({
+          modeName: MODE.select,
+          allowManualDeselection: false,
+          keyEvents: { deselect: null, delete: null, rotate: null, scale: null },
+          flags: {
+            [MODE.polygon]: editFlags,
+            [MODE.line]: editFlags,
+            [MODE.point]: { feature: { draggable: true } },
+            [MODE.boundary]: editFlags,
+          },
+          styles: {
+            selectedPolygonColor: fill,
+            selectedPolygonFillOpacity: 0.45,
+            selectedPolygonOutlineColor: hex(INK),
+            selectedPolygonOutlineWidth: 2.5,
+            selectedLineStringColor: stroke,
+            selectedLineStringWidth: 4,
+            selectedPointColor: fill,
+            selectedPointWidth: 9,
+            selectedPointOutlineColor: hex(INK),
+            selectedPointOutlineWidth: 2.5,
+            selectionPointColor: hex(CARD),
+            selectionPointOutlineColor: hex(INK),
+            selectionPointWidth: 5,
+            selectionPointOutlineWidth: 2,
+            midPointColor: hex(MOSS_DEEP),
+            midPointOutlineColor: hex(CARD),
+            midPointWidth: 3.5,
+            midPointOutlineWidth: 1.5,
+          },
+        }),
+        new TerraDrawPolygonMode({
+          modeName: MODE.polygon,
+          styles: { fillColor: fill, fillOpacity: 0.45, outlineColor: stroke, outlineWidth: 2.5, ...closing, ...vertex },
+        }),
+        new TerraDrawLineStringMode({
+          modeName: MODE.line,
+          styles: { lineStringColor: stroke, lineStringWidth: 3.5, ...closing, ...vertex },
+        }),
+        new TerraDrawPointMode({
+          modeName: MODE.point,
+          styles: { pointColor: fill, pointWidth: 8, pointOutlineColor: hex(CARD), pointOutlineWidth: 2.5 },
+        }),
+        new TerraDrawPolygonMode({
+          modeName: MODE.boundary,
+          styles: { fillColor: hex(CARD), fillOpacity: 0.35, outlineColor: hex(INK), outlineWidth: 2.5, ...closing, ...vertex },
+        }),
+        new TerraDrawLineStringMode({
+          modeName: MODE.measureLine,
+          styles: { lineStringColor: hex(SKY), lineStringWidth: 3, lineStringDash: [4, 3], ...closing, ...vertex },
+        }),
+        new TerraDrawPolygonMode({
+          modeName: MODE.measureArea,
+          styles: { fillColor: hex(SKY), fillOpacity: 0.15, outlineColor: hex(SKY), outlineWidth: 2.5, ...closing, ...vertex },
+        }),
+      ],
+    });
+    draw.on('change', (ids, type) => this.onDrawChange(ids, type));
+    draw.on('finish', (id, context) => {
+      // terra-draw is still inside its own handler: act once it has finished.
+      setTimeout(() => this.onDrawFinish(id, context.action), 0);
+    });
+    return draw;
+  }
+
+  private isIdle(): boolean {
+    return this.drawTarget === null;
+  }
+
+  private onClick(x: number, y: number, lngLat: { lng: number; lat: number }): void {
+    if (!this.ready || !this.isIdle()) return;
+    const box: [[number, number], [number, number]] = [
+      [x - 5, y - 5],
+      [x + 5, y + 5],
+    ];
+    const hits = this.map.queryRenderedFeatures(box, { layers: UNIT_LAYERS.filter((l) => this.map.getLayer(l)) });
+    if (hits.length > 0) {
+      const top = hits[0].layer.id;
+      const candidates = hits.filter((h) => h.layer.id === top);
+      // Where areas overlap, the smallest wins (a food plot inside timber).
+      const best = top === 'unit-area-fill' ? candidates.reduce((a, b) => ((a.properties.acres as number) <= (b.properties.acres as number) ? a : b)) : candidates[0];
+      this.callbacks.onPick?.(Number(best.properties.id));
+      return;
+    }
+    if (this.editing && this.draw) {
+      const own = this.draw.getFeaturesAtLngLat(lngLat, { pointerDistance: 8, ignoreSelectFeatures: true });
+      if (own.some((f) => f.id === this.editing?.featureId)) return;
+    }
+    this.callbacks.onPick?.(null);
+  }
+
+  private onDrawChange(ids: (string | number)[], type: string): void {
+    if (!this.draw || !this.drawTarget || type === 'delete') return;
+    for (const id of ids) {
+      const f = this.draw.getSnapshotFeature(id);
+      if (!f || !f.properties?.currentlyDrawing) continue;
+      this.emitMeasure(f.geometry as Geometry, true);
+    }
+  }
+
+  private emitMeasure(geometry: Geometry, drawing: boolean): void {
+    const target = this.drawTarget;
+    if (!target) return;
+    try {
+      if (geometry.type === 'LineString' && geometry.coordinates.length >= 2) {
+        const m = measureLine(geometry);
+        this.callbacks.onMeasure?.({ shape: 'line', lengthFt: m.lengthFt, lengthMi: m.lengthMi, drawing, target });
+      } else if (geometry.type === 'Polygon' && geometry.coordinates[0]?.length >= 4) {
+        const m = measureArea(geometry);
+        this.callbacks.onMeasure?.({ shape: 'area', acres: m.acres, hectares: m.hectares, perimeterFt: m.perimeterFt, drawing, target });
+      }
+    } catch {
+      /* a shape in the middle of being drawn can be degenerate: no reading for it */
+    }
+  }
+
+  private onDrawFinish(id: string | number, action: string): void {
+    if (!this.draw || this.destroyed) return;
+    const feature = this.draw.getSnapshotFeature(id);
+    if (!feature) return;
+    const geometry = feature.geometry as Geometry;
+    if (action === 'draw') {
+      const target = this.drawTarget;
+      if (!target) return;
+      if (target.type === 'measure') {
+        this.measureFeatureId = id;
+        this.emitMeasure(geometry, false);
+        this.drawTarget = null;
+        this.drawKind = null;
+        this.draw.setMode(MODE.select);
+        return;
+      }
+      this.draw.removeFeatures([id]);
+      this.drawTarget = null;
+      this.drawKind = null;
+      this.draw.setMode(MODE.select);
+      this.callbacks.onMeasure?.(null);
+      this.callbacks.onDrawn?.(target, geometry);
+      return;
+    }
+    if (this.editing && this.editing.featureId === id) {
+      this.editing.signature = JSON.stringify(geometry);
+      this.callbacks.onEdited?.(this.editing.target, geometry);
+    }
+  }
+
+  /** Starts a drawing tool (null: back to picking and editing). Ends any edit and clears a measure. */
+  startDraw(target: DrawTarget | null): void {
+    this.whenReady(() => {
+      if (!this.draw) return;
+      this.clearMeasure();
+      this.setEditing(null);
+      this.drawTarget = target;
+      this.drawKind = target?.type === 'unit' ? target.kind : null;
+      this.callbacks.onMeasure?.(null);
+      if (!target) {
+        this.draw.setMode(MODE.select);
+        return;
+      }
+      const mode =
+        target.type === 'unit'
+          ? FAMILY_MODE[KIND_STYLES[target.kind].family]
+          : target.type === 'boundary'
+            ? MODE.boundary
+            : target.shape === 'line'
+              ? MODE.measureLine
+              : MODE.measureArea;
+      // Re-entering the same mode restarts it, dropping a half-drawn shape.
+      if (this.draw.getMode() === mode) this.draw.setMode(MODE.select);
+      this.draw.setMode(mode);
+    });
+  }
+
+  /** Stops the drawing tool, dropping a half-drawn shape. */
+  cancelDraw(): void {
+    if (!this.drawTarget) return;
+    this.startDraw(null);
+    this.callbacks.onDrawCancelled?.();
+  }
+
+  /** Removes the last measured shape. */
+  clearMeasure(): void {
+    if (this.draw && this.measureFeatureId !== null && this.draw.hasFeature(this.measureFeatureId)) this.draw.removeFeatures([this.measureFeatureId]);
+    this.measureFeatureId = null;
+  }
+
+  /**
+   * Shows a unit or the boundary with draggable vertices and lets the whole shape be moved; the
+   * same target with an unchanged shape is left alone (no flicker while saving).
+   */
+  setEditing(target: EditTarget | null): void {
+    this.whenReady(() => {
+      const draw = this.draw;
+      if (!draw) return;
+      const signature = target ? JSON.stringify(singlePart(target.geometry)) : '';
+      const sameTarget =
+        this.editing &&
+        target &&
+        this.editing.target.type === target.type &&
+        (target.type === 'boundary' || (this.editing.target.type === 'unit' && this.editing.target.unitId === target.unitId));
+      if (sameTarget && this.editing && this.editing.signature === signature) {
+        this.editing.target = target!;
+        return;
+      }
+      if (this.editing && draw.hasFeature(this.editing.featureId)) {
+        if (draw.getMode() === MODE.select) {
+          try {
+            draw.deselectFeature(this.editing.featureId);
+          } catch {
+            /* already deselected */
+          }
+        }
+        draw.removeFeatures([this.editing.featureId]);
+      }
+      this.editing = null;
+      hideUnit(this.map, null);
+      hideBoundary(this.map, false);
+      if (!target || !isEditableGeometry(target.geometry) || this.drawTarget) return;
+      const mode = target.type === 'boundary' ? MODE.boundary : FAMILY_MODE[KIND_STYLES[target.kind].family];
+      const id = draw.getFeatureId();
+      const geometry = singlePart(target.geometry) as GeoJSONStoreFeatures['geometry'];
+      const result = draw.addFeatures([
+        { type: 'Feature', id, geometry, properties: { mode, ...(target.type === 'unit' ? { kind: target.kind } : {}) } },
+      ]);
+      if (!result[0]?.valid) return;
+      this.editing = { target, featureId: id, signature };
+      if (target.type === 'unit') hideUnit(this.map, target.unitId);
+      else hideBoundary(this.map, true);
+      draw.selectFeature(id);
+    });
+  }
+
+  /** Puts the units on the map. */
+  setUnits(collections: FamilyCollections): void {
+    this.whenReady(() => setUnitData(this.map, collections));
+  }
+
+  /** Puts the boundary on the map. */
+  setBoundary(boundary: Polygon | MultiPolygon | null, box: BBox | null): void {
+    this.whenReady(() => setBoundaryData(this.map, boundary, box as [number, number, number, number] | null));
+  }
+
+  /** Shows an import preview (an empty list clears it). */
+  setPreview(features: { geometry: Geometry; choice: string; highlight?: boolean }[]): void {
+    this.whenReady(() => setPreviewData(this.map, features));
+  }
+
+  /** Shows the image overlays. */
+  setOverlays(overlays: readonly MapOverlay[]): void {
+    this.whenReady(() => syncOverlays(this.map, overlays));
+  }
+
+  /** Changes an overlay's opacity on the map only. */
+  setOverlayOpacity(overlayId: number, opacity: number): void {
+    this.whenReady(() => setOverlayOpacity(this.map, overlayId, opacity));
+  }
+
+  private attribution: AttributionControl | null = null;
+
+  /** Adds the firm's background tiles (null removes them). */
+  setTiles(template: string | null, attribution?: string | null): void {
+    this.whenReady(() => {
+      setBackgroundTiles(this.map, template, attribution);
+      if (template && !this.attribution) {
+        this.attribution = new AttributionControl({ compact: true });
+        this.map.addControl(this.attribution, 'bottom-right');
+      }
+    });
+  }
+
+  /** Shows a name tag over a position (the selected unit), or none. */
+  setNameTag(tag: { lon: number; lat: number; text: string } | null): void {
+    this.nameMarker?.remove();
+    this.nameMarker = null;
+    if (!tag) return;
+    const el = document.createElement('div');
+    el.className = 'pointer-events-none rounded bg-card/95 px-2 py-0.5 text-xs font-semibold text-ink shadow border border-rule whitespace-nowrap';
+    el.textContent = tag.text;
+    this.nameMarker = new Marker({ element: el, anchor: 'bottom', offset: [0, -14] }).setLngLat([tag.lon, tag.lat]).addTo(this.map);
+  }
+
+  /** Fits the view to a box [west, south, east, north]. */
+  fitTo(box: BBox | null, animate = false): void {
+    if (!box) return;
+    const [w, s, e, n] = box;
+    const pad = Math.min(80, Math.max(24, Math.floor(Math.min(this.map.getContainer().clientWidth, this.map.getContainer().clientHeight) / 8)));
+    this.map.fitBounds(new LngLatBounds([w, s], [e, n]), { padding: pad, maxZoom: 18, animate, duration: animate ? 500 : 0 });
+  }
+
+  /** Removes the map and everything on it. */
+  destroy(): void {
+    this.destroyed = true;
+    try {
+      this.draw?.stop();
+    } catch {
+      /* the map may already be gone */
+    }
+    this.nameMarker?.remove();
+    this.map.remove();
+  }
+}
