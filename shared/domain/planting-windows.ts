@@ -303,6 +303,11 @@ export function windowDates(windowKey: WindowKey, region: Region, year: number):
   return { earliest, latest, source: regional.source };
 }
 
+/** The default window of a practice's main step (seeding, planting or work) for a region and year. */
+export function practiceWindow(practice: Pick<PracticeDefinition, 'windowKey'>, region: Region, year: number): DateWindow & { source: string } {
+  return windowDates(practice.windowKey, region, year);
+}
+
 // ---- Schedules ----
 
 export type ScheduleWarningCode =

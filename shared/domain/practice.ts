@@ -8,6 +8,11 @@ import type { FertilizerGrade } from './fertilizer';
 import type { LimePricing } from './lime';
 import type { SeedingMethod, SeedRateBasis } from './seeding';
 import { DomainValidationError } from './errors';
+import { validateFertilizerGrade } from './fertilizer';
+import { validateLimePricing } from './lime';
+import { validateSeedLot } from './seeding';
+import { validateSprayPricing } from './spraying';
+import { requireCents, requireNumber, requireText } from './validation';
 import type { Productivity, ServiceRate } from './service-rates';
 import type { SprayProductPricing, SprayRate } from './spraying';
 import type { UnitKind } from './unit-kinds';
@@ -282,5 +287,57 @@ export function validatePracticeDefinition(
         throw new DomainValidationError(`${stepField}.services`, `Step "${step.name}" uses rate "${service.rateKey}", which is not in the library.`);
       }
     }
+  }
+  // No step may depend on itself through others.
+  const dependsOn = new Map(practice.steps.map((s) => [s.key, s.dependsOn ?? []] as const));
+  const state = new Map<string, 'visiting' | 'done'>();
+  const visit = (key: string, path: string[]): void => {
+    if (state.get(key) === 'done') return;
+    if (state.get(key) === 'visiting') {
+      throw new DomainValidationError(`${field}.steps.${key}.dependsOn`, `Steps of "${practice.name}" depend on each other in a circle: ${[...path, key].join(' → ')}.`);
+    }
+    state.set(key, 'visiting');
+    for (const dep of dependsOn.get(key) ?? []) visit(dep, [...path, key]);
+    state.set(key, 'done');
+  };
+  for (const step of practice.steps) visit(step.key, []);
+}
+
+/** Validate one library material (tag values, grade, pricing, package sizes); throws DomainValidationError naming the field. */
+export function validateMaterialDefinition(material: MaterialDefinition, field = 'material'): void {
+  requireText(`${field}.key`, material.key, 'Material key');
+  requireText(`${field}.name`, material.name, 'Material name');
+  const positive = (name: string, value: number, label: string, unit: string, max: number) =>
+    requireNumber(`${field}.${name}`, value, { label, unit, min: 0, minExclusive: true, max });
+  switch (material.type) {
+    case 'seed':
+      requireText(`${field}.species`, material.species, 'Species');
+      validateSeedLot(material, field);
+      positive('packageSizeLb', material.packageSizeLb, 'Package size', 'lb', 5000);
+      requireCents(`${field}.packagePriceCents`, material.packagePriceCents, 'Package price');
+      return;
+    case 'lime':
+      if (material.enmLbPerTon !== undefined) positive('enmLbPerTon', material.enmLbPerTon, 'ENM guarantee', 'lb ENM/ton', 4000);
+      validateLimePricing(material.pricing, `${field}.pricing`);
+      return;
+    case 'fertilizer':
+      validateFertilizerGrade(material.grade, `${field}.grade`);
+      positive('bagSizeLb', material.bagSizeLb, 'Bag size', 'lb', 4000);
+      requireCents(`${field}.bagPriceCents`, material.bagPriceCents, 'Bag price');
+      return;
+    case 'herbicide':
+    case 'adjuvant':
+      requireText(`${field}.activeIngredient`, material.activeIngredient, 'Active ingredient');
+      if (material.lbAiPerGal !== undefined) positive('lbAiPerGal', material.lbAiPerGal, 'Product concentration', 'lb a.i./gal', 12);
+      validateSprayPricing(material.pricing, `${field}.pricing`);
+      return;
+    case 'item':
+      requireText(`${field}.itemLabel`, material.itemLabel, 'Item label');
+      requireText(`${field}.packLabel`, material.packLabel, 'Pack label');
+      positive('packSize', material.packSize, 'Pack size', 'items', 100000);
+      requireCents(`${field}.packPriceCents`, material.packPriceCents, 'Pack price');
+      return;
+    default:
+      throw new DomainValidationError(`${field}.type`, 'Material type must be seed, lime, fertilizer, herbicide, adjuvant or item.');
   }
 }

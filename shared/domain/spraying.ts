@@ -54,10 +54,10 @@ export function ouncesEqualGallonsCourseFt(nozzleSpacingIn: number): number {
 }
 
 /** Convert a liquid amount to gallons. */
-export function toGallons(amount: number, unit: LiquidUnit): number {
+export function toGallons(amount: number, unit: LiquidUnit, field = 'unit'): number {
   const perGal = PER_GAL[unit];
   if (perGal === undefined) {
-    throw new DomainValidationError('unit', `Liquid unit must be one of gal, qt, pt, fl-oz (got ${JSON.stringify(unit)}).`);
+    throw new DomainValidationError(field, `Liquid unit must be one of gal, qt, pt, fl-oz (got ${JSON.stringify(unit)}).`);
   }
   return amount / perGal;
 }
@@ -75,7 +75,7 @@ export type SprayRate =
 export function productGalPerAcre(rate: SprayRate, context: { lbAiPerGal?: number; gpa?: number } = {}, field = 'rate'): number {
   if (rate.kind === 'product') {
     const amount = requireNumber(`${field}.amountPerAcre`, rate.amountPerAcre, { label: 'Product rate', unit: `${rate.unit}/acre`, min: 0, minExclusive: true });
-    const gal = toGallons(amount, rate.unit);
+    const gal = toGallons(amount, rate.unit, `${field}.unit`);
     return requireNumber(`${field}.amountPerAcre`, gal, { label: 'Product rate', unit: 'gal/acre', max: 20 });
   }
   if (rate.kind === 'active') {
