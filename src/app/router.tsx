@@ -45,7 +45,7 @@ const router = createBrowserRouter([
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
-      { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), handle: { fullBleed: true } },
+      { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
     ],
   },
   {
@@ -55,7 +55,7 @@ const router = createBrowserRouter([
       </RequireRole>
     ),
     errorElement: <RouteErrorPage />,
-    children: [{ path: paths.planPrint(), lazy: () => import('./routes/properties/plan-print') }],
+    children: [{ path: paths.planPrint(), lazy: () => import('./routes/properties/plan-print'), hydrateFallbackElement: <Loading /> }],
   },
   {
     element: (

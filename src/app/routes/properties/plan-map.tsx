@@ -112,6 +112,7 @@ export function PlanMapPage() {
   const [importState, setImportState] = useState<ImportState | null>(null);
   const [uploadProgress, setUploadProgress] = useState<number | null | undefined>(undefined);
   const fileInput = useRef<HTMLInputElement>(null);
+  const chipsRef = useRef<HTMLDivElement>(null);
 
   const unitList = useMemo(() => units.data ?? [], [units.data]);
   const selected = useMemo(() => unitList.find((u) => u.id === selectedId) ?? null, [unitList, selectedId]);
@@ -128,6 +129,16 @@ export function PlanMapPage() {
 
   useEffect(() => controller?.setUnits(collections), [controller, collections]);
   useEffect(() => controller?.setBoundary(boundary, boundaryBox ?? bboxOf(unitList.map((u) => u.geometry))), [controller, boundary, boundaryBox, unitList]);
+
+  // Keep the chips' height clear when fitting the view.
+  useEffect(() => {
+    const el = chipsRef.current;
+    if (!controller || !el) return;
+    const observer = new ResizeObserver(() => controller.setInsetTop(el.offsetHeight + 8));
+    observer.observe(el);
+    controller.setInsetTop(el.offsetHeight + 8);
+    return () => observer.disconnect();
+  }, [controller]);
 
   // Fit once per property, when the boundary (or, without one, the units) first arrive.
   const fitted = useRef<number | null>(null);
@@ -241,10 +252,7 @@ export function PlanMapPage() {
       if (id !== null) setEditingBoundary(false);
     },
     onMeasure: setMeasure,
-    onDrawCancelled: () => {
-      setDrawTarget(null);
-      setMeasure(null);
-    },
+    onToolEnded: () => setDrawTarget(null),
   };
 
   const saveDetails = async (unit: UnitDto, input: UnitUpdateInput) => {
@@ -293,8 +301,10 @@ export function PlanMapPage() {
         e.preventDefault();
         void runUndo();
       } else if (e.key === 'Escape') {
-        if (drawTarget) controller?.cancelDraw();
-        else {
+        if (drawTarget) {
+          controller?.cancelDraw();
+          setMeasure(null);
+        } else {
           setSelectedId(null);
           setEditingBoundary(false);
         }
@@ -414,7 +424,7 @@ export function PlanMapPage() {
         <div className="relative min-w-0 flex-1">
           <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
           <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
-            <div className="pointer-events-auto max-w-full">
+            <div ref={chipsRef} className="pointer-events-auto max-w-full">
               <DrawChips active={drawTarget} onChoose={chooseTool} />
             </div>
             {drawTarget ? (
@@ -445,7 +455,7 @@ export function PlanMapPage() {
               </p>
             ) : null}
           </div>
-          <div className="pointer-events-none absolute bottom-9 left-2 z-10 flex flex-col items-start gap-2">
+          <div className="pointer-events-none absolute bottom-12 left-2 z-10 flex flex-col items-start gap-2">
             <div className="pointer-events-auto">
               <OverlayPanel
                 overlays={overlays.data ?? []}

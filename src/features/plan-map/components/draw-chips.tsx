@@ -19,7 +19,7 @@ function Chip({ active, onClick, children, colour, title }: { active: boolean; o
       title={title}
       onClick={onClick}
       style={active ? { borderColor: colour, boxShadow: `inset 0 0 0 1px ${colour}`, backgroundColor: `${colour}22` } : undefined}
-      className={`inline-flex items-center gap-1.5 whitespace-nowrap rounded-full border bg-card/95 px-2.5 py-1 text-xs font-semibold shadow-sm transition-colors ${active ? 'text-ink' : 'border-rule text-ink hover:border-slate'}`}
+      className={`inline-flex items-center gap-1.5 whitespace-nowrap rounded-full border bg-card/95 px-2 py-0.5 text-xs font-semibold shadow-sm transition-colors ${active ? 'text-ink' : 'border-rule text-ink hover:border-slate'}`}
     >
       {children}
     </button>
@@ -32,7 +32,7 @@ const verbFor = (kind: UnitKind) => (KIND_STYLES[kind].family === 'point' ? 'Pla
 export function DrawChips({ active, onChoose }: { active: DrawTarget | null; onChoose: (target: DrawTarget | null) => void }) {
   const toggle = (t: DrawTarget) => onChoose(sameTarget(active, t) ? null : t);
   const group = (kinds: readonly UnitKind[], label: string) => (
-    <div role="group" aria-label={label} className="flex flex-wrap gap-1">
+    <div role="group" aria-label={label} className="contents">
       {kinds.map((kind) => (
         <Chip key={kind} active={sameTarget(active, { type: 'unit', kind })} onClick={() => toggle({ type: 'unit', kind })} colour={kindColour(kind)} title={`${verbFor(kind)} a ${KIND_STYLES[kind].label.toLowerCase()}`}>
           <KindSwatch kind={kind} size={14} />
@@ -42,8 +42,8 @@ export function DrawChips({ active, onChoose }: { active: DrawTarget | null; onC
     </div>
   );
   return (
-    <div role="toolbar" aria-label="Drawing tools" className="flex flex-wrap items-start gap-x-3 gap-y-1">
-      <div role="group" aria-label="Boundary and measure" className="flex flex-wrap gap-1">
+    <div role="toolbar" aria-label="Drawing tools" className="flex flex-wrap items-center gap-1">
+      <div role="group" aria-label="Boundary and measure" className="contents">
         <Chip active={sameTarget(active, { type: 'boundary' })} onClick={() => toggle({ type: 'boundary' })} colour="#1F2A24" title="Draw the property boundary (replaces the current one)">
           <KindSwatch kind="boundary" size={14} />
           Boundary
@@ -57,8 +57,11 @@ export function DrawChips({ active, onChoose }: { active: DrawTarget | null; onC
           Measure area
         </Chip>
       </div>
+      <span aria-hidden className="mx-1 h-4 w-px bg-rule" />
       {group(AREA_KINDS, 'Areas')}
+      <span aria-hidden className="mx-1 h-4 w-px bg-rule" />
       {group(LINE_KINDS, 'Lines')}
+      <span aria-hidden className="mx-1 h-4 w-px bg-rule" />
       {group(POINT_KINDS, 'Points')}
     </div>
   );

@@ -5,9 +5,9 @@ import { KindSwatch } from './kind-swatch';
 export function MapLegend({ kinds, hasBoundary }: { kinds: UnitKind[]; hasBoundary: boolean }) {
   if (kinds.length === 0 && !hasBoundary) return null;
   return (
-    <div aria-label="Legend" role="group" className="max-h-64 overflow-y-auto rounded border border-rule bg-card/95 px-3 py-2 text-xs shadow-sm">
-      <p className="mb-1 font-semibold uppercase tracking-wide text-slate">Legend</p>
-      <ul className="flex flex-col gap-1">
+    <details open aria-label="Legend" className="group max-h-64 overflow-y-auto rounded border border-rule bg-card/95 px-3 py-1.5 text-xs shadow-sm">
+      <summary className="cursor-pointer font-semibold uppercase tracking-wide text-slate">Legend</summary>
+      <ul className="mt-1 flex flex-col gap-1 pb-0.5">
         {hasBoundary ? (
           <li className="flex items-center gap-2">
             <KindSwatch kind="boundary" size={14} /> Property boundary
@@ -19,6 +19,6 @@ export function MapLegend({ kinds, hasBoundary }: { kinds: UnitKind[]; hasBounda
           </li>
         ))}
       </ul>
-    </div>
+    </details>
   );
 }

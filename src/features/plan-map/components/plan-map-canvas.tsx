@@ -46,7 +46,7 @@ export function PlanMapCanvas({
       onEdited: (t, g) => callbacksRef.current.onEdited?.(t, g),
       onPick: (id) => callbacksRef.current.onPick?.(id),
       onMeasure: (m) => callbacksRef.current.onMeasure?.(m),
-      onDrawCancelled: () => callbacksRef.current.onDrawCancelled?.(),
+      onToolEnded: () => callbacksRef.current.onToolEnded?.(),
     };
     const controller = new PlanMapController(containerRef.current, forward);
     controllerRef.current = controller;
@@ -83,5 +83,10 @@ export function PlanMapCanvas({
     };
   }, []);
 
-  return <div ref={containerRef} className="absolute inset-0" data-testid="plan-map" aria-label="Plan map" role="region" />;
+  // MapLibre makes its container position: relative, so the container sits inside the absolute box.
+  return (
+    <div className="absolute inset-0">
+      <div ref={containerRef} className="h-full w-full" data-testid="plan-map" />
+    </div>
+  );
 }

@@ -117,7 +117,7 @@ function addPreviewLayers(map: MapLibreMap): void {
   const isArea: FilterSpecification = ['==', ['geometry-type'], 'Polygon'];
   const isLine: FilterSpecification = ['==', ['geometry-type'], 'LineString'];
   const isPoint: FilterSpecification = ['==', ['geometry-type'], 'Point'];
-  map.addLayer({ id: 'preview-fill', type: 'fill', source: SOURCES.preview, filter: isArea, paint: { 'fill-color': color, 'fill-opacity': ['case', ['==', ['get', 'choice'], 'skip'], 0.08, 0.3] } });
+  map.addLayer({ id: 'preview-fill', type: 'fill', source: SOURCES.preview, filter: isArea, paint: { 'fill-color': color, 'fill-opacity': ['match', ['get', 'choice'], 'skip', 0.08, 'boundary', 0.06, 0.35] } });
   map.addLayer({ id: 'preview-outline', type: 'line', source: SOURCES.preview, filter: ['any', isArea, isLine], paint: { 'line-color': ['case', ['==', ['get', 'choice'], 'skip'], '#9AA3A9', OCHRE], 'line-width': 2.5, 'line-dasharray': [2, 1.2] } });
   map.addLayer({ id: 'preview-point', type: 'circle', source: SOURCES.preview, filter: isPoint, paint: { 'circle-radius': 6, 'circle-color': color, 'circle-stroke-color': OCHRE, 'circle-stroke-width': 2.5 } });
   map.addLayer({ id: 'preview-highlight', type: 'line', source: SOURCES.preview, filter: ['all', ['any', isArea, isLine], ['==', ['get', 'highlight'], true]], paint: { 'line-color': CLAY, 'line-width': 4 } });

@@ -56,8 +56,8 @@ export interface PlanMapCallbacks {
   /** A click picked a unit (or empty map: null). */
   onPick?: (unitId: number | null) => void;
   onMeasure?: (reading: MeasureReading | null) => void;
-  /** The drawing tool ended without a shape (Escape). */
-  onDrawCancelled?: () => void;
+  /** The drawing tool ended by itself: Escape, or a measure was finished (it stays shown). */
+  onToolEnded?: () => void;
 }
 
 const MODE = {
@@ -291,6 +291,7 @@ export class PlanMapController {
         this.drawTarget = null;
         this.drawKind = null;
         this.draw.setMode(MODE.select);
+        this.callbacks.onToolEnded?.();
         return;
       }
       this.draw.removeFeatures([id]);
@@ -338,7 +339,7 @@ export class PlanMapController {
   cancelDraw(): void {
     if (!this.drawTarget) return;
     this.startDraw(null);
-    this.callbacks.onDrawCancelled?.();
+    this.callbacks.onToolEnded?.();
   }
 
   /** Removes the last measured shape. */
@@ -442,12 +443,21 @@ export class PlanMapController {
     this.nameMarker = new Marker({ element: el, anchor: 'bottom', offset: [0, -14] }).setLngLat([tag.lon, tag.lat]).addTo(this.map);
   }
 
-  /** Fits the view to a box [west, south, east, north]. */
+  private insetTopPx = 0;
+
+  /** Height of what covers the map's top edge (the drawing chips), kept clear when fitting. */
+  setInsetTop(px: number): void {
+    this.insetTopPx = Math.max(0, Math.round(px));
+  }
+
+  /** Fits the view to a box [west, south, east, north], clear of the chips along the top. */
   fitTo(box: BBox | null, animate = false): void {
     if (!box) return;
     const [w, s, e, n] = box;
-    const pad = Math.min(80, Math.max(24, Math.floor(Math.min(this.map.getContainer().clientWidth, this.map.getContainer().clientHeight) / 8)));
-    this.map.fitBounds(new LngLatBounds([w, s], [e, n]), { padding: pad, maxZoom: 18, animate, duration: animate ? 500 : 0 });
+    const el = this.map.getContainer();
+    const pad = Math.min(64, Math.max(20, Math.floor(Math.min(el.clientWidth, el.clientHeight) / 10)));
+    const top = Math.min(this.insetTopPx + pad, Math.max(pad, el.clientHeight / 3));
+    this.map.fitBounds(new LngLatBounds([w, s], [e, n]), { padding: { top, bottom: pad, left: pad, right: pad }, maxZoom: 18, animate, duration: animate ? 500 : 0 });
   }
 
   /** Removes the map and everything on it. */
