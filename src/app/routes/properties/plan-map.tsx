@@ -211,6 +211,7 @@ export function PlanMapPage() {
         const before = boundary;
         const saved = await updateBoundary.mutateAsync(geometry);
         undo.record({ type: 'boundary', before });
+        controller?.fitTo(bboxOf([geometry]), true);
         toast('success', `Boundary saved: ${formatAcresShort(saved.acres ?? 0)}.`);
       } catch (err) {
         toast('error', `The boundary was not saved. ${errorText(err)}`);
@@ -342,6 +343,7 @@ export function PlanMapPage() {
         const before = boundary;
         const saved = await updateBoundary.mutateAsync(importPlan.boundary);
         undo.record({ type: 'boundary', before });
+        controller?.fitTo(bboxOf([importPlan.boundary]), true);
         parts.push(`boundary (${formatAcresShort(saved.acres ?? 0)})`);
       }
       if (importPlan.units.length > 0) {
@@ -381,7 +383,7 @@ export function PlanMapPage() {
           <h1 className="truncate text-xl font-bold leading-tight">{p ? p.name : 'Plan map'}</h1>
         </div>
         {p?.acres ? (
-          <p className="figure text-sm text-slate">
+          <p className="figure text-sm text-slate" data-testid="property-size">
             <span className="text-lg font-bold text-ink">{formatAcresShort(p.acres)}</span> · {formatHectares(p.hectares ?? 0)}
           </p>
         ) : null}

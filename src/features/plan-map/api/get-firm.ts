@@ -1,13 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getData } from '../../../lib/api-client';
+import type { FirmDto } from '../../../../shared/schemas/firm';
 import { planMapKeys } from './keys';
-
-/** The firm as GET /api/firm answers it (the parts the map needs). */
-export interface FirmDto {
-  id: number;
-  name: string;
-  settings: { tileUrlTemplate: string | null; tileAttribution?: string | null; taxRatePct?: number | null };
-}
 
 /** GET /api/firm. */
 export const getFirm = (signal?: AbortSignal) => getData<FirmDto>('/api/firm', signal);

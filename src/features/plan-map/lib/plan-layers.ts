@@ -82,6 +82,23 @@ export function addPlanLayers(map: MapLibreMap, options: { labels?: boolean } = 
     layout: { 'line-join': 'round' },
     paint: { 'line-color': kindMatch('stroke', '#5B6770'), 'line-width': ['match', ['get', 'kind'], 'fence', 1.6, 3], 'line-dasharray': dashMatch() },
   });
+  if (options.labels) {
+    map.addLayer({
+      id: 'unit-label',
+      type: 'symbol',
+      source: SOURCES.area,
+      minzoom: 14.5,
+      layout: {
+        'text-field': ['get', 'name'],
+        'text-size': 12,
+        'text-max-width': 8,
+        'text-font': ['sans-serif'],
+        'text-variable-anchor': ['center', 'top', 'bottom'],
+        'text-radial-offset': 1.2,
+      },
+      paint: { 'text-color': INK, 'text-halo-color': CARD, 'text-halo-width': 1.4 },
+    });
+  }
   map.addLayer({
     id: 'unit-point',
     type: 'symbol',
@@ -89,19 +106,10 @@ export function addPlanLayers(map: MapLibreMap, options: { labels?: boolean } = 
     layout: {
       'icon-image': ['concat', 'browseline-', ['get', 'kind']] as unknown as ExpressionSpecification,
       'icon-allow-overlap': true,
-      'icon-ignore-placement': true,
+      // Symbols always show, and labels make way for them.
+      'icon-ignore-placement': false,
     },
   });
-  if (options.labels) {
-    map.addLayer({
-      id: 'unit-label',
-      type: 'symbol',
-      source: SOURCES.area,
-      minzoom: 14.5,
-      layout: { 'text-field': ['get', 'name'], 'text-size': 12, 'text-max-width': 8, 'text-font': ['sans-serif'] },
-      paint: { 'text-color': INK, 'text-halo-color': CARD, 'text-halo-width': 1.4 },
-    });
-  }
   addPreviewLayers(map);
 }
 
@@ -172,9 +180,12 @@ export function hideBoundary(map: MapLibreMap, hidden: boolean): void {
 export interface MapOverlay {
   id: number;
   imageUrl: string;
-  corners: [[number, number], [number, number], [number, number], [number, number]];
+  /** [lon, lat] of the top-left, top-right, bottom-right and bottom-left corners. */
+  corners: [number, number][];
   opacity: number;
 }
+
+type Corners = [[number, number], [number, number], [number, number], [number, number]];
 
 const overlayIds = (id: number) => ({ source: `overlay-${id}`, layer: `overlay-${id}-raster` });
 
@@ -193,13 +204,15 @@ export function syncOverlays(map: MapLibreMap, overlays: readonly MapOverlay[]):
   }
   for (const o of overlays) {
     const ids = overlayIds(o.id);
-    const existing = map.getSource(ids.source) as { setCoordinates?: (c: typeof o.corners) => void } | undefined;
+    if (o.corners.length !== 4) continue;
+    const corners = o.corners.slice(0, 4) as Corners;
+    const existing = map.getSource(ids.source) as { setCoordinates?: (c: Corners) => void } | undefined;
     if (existing) {
-      existing.setCoordinates?.(o.corners);
+      existing.setCoordinates?.(corners);
       map.setPaintProperty(ids.layer, 'raster-opacity', o.opacity);
       continue;
     }
-    map.addSource(ids.source, { type: 'image', url: o.imageUrl, coordinates: o.corners });
+    map.addSource(ids.source, { type: 'image', url: o.imageUrl, coordinates: corners });
     map.addLayer({ id: ids.layer, type: 'raster', source: ids.source, paint: { 'raster-opacity': o.opacity, 'raster-fade-duration': 0 } }, 'graticule-line');
   }
 }

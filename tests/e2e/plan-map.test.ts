@@ -1,0 +1,125 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { ellipsoidalAreaSqM, rectangle } from '../support/geodesy';
+import { SQ_M_PER_ACRE } from '../../shared/units';
+
+const baseUrl = inject('baseUrl');
+/** The map chunk and the plan load over a few requests: give the page time. */
+const WAIT = { timeout: 15_000 };
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Opens a demo property's plan map the way a consultant does: from the Desk's property list. */
+async function openPlanMap(page: Page, propertyName: string): Promise<void> {
+  await signIn(page, baseUrl, 'consultant@browseline.test');
+  await page.waitForURL(`${baseUrl}/desk`);
+  await page.getByRole('link', { name: propertyName, exact: true }).click();
+  await page.waitForURL(/\/properties\/\d+\/map$/);
+  await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), WAIT).toBe(propertyName);
+  // The map is ready when its canvas is drawn and the ledger has loaded.
+  await page.locator('[data-testid=plan-map] canvas.maplibregl-canvas').waitFor();
+  await page.getByRole('heading', { name: /^Units/ }).waitFor();
+}
+
+/** The number in a "12.34 ac" figure. */
+const acresIn = (text: string | null) => Number((text ?? '').replace(/,/g, '').match(/([\d.]+)\s*ac/)?.[1] ?? NaN);
+
+describe('plan map', () => {
+  it('draws a food plot by clicking on the map, shows its acres, keeps it after a reload, deletes it and undoes the delete', async () => {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    page.on('dialog', (d) => void d.accept());
+    await openPlanMap(page, 'Kettle Hollow Farm');
+
+    await page.getByRole('button', { name: 'Food plot', exact: true }).click();
+    const map = (await page.locator('[data-testid=plan-map]').boundingBox())!;
+    // An open stretch of the farm between the demo units at this viewport (fractions of the map box).
+    const corners = [
+      [0.45, 0.62],
+      [0.54, 0.62],
+      [0.54, 0.69],
+      [0.45, 0.69],
+    ].map(([fx, fy]) => ({ x: map.x + map.width * fx, y: map.y + map.height * fy }));
+    for (const c of corners) {
+      await page.mouse.move(c.x, c.y, { steps: 4 });
+      await page.mouse.click(c.x, c.y);
+    }
+    // terra-draw closes a polygon when its first corner is clicked again.
+    await page.mouse.move(corners[0].x, corners[0].y, { steps: 4 });
+    await page.mouse.click(corners[0].x, corners[0].y);
+
+    // The demo farm has two food plots, so the new one is "Food plot 3"; its detail opens in the ledger.
+    const detail = page.getByRole('region', { name: 'Unit Food plot 3' });
+    await detail.waitFor();
+    const shownAcres = acresIn(await detail.getByRole('definition').first().textContent());
+    const propertyId = Number(new URL(page.url()).pathname.split('/')[2]);
+    const units = (await (await page.request.get(`${baseUrl}/api/properties/${propertyId}/units`)).json()) as { data: { name: string; acres: number | null }[] };
+    const saved = units.data.find((u) => u.name === 'Food plot 3');
+    expect(saved?.acres).toBeGreaterThan(0.5);
+    // The ledger shows the server's acres (computed on the server), rounded to hundredths.
+    expect(shownAcres).toBeCloseTo(saved!.acres!, 2);
+    await screenshot(page, 'plan-map-drawn-food-plot');
+
+    await page.reload();
+    await page.getByRole('heading', { name: /^Units/ }).waitFor();
+    await page.getByRole('list', { name: 'Food plot' }).getByRole('button', { name: /Food plot 3/ }).click();
+    await detail.waitFor();
+    expect(acresIn(await detail.getByRole('definition').first().textContent())).toBeCloseTo(saved!.acres!, 2);
+
+    await detail.getByRole('button', { name: 'Delete unit' }).click();
+    await expect.poll(() => page.getByRole('list', { name: 'Food plot' }).getByRole('button', { name: /Food plot 3/ }).count(), WAIT).toBe(0);
+    // The Undo button now offers to bring it back; Ctrl+Z does it.
+    await expect.poll(() => page.getByRole('button', { name: 'Undo' }).getAttribute('title'), WAIT).toMatch(/^Undo: delete Food plot 3/);
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => page.getByRole('list', { name: 'Food plot' }).getByRole('button', { name: /Food plot 3/ }).count(), WAIT).toBe(1);
+    await screenshot(page, 'plan-map-after-undo');
+    watch.assertClean();
+    await context.close();
+  });
+
+  it('imports a KML boundary, lists the placemark it had to skip, and shows the new boundary acres', async () => {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    page.on('dialog', (d) => void d.accept());
+    await openPlanMap(page, 'Sawmill Ridge 80');
+
+    // A 600 m × 540 m rectangle near the demo tract: 324,000 m², about 80 acres.
+    const outline = rectangle(-90.7515, 43.4440, 600, 540);
+    const coords = outline.coordinates[0].map(([lon, lat]) => `${lon.toFixed(7)},${lat.toFixed(7)}`).join(' ');
+    const kml = `<?xml version="1.0" encoding="UTF-8"?>
+<kml xmlns="http://www.opengis.net/kml/2.2"><Document><name>Survey</name>
+<Placemark><name>Property boundary</name><Polygon><outerBoundaryIs><LinearRing><coordinates>${coords}</coordinates></LinearRing></outerBoundaryIs></Polygon></Placemark>
+<Placemark><name>Lost corner</name><Polygon><outerBoundaryIs><LinearRing><coordinates>-90.75,43.45</coordinates></LinearRing></outerBoundaryIs></Polygon></Placemark>
+</Document></kml>`;
+    await page.locator('#plan-import-file').setInputFiles({ name: 'survey.kml', mimeType: 'application/vnd.google-earth.kml+xml', buffer: Buffer.from(kml) });
+
+    const preview = page.getByRole('region', { name: 'Import preview' });
+    await preview.waitFor();
+    await expect.poll(() => preview.getByRole('region', { name: 'Skipped features' }).textContent(), WAIT).toMatch(/Lost corner/);
+    const choice = preview.getByRole('combobox', { name: 'Property boundary' });
+    await choice.selectOption('boundary');
+    await screenshot(page, 'plan-map-import-preview');
+    await preview.getByRole('button', { name: 'Save 1 feature' }).click();
+    await preview.waitFor({ state: 'detached' });
+
+    // Reference: GeographicLib on WGS84 (Karney 2013, via tests/support/geodesy.ts). The server's
+    // acres may come from turf's sphere, which reads about 0.2 % low at 43° N (STACK.md), so 0.5 %.
+    const expectedAcres = ellipsoidalAreaSqM(outline) / SQ_M_PER_ACRE;
+    const size = page.getByTestId('property-size');
+    await expect.poll(async () => Math.abs(acresIn(await size.textContent()) - expectedAcres) / expectedAcres, WAIT).toBeLessThan(0.005);
+    const headerAcres = acresIn(await size.textContent());
+    await expect.poll(async () => acresIn(await page.getByRole('heading', { name: /Acres by kind/ }).textContent()), WAIT).toBeCloseTo(headerAcres, 2);
+    await screenshot(page, 'plan-map-imported-boundary');
+    watch.assertClean();
+    await context.close();
+  });
+});
