@@ -11,6 +11,8 @@ declare global {
       stop: () => FrameStats | null;
       /** Pans the map back and forth for durationMs and answers the frame times meanwhile. */
       pan: (durationMs?: number) => Promise<FrameStats>;
+      /** The MapLibre map, for experiments in a benchmark (hide a layer, change the zoom). */
+      map: () => unknown;
     };
   }
 }
@@ -62,6 +64,7 @@ export function PlanMapCanvas({
         probe = null;
         return stats;
       },
+      map: () => controller.map,
       pan: async (durationMs = 3000) => {
         const map = controller.map;
         const run = startFrameProbe();

@@ -409,9 +409,22 @@ export class PlanMapController {
     this.whenReady(() => setPreviewData(this.map, features));
   }
 
+  private imagery = { tiles: false, overlays: false };
+
+  /** Over imagery the boundary's paper wash goes, and with tiles the graticule too. */
+  private applyImagery(): void {
+    const any = this.imagery.tiles || this.imagery.overlays;
+    if (this.map.getLayer('boundary-fill')) this.map.setPaintProperty('boundary-fill', 'fill-opacity', any ? 0 : 0.55);
+    if (this.map.getLayer('graticule-line')) this.map.setLayoutProperty('graticule-line', 'visibility', this.imagery.tiles ? 'none' : 'visible');
+  }
+
   /** Shows the image overlays. */
   setOverlays(overlays: readonly MapOverlay[]): void {
-    this.whenReady(() => syncOverlays(this.map, overlays));
+    this.whenReady(() => {
+      syncOverlays(this.map, overlays);
+      this.imagery.overlays = overlays.length > 0;
+      this.applyImagery();
+    });
   }
 
   /** Changes an overlay's opacity on the map only. */
@@ -425,6 +438,8 @@ export class PlanMapController {
   setTiles(template: string | null, attribution?: string | null): void {
     this.whenReady(() => {
       setBackgroundTiles(this.map, template, attribution);
+      this.imagery.tiles = Boolean(template);
+      this.applyImagery();
       if (template && !this.attribution) {
         this.attribution = new AttributionControl({ compact: true });
         this.map.addControl(this.attribution, 'bottom-right');
