@@ -110,6 +110,7 @@ export function PlanMapPage() {
   const [drawTarget, setDrawTarget] = useState<DrawTarget | null>(null);
   const [measure, setMeasure] = useState<MeasureReading | null>(null);
   const [importState, setImportState] = useState<ImportState | null>(null);
+  const [tilesFailed, setTilesFailed] = useState(false);
   const [uploadProgress, setUploadProgress] = useState<number | null | undefined>(undefined);
   const fileInput = useRef<HTMLInputElement>(null);
   const chipsRef = useRef<HTMLDivElement>(null);
@@ -254,6 +255,7 @@ export function PlanMapPage() {
     },
     onMeasure: setMeasure,
     onToolEnded: () => setDrawTarget(null),
+    onTilesFailed: () => setTilesFailed(true),
   };
 
   const saveDetails = async (unit: UnitDto, input: UnitUpdateInput) => {
@@ -450,6 +452,11 @@ export function PlanMapPage() {
                   }}
                 />
               </div>
+            ) : null}
+            {tilesFailed && tileTemplate ? (
+              <p role="status" className="pointer-events-auto rounded border-l-4 border-clay bg-card/95 px-3 py-1 text-xs text-ink shadow-sm">
+                The background imagery from {new URL(tileTemplate.replace(/\{[a-z]\}/g, '0')).host} could not be loaded. The plan still works; the firm owner can check the tile address in Settings.
+              </p>
             ) : null}
             {editingBoundary ? (
               <p role="status" className="pointer-events-auto rounded bg-ink/85 px-3 py-1 text-xs text-white">

@@ -49,6 +49,7 @@ export function PlanMapCanvas({
       onPick: (id) => callbacksRef.current.onPick?.(id),
       onMeasure: (m) => callbacksRef.current.onMeasure?.(m),
       onToolEnded: () => callbacksRef.current.onToolEnded?.(),
+      onTilesFailed: (m) => callbacksRef.current.onTilesFailed?.(m),
     };
     const controller = new PlanMapController(containerRef.current, forward);
     controllerRef.current = controller;

@@ -56,6 +56,8 @@ export interface PlanMapCallbacks {
   /** A click picked a unit (or empty map: null). */
   onPick?: (unitId: number | null) => void;
   onMeasure?: (reading: MeasureReading | null) => void;
+  /** The firm's background tiles failed to load (said once per map). */
+  onTilesFailed?: (message: string) => void;
   /** The drawing tool ended by itself: Escape, or a measure was finished (it stays shown). */
   onToolEnded?: () => void;
 }
@@ -114,6 +116,27 @@ export class PlanMapController {
     this.map.addControl(new NavigationControl({ showCompass: false }), 'bottom-right');
     this.map.addControl(new ScaleControl({ unit: 'imperial', maxWidth: 140 }), 'bottom-left');
     this.map.on('load', () => this.onLoad());
+    // A failing tile service must not flood the console nor hold up the plan: when its first
+    // tiles all fail, the tiles are taken off and the page is told once.
+    let tileErrors = 0;
+    let tilesLoaded = 0;
+    this.map.on('sourcedata', (e) => {
+      if (e.sourceId === 'tiles' && (e as { tile?: unknown }).tile) tilesLoaded += 1;
+    });
+    this.map.on('error', (event) => {
+      const e = event as unknown as { error?: Error; sourceId?: string };
+      if (e.sourceId !== 'tiles') {
+        console.error(e.error ?? e);
+        return;
+      }
+      tileErrors += 1;
+      if (tileErrors === 3 && tilesLoaded === 0) {
+        setBackgroundTiles(this.map, null);
+        this.imagery.tiles = false;
+        this.applyImagery();
+        this.callbacks.onTilesFailed?.(e.error?.message ?? 'no answer');
+      }
+    });
     this.map.on('click', (e) => this.onClick(e.point.x, e.point.y, e.lngLat));
     for (const layer of UNIT_LAYERS) {
       this.map.on('mouseenter', layer, () => {
