@@ -129,7 +129,11 @@ export function PlanMapPage() {
   const boundaryBox = useMemo(() => (boundary ? bboxOf([boundary]) : null), [boundary]);
 
   useEffect(() => controller?.setUnits(collections), [controller, collections]);
-  useEffect(() => controller?.setBoundary(boundary, boundaryBox ?? bboxOf(unitList.map((u) => u.geometry))), [controller, boundary, boundaryBox, unitList]);
+  // Without a boundary the graticule is laid around the units instead.
+  const unitsBox = useMemo(() => (boundaryBox ? null : bboxOf(unitList.map((u) => u.geometry))), [boundaryBox, unitList]);
+  const gridKey = JSON.stringify(boundaryBox ?? unitsBox);
+  const gridBox = useMemo(() => JSON.parse(gridKey) as ReturnType<typeof bboxOf>, [gridKey]);
+  useEffect(() => controller?.setBoundary(boundary, gridBox), [controller, boundary, gridBox]);
 
   // Keep the chips' height clear when fitting the view.
   useEffect(() => {
@@ -514,7 +518,17 @@ export function PlanMapPage() {
               onZoom={() => controller?.fitTo(bboxOf([selected.geometry]), true)}
             />
           ) : (
-            <PlanLedger units={unitList} plan={plan.data} planError={plan.error} selectedId={selectedId} onSelect={setSelectedId} />
+            <PlanLedger
+              units={unitList}
+              plan={plan.data}
+              planError={plan.error}
+              selectedId={selectedId}
+              onSelect={(id) => {
+                setSelectedId(id);
+                const unit = unitList.find((u) => u.id === id);
+                if (unit) controller?.reveal(unit.geometry);
+              }}
+            />
           )}
         </aside>
       </div>

@@ -18,7 +18,7 @@ import {
 import { TerraDrawMapLibreGLAdapter } from 'terra-draw-maplibre-gl-adapter';
 import type { BBox, Geometry, LineString, MultiPolygon, Polygon } from 'geojson';
 import { KIND_STYLES, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
-import { measureArea, measureLine } from '../../../../shared/domain/geometry';
+import { bboxOf, measureArea, measureLine } from '../../../../shared/domain/geometry';
 import { CARD, INK, MOSS_DEEP, OCHRE, SKY, offlineStyle } from './map-style';
 import {
   UNIT_LAYERS,
@@ -175,7 +175,8 @@ export class PlanMapController {
   }
 
   private createDraw(): TerraDraw {
-    const fill = (f: GeoJSONStoreFeatures) => this.kindColour(f, 'fill', OCHRE);
+    const isBoundary = (f: GeoJSONStoreFeatures) => f.properties?.mode === MODE.boundary;
+    const fill = (f: GeoJSONStoreFeatures) => (isBoundary(f) ? hex(CARD) : this.kindColour(f, 'fill', OCHRE));
     const stroke = (f: GeoJSONStoreFeatures) => this.kindColour(f, 'stroke', INK);
     const vertex = { coordinatePointColor: hex(CARD), coordinatePointOutlineColor: hex(INK), coordinatePointWidth: 4, coordinatePointOutlineWidth: 1.5 };
     const closing = { closingPointColor: hex(CARD), closingPointOutlineColor: hex(INK), closingPointWidth: 5, closingPointOutlineWidth: 2 };
@@ -196,7 +197,7 @@ export class PlanMapController {
           },
           styles: {
             selectedPolygonColor: fill,
-            selectedPolygonFillOpacity: 0.45,
+            selectedPolygonFillOpacity: (f: GeoJSONStoreFeatures) => (isBoundary(f) ? 0.15 : 0.45),
             selectedPolygonOutlineColor: hex(INK),
             selectedPolygonOutlineWidth: 2.5,
             selectedLineStringColor: stroke,
@@ -496,6 +497,14 @@ export class PlanMapController {
     const pad = Math.min(64, Math.max(20, Math.floor(Math.min(el.clientWidth, el.clientHeight) / 10)));
     const top = Math.min(this.insetTopPx + pad, Math.max(pad, el.clientHeight / 3));
     this.map.fitBounds(new LngLatBounds([w, s], [e, n]), { padding: { top, bottom: pad, left: pad, right: pad }, maxZoom: 18, animate, duration: animate ? 500 : 0 });
+  }
+
+  /** Brings a shape into view when its centre is off screen (the zoom stays). */
+  reveal(geometry: Geometry): void {
+    const box = bboxOf([geometry]);
+    if (!box) return;
+    const centre: [number, number] = [(box[0] + box[2]) / 2, (box[1] + box[3]) / 2];
+    if (!this.map.getBounds().contains(centre)) this.map.easeTo({ center: centre, duration: 400 });
   }
 
   /** Removes the map and everything on it. */
