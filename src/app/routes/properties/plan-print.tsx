@@ -83,9 +83,9 @@ export function PlanPrintPage() {
         </div>
       </header>
 
-      <figure className="relative break-inside-avoid">
+      <figure className="relative break-inside-avoid print:mx-auto print:w-fit">
         {image ? (
-          <img src={image.dataUrl} alt={`Plan map of ${p.name}`} className="block w-full rounded border border-rule" />
+          <img src={image.dataUrl} alt={`Plan map of ${p.name}`} className="block w-full rounded border border-rule print:h-[4.9in] print:w-auto" />
         ) : imageError ? (
           <ErrorPanel error={imageError} />
         ) : (
@@ -110,7 +110,7 @@ export function PlanPrintPage() {
         ) : null}
       </figure>
 
-      <div className="mt-4 grid grid-cols-3 gap-6">
+      <div className="mt-4 grid break-inside-avoid grid-cols-3 gap-6">
         <section aria-label="Legend">
           <h2 className="mb-1 text-base font-bold">Legend</h2>
           <ul className="flex flex-col gap-1 text-sm">

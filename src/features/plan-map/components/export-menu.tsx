@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 
@@ -10,8 +11,23 @@ const FORMATS = [
 
 /** Export links (the server answers a file to download) and the print view. */
 export function ExportMenu({ propertyId }: { propertyId: number }) {
+  const ref = useRef<HTMLDetailsElement>(null);
+  // Close the menu on a click elsewhere or Escape, as menus do.
+  useEffect(() => {
+    const close = (e: Event) => {
+      const el = ref.current;
+      if (!el?.open) return;
+      if (e instanceof KeyboardEvent ? e.key === 'Escape' : !el.contains(e.target as Node)) el.open = false;
+    };
+    document.addEventListener('pointerdown', close);
+    document.addEventListener('keydown', close);
+    return () => {
+      document.removeEventListener('pointerdown', close);
+      document.removeEventListener('keydown', close);
+    };
+  }, []);
   return (
-    <details className="relative">
+    <details ref={ref} className="relative">
       <summary className="inline-flex cursor-pointer list-none items-center gap-1 rounded border border-rule bg-card px-3 py-1.5 text-sm font-semibold text-ink hover:border-moss hover:text-moss-deep">
         Export <span aria-hidden>▾</span>
       </summary>
