@@ -1,6 +1,6 @@
 /**
  * Speed of the document engine: median render time of a 3-page plan summary (map, 40 table rows,
- * cautions) over 5 warm runs, after 2 warm-up runs. Run: `npx tsx tests/bench/pdf-render.ts`.
+ * cautions) over 5 warm runs, after 5 warm-up runs (the JIT needs a few). Run: `npx tsx tests/bench/pdf-render.ts`.
  * Prints timings; asserts nothing about them.
  */
 import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
@@ -25,12 +25,13 @@ function pageCount(pdf: Buffer): number {
 const runs: number[] = [];
 let pages = 0;
 let bytes = 0;
-for (let i = 0; i < 7; i++) {
+const WARM_UP = 5;
+for (let i = 0; i < WARM_UP + 5; i++) {
   const input = couleeBendSummary(fortyUnits());
   const start = performance.now();
   const pdf = await renderPlanSummaryPdf(input);
   const ms = performance.now() - start;
-  if (i >= 2) runs.push(ms);
+  if (i >= WARM_UP) runs.push(ms);
   pages = pageCount(pdf);
   bytes = pdf.length;
 }

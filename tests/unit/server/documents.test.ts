@@ -11,7 +11,7 @@ import { formatAcres } from '../../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../../shared/domain/unit-kinds';
 import { woffToSfnt } from '../../../server/services/documents/fonts';
 import { escapeXml, projectionFor, renderPlanMap, renderPlanMapSvg, type PlanMapUnit } from '../../../server/services/documents/map-svg';
-import { DocumentRenderError, FONT_FILES, renderPdf } from '../../../server/services/documents/pdf';
+import { DocumentRenderError, FONT_FILES, moneyTable, renderPdf } from '../../../server/services/documents/pdf';
 import { formatLength, planSummaryDocument, renderPlanSummaryPdf } from '../../../templates/documents/plan-summary';
 import { BOUNDARY, couleeBendSummary, offset, UNITS, type FixtureUnit } from '../../support/document-fixtures';
 import { ellipsoidAreaSqM, rectangleAt, WGS84 } from '../../support/geo-fixtures';
@@ -327,6 +327,23 @@ describe('document engine', () => {
     const pdf = await renderPdf({ content: [{ text: 'Season report', style: 'title' }, 'Body text 1,234.56'] });
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     expect(pdfText(pdf, 'small')).toContain('Body text 1,234.56');
+  });
+
+  it('prints money tables exactly from integer cents', async () => {
+    const pdf = await renderPdf({
+      content: [
+        moneyTable([
+          { label: 'Clover seed', amountCents: 123456 },
+          { label: 'Flagging', amountCents: 5 },
+          { label: 'Total', amountCents: 123461, total: true },
+        ]),
+      ],
+    });
+    const text = pdfText(pdf, 'money');
+    // Worked by hand: 123,456 ¢ = $1,234.56; 5 ¢ = $0.05; their sum 123,461 ¢ = $1,234.61.
+    expect(text).toMatch(/Clover seed\s+\$1,234\.56/);
+    expect(text).toMatch(/Flagging\s+\$0\.05/);
+    expect(text).toMatch(/Total\s+\$1,234\.61/);
   });
 
   it('reports bad plan summary input by field', () => {
