@@ -13,6 +13,7 @@
  * Only SVG features that pdfmake's svg-to-pdfkit draws are used: paths, rects, circles, polylines,
  * text with text-anchor, fill-opacity, stroke-dasharray, evenodd fill. Every text is XML-escaped.
  */
+import { escapeXml } from '../geo-files/export-helpers';
 import type { BBox, Geometry, MultiPolygon, Polygon, Position } from 'geojson';
 import { DomainValidationError } from '../../../shared/domain/errors';
 import { fitsFamily, GeometryKindMismatchError } from '../../../shared/domain/geometry';
@@ -144,16 +145,7 @@ export function projectionFor(bbox: BBox, box: MapBox, marginPt = 0): MapProject
   };
 }
 
-/** Text escaped for XML content and attribute values; characters XML 1.0 forbids are dropped. */
-export function escapeXml(text: string): string {
-  return text
-    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, '')
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&apos;');
-}
+export { escapeXml };
 
 // Advance widths of Source Sans 3 SemiBold (the map's label face), 1/1000 em, for ASCII 32–126,
 // read from @fontsource/source-sans-3 5.3.1 with fontkit. Other characters count as 0.56 em.
