@@ -122,6 +122,12 @@ export type PracticeDto = PracticeDefinition & {
   updatedAt: string;
 };
 
+const SprayRateSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('product'), amountPerAcre: positive('Product rate', 2560, 'per acre'), unit: z.enum(['gal', 'qt', 'pt', 'fl-oz']) }),
+  z.object({ kind: z.literal('active'), lbAiPerAcre: positive('Active ingredient rate', 20, 'lb a.i./acre'), lbAiPerGal: positive('Concentration', 12, 'lb a.i./gal').optional() }),
+  z.object({ kind: z.literal('solution'), pctOfSpray: positive('Solution strength', 100, '%') }),
+]);
+
 const StepParametersSchema = z.object({
   skip: z.boolean().optional(),
   materialKey: z.string().max(80).optional(),
@@ -136,7 +142,7 @@ const StepParametersSchema = z.object({
   gpa: positive('Spray volume', 100, 'gal/acre').optional(),
   tankGal: positive('Tank size', 2000, 'gal').optional(),
   treatedFraction: z.number().min(0).max(1).optional(),
-  sprayRates: z.record(z.string(), z.record(z.string(), z.unknown())).optional(),
+  sprayRates: z.record(z.string(), SprayRateSchema).optional(),
   itemQuantities: z.record(z.string(), z.number().min(0).max(100_000)).optional(),
   productivity: z.record(z.string(), z.record(z.string(), z.number().nonnegative())).optional(),
 });
