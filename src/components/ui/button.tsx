@@ -1,6 +1,6 @@
 import type { ButtonHTMLAttributes } from 'react';
 
-type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
+export type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
 
 const VARIANTS: Record<Variant, string> = {
   primary: 'bg-moss text-white hover:bg-moss-deep disabled:bg-slate/50',
@@ -9,11 +9,16 @@ const VARIANTS: Record<Variant, string> = {
   ghost: 'text-moss-deep hover:bg-moss/10',
 };
 
+/** The classes of a button in one of our variants, for links that look like buttons. */
+export function buttonClasses(variant: Variant = 'primary', className = ''): string {
+  return `inline-flex items-center justify-center gap-2 rounded px-4 py-2 text-sm font-semibold transition-colors disabled:cursor-not-allowed ${VARIANTS[variant]} ${className}`;
+}
+
 /** A button in one of our variants; `busy` disables it and says so. */
 export function Button({ variant = 'primary', busy, className = '', children, disabled, ...rest }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean }) {
   return (
     <button
-      className={`inline-flex items-center justify-center gap-2 rounded px-4 py-2 text-sm font-semibold transition-colors disabled:cursor-not-allowed ${VARIANTS[variant]} ${className}`}
+      className={buttonClasses(variant, className)}
       disabled={disabled || busy}
       aria-busy={busy || undefined}
       {...rest}

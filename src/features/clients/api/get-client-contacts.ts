@@ -1,0 +1,20 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { getData } from '../../../lib/api-client';
+
+/** A landowner's account for the read-only portal. */
+export interface ClientContact {
+  id: number;
+  name: string;
+  email: string;
+  status: 'active' | 'invited' | 'disabled';
+  lastSignInAt: string | null;
+}
+
+/** The portal contacts of one client. */
+export const getClientContacts = (clientId: number, signal?: AbortSignal) => getData<ClientContact[]>(`/api/clients/${clientId}/contacts`, signal);
+
+export const getClientContactsQueryOptions = (clientId: number) =>
+  queryOptions({ queryKey: ['clients', 'detail', clientId, 'contacts'], queryFn: ({ signal }) => getClientContacts(clientId, signal) });
+
+/** The portal contacts of one client. */
+export const useClientContacts = (clientId: number) => useQuery(getClientContactsQueryOptions(clientId));
