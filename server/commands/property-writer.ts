@@ -1,14 +1,73 @@
-/** Saves a property's boundary as a MultiPolygon with its acres computed on the server. */
+/** Creates and edits properties; the boundary is stored as a MultiPolygon with measures computed here. */
 import type { MultiPolygon, Polygon } from 'geojson';
-import { area } from '@turf/turf';
-import { sqMetresToAcres } from '../../shared/units';
+import type { Transaction } from 'sequelize';
+import { sequelize } from '../db/sequelize';
+import { Client, Property } from '../models';
+import { measureArea, toMultiPolygon } from '../../shared/domain/geometry';
+import type { PropertyCreateInput, PropertyUpdateInput } from '../../shared/schemas/property';
+import type { SessionUser } from '../../shared/schemas/auth';
+import { notFound, unprocessable } from '../errors';
+import { assertValidInDatabase } from './geometry-validator';
+import { recordAudit } from './audit-recorder';
 
 /** A Polygon wrapped as a MultiPolygon (the column's type). */
-export function asMultiPolygon(geom: Polygon | MultiPolygon): MultiPolygon {
-  return geom.type === 'MultiPolygon' ? geom : { type: 'MultiPolygon', coordinates: [geom.coordinates] };
-}
+export const asMultiPolygon = (geom: Polygon | MultiPolygon): MultiPolygon => toMultiPolygon(geom);
 
 /** Acres of a boundary, rounded to the thousandth stored in the database. */
 export function boundaryAcres(geom: Polygon | MultiPolygon): number {
-  return Math.round(sqMetresToAcres(area(geom)) * 1000) / 1000;
+  return Math.round(measureArea(geom).acres * 1000) / 1000;
+}
+
+/** The stored boundary columns for a boundary (or its absence). */
+export function boundaryColumns(geom: Polygon | MultiPolygon | null) {
+  if (!geom) return { boundary: null, acres: null, perimeterFt: null };
+  const m = measureArea(geom);
+  return { boundary: toMultiPolygon(geom), acres: Math.round(m.acres * 1000) / 1000, perimeterFt: Math.round(m.perimeterFt * 10) / 10 };
+}
+
+async function assertClientInFirm(clientId: number, firmId: number, transaction: Transaction): Promise<void> {
+  const client = await Client.findOne({ where: { id: clientId, firmId }, transaction, attributes: ['id'] });
+  if (!client) throw unprocessable('clientId: choose one of your firm’s clients.', [{ path: 'clientId', message: 'not a client of this firm' }]);
+}
+
+/** Creates a property of one of the firm's clients. */
+export async function createProperty(actor: SessionUser, input: PropertyCreateInput, ip: string | null): Promise<Property> {
+  return sequelize.transaction(async (transaction) => {
+    await assertClientInFirm(input.clientId, actor.firmId, transaction);
+    if (input.boundary) await assertValidInDatabase(input.boundary, 'boundary', transaction);
+    const property = await Property.create(
+      {
+        firmId: actor.firmId,
+        clientId: input.clientId,
+        name: input.name,
+        county: input.county ?? null,
+        state: input.state ?? null,
+        region: input.region ?? null,
+        objectives: input.objectives ?? null,
+        notes: input.notes ?? null,
+        ...boundaryColumns(input.boundary ?? null),
+      },
+      { transaction },
+    );
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'property.created', subjectType: 'Property', subjectId: property.id, ip }, transaction);
+    return property;
+  });
+}
+
+/** Edits a property; a new boundary is re-measured and bumps the plan's revision. */
+export async function updateProperty(actor: SessionUser, propertyId: number, input: PropertyUpdateInput, ip: string | null): Promise<Property> {
+  return sequelize.transaction(async (transaction) => {
+    const property = await Property.findOne({ where: { id: propertyId, firmId: actor.firmId }, lock: transaction.LOCK.UPDATE, transaction });
+    if (!property) throw notFound('That property');
+    if (input.clientId !== undefined) await assertClientInFirm(input.clientId, actor.firmId, transaction);
+    const { boundary, ...rest } = input;
+    const changes: Record<string, unknown> = { ...rest };
+    if (boundary !== undefined) {
+      if (boundary) await assertValidInDatabase(boundary, 'boundary', transaction);
+      Object.assign(changes, boundaryColumns(boundary ?? null), { revision: property.revision + 1 });
+    }
+    await property.update(changes, { transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: boundary !== undefined ? 'property.boundary-changed' : 'property.updated', subjectType: 'Property', subjectId: property.id, ip }, transaction);
+    return property;
+  });
 }

@@ -6,6 +6,8 @@ import { Property } from './property';
 import { AuthToken } from './auth-token';
 import { OutboxMessage } from './outbox-message';
 import { AuditEvent } from './audit-event';
+import { Unit } from './unit';
+import { Overlay } from './overlay';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -16,6 +18,10 @@ Property.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
 Client.hasMany(User, { foreignKey: 'clientId', as: 'contacts' });
 User.belongsTo(Client, { foreignKey: 'clientId', as: 'client' });
 AuthToken.belongsTo(User, { foreignKey: 'userId' });
+Property.hasMany(Unit, { foreignKey: 'propertyId', as: 'units' });
+Unit.belongsTo(Property, { foreignKey: 'propertyId', as: 'property' });
+Property.hasMany(Overlay, { foreignKey: 'propertyId', as: 'overlays' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent };
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay };
+export type { Corners } from './overlay';
 export type { OutboxAttachment } from './outbox-message';

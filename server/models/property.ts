@@ -15,6 +15,7 @@ export class Property extends Model<InferAttributes<Property>, InferCreationAttr
   declare notes: string | null;
   declare boundary: MultiPolygon | null;
   declare acres: number | null;
+  declare perimeterFt: number | null;
   declare revision: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -36,6 +37,13 @@ Property.init(
       type: DataTypes.DECIMAL(12, 3),
       get() {
         const v = this.getDataValue('acres') as unknown;
+        return v === null || v === undefined ? null : Number(v);
+      },
+    },
+    perimeterFt: {
+      type: DataTypes.DECIMAL(14, 1),
+      get() {
+        const v = this.getDataValue('perimeterFt') as unknown;
         return v === null || v === undefined ? null : Number(v);
       },
     },
