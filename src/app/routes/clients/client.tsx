@@ -52,7 +52,7 @@ function ClientDetails({ client }: { client: ClientDto }) {
       title="Details"
       action={
         !editing ? (
-          <Button variant="secondary" className="px-3 py-1" onClick={() => setEditing(true)}>
+          <Button variant="secondary" size="sm" onClick={() => setEditing(true)}>
             Edit
           </Button>
         ) : null
@@ -87,7 +87,7 @@ function ClientProperties({ client }: { client: ClientDto }) {
       title="Properties"
       action={
         !adding ? (
-          <Button className="px-3 py-1" onClick={() => setAdding(true)}>
+          <Button size="sm" onClick={() => setAdding(true)}>
             New property
           </Button>
         ) : null
@@ -149,7 +149,7 @@ export function ClientPage() {
         </span>
       </PageHeader>
       <ClientProperties client={c} />
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid items-start gap-4 lg:grid-cols-2">
         <ClientDetails client={c} />
         <Card title="Portal contacts">
           <ClientContacts clientId={c.id} clientName={c.name} />

@@ -1,12 +1,15 @@
-import { Link, useSearchParams } from 'react-router-dom';
+import { useState } from 'react';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import type { PropertyDto } from '../../../../shared/schemas/property';
+import type { ClientDto } from '../../../../shared/schemas/client';
+import { NewPropertyForm } from '../../../features/properties/components/property-form';
 import { useProperties } from '../../../features/properties/api/get-properties';
 import { useClients } from '../../../features/clients/api/get-clients';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { DataTable, type DataColumn } from '../../../components/ui/data-table';
 import { PageHeader } from '../../../components/ui/page-header';
 import { SelectField } from '../../../components/ui/select-field';
-import { buttonClasses } from '../../../components/ui/button';
+import { Button } from '../../../components/ui/button';
 import { formatAcres, formatDate } from '../../../lib/format';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
@@ -42,9 +45,40 @@ const COLUMNS: DataColumn<PropertyDto>[] = [
   },
 ];
 
+/** A new property: first the client it belongs to, then its details. */
+function NewPropertyFlow({ clients, initialClientId, onCreated, onCancel }: { clients: readonly ClientDto[]; initialClientId?: number; onCreated: (p: PropertyDto) => void; onCancel: () => void }) {
+  const [clientId, setClientId] = useState<number | undefined>(initialClientId);
+  return (
+    <div className="flex flex-col gap-3">
+      <SelectField label="Client" className="sm:max-w-sm" value={clientId ?? ''} onChange={(e) => setClientId(parseId(e.target.value) ?? undefined)}>
+        <option value="">Choose the client who owns it…</option>
+        {clients.map((c) => (
+          <option key={c.id} value={c.id}>
+            {c.name}
+          </option>
+        ))}
+      </SelectField>
+      {clientId ? (
+        <NewPropertyForm key={clientId} clientId={clientId} onCreated={onCreated} onCancel={onCancel} />
+      ) : (
+        <div className="flex flex-wrap items-center gap-3">
+          <p className="text-sm text-slate">
+            Every property belongs to a client. Not listed? Add them on <Link className="font-semibold text-moss-deep underline" to={paths.clients}>Clients</Link> first.
+          </p>
+          <Button type="button" variant="secondary" onClick={onCancel}>
+            Cancel
+          </Button>
+        </div>
+      )}
+    </div>
+  );
+}
+
 /** All properties of the firm, with a client filter; each leads to its page and its plan map. */
 export function PropertiesPage() {
   const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
+  const [adding, setAdding] = useState(false);
   const clientId = parseId(params.get('client') ?? undefined) ?? undefined;
   const q = params.get('q') ?? '';
   const properties = useProperties({ clientId });
@@ -76,14 +110,20 @@ export function PropertiesPage() {
     <div className="flex flex-col gap-4">
       <PageHeader
         title="Properties"
-        actions={
-          <Link to={clientId ? paths.client(clientId) : paths.clients} className={buttonClasses('secondary')}>
-            {clientId ? `New property for ${clientName ?? 'this client'}` : 'New property (choose a client)'}
-          </Link>
-        }
+        actions={!adding ? <Button onClick={() => setAdding(true)}>New property</Button> : null}
       >
         Every property of the firm. Open one to edit it, or go straight to its plan map.
       </PageHeader>
+      {adding ? (
+        <Card title="New property">
+          <NewPropertyFlow
+            clients={clients.data ?? []}
+            initialClientId={clientId}
+            onCreated={(p) => navigate(paths.property(p.id))}
+            onCancel={() => setAdding(false)}
+          />
+        </Card>
+      ) : null}
       <Card>
         {properties.isPending ? (
           <Loading label="Loading properties…" />
@@ -108,15 +148,7 @@ export function PropertiesPage() {
                 <div className="flex flex-col gap-3">
                   {clientFilter}
                   <EmptyState title={clientId ? `${clientName ?? 'This client'} has no properties yet` : 'No properties yet'}>
-                    {clientId ? (
-                      <>
-                        Add one from <Link className="font-semibold text-moss-deep underline" to={paths.client(clientId)}>the client’s page</Link>, or choose “All clients”.
-                      </>
-                    ) : (
-                      <>
-                        Properties belong to clients: open a client on <Link className="font-semibold text-moss-deep underline" to={paths.clients}>Clients</Link> and use “New property”.
-                      </>
-                    )}
+                    {clientId ? 'Add one with “New property”, or choose “All clients”.' : 'Add the first with “New property”; then draw or import its boundary on the plan map.'}
                   </EmptyState>
                 </div>
               }
