@@ -15,6 +15,7 @@ import { errorHandler } from './middlewares/error-handler';
 import { notFound } from './errors';
 import { LIMITS } from '../shared/limits';
 import { apiRouters } from './routes';
+import { allowedTileOrigins } from './services/imagery/tile-origins';
 import './models';
 
 let sessionPool: pg.Pool | null = null;
@@ -44,9 +45,10 @@ export function createApp(): Express {
           defaultSrc: ["'self'"],
           scriptSrc: ["'self'"],
           styleSrc: ["'self'", "'unsafe-inline'"],
-          imgSrc: ["'self'", 'data:', 'blob:'],
+          imgSrc: ["'self'", 'data:', 'blob:', () => allowedTileOrigins().join(' ')],
           fontSrc: ["'self'", 'data:'],
-          connectSrc: ["'self'"],
+          // Firms may set an imagery tile service; its origin is allowed, nothing else.
+          connectSrc: ["'self'", () => allowedTileOrigins().join(' ')],
           workerSrc: ["'self'", 'blob:'],
           childSrc: ["'self'", 'blob:'],
           objectSrc: ["'none'"],

@@ -2,7 +2,8 @@
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
-import { Client } from '../models';
+import { Client, User } from '../models';
+import { presentTeamMember } from '../presenters/user';
 import { sequelize } from '../db/sequelize';
 import { ClientCreateSchema, ClientListQuerySchema, ClientUpdateSchema } from '../../shared/schemas/client';
 import { IdParamsSchema } from '../../shared/schemas/common';
@@ -53,6 +54,13 @@ r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ClientUpdateSche
   await client.update(req.body);
   const stats = await clientStats(me.firmId, [client.id]);
   res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
+});
+
+r.get('/:id/contacts', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const client = await findInFirm(Client, Number(req.params.id), firmId, 'That client');
+  const contacts = await User.findAll({ where: { firmId, clientId: client.id, role: 'client' }, order: [['name', 'ASC']] });
+  res.json({ data: contacts.map(presentTeamMember) });
 });
 
 export const clientsRouter = r.router;

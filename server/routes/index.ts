@@ -8,6 +8,10 @@ import { deskRouter } from './desk';
 import { portalRouter } from './portal';
 import { fieldRouter } from './field';
 import { devMailRouter } from './dev-mail';
+import { propertiesRouter } from './properties';
+import { unitsRouter } from './units';
+import { firmRouter } from './firm';
+import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -18,4 +22,9 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/portal', router: portalRouter },
   { path: '/field', router: fieldRouter },
   { path: '/dev/mail', router: devMailRouter },
+  { path: '/properties', router: propertiesRouter },
+  { path: '/properties', router: propertyOverlaysRouter },
+  { path: '/units', router: unitsRouter },
+  { path: '/firm', router: firmRouter },
+  { path: '/overlays', router: overlaysRouter },
 ];

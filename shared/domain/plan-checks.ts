@@ -78,6 +78,8 @@ export interface PlanCheckInput {
   units: readonly PlanUnit[];
   /** Vertex cap for the structural pre-check of each shape (default 10,000; see findGeometryProblems). */
   maxVertices?: number;
+  /** Above this many vertices the self-crossing pre-check is skipped (stored shapes passed PostGIS). */
+  crossingCheckMaxVertices?: number;
 }
 
 /** Default vertex cap of the pre-check: turf `kinks` takes about 0.35 s at this size. */
@@ -101,7 +103,7 @@ export function planWarnings(input: PlanCheckInput): PlanWarning[] {
   const maxVertices = input.maxVertices ?? DEFAULT_MAX_VERTICES;
   let boundary: Feature<AreaGeometry> | null = null;
   if (input.boundary) {
-    const [problem] = findGeometryProblems(input.boundary, { maxVertices });
+    const [problem] = findGeometryProblems(input.boundary, { maxVertices, crossingCheckMaxVertices: input.crossingCheckMaxVertices });
     if (problem) {
       warnings.push({
         code: 'invalid-geometry',
@@ -117,7 +119,7 @@ export function planWarnings(input: PlanCheckInput): PlanWarning[] {
   let foodPlotAcres = 0;
 
   for (const unit of input.units) {
-    const [problem] = findGeometryProblems(unit.geometry, { maxVertices });
+    const [problem] = findGeometryProblems(unit.geometry, { maxVertices, crossingCheckMaxVertices: input.crossingCheckMaxVertices });
     if (problem) {
       warnings.push({
         code: 'invalid-geometry',

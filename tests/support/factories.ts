@@ -3,7 +3,7 @@ import crypto from 'node:crypto';
 import type { Polygon } from 'geojson';
 import { Client, Firm, Property, User } from '../../server/models';
 import { hashPassword } from '../../server/services/auth/passwords';
-import { asMultiPolygon, boundaryAcres } from '../../server/commands/property-writer';
+import { boundaryColumns } from '../../server/commands/property-writer';
 import type { Role } from '../../shared/schemas/auth';
 
 export const PASSWORD = 'factory-password-1';
@@ -47,5 +47,5 @@ export async function makeProperty(firmId: number, clientId: number, boundary?: 
     type: 'Polygon',
     coordinates: [[[-90.94, 43.27], [-90.93, 43.27], [-90.93, 43.265], [-90.94, 43.265], [-90.94, 43.27]]],
   };
-  return Property.create({ firmId, clientId, name: `Property ${unique()}`, county: 'Crawford', state: 'WI', region: 'midwest', objectives: null, notes: null, boundary: asMultiPolygon(b), acres: boundaryAcres(b) });
+  return Property.create({ firmId, clientId, name: `Property ${unique()}`, county: 'Crawford', state: 'WI', region: 'midwest', objectives: null, notes: null, ...boundaryColumns(b) });
 }

@@ -2,7 +2,7 @@
 import { sequelize } from '../sequelize';
 import { Client, Firm, Property, User } from '../../models';
 import { hashPassword } from '../../services/auth/passwords';
-import { asMultiPolygon, boundaryAcres } from '../../commands/property-writer';
+import { boundaryColumns } from '../../commands/property-writer';
 import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
 
 /** Creates whatever part of the demo is missing; answers the firm. */
@@ -39,7 +39,7 @@ export async function seedDemo(): Promise<Firm> {
         const existing = await Property.findOne({ where: { firmId: firm.id, clientId: client.id, name: p.name }, transaction });
         if (!existing) {
           await Property.create(
-            { firmId: firm.id, clientId: client.id, name: p.name, county: p.county, state: p.state, region: p.region, objectives: p.objectives, notes: null, boundary: asMultiPolygon(p.boundary), acres: boundaryAcres(p.boundary) },
+            { firmId: firm.id, clientId: client.id, name: p.name, county: p.county, state: p.state, region: p.region, objectives: p.objectives, notes: null, ...boundaryColumns(p.boundary) },
             { transaction },
           );
         }

@@ -1,0 +1,137 @@
+/** Properties of the firm, their plan (units, summary), imports and exports. */
+import { Op, QueryTypes, type WhereOptions } from 'sequelize';
+import { defineRoutes, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { singleUpload } from '../middlewares/upload';
+import { Client, Property } from '../models';
+import { sequelize } from '../db/sequelize';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { PropertyCreateSchema, PropertyListQuerySchema, PropertyUpdateSchema } from '../../shared/schemas/property';
+import { UnitBulkCreateSchema, UnitCreateSchema } from '../../shared/schemas/unit';
+import { GEOMETRY_LIMITS } from '../../shared/limits';
+import { presentProperty } from '../presenters/property';
+import { presentUnit } from '../presenters/unit';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { createProperty, updateProperty } from '../commands/property-writer';
+import { createUnits } from '../commands/unit-writer';
+import { recordAudit } from '../commands/audit-recorder';
+import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
+import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
+import { AppError, badRequest } from '../errors';
+import { z } from 'zod';
+
+const r = defineRoutes('/properties');
+
+/** Unit counts per property, one query. */
+async function unitCounts(firmId: number, propertyIds: number[]): Promise<Map<number, number>> {
+  if (propertyIds.length === 0) return new Map();
+  const rows = await sequelize.query<{ property_id: number; n: string }>(
+    'SELECT property_id, count(*) AS n FROM units WHERE firm_id = :firmId AND property_id IN (:ids) GROUP BY property_id',
+    { replacements: { firmId, ids: propertyIds }, type: QueryTypes.SELECT },
+  );
+  return new Map(rows.map((row) => [row.property_id, Number(row.n)]));
+}
+
+async function present(firmId: number, property: Property) {
+  const [client, counts] = await Promise.all([Client.findByPk(property.clientId, { attributes: ['name'] }), unitCounts(firmId, [property.id])]);
+  return presentProperty(property, client?.name ?? '', counts.get(property.id) ?? 0);
+}
+
+r.get('/', STAFF, validate({ query: PropertyListQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { clientId, q } = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const where: WhereOptions = { firmId, ...(clientId ? { clientId } : {}), ...(q ? { name: { [Op.iLike]: `%${q}%` } } : {}) };
+  const properties = await Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC']] });
+  const counts = await unitCounts(firmId, properties.map((p) => p.id));
+  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)) });
+});
+
+r.post('/', STAFF, validate({ body: PropertyCreateSchema }), async (req, res) => {
+  const me = actor(req);
+  const property = await createProperty(me, req.body, req.ip ?? null);
+  res.status(201).json({ data: await present(me.firmId, property) });
+});
+
+r.get('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const property = await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+  res.json({ data: await present(firmId, property) });
+});
+
+r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: PropertyUpdateSchema }), async (req, res) => {
+  const me = actor(req);
+  const property = await updateProperty(me, Number(req.params.id), req.body, req.ip ?? null);
+  res.json({ data: await present(me.firmId, property) });
+});
+
+r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const me = actor(req);
+  await sequelize.transaction(async (transaction) => {
+    const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property', { transaction, lock: true });
+    await property.destroy({ transaction });
+    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'property.deleted', subjectType: 'Property', subjectId: property.id, data: { name: property.name }, ip: req.ip ?? null }, transaction);
+  });
+  res.status(204).end();
+});
+
+r.get('/:id/units', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const plan = await loadPlan(Number(req.params.id), firmId);
+  const etag = planEtag(plan);
+  res.setHeader('ETag', etag);
+  res.setHeader('Cache-Control', 'private, no-cache');
+  if (req.headers['if-none-match'] === etag) return res.status(304).end();
+  res.type('application/json').send(await unitsJson(plan));
+});
+
+r.post('/:id/units', STAFF, validate({ params: IdParamsSchema, body: UnitCreateSchema }), async (req, res) => {
+  const me = actor(req);
+  const [unit] = await createUnits(me, Number(req.params.id), [req.body], req.ip ?? null);
+  res.status(201).json({ data: presentUnit(unit) });
+});
+
+r.post('/:id/units/bulk', STAFF, validate({ params: IdParamsSchema, body: UnitBulkCreateSchema }), async (req, res) => {
+  const me = actor(req);
+  const units = await createUnits(me, Number(req.params.id), req.body.units, req.ip ?? null);
+  res.status(201).json({ data: units.map(presentUnit) });
+});
+
+r.get('/:id/plan', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const plan = await loadPlan(Number(req.params.id), firmId);
+  res.json({ data: await planSummary(plan) });
+});
+
+r.post('/:id/imports', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.importMaxBytes), async (req, res) => {
+  const { firmId } = actor(req);
+  await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+  if (!req.file) throw badRequest('Attach the file in the form field “file” (a .geojson, .kml, .kmz, .gpx or zipped shapefile).');
+  try {
+    const result = await readGeoFile({ filename: req.file.originalname, buffer: req.file.buffer });
+    res.json({ data: result });
+  } catch (err) {
+    if (isGeoFileError(err)) throw new AppError(err.status, err.code, err.message, err.details);
+    throw err;
+  }
+});
+
+const ExportQuerySchema = z.object({
+  format: z.string().refine(isExportFormat, { message: `choose one of ${EXPORT_FORMATS.join(', ')}` }),
+});
+
+r.get('/:id/export', STAFF, validate({ params: IdParamsSchema, query: ExportQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { format } = req.validQuery as { format: (typeof EXPORT_FORMATS)[number] };
+  const plan = await loadPlan(Number(req.params.id), firmId);
+  const units = (await plan.units()).map(presentUnit);
+  const file = writeGeoFile(format, {
+    propertyName: plan.property.name,
+    boundary: plan.property.boundary ?? undefined,
+    units: units.map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres ?? undefined, lengthFt: u.lengthFt ?? undefined, notes: u.notes ?? undefined })),
+  } as Parameters<typeof writeGeoFile>[1]);
+  res.setHeader('Content-Type', file.contentType);
+  res.setHeader('Content-Disposition', `attachment; filename="${file.filename}"`);
+  res.send(file.body);
+});
+
+export const propertiesRouter = r.router;

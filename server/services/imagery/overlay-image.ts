@@ -1,0 +1,92 @@
+/**
+ * Georeferenced images for the plan map: a GeoTIFF (its own georeference, reprojected to lon/lat
+ * corners with proj4) becomes a PNG; a PNG or JPEG comes with its four corners. Content is checked
+ * by magic bytes, never by the file name or the claimed type.
+ */
+import { fromArrayBuffer } from 'geotiff';
+import { encode } from 'fast-png';
+import proj4 from 'proj4';
+import { AppError, unprocessable, unsupportedMedia } from '../../errors';
+import type { Corners } from '../../models';
+
+export type ImageKind = 'png' | 'jpeg' | 'tiff';
+
+/** The image type from the first bytes, or null. */
+export function sniffImage(bytes: Buffer): ImageKind | null {
+  if (bytes.length >= 8 && bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]))) return 'png';
+  if (bytes.length >= 3 && bytes[0] === 0xff && bytes[1] === 0xd8 && bytes[2] === 0xff) return 'jpeg';
+  const littleEndianTiff = bytes[0] === 0x49 && bytes[1] === 0x49 && (bytes[2] === 0x2a || bytes[2] === 0x2b) && bytes[3] === 0;
+  const bigEndianTiff = bytes[0] === 0x4d && bytes[1] === 0x4d && bytes[2] === 0 && (bytes[3] === 0x2a || bytes[3] === 0x2b);
+  if (bytes.length >= 4 && (littleEndianTiff || bigEndianTiff)) return 'tiff';
+  return null;
+}
+
+const MAX_PIXELS = 8192 * 8192;
+
+/** A proj4 definition for the EPSG codes imagery usually comes in, or null. */
+export function projectionFor(epsg: number): string | null {
+  if (epsg === 4326 || epsg === 4269 || epsg === 4258) return 'EPSG:4326';
+  if (epsg === 3857 || epsg === 900913) return 'EPSG:3857';
+  if (epsg >= 32601 && epsg <= 32660) return `+proj=utm +zone=${epsg - 32600} +datum=WGS84 +units=m +no_defs`;
+  if (epsg >= 32701 && epsg <= 32760) return `+proj=utm +zone=${epsg - 32700} +south +datum=WGS84 +units=m +no_defs`;
+  if (epsg >= 26901 && epsg <= 26923) return `+proj=utm +zone=${epsg - 26900} +ellps=GRS80 +towgs84=0,0,0 +units=m +no_defs`;
+  return null;
+}
+
+export interface PreparedOverlay {
+  bytes: Buffer;
+  contentType: 'image/png' | 'image/jpeg';
+  extension: 'png' | 'jpg';
+  corners: Corners;
+}
+
+/** Reads a GeoTIFF into a PNG and its lon/lat corners (top-left, top-right, bottom-right, bottom-left). */
+export async function prepareGeoTiff(bytes: Buffer): Promise<PreparedOverlay> {
+  let image;
+  try {
+    const tiff = await fromArrayBuffer(bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer);
+    image = await tiff.getImage();
+  } catch (err) {
+    throw unprocessable(`The GeoTIFF could not be read (${(err as Error).message}). Export it again as an uncompressed or LZW GeoTIFF.`);
+  }
+  const width = image.getWidth();
+  const height = image.getHeight();
+  if (width * height > MAX_PIXELS) throw new AppError(413, 'payload_too_large', `The image is ${width} × ${height} pixels; the limit is about 67 megapixels. Export it at a coarser resolution.`);
+  let bbox: number[];
+  try {
+    bbox = image.getBoundingBox();
+  } catch {
+    throw unprocessable('The TIFF has no georeference (no tie points or transform). Export it as a GeoTIFF, or upload a PNG/JPEG with its corner coordinates.');
+  }
+  const keys = (image.getGeoKeys() ?? {}) as Record<string, number | undefined>;
+  const epsg = keys.ProjectedCSTypeGeoKey ?? keys.GeographicTypeGeoKey ?? 4326;
+  const def = projectionFor(epsg);
+  if (!def) throw unprocessable(`The GeoTIFF is in EPSG:${epsg}, which Browseline does not convert. Reproject it to WGS84 (EPSG:4326), Web Mercator (EPSG:3857) or UTM and upload it again.`);
+  const toLonLat = (x: number, y: number): [number, number] => {
+    const [lon, lat] = def === 'EPSG:4326' ? [x, y] : proj4(def, 'EPSG:4326', [x, y]);
+    return [Math.round(lon * 1e7) / 1e7, Math.round(lat * 1e7) / 1e7];
+  };
+  const [minX, minY, maxX, maxY] = bbox;
+  const corners: Corners = [toLonLat(minX, maxY), toLonLat(maxX, maxY), toLonLat(maxX, minY), toLonLat(minX, minY)];
+  for (const [lon, lat] of corners) {
+    if (!(Math.abs(lon) <= 180 && Math.abs(lat) <= 85)) throw unprocessable('The GeoTIFF’s corners fall outside the map. Check its coordinate system.');
+  }
+  const rgb = (await image.readRGB({ interleave: true, enableAlpha: true })) as unknown as ArrayLike<number> & { width: number; height: number };
+  const channels = rgb.length / (width * height);
+  let max = 0;
+  for (let i = 0; i < rgb.length; i += 97) max = Math.max(max, rgb[i]);
+  const scale = max > 255 ? 255 / max : 1;
+  const data = new Uint8Array(rgb.length);
+  for (let i = 0; i < rgb.length; i++) data[i] = Math.min(255, Math.round(rgb[i] * scale));
+  const png = encode({ width, height, data, channels: channels === 4 ? 4 : 3 });
+  return { bytes: Buffer.from(png), contentType: 'image/png', extension: 'png', corners };
+}
+
+/** A PNG or JPEG with corners given by the consultant; anything else is refused with 415. */
+export async function prepareOverlay(bytes: Buffer, corners: Corners | null): Promise<PreparedOverlay> {
+  const kind = sniffImage(bytes);
+  if (!kind) throw unsupportedMedia('That file is not a GeoTIFF, PNG or JPEG image. Export the orthophoto as one of those.');
+  if (kind === 'tiff') return prepareGeoTiff(bytes);
+  if (!corners) throw unprocessable('corners: a PNG or JPEG carries no location. Give the longitude and latitude of its four corners (top-left, top-right, bottom-right, bottom-left).', [{ path: 'corners', message: 'required for PNG and JPEG' }]);
+  return kind === 'png' ? { bytes, contentType: 'image/png', extension: 'png', corners } : { bytes, contentType: 'image/jpeg', extension: 'jpg', corners };
+}

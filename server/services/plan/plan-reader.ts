@@ -1,0 +1,88 @@
+/**
+ * Reads a property's plan lean: one query for the property (ownership and revision), one raw query
+ * for its units. Answers are cached per process keyed by the plan's revision, which every write bumps
+ * in the same transaction, so a cache entry can never be stale (only unused) — several instances
+ * stay consistent without sharing memory.
+ */
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../../db/sequelize';
+import { Property } from '../../models';
+import { notFound } from '../../errors';
+import { presentUnit, type UnitRow } from '../../presenters/unit';
+import { planWarnings, shareByKind } from '../../../shared/domain/plan-checks';
+import type { PlanSummary } from '../../../shared/schemas/unit';
+import { stripCrs } from '../../commands/unit-writer';
+import { GEOMETRY_LIMITS } from '../../../shared/limits';
+
+export interface LoadedPlan {
+  property: Property;
+  revision: number;
+  units: () => Promise<UnitRow[]>;
+}
+
+const MAX_ENTRIES = 200;
+const cache = new Map<string, unknown>();
+
+function remember<T>(key: string, make: () => Promise<T>): Promise<T> {
+  if (cache.has(key)) {
+    const value = cache.get(key) as T;
+    cache.delete(key);
+    cache.set(key, value);
+    return Promise.resolve(value);
+  }
+  return make().then((value) => {
+    cache.set(key, value);
+    if (cache.size > MAX_ENTRIES) cache.delete(cache.keys().next().value as string);
+    return value;
+  });
+}
+
+/** The property (404 outside the firm) and a lazy, memoised reader of its units. */
+export async function loadPlan(propertyId: number, firmId: number): Promise<LoadedPlan> {
+  const property = await Property.findOne({ where: { id: propertyId, firmId } });
+  if (!property) throw notFound('That property');
+  let rows: Promise<UnitRow[]> | null = null;
+  return {
+    property,
+    revision: property.revision,
+    units: () =>
+      (rows ??= sequelize.query<UnitRow>(
+        `SELECT id, property_id AS "propertyId", kind, name, notes, ST_AsGeoJSON(geometry, 9)::json AS geometry,
+                acres, perimeter_ft AS "perimeterFt", length_ft AS "lengthFt", created_at AS "createdAt", updated_at AS "updatedAt"
+         FROM units WHERE property_id = :propertyId ORDER BY id`,
+        { replacements: { propertyId }, type: QueryTypes.SELECT },
+      )),
+  };
+}
+
+/** A weak ETag that changes with every write to the plan. */
+export const planEtag = (plan: LoadedPlan): string => `W/"plan-${plan.property.id}-r${plan.revision}"`;
+
+/** The serialised `{ data: UnitDto[] }` answer of the plan's units. */
+export function unitsJson(plan: LoadedPlan): Promise<string> {
+  return remember(`units:${plan.property.id}:${plan.revision}`, async () => JSON.stringify({ data: (await plan.units()).map(presentUnit) }));
+}
+
+/** Share of the property by kind and the plan warnings. */
+export function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
+  return remember(`summary:${plan.property.id}:${plan.revision}`, async () => {
+    const units = await plan.units();
+    const boundary = plan.property.boundary ? stripCrs(plan.property.boundary) : null;
+    const planUnits = units.map((u) => ({ id: String(u.id), name: u.name, kind: u.kind, geometry: u.geometry }));
+    const boundaryAcres = plan.property.acres;
+    return {
+      propertyId: plan.property.id,
+      revision: plan.revision,
+      boundaryAcres,
+      shareByKind: boundaryAcres ? shareByKind(boundaryAcres, planUnits) : [],
+      // Stored shapes already passed PostGIS validation: skip the quadratic crossing pre-check on large ones.
+      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices }).map((w) => ({
+        code: w.code,
+        unitIds: w.unitIds.map(Number),
+        message: w.message,
+        ...(w.acres !== undefined ? { acres: w.acres } : {}),
+        ...(w.lengthFt !== undefined ? { lengthFt: w.lengthFt } : {}),
+      })),
+    };
+  });
+}

@@ -1,0 +1,47 @@
+import { z } from 'zod';
+
+/** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png */
+export const TileUrlTemplateSchema = z
+  .string()
+  .trim()
+  .max(500)
+  .refine((v) => /^https?:\/\/[^\s/]+\//.test(v), { message: 'start the address with https:// and the server name' })
+  .refine((v) => v.includes('{z}') && v.includes('{x}') && v.includes('{y}'), { message: 'the address must contain {z}, {x} and {y}' });
+
+export const FirmSettingsUpdateSchema = z.object({
+  tileUrlTemplate: z.union([TileUrlTemplateSchema, z.literal('').transform(() => null), z.null()]).optional(),
+  tileAttribution: z.string().trim().max(200).nullish(),
+  taxRatePct: z.number().min(0).max(30).optional(),
+});
+export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
+
+export const FirmSchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  region: z.string(),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number() }),
+});
+export type FirmDto = z.infer<typeof FirmSchema>;
+
+export const OverlayCornersSchema = z
+  .array(z.tuple([z.number().min(-180).max(180), z.number().min(-85).max(85)]), { error: 'corners must be four [longitude, latitude] pairs' })
+  .length(4, { message: 'give exactly four corners: top-left, top-right, bottom-right, bottom-left' });
+
+export const OverlayUpdateSchema = z.object({
+  name: z.string().trim().min(1).max(120).optional(),
+  opacity: z.number().min(0).max(1).optional(),
+});
+
+export const OverlaySchema = z.object({
+  id: z.number().int(),
+  propertyId: z.number().int(),
+  name: z.string(),
+  imageUrl: z.string(),
+  corners: z.array(z.tuple([z.number(), z.number()])).length(4),
+  opacity: z.number(),
+  byteSize: z.number().int(),
+  createdAt: z.string(),
+});
+export type OverlayDto = z.infer<typeof OverlaySchema>;
