@@ -49,10 +49,10 @@ describe('the consultant keeps clients and properties', () => {
     expect(asc).toEqual([...asc].sort((a, b) => a - b));
     expect(await page.getByRole('columnheader', { name: /Name/ }).getAttribute('aria-sort')).toBe('none');
 
-    await page.getByLabel('Search clients', { exact: true }).fill('OKONKWO');
+    await page.getByLabel('Filter clients', { exact: true }).fill('OKONKWO');
     await expect.poll(() => rowNames(page)).toEqual(['Okonkwo-Larsen Family']);
     expect(new URL(page.url()).searchParams.get('q')).toBe('OKONKWO');
-    await page.getByLabel('Search clients', { exact: true }).fill('no such client anywhere');
+    await page.getByLabel('Filter clients', { exact: true }).fill('no such client anywhere');
     await expect.poll(() => page.getByText('No clients match “no such client anywhere”.').count()).toBe(1);
     await page.getByRole('button', { name: 'clear the search' }).click();
     await expect.poll(async () => (await rowNames(page)).length).toBeGreaterThanOrEqual(3);
@@ -96,7 +96,7 @@ describe('the consultant keeps clients and properties', () => {
 
     // Open it again from the table: search, then click the row outside the name link.
     await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Clients' }).click();
-    await page.getByLabel('Search clients', { exact: true }).fill(stamp);
+    await page.getByLabel('Filter clients', { exact: true }).fill(stamp);
     await expect.poll(() => rowNames(page)).toEqual([clientName]);
     await page.locator('table tbody tr').first().locator('td').last().click();
     await page.waitForURL(`${baseUrl}${clientPath}`);

@@ -1,11 +1,12 @@
 import type { ButtonHTMLAttributes } from 'react';
 
-export type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
+export type Variant = 'primary' | 'secondary' | 'danger' | 'danger-outline' | 'ghost';
 
 const VARIANTS: Record<Variant, string> = {
   primary: 'bg-moss text-white hover:bg-moss-deep disabled:bg-slate/50',
   secondary: 'bg-card text-ink border border-rule hover:border-moss hover:text-moss-deep',
   danger: 'bg-clay text-white hover:brightness-95',
+  'danger-outline': 'bg-card text-clay border border-clay/60 hover:border-clay hover:bg-clay/5',
   ghost: 'text-moss-deep hover:bg-moss/10',
 };
 

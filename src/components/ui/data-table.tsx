@@ -191,7 +191,7 @@ export function DataTable<T>({
       <div className="flex flex-wrap items-end gap-3">
         <div className="flex min-w-0 flex-1 basis-56 flex-col gap-1">
           <label htmlFor={searchId} className="text-sm font-semibold text-ink">
-            Search {noun[1]}
+            Filter {noun[1]}
           </label>
           <input
             id={searchId}

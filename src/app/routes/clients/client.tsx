@@ -65,7 +65,6 @@ function ClientDetails({ client }: { client: ClientDto }) {
           <Detail label="E-mail">{client.email ? <a className="text-moss-deep hover:underline" href={`mailto:${client.email}`}>{client.email}</a> : <span className="text-slate">Not given</span>}</Detail>
           <Detail label="Phone">{client.phone ?? <span className="text-slate">Not given</span>}</Detail>
           <Detail label="Address">{client.address ? <span className="whitespace-pre-line">{client.address}</span> : <span className="text-slate">Not given</span>}</Detail>
-          <Detail label="Client since">{new Date(client.createdAt).toLocaleDateString('en-US', { month: 'long', year: 'numeric' })}</Detail>
           {client.notes ? (
             <div className="sm:col-span-2">
               <Detail label="Notes">
@@ -139,13 +138,15 @@ export function ClientPage() {
     <div className="flex flex-col gap-4">
       <PageHeader title={c.name} crumbs={[{ label: 'Clients', to: paths.clients }]}>
         <span className="tabular-nums">
-          {c.propertyCount === 0 ? 'No properties yet' : `${formatNumber(c.propertyCount)} ${c.propertyCount === 1 ? 'property' : 'properties'}`}
           {c.propertyCount > 0 ? (
             <>
+              {formatNumber(c.propertyCount)} {c.propertyCount === 1 ? 'property' : 'properties'}
               {' · '}
               <span className="figure font-bold text-ink">{formatAcres(c.totalAcres)}</span>
+              {' · '}
             </>
           ) : null}
+          client since {new Date(c.createdAt).toLocaleDateString('en-US', { month: 'long', year: 'numeric' })}
         </span>
       </PageHeader>
       <ClientProperties client={c} />

@@ -102,7 +102,7 @@ export function PropertyPage() {
             <Link to={paths.planMap(p.id)} className={buttonClasses('primary')}>
               Open plan map
             </Link>
-            <Button variant="secondary" className="text-clay hover:border-clay hover:text-clay" onClick={() => setConfirming(true)}>
+            <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>
           </>
@@ -118,7 +118,7 @@ export function PropertyPage() {
           {clients.isPending ? (
             <Loading label="Loading the form…" />
           ) : (
-            <EditPropertyForm key={`${p.id}-${p.updatedAt}`} property={p} clients={clients.data ?? []} />
+            <EditPropertyForm key={p.id} property={p} clients={clients.data ?? []} />
           )}
         </Card>
       </div>

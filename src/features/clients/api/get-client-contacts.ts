@@ -1,14 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getData } from '../../../lib/api-client';
+import type { TeamMember } from '../../../../shared/schemas/auth';
 
-/** A landowner's account for the read-only portal. */
-export interface ClientContact {
-  id: number;
-  name: string;
-  email: string;
-  status: 'active' | 'invited' | 'disabled';
-  lastSignInAt: string | null;
-}
+/** A landowner's account for the read-only portal (a team member with the client role). */
+export type ClientContact = TeamMember;
 
 /** The portal contacts of one client. */
 export const getClientContacts = (clientId: number, signal?: AbortSignal) => getData<ClientContact[]>(`/api/clients/${clientId}/contacts`, signal);

@@ -97,7 +97,7 @@ describe('DataTable paging', () => {
     expect(screen.getByText('Page 1 of 3')).toBeTruthy();
     expect(bodyNames()[0]).toBe('Tract 060');
     fireEvent.click(screen.getByRole('button', { name: 'Next' }));
-    fireEvent.change(screen.getByLabelText('Search tracts'), { target: { value: 'tract 05' } });
+    fireEvent.change(screen.getByLabelText('Filter tracts'), { target: { value: 'tract 05' } });
     expect(screen.queryByText(/Page \d of/)).toBeNull();
     expect(bodyNames()).toHaveLength(10);
   });
@@ -112,9 +112,9 @@ describe('DataTable paging', () => {
 describe('DataTable search, empty state and row links', () => {
   it('finds rows whatever the case and accents, and offers to clear a search that finds nothing', () => {
     renderTable([...FEW, { id: 5, name: 'Havlíček Bottom', acres: 40 }]);
-    fireEvent.change(screen.getByLabelText('Search tracts'), { target: { value: 'HAVLICEK' } });
+    fireEvent.change(screen.getByLabelText('Filter tracts'), { target: { value: 'HAVLICEK' } });
     expect(bodyNames()).toEqual(['Havlíček Bottom']);
-    fireEvent.change(screen.getByLabelText('Search tracts'), { target: { value: 'nowhere' } });
+    fireEvent.change(screen.getByLabelText('Filter tracts'), { target: { value: 'nowhere' } });
     expect(screen.queryByRole('table')).toBeNull();
     expect(screen.getByText('No tracts match “nowhere”.')).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'clear the search' }));
