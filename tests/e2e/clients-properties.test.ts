@@ -1,8 +1,10 @@
+import { createRequire } from 'node:module';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 
 const baseUrl = inject('baseUrl');
+const require = createRequire(import.meta.url);
 let browser: Browser;
 
 beforeAll(async () => {
@@ -43,7 +45,9 @@ describe('the consultant keeps clients and properties', () => {
     expect((await rowNames(page))[0]).toBe('Bluestem Ridge Hunting Club');
     const desc = (await columnFigures(page, 4)).filter((n) => !Number.isNaN(n));
     expect(desc).toEqual([...desc].sort((a, b) => b - a));
-    await acresHeader.getByRole('button').click();
+    // The same header from the keyboard.
+    await acresHeader.getByRole('button').focus();
+    await page.keyboard.press('Enter');
     await expect.poll(() => acresHeader.getAttribute('aria-sort')).toBe('ascending');
     const asc = (await columnFigures(page, 4)).filter((n) => !Number.isNaN(n));
     expect(asc).toEqual([...asc].sort((a, b) => a - b));
@@ -178,6 +182,29 @@ describe('the consultant keeps clients and properties', () => {
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
       expect(overflow).toBeLessThanOrEqual(0);
       await screenshot(page, `phone${path.replace('/', '-')}`);
+    }
+    await context.close();
+  });
+
+  it('has no serious or critical accessibility problems on the clients and properties pages (axe-core)', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, bypassCSP: true });
+    const page = await context.newPage();
+    const seriousProblems = async () => {
+      await page.addScriptTag({ path: require.resolve('axe-core/axe.min.js') });
+      return page.evaluate(async () => {
+        const result = await (window as unknown as { axe: { run: () => Promise<{ violations: { id: string; impact: string | null }[] }> } }).axe.run();
+        return result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.impact} ${v.id}`);
+      });
+    };
+    await signInAsConsultant(page);
+    for (const list of ['clients', 'properties']) {
+      await page.goto(`${baseUrl}/${list}`);
+      await expect.poll(async () => (await rowNames(page)).length).toBeGreaterThan(0);
+      expect(await seriousProblems(), `/${list}`).toEqual([]);
+      await page.locator('table tbody tr').first().getByRole('link').first().click();
+      await page.waitForURL(new RegExp(`/${list}/\\d+$`));
+      await expect.poll(() => page.getByRole('heading', { name: list === 'clients' ? 'Portal contacts' : 'Boundary' }).count()).toBe(1);
+      expect(await seriousProblems(), page.url()).toEqual([]);
     }
     await context.close();
   });

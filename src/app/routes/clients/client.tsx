@@ -36,9 +36,9 @@ const PROPERTY_COLUMNS: DataColumn<PropertyDto>[] = [
   },
 ];
 
-function Detail({ label, children }: { label: string; children: ReactNode }) {
+function Detail({ label, children, className = '' }: { label: string; children: ReactNode; className?: string }) {
   return (
-    <div className="min-w-0">
+    <div className={`min-w-0 ${className}`}>
       <dt className="text-xs uppercase tracking-wide text-slate">{label}</dt>
       <dd className="break-words text-ink">{children}</dd>
     </div>
@@ -66,11 +66,9 @@ function ClientDetails({ client }: { client: ClientDto }) {
           <Detail label="Phone">{client.phone ?? <span className="text-slate">Not given</span>}</Detail>
           <Detail label="Address">{client.address ? <span className="whitespace-pre-line">{client.address}</span> : <span className="text-slate">Not given</span>}</Detail>
           {client.notes ? (
-            <div className="sm:col-span-2">
-              <Detail label="Notes">
-                <span className="whitespace-pre-line">{client.notes}</span>
-              </Detail>
-            </div>
+            <Detail label="Notes" className="sm:col-span-2">
+              <span className="whitespace-pre-line">{client.notes}</span>
+            </Detail>
           ) : null}
         </dl>
       )}

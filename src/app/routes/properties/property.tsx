@@ -41,7 +41,7 @@ function BoundaryCard({ property }: { property: PropertyDto }) {
           </dl>
         ) : (
           <p className="text-sm text-slate">
-            No boundary yet. Draw it on the plan map, or import it there from a GeoJSON, KML, GPX or zipped shapefile; the acres are measured from it.
+            Draw the boundary on the plan map, or import it there from a GeoJSON, KML, GPX or zipped shapefile; the acres are measured from it.
           </p>
         )}
         <Link to={paths.planMap(property.id)} className={buttonClasses(hasBoundary ? 'secondary' : 'primary', 'self-start')}>
