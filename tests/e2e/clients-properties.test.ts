@@ -107,6 +107,15 @@ describe('the consultant keeps clients and properties', () => {
     await expect.poll(() => page.getByText('No properties yet').count()).toBe(1);
     await expect.poll(() => page.getByText('No portal contacts yet').count()).toBe(1);
 
+    // Invite the landowner to the portal: the contact shows as invited.
+    const invite = page.getByRole('form', { name: 'Invite a contact' });
+    await invite.getByLabel('Contact name').fill('Dana Whitcomb');
+    await invite.getByLabel('Contact e-mail').fill(`dana-${stamp}@example.test`);
+    await invite.getByRole('button', { name: 'Send invitation' }).click();
+    await expect.poll(() => page.getByRole('status').filter({ hasText: `Invitation sent to dana-${stamp}@example.test` }).count()).toBe(1);
+    const contacts = page.getByRole('list', { name: 'Portal contacts' });
+    await expect.poll(() => contacts.getByRole('listitem').filter({ hasText: 'Dana Whitcomb' }).filter({ hasText: 'Invited' }).count()).toBe(1);
+
     await page.getByRole('button', { name: 'New property' }).click();
     const propertyForm = page.getByRole('form', { name: 'New property' });
     await expect.poll(() => propertyForm.getByText(/open the property’s plan map to draw it or import it/).count()).toBe(1);

@@ -140,7 +140,7 @@ export function ClientPage() {
             <>
               {formatNumber(c.propertyCount)} {c.propertyCount === 1 ? 'property' : 'properties'}
               {' · '}
-              <span className="figure font-bold text-ink">{formatAcres(c.totalAcres)}</span>
+              {c.totalAcres > 0 ? <span className="figure font-bold text-ink">{formatAcres(c.totalAcres)}</span> : 'no boundary drawn yet'}
               {' · '}
             </>
           ) : null}
