@@ -17,8 +17,11 @@ import { createUnits } from '../commands/unit-writer';
 import { recordAudit } from '../commands/audit-recorder';
 import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
 import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
-import { AppError, badRequest } from '../errors';
+import { AppError, badRequest, unprocessable } from '../errors';
+import { stripCrs } from '../commands/unit-writer';
 import { z } from 'zod';
+import { Firm } from '../models';
+import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
 
 const r = defineRoutes('/properties');
 
@@ -132,6 +135,29 @@ r.get('/:id/export', STAFF, validate({ params: IdParamsSchema, query: ExportQuer
   res.setHeader('Content-Type', file.contentType);
   res.setHeader('Content-Disposition', `attachment; filename="${file.filename}"`);
   res.send(file.body);
+});
+
+r.get('/:id/plan.pdf', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const plan = await loadPlan(Number(req.params.id), firmId);
+  const { property } = plan;
+  if (!property.boundary || !property.acres) throw unprocessable('Draw or import the property boundary before printing its plan.');
+  const [firm, client, units] = await Promise.all([Firm.findByPk(firmId), Client.findByPk(property.clientId), plan.units()]);
+  const pdf = await renderPlanSummaryPdf({
+    firm: { name: firm!.name, phone: firm!.phone ?? undefined, email: firm!.email ?? undefined },
+    client: { name: client!.name },
+    property: {
+      name: property.name,
+      acres: property.acres,
+      boundary: stripCrs(property.boundary),
+      locality: [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || undefined,
+    },
+    preparedOn: new Date().toISOString().slice(0, 10),
+    units: units.map((u) => presentUnit(u)).map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
+  } as Parameters<typeof renderPlanSummaryPdf>[0]);
+  res.setHeader('Content-Type', 'application/pdf');
+  res.setHeader('Content-Disposition', `inline; filename="${property.name.replace(/[^\w.-]+/g, '-')}-plan.pdf"`);
+  res.send(pdf);
 });
 
 export const propertiesRouter = r.router;

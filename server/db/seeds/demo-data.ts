@@ -3,7 +3,8 @@
  * hill country of southwestern Wisconsin (Crawford and Vernon counties), and three of its clients.
  * Boundaries are drawn to look like ordinary rural tracts; they follow no real parcel.
  */
-import type { Polygon } from 'geojson';
+import type { LineString, Point, Polygon } from 'geojson';
+import type { UnitKind } from '../../../shared/domain/unit-kinds';
 
 export const DEMO_PASSWORD = 'demo-browseline';
 
@@ -26,6 +27,34 @@ export const demoStaff = [
 
 /** A closed ring from [lon, lat] corners. */
 const ring = (corners: [number, number][]): Polygon => ({ type: 'Polygon', coordinates: [[...corners, corners[0]]] });
+const line = (points: [number, number][]): LineString => ({ type: 'LineString', coordinates: points });
+const point = (lon: number, lat: number): Point => ({ type: 'Point', coordinates: [lon, lat] });
+
+export interface DemoUnit {
+  kind: UnitKind;
+  name: string;
+  notes?: string;
+  geometry: Polygon | LineString | Point;
+}
+
+/** The drawn plan of Kettle Hollow Farm. */
+const kettleHollowUnits: DemoUnit[] = [
+  { kind: 'food-plot', name: 'Ridge clover plot', notes: 'Old hay ground on the ridge top; soil test in hand.', geometry: ring([[-90.9398, 43.2722], [-90.9371, 43.2723], [-90.9370, 43.2712], [-90.9397, 43.2710]]) },
+  { kind: 'food-plot', name: 'Hollow brassica plot', geometry: ring([[-90.9352, 43.2690], [-90.9336, 43.2692], [-90.9334, 43.2683], [-90.9350, 43.2681]]) },
+  { kind: 'timber', name: 'North oak slope', notes: 'White and red oak, some hickory; crowded pole timber on the lower third.', geometry: ring([[-90.9410, 43.2729], [-90.9400, 43.2729], [-90.9399, 43.2700], [-90.9410, 43.2695]]) },
+  { kind: 'bedding-area', name: 'South slope bedding', notes: 'Thin cover; hinge-cut and plant shrubs.', geometry: ring([[-90.9395, 43.2680], [-90.9360, 43.2679], [-90.9358, 43.2665], [-90.9396, 43.2664]]) },
+  { kind: 'sanctuary', name: 'Cedar draw sanctuary', notes: 'Nobody enters after Sept 1.', geometry: ring([[-90.9408, 43.2690], [-90.9398, 43.2690], [-90.9398, 43.2662], [-90.9408, 43.2662]]) },
+  { kind: 'cover-planting', name: 'Switchgrass screen', geometry: ring([[-90.9368, 43.2727], [-90.9352, 43.2728], [-90.9352, 43.2724], [-90.9368, 43.2723]]) },
+  { kind: 'access-route', name: 'East walk-in to ridge stand', geometry: line([[-90.9314, 43.2700], [-90.9335, 43.2706], [-90.9355, 43.2712], [-90.9368, 43.2716]]) },
+  { kind: 'firebreak', name: 'Lower field trail', geometry: line([[-90.9395, 43.2700], [-90.9360, 43.2697], [-90.9330, 43.2696]]) },
+  { kind: 'stand-site', name: 'Ridge stand', notes: 'Ladder stand for the kids.', geometry: point(-90.9369, 43.2717) },
+  { kind: 'stand-site', name: 'Hollow stand', geometry: point(-90.9345, 43.2695) },
+  { kind: 'camera-site', name: 'Camera 1 — ridge', geometry: point(-90.9385, 43.2716) },
+  { kind: 'camera-site', name: 'Camera 2 — hollow', geometry: point(-90.9343, 43.2686) },
+  { kind: 'mock-scrape', name: 'Mock scrape by the oak', geometry: point(-90.9380, 43.2708) },
+  { kind: 'water-source', name: 'Stock tank', geometry: point(-90.9374, 43.2690) },
+  { kind: 'gate', name: 'East gate and parking', geometry: point(-90.9313, 43.2700) },
+];
 
 export const demoClients = [
   {
@@ -46,6 +75,7 @@ export const demoClients = [
           [-90.9412, 43.2731], [-90.9312, 43.2731], [-90.9312, 43.2688], [-90.9335, 43.2671],
           [-90.9336, 43.2659], [-90.9412, 43.2659],
         ]),
+        units: kettleHollowUnits,
       },
       {
         name: 'Kettle Hollow — North 40',
@@ -77,6 +107,11 @@ export const demoClients = [
           [-90.8874, 43.5522], [-90.8731, 43.5522], [-90.8731, 43.5449], [-90.8790, 43.5431],
           [-90.8874, 43.5431],
         ]),
+        units: [
+          { kind: 'food-plot', name: 'Club plot', geometry: ring([[-90.8800, 43.5500], [-90.8770, 43.5500], [-90.8770, 43.5488], [-90.8800, 43.5488]]) },
+          { kind: 'timber', name: 'Ridge hardwoods', geometry: ring([[-90.8870, 43.5520], [-90.8820, 43.5520], [-90.8820, 43.5440], [-90.8870, 43.5440]]) },
+          { kind: 'stand-site', name: 'Club ridge stand', geometry: point(-90.8815, 43.5495) },
+        ] as DemoUnit[],
       },
     ],
   },

@@ -1,6 +1,7 @@
 /** Seeds the demo scenario; idempotent (finds before it creates) and refused in production. */
 import { sequelize } from '../sequelize';
-import { Client, Firm, Property, User } from '../../models';
+import { Client, Firm, Property, Unit, User } from '../../models';
+import { measureUnit } from '../../../shared/domain/geometry';
 import { hashPassword } from '../../services/auth/passwords';
 import { boundaryColumns } from '../../commands/property-writer';
 import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
@@ -38,10 +39,14 @@ export async function seedDemo(): Promise<Firm> {
       for (const p of c.properties) {
         const existing = await Property.findOne({ where: { firmId: firm.id, clientId: client.id, name: p.name }, transaction });
         if (!existing) {
-          await Property.create(
+          const property = await Property.create(
             { firmId: firm.id, clientId: client.id, name: p.name, county: p.county, state: p.state, region: p.region, objectives: p.objectives, notes: null, ...boundaryColumns(p.boundary) },
             { transaction },
           );
+          for (const u of 'units' in p ? (p.units ?? []) : []) {
+            const m = measureUnit(u.kind, u.geometry);
+            await Unit.create({ firmId: firm.id, propertyId: property.id, kind: u.kind, name: u.name, notes: u.notes ?? null, geometry: u.geometry, acres: m.acres, perimeterFt: m.perimeterFt, lengthFt: m.lengthFt }, { transaction });
+          }
         }
       }
     }
