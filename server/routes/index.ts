@@ -14,6 +14,7 @@ import { firmRouter } from './firm';
 import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
 import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
+import { propertyProposalsRouter, proposalsRouter } from './proposals';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -35,4 +36,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/units', router: unitPrescriptionsRouter },
   { path: '/properties', router: propertyPrescriptionsRouter },
   { path: '/prescriptions', router: prescriptionsRouter },
+  { path: '/properties', router: propertyProposalsRouter },
+  { path: '/proposals', router: proposalsRouter },
 ];
