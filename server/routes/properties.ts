@@ -17,10 +17,10 @@ import { createUnits } from '../commands/unit-writer';
 import { recordAudit } from '../commands/audit-recorder';
 import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
 import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
-import { AppError, badRequest, unprocessable } from '../errors';
+import { AppError, badRequest, conflict, unprocessable } from '../errors';
 import { stripCrs } from '../commands/unit-writer';
 import { z } from 'zod';
-import { Firm } from '../models';
+import { Firm, Proposal } from '../models';
 import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
 
 const r = defineRoutes('/properties');
@@ -71,6 +71,8 @@ r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) =
   const me = actor(req);
   await sequelize.transaction(async (transaction) => {
     const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property', { transaction, lock: true });
+    const binding = await Proposal.count({ where: { propertyId: property.id, status: ['sent', 'approved'] }, transaction });
+    if (binding) throw conflict('This property has sent or approved proposals, which must stay on record. Withdraw the sent ones first; approved work cannot be deleted.');
     await property.destroy({ transaction });
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'property.deleted', subjectType: 'Property', subjectId: property.id, data: { name: property.name }, ip: req.ip ?? null }, transaction);
   });

@@ -212,3 +212,14 @@ describe('sending, approval and versions', () => {
     expect(list.body.data.every((x: { status: string }) => x.status !== 'draft')).toBe(true);
   });
 });
+
+describe('records that must stay', () => {
+  it('refuses to delete a property with an approved proposal', async () => {
+    const p = await draft();
+    await send(consultant, 'post', `/api/proposals/${p.id}/send`).expect(200);
+    await send(client, 'post', `/api/proposals/${p.id}/approve`, { signedName: 'Pat Landowner' }).expect(200);
+    const res = await consultant.delete(`/api/properties/${propertyId}`).set('X-CSRF-Token', consultant.csrf);
+    expect(res.status).toBe(409);
+    await consultant.get(`/api/properties/${propertyId}`).expect(200);
+  });
+});
