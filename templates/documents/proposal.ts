@@ -860,7 +860,7 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
   return {
     ...frame,
     // Page 1 carries its own letterhead; the running header starts on page 2.
-    header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : typeof frame.header === 'function' ? frame.header(currentPage, pageCount, pageSize) : frame.header),
+    header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : frame.header(currentPage, pageCount, pageSize)),
     watermark: watermarkFor(look),
     pageBreakBefore: proposalPageBreakBefore,
     info: {
