@@ -80,11 +80,12 @@ export function createApp(): Express {
     express.json({ limit: LIMITS.jsonBodyBytes }),
     session({
       name: 'browseline.sid',
-      store: new PgStore({ pool: sessionStorePool(), tableName: 'session', createTableIfMissing: false, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
+      // No touch on every request: a session lasts 14 days from sign-in, and reads stay reads.
+      store: new PgStore({ pool: sessionStorePool(), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
       secret: config.sessionSecret,
       resave: false,
       saveUninitialized: false,
-      rolling: true,
+      rolling: false,
       cookie: { httpOnly: true, sameSite: 'lax', secure: config.cookieSecure, maxAge: 14 * 24 * 3600 * 1000 },
     }),
     passport.session(),

@@ -8,6 +8,9 @@ import { OutboxMessage } from './outbox-message';
 import { AuditEvent } from './audit-event';
 import { Unit } from './unit';
 import { Overlay } from './overlay';
+import { Material, Practice, ServiceRateEntry } from './library';
+import { Prescription } from './prescription';
+import { Proposal, ProposalApproval, ProposalLine } from './proposal';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -21,7 +24,13 @@ AuthToken.belongsTo(User, { foreignKey: 'userId' });
 Property.hasMany(Unit, { foreignKey: 'propertyId', as: 'units' });
 Unit.belongsTo(Property, { foreignKey: 'propertyId', as: 'property' });
 Property.hasMany(Overlay, { foreignKey: 'propertyId', as: 'overlays' });
+Unit.hasMany(Prescription, { foreignKey: 'unitId', as: 'prescriptions' });
+Prescription.belongsTo(Unit, { foreignKey: 'unitId', as: 'unit' });
+Prescription.belongsTo(Practice, { foreignKey: 'practiceId', as: 'practice' });
+Proposal.hasMany(ProposalLine, { foreignKey: 'proposalId', as: 'lines' });
+Proposal.hasOne(ProposalApproval, { foreignKey: 'proposalId', as: 'approval' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay };
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval };
+export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';
 export type { OutboxAttachment } from './outbox-message';

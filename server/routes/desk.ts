@@ -5,6 +5,10 @@ import { sequelize } from '../db/sequelize';
 import { Firm } from '../models';
 import { actor } from '../policies/firm-scope';
 import type { DeskSummary } from '../../shared/schemas/desk';
+import { Practice, Prescription, Property, Unit } from '../models';
+import { practiceWindow, REGIONS, type Region } from '../../shared/domain/planting-windows';
+import { todayIso } from '../commands/prescription-writer';
+import { Op } from 'sequelize';
 
 const r = defineRoutes('/desk');
 
@@ -28,10 +32,44 @@ r.get('/', STAFF, async (req, res) => {
       WHERE a.firm_id = :firmId AND a.action <> 'user.signed-in' ORDER BY a.created_at DESC LIMIT 8`),
   ]);
   const c = counts[0];
+  const today = todayIso();
+  const year = Number(today.slice(0, 4));
+  const region: Region = (REGIONS as readonly string[]).includes(firm?.region ?? '') ? (firm!.region as Region) : 'midwest';
+  const [waiting, prescriptions, practices] = await Promise.all([
+    q<{ id: number; number: string; version: number; property_name: string; client_name: string; total_cents: number; sent_at: Date | null; first_viewed_at: Date | null; expires_on: string | null }>(`
+      SELECT p.id, p.number, p.version, pr.name AS property_name, c.name AS client_name, p.total_cents, p.sent_at, p.first_viewed_at, p.expires_on::text
+      FROM proposals p JOIN properties pr ON pr.id = p.property_id JOIN clients c ON c.id = p.client_id
+      WHERE p.firm_id = :firmId AND p.status = 'sent' AND (p.expires_on IS NULL OR p.expires_on >= CURRENT_DATE)
+      ORDER BY p.sent_at ASC LIMIT 12`),
+    Prescription.findAll({ where: { firmId, year: { [Op.gte]: year - 1 } }, attributes: ['id', 'propertyId', 'unitId', 'practiceId', 'schedule'] }),
+    Practice.findAll({ where: { firmId, archived: false }, attributes: ['id', 'name', 'definition'] }),
+  ]);
+  const [unitRows, propertyRows] = await Promise.all([
+    Unit.findAll({ where: { id: [...new Set(prescriptions.map((p) => p.unitId))] }, attributes: ['id', 'name'] }),
+    Property.findAll({ where: { id: [...new Set(prescriptions.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
+  ]);
+  const unitName = new Map(unitRows.map((u) => [u.id, u.name]));
+  const propertyName = new Map(propertyRows.map((p) => [p.id, p.name]));
+  const practiceName = new Map(practices.map((p) => [p.id, p.name]));
+  const inWindow = prescriptions
+    .flatMap((p) =>
+      p.schedule.steps
+        .filter((s) => !s.done && s.earliest <= today && today <= s.latest)
+        .map((s) => ({ prescriptionId: p.id, propertyId: p.propertyId, propertyName: propertyName.get(p.propertyId) ?? '', unitName: unitName.get(p.unitId) ?? '', practiceName: practiceName.get(p.practiceId) ?? '', stepName: s.name, earliest: s.earliest, latest: s.latest })),
+    )
+    .sort((a, b) => a.latest.localeCompare(b.latest))
+    .slice(0, 12);
   const body: DeskSummary = {
     firm: { name: firm?.name ?? '', region: firm?.region ?? '' },
     counts: { clients: Number(c.clients), properties: Number(c.properties), totalAcres: Math.round(Number(c.acres ?? 0) * 10) / 10, pendingInvitations: Number(c.pending), crew: Number(c.crew) },
     recentProperties: recent.map((p) => ({ id: p.id, name: p.name, clientName: p.client_name, acres: p.acres === null ? null : Number(p.acres), county: p.county, state: p.state, updatedAt: new Date(p.updated_at).toISOString() })),
+    waiting: waiting.map((w) => ({ id: w.id, number: w.number, version: w.version, propertyName: w.property_name, clientName: w.client_name, totalCents: w.total_cents, sentAt: w.sent_at ? new Date(w.sent_at).toISOString() : null, firstViewedAt: w.first_viewed_at ? new Date(w.first_viewed_at).toISOString() : null, expiresOn: w.expires_on })),
+    inWindow,
+    season: {
+      year,
+      region,
+      windows: practices.map((p) => ({ practiceName: p.name, ...practiceWindow(p.definition, region, year) })).map(({ practiceName, earliest, latest }) => ({ practiceName, earliest, latest })),
+    },
     activity: activity.map((a) => ({ id: a.id, action: a.action, actorName: a.actor_name, subjectType: a.subject_type, subjectId: a.subject_id, createdAt: new Date(a.created_at).toISOString() })),
   };
   res.json({ data: body });

@@ -12,6 +12,9 @@ import { propertiesRouter } from './properties';
 import { unitsRouter } from './units';
 import { firmRouter } from './firm';
 import { overlaysRouter, propertyOverlaysRouter } from './overlays';
+import { materialsRouter, practicesRouter, ratesRouter } from './library';
+import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
+import { propertyProposalsRouter, proposalsRouter } from './proposals';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -27,4 +30,12 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/units', router: unitsRouter },
   { path: '/firm', router: firmRouter },
   { path: '/overlays', router: overlaysRouter },
+  { path: '/materials', router: materialsRouter },
+  { path: '/rates', router: ratesRouter },
+  { path: '/practices', router: practicesRouter },
+  { path: '/units', router: unitPrescriptionsRouter },
+  { path: '/properties', router: propertyPrescriptionsRouter },
+  { path: '/prescriptions', router: prescriptionsRouter },
+  { path: '/properties', router: propertyProposalsRouter },
+  { path: '/proposals', router: proposalsRouter },
 ];

@@ -17,8 +17,11 @@ import { createUnits } from '../commands/unit-writer';
 import { recordAudit } from '../commands/audit-recorder';
 import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
 import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
-import { AppError, badRequest } from '../errors';
+import { AppError, badRequest, conflict, unprocessable } from '../errors';
+import { stripCrs } from '../commands/unit-writer';
 import { z } from 'zod';
+import { Firm, Proposal } from '../models';
+import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
 
 const r = defineRoutes('/properties');
 
@@ -68,6 +71,8 @@ r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) =
   const me = actor(req);
   await sequelize.transaction(async (transaction) => {
     const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property', { transaction, lock: true });
+    const binding = await Proposal.count({ where: { propertyId: property.id, status: ['sent', 'approved'] }, transaction });
+    if (binding) throw conflict('This property has sent or approved proposals, which must stay on record. Withdraw the sent ones first; approved work cannot be deleted.');
     await property.destroy({ transaction });
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'property.deleted', subjectType: 'Property', subjectId: property.id, data: { name: property.name }, ip: req.ip ?? null }, transaction);
   });
@@ -132,6 +137,29 @@ r.get('/:id/export', STAFF, validate({ params: IdParamsSchema, query: ExportQuer
   res.setHeader('Content-Type', file.contentType);
   res.setHeader('Content-Disposition', `attachment; filename="${file.filename}"`);
   res.send(file.body);
+});
+
+r.get('/:id/plan.pdf', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const plan = await loadPlan(Number(req.params.id), firmId);
+  const { property } = plan;
+  if (!property.boundary || !property.acres) throw unprocessable('Draw or import the property boundary before printing its plan.');
+  const [firm, client, units] = await Promise.all([Firm.findByPk(firmId), Client.findByPk(property.clientId), plan.units()]);
+  const pdf = await renderPlanSummaryPdf({
+    firm: { name: firm!.name, phone: firm!.phone ?? undefined, email: firm!.email ?? undefined },
+    client: { name: client!.name },
+    property: {
+      name: property.name,
+      acres: property.acres,
+      boundary: stripCrs(property.boundary),
+      locality: [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || undefined,
+    },
+    preparedOn: new Date().toISOString().slice(0, 10),
+    units: units.map((u) => presentUnit(u)).map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
+  } as Parameters<typeof renderPlanSummaryPdf>[0]);
+  res.setHeader('Content-Type', 'application/pdf');
+  res.setHeader('Content-Disposition', `inline; filename="${property.name.replace(/[^\w.-]+/g, '-')}-plan.pdf"`);
+  res.send(pdf);
 });
 
 export const propertiesRouter = r.router;

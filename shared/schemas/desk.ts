@@ -4,6 +4,12 @@ export const DeskSummarySchema = z.object({
   firm: z.object({ name: z.string(), region: z.string() }),
   counts: z.object({ clients: z.number().int(), properties: z.number().int(), totalAcres: z.number(), pendingInvitations: z.number().int(), crew: z.number().int() }),
   recentProperties: z.array(z.object({ id: z.number().int(), name: z.string(), clientName: z.string(), acres: z.number().nullable(), county: z.string().nullable(), state: z.string().nullable(), updatedAt: z.string() })),
+  /** Sent proposals waiting on the landowner, oldest first. */
+  waiting: z.array(z.object({ id: z.number().int(), number: z.string(), version: z.number().int(), propertyName: z.string(), clientName: z.string(), totalCents: z.number().int(), sentAt: z.string().nullable(), firstViewedAt: z.string().nullable(), expiresOn: z.string().nullable() })),
+  /** Prescription steps whose window is open today, by closing date. */
+  inWindow: z.array(z.object({ prescriptionId: z.number().int(), propertyId: z.number().int(), propertyName: z.string(), unitName: z.string(), practiceName: z.string(), stepName: z.string(), earliest: z.string(), latest: z.string() })),
+  /** The season strip: this year's windows of the firm's practices in its region. */
+  season: z.object({ year: z.number().int(), region: z.string(), windows: z.array(z.object({ practiceName: z.string(), earliest: z.string(), latest: z.string() })) }),
   activity: z.array(z.object({ id: z.number().int(), action: z.string(), actorName: z.string().nullable(), subjectType: z.string().nullable(), subjectId: z.number().nullable(), createdAt: z.string() })),
 });
 export type DeskSummary = z.infer<typeof DeskSummarySchema>;

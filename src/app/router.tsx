@@ -12,6 +12,9 @@ import { ResetPasswordPage } from './routes/auth/reset-password';
 import { AcceptInvitePage } from './routes/auth/accept-invite';
 import { DeskPage } from './routes/desk/desk';
 import { ClientsPage } from './routes/clients/clients';
+import { ClientPage } from './routes/clients/client';
+import { PropertiesPage } from './routes/properties/properties';
+import { PropertyPage } from './routes/properties/property';
 import { TeamPage } from './routes/settings/team';
 import { MailPage } from './routes/settings/mail';
 import { FieldHomePage } from './routes/field/field-home';
@@ -42,6 +45,9 @@ const router = createBrowserRouter([
     children: [
       { path: paths.desk, element: <DeskPage /> },
       { path: paths.clients, element: <ClientsPage /> },
+      { path: paths.client(), element: <ClientPage /> },
+      { path: paths.properties, element: <PropertiesPage /> },
+      { path: paths.property(), element: <PropertyPage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.

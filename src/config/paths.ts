@@ -7,6 +7,8 @@ export const paths = {
   desk: '/desk',
   clients: '/clients',
   client: (id: number | string = ':id') => `/clients/${id}`,
+  properties: '/properties',
+  property: (id: number | string = ':id') => `/properties/${id}`,
   planMap: (id: number | string = ':id') => `/properties/${id}/map`,
   planPrint: (id: number | string = ':id') => `/properties/${id}/print`,
   team: '/settings/team',

@@ -1,4 +1,5 @@
 /** Display helpers for the client. */
+import { feetToMiles } from '../../shared/units';
 
 export const formatAcres = (acres: number | null | undefined, digits = 1): string =>
   acres === null || acres === undefined ? '—' : `${acres.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })} ac`;
@@ -23,3 +24,16 @@ const ACTION_WORDS: Record<string, string> = {
   'user.enabled': 'enabled an account',
 };
 export const describeAction = (action: string): string => ACTION_WORDS[action] ?? action.replace(/[.-]/g, ' ');
+
+/** A figure with thousands separators and a fixed number of decimals. */
+export const formatNumber = (n: number, digits = 0): string => n.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** Hectares, or a dash when there is no figure. */
+export const formatHectares = (ha: number | null | undefined, digits = 1): string => (ha === null || ha === undefined ? '—' : `${formatNumber(ha, digits)} ha`);
+
+/** Feet, with miles beside them from a mile up. */
+export const formatFeet = (ft: number | null | undefined): string => {
+  if (ft === null || ft === undefined) return '—';
+  const miles = feetToMiles(ft);
+  return miles >= 1 ? `${formatNumber(ft)} ft (${formatNumber(miles, 2)} mi)` : `${formatNumber(ft)} ft`;
+};

@@ -16,11 +16,12 @@ afterAll(async () => {
   await browser?.close();
 });
 
-/** Opens a demo property's plan map the way a consultant does: from the Desk's property list. */
+/** Opens a demo property's plan map the way a consultant does: Properties, then the property's "Plan map". */
 async function openPlanMap(page: Page, propertyName: string): Promise<void> {
   await signIn(page, baseUrl, 'consultant@browseline.test');
   await page.waitForURL(`${baseUrl}/desk`);
-  await page.getByRole('link', { name: propertyName, exact: true }).click();
+  await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Properties' }).click();
+  await page.getByRole('link', { name: `Plan map of ${propertyName}` }).click();
   await page.waitForURL(/\/properties\/\d+\/map$/);
   await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent(), WAIT).toBe(propertyName);
   // The map is ready when its canvas is drawn and the ledger has loaded.

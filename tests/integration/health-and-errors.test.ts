@@ -69,3 +69,16 @@ describe('firms are tenants', () => {
     expect(b.client.name).not.toBe('Taken over');
   });
 });
+
+describe('the Desk', () => {
+  it('answers this week’s stacks and the season strip for the firm', async () => {
+    const { users } = await makeFirm();
+    const agent = await signedInAgent(users.consultant.email, PASSWORD);
+    const res = await agent.get('/api/desk').expect(200);
+    const { DeskSummarySchema } = await import('../../shared/schemas/desk');
+    const desk = DeskSummarySchema.parse(res.body.data);
+    expect(desk.season.windows.length).toBeGreaterThanOrEqual(12);
+    expect(desk.season.windows.every((w) => w.earliest <= w.latest)).toBe(true);
+    expect(desk.waiting).toEqual([]);
+  });
+});

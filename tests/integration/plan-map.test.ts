@@ -287,3 +287,25 @@ describe('imagery', () => {
     expect(csp).toMatch(/connect-src 'self' https:\/\/imagery\.fernhill\.test/);
   });
 });
+
+describe('the plan summary PDF', () => {
+  it('renders the property, its acres and its units, with page numbers', async () => {
+    const { execFileSync } = await import('node:child_process');
+    const property = await newProperty();
+    await post(`/api/properties/${property.id}/units`, { kind: 'food-plot', name: 'Ridge clover', geometry: rectangle(-90.938, 43.262, 120, 80) });
+    const res = await consultant.get(`/api/properties/${property.id}/plan.pdf`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const pdf = res.body as Buffer;
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString();
+    expect(text).toContain(property.name);
+    expect(text).toContain('Ridge clover');
+    expect(text).toContain(`${property.acres!.toFixed(1)} acres`);
+    expect(text).toMatch(/Page 1 of \d/);
+  });
+});

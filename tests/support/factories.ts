@@ -5,6 +5,7 @@ import { Client, Firm, Property, User } from '../../server/models';
 import { hashPassword } from '../../server/services/auth/passwords';
 import { boundaryColumns } from '../../server/commands/property-writer';
 import type { Role } from '../../shared/schemas/auth';
+import { installStarterLibrary } from '../../server/commands/library-installer';
 
 export const PASSWORD = 'factory-password-1';
 const unique = () => crypto.randomBytes(5).toString('hex');
@@ -12,6 +13,7 @@ const unique = () => crypto.randomBytes(5).toString('hex');
 /** A firm with one user of each role (and the client its contact belongs to). */
 export async function makeFirm(name = `Test Firm ${unique()}`) {
   const firm = await Firm.create({ name, slug: `firm-${unique()}`, email: null, phone: null, address: null });
+  await installStarterLibrary(firm.id);
   const client = await makeClient(firm.id);
   const users = {
     owner: await makeUser(firm.id, 'owner'),

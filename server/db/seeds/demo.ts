@@ -2,6 +2,7 @@
 import { sequelize } from '../sequelize';
 import { Client, Firm, Property, Unit, User } from '../../models';
 import { measureUnit } from '../../../shared/domain/geometry';
+import { installStarterLibrary } from '../../commands/library-installer';
 import { hashPassword } from '../../services/auth/passwords';
 import { boundaryColumns } from '../../commands/property-writer';
 import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
@@ -18,6 +19,7 @@ export async function seedDemo(): Promise<Firm> {
       defaults: { ...demoFirm, settings: { taxRatePct: 5.5 } },
       transaction,
     });
+    await installStarterLibrary(firm.id, transaction);
     for (const staff of demoStaff) {
       const existing = await User.findOne({ where: { email: staff.email }, transaction });
       if (!existing) {

@@ -20,8 +20,8 @@ declare module 'express-session' {
 }
 
 /** The session view of a user. */
-export async function toSessionUser(user: User): Promise<SessionUser> {
-  const firm = await Firm.findByPk(user.firmId, { attributes: ['name'] });
+export async function toSessionUser(user: User & { Firm?: Firm }): Promise<SessionUser> {
+  const firm = user.Firm ?? (await Firm.findByPk(user.firmId, { attributes: ['name'] }));
   return {
     id: user.id,
     email: user.email,
@@ -50,7 +50,7 @@ passport.use(
 passport.serializeUser((user, done) => done(null, user.id));
 passport.deserializeUser(async (id: number, done) => {
   try {
-    const user = await User.findByPk(id);
+    const user = await User.findByPk(id, { include: [{ model: Firm, attributes: ['name'] }] });
     if (!user || !user.active) return done(null, false);
     done(null, await toSessionUser(user));
   } catch (err) {

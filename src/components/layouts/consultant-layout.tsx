@@ -8,6 +8,7 @@ import { paths } from '../../config/paths';
 const PLACES = [
   { to: paths.desk, label: 'Desk' },
   { to: paths.clients, label: 'Clients' },
+  { to: paths.properties, label: 'Properties' },
   { to: paths.team, label: 'Settings' },
 ];
 
@@ -41,15 +42,15 @@ export function ConsultantLayout() {
         </form>
         <UserMenu />
       </header>
-      <div className={`flex flex-1 ${fullBleed ? 'min-h-0' : ''}`}>
-        <nav aria-label="Places" className="w-44 shrink-0 border-r border-rule bg-paper px-2 py-4">
-          <ul className="flex flex-col gap-1">
+      <div className={`flex flex-1 flex-col md:flex-row ${fullBleed ? 'min-h-0' : ''}`}>
+        <nav aria-label="Places" className="shrink-0 border-b border-rule bg-paper px-2 py-2 md:w-44 md:border-r md:border-b-0 md:py-4">
+          <ul className="flex gap-1 overflow-x-auto md:flex-col">
             {PLACES.map((p) => (
               <li key={p.to}>
                 <NavLink
                   to={p.to}
                   className={({ isActive }) =>
-                    `block rounded px-3 py-2 text-sm ${isActive ? 'bg-moss/10 font-semibold text-moss-deep' : 'text-ink hover:bg-rule/40'}`
+                    `block whitespace-nowrap rounded px-3 py-2 text-sm ${isActive ? 'bg-moss/10 font-semibold text-moss-deep' : 'text-ink hover:bg-rule/40'}`
                   }
                 >
                   {p.label}
@@ -58,7 +59,7 @@ export function ConsultantLayout() {
             ))}
           </ul>
         </nav>
-        <main className={fullBleed ? 'flex min-h-0 min-w-0 flex-1 flex-col' : 'min-w-0 flex-1 px-6 py-6'}>
+        <main className={fullBleed ? 'flex min-h-0 min-w-0 flex-1 flex-col' : 'min-w-0 flex-1 px-4 py-4 sm:px-6 sm:py-6'}>
           <Outlet />
         </main>
       </div>

@@ -44,13 +44,18 @@ export function Loading({ label = 'Loading…' }: { label?: string }) {
   );
 }
 
-/** An error message with what to do next. */
-export function ErrorPanel({ error }: { error: unknown }) {
+/** An error message with what to do next; `onRetry` adds a "Try again" button. */
+export function ErrorPanel({ error, onRetry }: { error: unknown; onRetry?: () => void }) {
   const message = error instanceof Error ? error.message : 'Something went wrong.';
   return (
     <div role="alert" className="rounded-md border border-clay/40 bg-clay/5 px-4 py-3 text-sm text-ink">
       <p className="font-semibold text-clay">This could not be loaded.</p>
       <p>{message}</p>
+      {onRetry ? (
+        <button type="button" onClick={onRetry} className="mt-2 rounded border border-clay/60 bg-card px-3 py-1 font-semibold text-ink hover:border-clay">
+          Try again
+        </button>
+      ) : null}
     </div>
   );
 }

@@ -51,11 +51,7 @@ export function DeskPage() {
               <tbody>
                 {d.recentProperties.map((p) => (
                   <tr key={p.id} className="border-b border-rule/60 last:border-0">
-                    <td className="py-2 font-semibold text-ink">
-                      <Link to={paths.planMap(p.id)} className="text-moss-deep hover:underline" title={`Open the plan map of ${p.name}`}>
-                        {p.name}
-                      </Link>
-                    </td>
+                    <td className="py-2 font-semibold text-ink">{p.name}</td>
                     <td className="py-2 text-slate">{p.clientName}</td>
                     <td className="py-2 text-slate">{[p.county, p.state].filter(Boolean).join(', ') || '—'}</td>
                     <td className="py-2 text-right tabular-nums">{formatAcres(p.acres)}</td>

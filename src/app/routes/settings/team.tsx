@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { Link } from 'react-router-dom';
 import { InviteCreateSchema } from '../../../../shared/schemas/auth';
 import { useInviteMember, useSetMemberActive, useTeam } from '../../../features/team/api/team';
-import { useClients } from '../../../features/clients/api/clients';
+import { useClients } from '../../../features/clients/api/get-clients';
 import { useMe } from '../../../features/auth/api/get-me';
 import { Card, ErrorPanel, Loading } from '../../../components/ui/card';
 import { TextField } from '../../../components/ui/text-field';

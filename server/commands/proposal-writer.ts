@@ -1,0 +1,238 @@
+/** Drafts, edits, revises, sends and withdraws proposals. Approved and sent versions are immutable. */
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { sequelize } from '../db/sequelize';
+import { Client, Firm, Prescription, Property, Proposal, ProposalLine, Unit, User } from '../models';
+import type { ProposalCreateInput, ProposalUpdateInput } from '../../shared/schemas/proposal';
+import type { SessionUser } from '../../shared/schemas/auth';
+import { conflict, notFound, unprocessable } from '../errors';
+import { recordAudit } from './audit-recorder';
+import { priceProposal, totalsColumns } from '../services/proposals/pricing';
+import { enqueueEmail } from '../services/mail/outbox';
+import { proposalSentEmail } from '../../templates/email/proposal-sent';
+import { config } from '../config';
+import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
+import { todayIso } from './prescription-writer';
+
+export const DEFAULT_TERMS = [
+  'Prices hold until the date above. Material prices follow the supplier’s price on the day of purchase when they rise more than 5 %; we tell you before we buy.',
+  'A deposit is due on approval; the balance is invoiced as work is completed. Payment is due within 30 days of an invoice.',
+  'Planting dates depend on weather and soil conditions; we schedule each step inside its seasonal window and tell you when it moves.',
+  'Herbicide, chainsaw and burning work is done by trained, licensed people, following product labels, local codes and state rules.',
+].join('\n');
+
+const addDays = (iso: string, days: number) => new Date(Date.parse(`${iso}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+
+/** The next number of a firm's counter, allocated inside the transaction (no gaps, no duplicates). */
+export async function nextFirmNumber(firmId: number, name: string, transaction: Transaction): Promise<number> {
+  const [row] = await sequelize.query<{ value: number }>(
+    `INSERT INTO firm_counters (firm_id, name, value) VALUES (:firmId, :name, 1)
+     ON CONFLICT (firm_id, name) DO UPDATE SET value = firm_counters.value + 1 RETURNING value`,
+    { replacements: { firmId, name }, type: QueryTypes.SELECT, transaction },
+  );
+  return row.value;
+}
+
+async function lockProposal(id: number, firmId: number, transaction: Transaction): Promise<Proposal> {
+  const proposal = await Proposal.findOne({ where: { id, firmId }, lock: transaction.LOCK.UPDATE, transaction });
+  if (!proposal) throw notFound('That proposal');
+  return proposal;
+}
+
+/** Re-prices a proposal from its stored lines and saves the totals. */
+export async function reprice(proposal: Proposal, transaction: Transaction): Promise<void> {
+  const lines = await ProposalLine.findAll({ where: { proposalId: proposal.id }, order: [['position', 'ASC']], transaction });
+  await proposal.update(totalsColumns(priceProposal(proposal, lines)), { transaction });
+}
+
+/** Drafts a proposal for a property from its prescriptions (all, or those chosen). */
+export async function draftProposal(actor: SessionUser, propertyId: number, input: ProposalCreateInput, ip: string | null): Promise<Proposal> {
+  return sequelize.transaction(async (transaction) => {
+    const property = await Property.findOne({ where: { id: propertyId, firmId: actor.firmId }, transaction });
+    if (!property) throw notFound('That property');
+    const where = { firmId: actor.firmId, propertyId, ...(input.prescriptionIds ? { id: { [Op.in]: input.prescriptionIds } } : {}) };
+    const prescriptions = await Prescription.findAll({ where, order: [['unitId', 'ASC'], ['id', 'ASC']], transaction });
+    if (input.prescriptionIds && prescriptions.length !== new Set(input.prescriptionIds).size) {
+      throw unprocessable('prescriptionIds: some of the chosen prescriptions are not on this property.');
+    }
+    const units = await Unit.findAll({ where: { id: prescriptions.map((p) => p.unitId) }, attributes: ['id', 'name'], transaction });
+    const unitName = new Map(units.map((u) => [u.id, u.name]));
+    const firm = await Firm.findByPk(actor.firmId, { transaction });
+    const settings = (firm?.settings ?? {}) as { taxRatePct?: number; depositPct?: number };
+    const seq = await nextFirmNumber(actor.firmId, 'proposal', transaction);
+    const today = todayIso();
+    const proposal = await Proposal.create(
+      {
+        firmId: actor.firmId,
+        propertyId,
+        clientId: property.clientId,
+        seriesId: null,
+        number: `P-${today.slice(0, 4)}-${String(seq).padStart(3, '0')}`,
+        title: input.title ?? `Habitat plan for ${property.name}`,
+        introduction: input.introduction ?? null,
+        terms: input.terms ?? DEFAULT_TERMS,
+        discount: input.discount ?? { kind: 'none' },
+        taxRatePct: input.taxRatePct ?? settings.taxRatePct ?? 0,
+        depositPct: input.depositPct ?? settings.depositPct ?? 30,
+        expiresOn: input.expiresOn ?? addDays(today, 30),
+        createdById: actor.id,
+      },
+      { transaction },
+    );
+    await proposal.update({ seriesId: proposal.id }, { transaction });
+    let position = 0;
+    const rows = prescriptions.flatMap((p) =>
+      p.result.lines.map((line) => ({
+        proposalId: proposal.id,
+        position: position++,
+        unitId: p.unitId,
+        prescriptionId: p.id,
+        groupLabel: unitName.get(p.unitId) ?? 'Work',
+        category: line.category,
+        description: line.description,
+        quantity: line.quantity.toFixed(4),
+        unit: line.unit,
+        unitPriceCents: line.unitPriceCents,
+        // Materials are taxable goods by default; labor and equipment services are not (the firm may change each line).
+        taxable: line.category === 'materials',
+        optional: false,
+        selected: true,
+      })),
+    );
+    await ProposalLine.bulkCreate(rows, { transaction });
+    await reprice(proposal, transaction);
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.drafted', subjectType: 'Proposal', subjectId: proposal.id, data: { number: proposal.number }, ip }, transaction);
+    return proposal;
+  });
+}
+
+/** Edits a draft: its fields and, when given, all its lines. Anything but a draft is 409. */
+export async function updateProposal(actor: SessionUser, id: number, input: ProposalUpdateInput, ip: string | null): Promise<Proposal> {
+  return sequelize.transaction(async (transaction) => {
+    const proposal = await lockProposal(id, actor.firmId, transaction);
+    if (proposal.status !== 'draft') {
+      throw conflict(`This proposal is ${proposal.status} and cannot change. Revise it to make a new version.`);
+    }
+    const { lines, ...fields } = input;
+    await proposal.update(fields, { transaction });
+    if (lines) {
+      const unitIds = [...new Set(lines.map((l) => l.unitId).filter((u): u is number => !!u))];
+      if (unitIds.length) {
+        const count = await Unit.count({ where: { id: unitIds, propertyId: proposal.propertyId }, transaction });
+        if (count !== unitIds.length) throw unprocessable('lines: a line points at a unit of another property.');
+      }
+      await ProposalLine.destroy({ where: { proposalId: proposal.id }, transaction });
+      await ProposalLine.bulkCreate(
+        lines.map((l, position) => ({
+          proposalId: proposal.id,
+          position,
+          unitId: l.unitId ?? null,
+          prescriptionId: l.prescriptionId ?? null,
+          groupLabel: l.groupLabel,
+          category: l.category,
+          description: l.description,
+          quantity: l.quantity,
+          unit: l.unit,
+          unitPriceCents: l.unitPriceCents,
+          taxable: l.taxable,
+          optional: l.optional,
+          selected: !l.optional,
+        })),
+        { transaction },
+      );
+    }
+    await reprice(proposal, transaction);
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.edited', subjectType: 'Proposal', subjectId: proposal.id, ip }, transaction);
+    return proposal;
+  });
+}
+
+/** A new draft version with the same lines; a sent earlier version is withdrawn. Earlier versions stay readable. */
+export async function reviseProposal(actor: SessionUser, id: number, ip: string | null): Promise<Proposal> {
+  return sequelize.transaction(async (transaction) => {
+    const old = await lockProposal(id, actor.firmId, transaction);
+    const [latest] = await sequelize.query<{ v: number }>('SELECT max(version) AS v FROM proposals WHERE series_id = :s', { replacements: { s: old.seriesId ?? old.id }, type: QueryTypes.SELECT, transaction });
+    if (await Proposal.count({ where: { seriesId: old.seriesId ?? old.id, status: 'draft' }, transaction })) {
+      throw conflict('A draft version of this proposal exists already. Edit that one.');
+    }
+    const next = await Proposal.create(
+      {
+        firmId: old.firmId,
+        propertyId: old.propertyId,
+        clientId: old.clientId,
+        seriesId: old.seriesId ?? old.id,
+        number: old.number,
+        version: Number(latest.v) + 1,
+        title: old.title,
+        introduction: old.introduction,
+        terms: old.terms,
+        currency: old.currency,
+        discount: old.discount,
+        taxRatePct: old.taxRatePct,
+        depositPct: old.depositPct,
+        expiresOn: old.expiresOn && old.expiresOn >= todayIso() ? old.expiresOn : addDays(todayIso(), 30),
+        createdById: actor.id,
+      },
+      { transaction },
+    );
+    const lines = await ProposalLine.findAll({ where: { proposalId: old.id }, order: [['position', 'ASC']], transaction });
+    await ProposalLine.bulkCreate(
+      lines.map((l) => ({ ...l.get({ plain: true }), id: undefined, proposalId: next.id, selected: !l.optional })),
+      { transaction },
+    );
+    if (old.status === 'sent') await old.update({ status: 'withdrawn', withdrawnAt: new Date() }, { transaction });
+    await reprice(next, transaction);
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.revised', subjectType: 'Proposal', subjectId: next.id, data: { from: old.id, version: next.version }, ip }, transaction);
+    return next;
+  });
+}
+
+/** The addresses a proposal goes to: the client's portal contacts, or the client's own e-mail. */
+async function clientRecipients(clientId: number, transaction: Transaction): Promise<string[]> {
+  const contacts = await User.findAll({ where: { clientId, role: 'client', active: true }, attributes: ['email'], transaction });
+  const client = await Client.findByPk(clientId, { attributes: ['email'], transaction });
+  const emails = contacts.map((c) => c.email);
+  if (emails.length === 0 && client?.email) emails.push(client.email);
+  return emails;
+}
+
+/** Sends a draft: marks it sent and queues the e-mail with the PDF attached and the portal link. */
+export async function sendProposal(actor: SessionUser, id: number, ip: string | null): Promise<Proposal> {
+  return sequelize.transaction(async (transaction) => {
+    const proposal = await lockProposal(id, actor.firmId, transaction);
+    if (proposal.status !== 'draft') throw conflict(`This proposal is ${proposal.status}; only a draft can be sent. Revise it to send a new version.`);
+    const lineCount = await ProposalLine.count({ where: { proposalId: proposal.id }, transaction });
+    if (lineCount === 0) throw unprocessable('Add at least one line before sending the proposal.');
+    if (proposal.expiresOn && proposal.expiresOn < todayIso()) throw unprocessable('expiresOn: the valid-until date has passed. Set a later date, then send.');
+    const recipients = await clientRecipients(proposal.clientId, transaction);
+    if (recipients.length === 0) throw unprocessable('The client has no e-mail address or portal contact. Add one on the client’s page, then send.');
+    await proposal.update({ status: 'sent', sentAt: new Date() }, { transaction });
+    const pdf = await renderProposalPdfFor(proposal, transaction);
+    const firm = await Firm.findByPk(actor.firmId, { transaction });
+    const property = await Property.findByPk(proposal.propertyId, { attributes: ['name'], transaction });
+    for (const to of recipients) {
+      await enqueueEmail(
+        {
+          firmId: actor.firmId,
+          kind: 'proposal-sent',
+          to,
+          email: proposalSentEmail({ firmName: firm?.name ?? '', consultantName: actor.name, propertyName: property?.name ?? '', number: proposal.number, version: proposal.version, totalCents: proposal.totalCents, expiresOn: proposal.expiresOn, url: `${config.publicUrl}/portal/proposals/${proposal.id}` }),
+          attachments: [{ filename: `${proposal.number}-v${proposal.version}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
+        },
+        transaction,
+      );
+    }
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.sent', subjectType: 'Proposal', subjectId: proposal.id, data: { to: recipients }, ip }, transaction);
+    return proposal;
+  });
+}
+
+/** Withdraws a draft or sent proposal. */
+export async function withdrawProposal(actor: SessionUser, id: number, ip: string | null): Promise<Proposal> {
+  return sequelize.transaction(async (transaction) => {
+    const proposal = await lockProposal(id, actor.firmId, transaction);
+    if (proposal.status !== 'draft' && proposal.status !== 'sent') throw conflict(`This proposal is ${proposal.status} and cannot be withdrawn.`);
+    await proposal.update({ status: 'withdrawn', withdrawnAt: new Date() }, { transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.withdrawn', subjectType: 'Proposal', subjectId: proposal.id, ip }, transaction);
+    return proposal;
+  });
+}

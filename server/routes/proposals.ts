@@ -1,0 +1,140 @@
+/** Proposals: drafted from a plan's prescriptions, sent, and approved or declined by the landowner. */
+import type { Request } from 'express';
+import { Op, type WhereOptions } from 'sequelize';
+import { z } from 'zod';
+import { defineRoutes, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { Client, Property, Proposal } from '../models';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { ApproveSchema, DeclineSchema, ProposalCreateSchema, ProposalListQuerySchema, ProposalUpdateSchema } from '../../shared/schemas/proposal';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { draftProposal, reviseProposal, sendProposal, updateProposal, withdrawProposal } from '../commands/proposal-writer';
+import { approveProposal, declineProposal } from '../commands/proposal-approver';
+import { readProposal } from '../services/proposals/proposal-reader';
+import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
+import { displayStatus } from '../presenters/proposal';
+import { notFound } from '../errors';
+import { todayIso } from '../commands/prescription-writer';
+
+const perProperty = defineRoutes('/properties');
+const r = defineRoutes('/proposals');
+const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
+
+/** A proposal the signed-in person may read: staff of its firm, or its client once it is sent. */
+async function readable(req: Request): Promise<Proposal> {
+  const me = actor(req);
+  const proposal = await findInFirm(Proposal, Number(req.params.id), me.firmId, 'That proposal');
+  if (me.role === 'client' && (proposal.clientId !== me.clientId || proposal.status === 'draft')) throw notFound('That proposal');
+  return proposal;
+}
+
+const ctx = (req: Request) => ({ ip: req.ip ?? null, userAgent: req.get('user-agent') ?? null });
+
+/** List rows: numbers and totals without lines. */
+async function listRows(where: WhereOptions) {
+  const rows = await Proposal.findAll({ where, order: [['createdAt', 'DESC'], ['version', 'DESC']] });
+  const [properties, clients] = await Promise.all([
+    Property.findAll({ where: { id: [...new Set(rows.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
+    Client.findAll({ where: { id: [...new Set(rows.map((p) => p.clientId))] }, attributes: ['id', 'name'] }),
+  ]);
+  const propertyName = new Map(properties.map((p) => [p.id, p.name]));
+  const clientName = new Map(clients.map((c) => [c.id, c.name]));
+  return rows.map((p) => ({
+    id: p.id,
+    seriesId: p.seriesId ?? p.id,
+    number: p.number,
+    version: p.version,
+    status: displayStatus(p),
+    title: p.title,
+    propertyId: p.propertyId,
+    propertyName: propertyName.get(p.propertyId) ?? '',
+    clientId: p.clientId,
+    clientName: clientName.get(p.clientId) ?? '',
+    totalCents: p.totalCents,
+    depositCents: p.depositCents,
+    expiresOn: p.expiresOn,
+    sentAt: p.sentAt?.toISOString() ?? null,
+    firstViewedAt: p.firstViewedAt?.toISOString() ?? null,
+    decidedAt: p.decidedAt?.toISOString() ?? null,
+    updatedAt: p.updatedAt.toISOString(),
+  }));
+}
+
+perProperty.get('/:id/proposals', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const property = await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+  res.json({ data: await listRows({ firmId, propertyId: property.id }) });
+});
+
+perProperty.post('/:id/proposals', STAFF, validate({ params: IdParamsSchema, body: ProposalCreateSchema }), async (req, res) => {
+  const proposal = await draftProposal(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.status(201).json({ data: await readProposal(proposal) });
+});
+
+r.get('/', STAFF_AND_CLIENT, validate({ query: ProposalListQuerySchema }), async (req, res) => {
+  const me = actor(req);
+  const { status, propertyId } = req.validQuery as z.infer<typeof ProposalListQuerySchema>;
+  const where: Record<string | symbol, unknown> = { firmId: me.firmId };
+  if (me.role === 'client') Object.assign(where, { clientId: me.clientId, status: { [Op.ne]: 'draft' } });
+  if (propertyId) where.propertyId = propertyId;
+  if (status === 'expired') Object.assign(where, { status: 'sent', expiresOn: { [Op.lt]: todayIso() } });
+  else if (status) {
+    if (me.role === 'client' && status === 'draft') return res.json({ data: [] });
+    where.status = status;
+    if (status === 'sent') where.expiresOn = { [Op.or]: [{ [Op.gte]: todayIso() }, { [Op.is]: null }] };
+  }
+  res.json({ data: await listRows(where as WhereOptions) });
+});
+
+r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const proposal = await readable(req);
+  if (actor(req).role === 'client' && !proposal.firstViewedAt) await proposal.update({ firstViewedAt: new Date() });
+  res.json({ data: await readProposal(proposal) });
+});
+
+r.get('/:id/versions', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const proposal = await findInFirm(Proposal, Number(req.params.id), firmId, 'That proposal');
+  res.json({ data: await listRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }) });
+});
+
+r.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const proposal = await readable(req);
+  const pdf = await renderProposalPdfFor(proposal);
+  res.setHeader('Content-Type', 'application/pdf');
+  res.setHeader('Content-Disposition', `inline; filename="${proposal.number}-v${proposal.version}.pdf"`);
+  res.send(pdf);
+});
+
+r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ProposalUpdateSchema }), async (req, res) => {
+  const proposal = await updateProposal(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.json({ data: await readProposal(proposal) });
+});
+
+r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const proposal = await sendProposal(actor(req), Number(req.params.id), req.ip ?? null);
+  res.json({ data: await readProposal(proposal) });
+});
+
+r.post('/:id/revise', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const proposal = await reviseProposal(actor(req), Number(req.params.id), req.ip ?? null);
+  res.status(201).json({ data: await readProposal(proposal) });
+});
+
+r.post('/:id/withdraw', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const proposal = await withdrawProposal(actor(req), Number(req.params.id), req.ip ?? null);
+  res.json({ data: await readProposal(proposal) });
+});
+
+r.post('/:id/approve', ['client'], validate({ params: IdParamsSchema, body: ApproveSchema }), async (req, res) => {
+  const proposal = await approveProposal(actor(req), Number(req.params.id), req.body, ctx(req));
+  res.json({ data: await readProposal(proposal) });
+});
+
+r.post('/:id/decline', ['client'], validate({ params: IdParamsSchema, body: DeclineSchema }), async (req, res) => {
+  const proposal = await declineProposal(actor(req), Number(req.params.id), req.body.reason, ctx(req));
+  res.json({ data: await readProposal(proposal) });
+});
+
+export const propertyProposalsRouter = perProperty.router;
+export const proposalsRouter = r.router;

@@ -1,0 +1,281 @@
+/**
+ * Browseline's PDF engine: pdfmake 0.3 on the server with our shipped fonts, a locked-down
+ * resource policy (no remote URL is ever fetched; the only local files read are our fonts) and the
+ * shared look of every document (styles, page frame, cautions box, money and key/value tables).
+ *
+ * Fonts come from the .woff files of @fontsource (latin subset; see fonts.ts). Headings use
+ * Merriweather, body text Source Sans 3, whose default figures are already tabular (equal advance
+ * widths), so columns of numbers line up.
+ */
+import pdfmake from 'pdfmake';
+import type {
+  Content,
+  CustomTableLayout,
+  DynamicContent,
+  Margins,
+  Node,
+  NodeQueries,
+  StyleDictionary,
+  TableCell,
+  TDocumentDefinitions,
+  TFontDictionary,
+} from 'pdfmake/interfaces';
+import { formatCents } from '../../../shared/domain/money';
+import { documentFontFiles } from './fonts';
+import { DOC_COLORS, FONT_BODY, FONT_HEADING } from './look';
+
+export { DOC_COLORS, FONT_BODY, FONT_HEADING };
+
+/** Thrown when a document cannot be rendered; the message says what to change. */
+export class DocumentRenderError extends Error {
+  readonly code = 'document-render-failed';
+  constructor(message: string, options?: { cause?: unknown }) {
+    super(message, options);
+    this.name = 'DocumentRenderError';
+  }
+}
+
+const fontFiles = documentFontFiles();
+
+/** Paths of the font files (TrueType unwrapped from @fontsource's .woff), the only local files read. */
+export const FONT_FILES = {
+  [FONT_HEADING]: fontFiles.heading,
+  [FONT_BODY]: fontFiles.body,
+} satisfies TFontDictionary;
+
+const ALLOWED_LOCAL_FILES = new Set<string>(Object.values(FONT_FILES).flatMap((f) => Object.values(f)));
+
+type PdfmakeServer = typeof pdfmake & { setLocalAccessPolicy(cb: (path: string) => boolean): void };
+
+/**
+ * Our own pdfmake instance, so that no other module can change its fonts or loosen its access
+ * policies (the package exports one shared instance; its constructor makes a fresh one).
+ */
+function createEngine(): PdfmakeServer {
+  const Engine = (pdfmake as unknown as { constructor: new () => PdfmakeServer }).constructor;
+  const engine = new Engine();
+  engine.setFonts(structuredClone(FONT_FILES));
+  engine.setUrlAccessPolicy(() => false); // never fetch: images must be data URLs
+  engine.setLocalAccessPolicy((path) => ALLOWED_LOCAL_FILES.has(path));
+  engine.clearTableLayouts();
+  return engine;
+}
+
+const engine = createEngine();
+
+/** Default text style of every document: Source Sans 3, 10 pt, ink. */
+export const documentDefaultStyle = {
+  font: FONT_BODY,
+  fontSize: 10,
+  color: DOC_COLORS.ink,
+  lineHeight: 1.25,
+} as const;
+
+/** Named styles shared by every Browseline document. */
+export const documentStyles: StyleDictionary = {
+  title: { font: FONT_HEADING, fontSize: 20, bold: true, color: DOC_COLORS.ink, margin: [0, 0, 0, 2] },
+  subtitle: { fontSize: 11, color: DOC_COLORS.slate, margin: [0, 0, 0, 12] },
+  h2: { font: FONT_HEADING, fontSize: 13, bold: true, color: DOC_COLORS.ink, margin: [0, 14, 0, 6] },
+  h3: { font: FONT_HEADING, fontSize: 11, bold: true, color: DOC_COLORS.mossDeep, margin: [0, 10, 0, 4] },
+  figure: { font: FONT_HEADING, fontSize: 12, bold: true, color: DOC_COLORS.mossDeep, fontFeatures: ['tnum'] },
+  muted: { color: DOC_COLORS.slate },
+  small: { fontSize: 8.5, color: DOC_COLORS.slate },
+  tableHeader: { bold: true, fontSize: 9, color: DOC_COLORS.slate, lineHeight: 1.05, fontFeatures: ['tnum'] },
+  tableCell: { fontSize: 9.5, lineHeight: 1.05, fontFeatures: ['tnum'] },
+  tableTotal: { bold: true, fontSize: 10, lineHeight: 1.05, fontFeatures: ['tnum'] },
+  number: { alignment: 'right', fontFeatures: ['tnum'] },
+  cautionTitle: { font: FONT_HEADING, bold: true, fontSize: 10, color: DOC_COLORS.clay, margin: [0, 0, 0, 3] },
+  caution: { fontSize: 9, color: DOC_COLORS.ink },
+  label: { fontSize: 9, color: DOC_COLORS.slate },
+};
+
+/** Tabular tables: horizontal rule-coloured lines, a heavier line under the header, no verticals. */
+export const ruledTableLayout: CustomTableLayout = {
+  hLineWidth: (i, node) => (i === 0 || i === node.table.body.length ? 0 : i === (node.table.headerRows ?? 0) && i > 0 ? 1 : 0.5),
+  vLineWidth: () => 0,
+  hLineColor: (i, node) => (i === (node.table.headerRows ?? 0) && i > 0 ? DOC_COLORS.slate : DOC_COLORS.rule),
+  paddingLeft: (i) => (i === 0 ? 0 : 6),
+  paddingRight: (i, node) => (i === (node.table.widths?.length ?? 1) - 1 ? 0 : 6),
+  paddingTop: () => 3,
+  paddingBottom: () => 3,
+};
+
+export interface PageFrameOptions {
+  /** Document title, repeated in the running header ("Plan summary"). */
+  title: string;
+  firmName: string;
+  /** A short line under the footer's firm name, such as a phone number or e-mail. */
+  firmContact?: string;
+  /** Preparation date as people read it ("May 4, 2026"), shown in the footer. */
+  preparedOn?: string;
+}
+
+export interface PageFrame {
+  header: DynamicContent;
+  footer: DynamicContent;
+  pageMargins: Margins;
+}
+
+/** Running header (firm, document title) and footer (contact, date, "Page N of M") for US Letter. */
+export function pageFrame(options: PageFrameOptions): PageFrame {
+  const side = 54;
+  const left = [options.firmName, options.firmContact].filter(Boolean).join('  ·  ');
+  return {
+    pageMargins: [side, 70, side, 60],
+    header: (_currentPage, _pageCount, pageSize) => ({
+      margin: [side, 30, side, 0],
+      stack: [
+        {
+          columns: [
+            { text: options.firmName, font: FONT_HEADING, bold: true, fontSize: 10, color: DOC_COLORS.mossDeep },
+            { text: options.title, alignment: 'right', fontSize: 9, color: DOC_COLORS.slate, margin: [0, 1, 0, 0] },
+          ],
+        },
+        {
+          canvas: [
+            { type: 'line', x1: 0, y1: 6, x2: pageSize.width - 2 * side, y2: 6, lineWidth: 0.75, lineColor: DOC_COLORS.rule },
+          ],
+        },
+      ],
+    }),
+    footer: (currentPage, pageCount, pageSize) => ({
+      margin: [side, 18, side, 0],
+      stack: [
+        {
+          canvas: [{ type: 'line', x1: 0, y1: 0, x2: pageSize.width - 2 * side, y2: 0, lineWidth: 0.5, lineColor: DOC_COLORS.rule }],
+        },
+        {
+          margin: [0, 5, 0, 0],
+          columns: [
+            { text: left, fontSize: 8, color: DOC_COLORS.slate, width: '*' },
+            ...(options.preparedOn
+              ? [{ text: `Prepared ${options.preparedOn}`, fontSize: 8, color: DOC_COLORS.slate, alignment: 'center' as const, width: 'auto' as const }]
+              : []),
+            { text: `Page ${currentPage} of ${pageCount}`, fontSize: 8, color: DOC_COLORS.slate, alignment: 'right', width: 90 },
+          ],
+        },
+      ],
+    }),
+  };
+}
+
+/** A box ruled in clay with a heading and bullet lines, for safety and legal cautions. */
+export function cautionBox(title: string, lines: readonly string[]): Content {
+  const body: Content[] = [{ text: title, style: 'cautionTitle' }];
+  if (lines.length > 0) {
+    body.push({ ul: lines.map((line) => ({ text: line, style: 'caution', margin: [0, 0, 0, 2] })), markerColor: DOC_COLORS.clay });
+  }
+  return {
+    unbreakable: true,
+    margin: [0, 12, 0, 0],
+    table: { widths: ['*'], body: [[{ stack: body, fillColor: DOC_COLORS.clayTint }]] },
+    layout: {
+      hLineWidth: () => 1,
+      vLineWidth: () => 1,
+      hLineColor: () => DOC_COLORS.clay,
+      vLineColor: () => DOC_COLORS.clay,
+      paddingLeft: () => 10,
+      paddingRight: () => 10,
+      paddingTop: () => 8,
+      paddingBottom: () => 6,
+    },
+  };
+}
+
+export interface MoneyRow {
+  label: string;
+  amountCents: number;
+  /** A total or subtotal: bold, with a line above. */
+  total?: boolean;
+  /** Small slate text under the label. */
+  note?: string;
+}
+
+/** A two-column table of labels and amounts in dollars (exact from integer cents), totals in bold. */
+export function moneyTable(rows: readonly MoneyRow[], header: readonly [string, string] = ['Item', 'Amount']): Content {
+  const body: TableCell[][] = [
+    [
+      { text: header[0], style: 'tableHeader' },
+      { text: header[1], style: 'tableHeader', alignment: 'right' },
+    ],
+  ];
+  for (const row of rows) {
+    const style = row.total ? 'tableTotal' : 'tableCell';
+    body.push([
+      row.note ? { stack: [{ text: row.label, style }, { text: row.note, style: 'small' }] } : { text: row.label, style },
+      { text: formatCents(row.amountCents), style, alignment: 'right' },
+    ]);
+  }
+  return { table: { headerRows: 1, widths: ['*', 'auto'], body, dontBreakRows: true }, layout: ruledTableLayout };
+}
+
+export interface KeyValueRow {
+  label: string;
+  value: string | Content;
+}
+
+/** A borderless two-column table of labels (slate) and values (ink), for document facts. */
+export function keyValueTable(rows: readonly KeyValueRow[], labelWidthPt = 110): Content {
+  return {
+    table: {
+      widths: [labelWidthPt, '*'],
+      body: rows.map((row) => [
+        { text: row.label, style: 'label' },
+        typeof row.value === 'string' ? { text: row.value } : row.value,
+      ]),
+    },
+    layout: {
+      hLineWidth: () => 0,
+      vLineWidth: () => 0,
+      paddingLeft: () => 0,
+      paddingRight: (i) => (i === 0 ? 8 : 0),
+      paddingTop: () => 1.5,
+      paddingBottom: () => 1.5,
+    },
+  };
+}
+
+const HEADING_STYLES = new Set(['title', 'h2', 'h3']);
+/** Room a heading needs below it on its page: itself, a table header and a couple of rows. */
+const HEADING_KEEP_PT = 100;
+
+/**
+ * Page-break rule: a heading (style title, h2 or h3, or any node with a headlineLevel) that starts
+ * within HEADING_KEEP_PT of the page bottom moves to the next page, so it stays with what it
+ * introduces. (pdfmake reports a table's header row on the page the table was first tried on, so
+ * "no node follows on this page" cannot be relied on.)
+ */
+export function keepHeadingsWithNext(node: Node, queries: NodeQueries): boolean {
+  const styles = node.style === undefined ? [] : Array.isArray(node.style) ? node.style : [node.style];
+  const isHeading = node.headlineLevel !== undefined || styles.some((s) => typeof s === 'string' && HEADING_STYLES.has(s));
+  if (!isHeading) return false;
+  const { verticalRatio, pageInnerHeight } = node.startPosition;
+  const roomBelowPt = (1 - verticalRatio) * pageInnerHeight;
+  return roomBelowPt < HEADING_KEEP_PT && queries.getNodesOnNextPage().length > 0;
+}
+
+/**
+ * Renders a document definition to PDF bytes. The definition is consumed (pdfmake annotates it
+ * while laying it out): build a fresh one for every render. Styles and the default style of the
+ * shared look are filled in where the definition does not set them.
+ */
+export async function renderPdf(docDefinition: TDocumentDefinitions): Promise<Buffer> {
+  const definition: TDocumentDefinitions = {
+    pageSize: 'LETTER',
+    pageBreakBefore: keepHeadingsWithNext,
+    ...docDefinition,
+    defaultStyle: { ...documentDefaultStyle, ...docDefinition.defaultStyle },
+    styles: { ...documentStyles, ...docDefinition.styles },
+    info: { creator: 'Browseline', producer: 'Browseline', ...docDefinition.info },
+  };
+  try {
+    const buffer = await engine.createPdf(definition).getBuffer();
+    return buffer;
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    throw new DocumentRenderError(
+      `The PDF could not be rendered: ${reason}. Images must be embedded as data URLs, fonts must be ${FONT_HEADING} or ${FONT_BODY}, and SVG must be well-formed.`,
+      { cause: error },
+    );
+  }
+}
