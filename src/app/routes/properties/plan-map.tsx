@@ -381,10 +381,21 @@ export function PlanMapPage() {
       <header className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-rule bg-card px-4 py-2">
         <div className="min-w-0">
           <p className="text-xs text-slate">
-            <Link to={paths.clients} className="hover:underline">
-              Clients
-            </Link>
-            {p ? <> · {p.clientName}</> : null}
+            {p ? (
+              <>
+                <Link to={paths.client(p.clientId)} className="hover:underline">
+                  {p.clientName}
+                </Link>
+                {' · '}
+                <Link to={paths.property(p.id)} className="hover:underline">
+                  Property details
+                </Link>
+              </>
+            ) : (
+              <Link to={paths.properties} className="hover:underline">
+                Properties
+              </Link>
+            )}
           </p>
           <h1 className="truncate text-xl font-bold leading-tight">{p ? p.name : 'Plan map'}</h1>
         </div>
@@ -428,8 +439,8 @@ export function PlanMapPage() {
           <ExportMenu propertyId={propertyId} />
         </div>
       </header>
-      <div className="flex min-h-0 flex-1">
-        <div className="relative min-w-0 flex-1">
+      <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
+        <div className="relative min-h-[22rem] min-w-0 flex-1">
           <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
           <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
             <div ref={chipsRef} className="pointer-events-auto max-w-full">
@@ -489,7 +500,7 @@ export function PlanMapPage() {
             </div>
           ) : null}
         </div>
-        <aside aria-label="Plan ledger" className="w-[22rem] shrink-0 overflow-y-auto border-l border-rule bg-card px-4 py-4">
+        <aside aria-label="Plan ledger" className="max-h-[45vh] w-full shrink-0 overflow-y-auto border-t border-rule bg-card px-4 py-4 lg:max-h-none lg:w-[22rem] lg:border-l lg:border-t-0">
           {importState && importPlan ? (
             <ImportPanel
               fileName={importState.fileName}
