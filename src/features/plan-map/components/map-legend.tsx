@@ -4,7 +4,7 @@ import { KindSwatch } from './kind-swatch';
 
 /** The legend of the kinds on the map, with our swatches and symbols. */
 export function MapLegend({ kinds, hasBoundary }: { kinds: UnitKind[]; hasBoundary: boolean }) {
- // Open on a roomy screen; folded where it would cover much of a small map.
+  // Open on a roomy screen; folded where it would cover much of a small map.
   const [open, setOpen] = useState(() => typeof window === 'undefined' || window.matchMedia('(min-width: 1024px) and (min-height: 760px)').matches);
   if (kinds.length === 0 && !hasBoundary) return null;
   return (

@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useEffect, useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -48,6 +48,12 @@ export function UnitDetail({
     resolver: zodResolver(UnitUpdateSchema),
     defaultValues: { name: unit.name, kind: unit.kind, notes: unit.notes ?? '' },
   });
+  // A change from elsewhere (Undo) shows in the form unless the person is in the middle of editing.
+  const { isDirty } = form.formState;
+  useEffect(() => {
+    if (!isDirty) form.reset({ name: unit.name, kind: unit.kind, notes: unit.notes ?? '' });
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- only a change of the saved values should reset
+  }, [unit.name, unit.kind, unit.notes]);
   const submit = form.handleSubmit(async (values) => {
     const input: UnitUpdateInput = { name: values.name, kind: values.kind, notes: values.notes ?? null };
     await onSave(input)
