@@ -9,6 +9,12 @@ export const paths = {
   client: (id: number | string = ':id') => `/clients/${id}`,
   team: '/settings/team',
   mail: '/settings/mail',
+  library: '/library',
+  libraryPractices: '/library/practices',
+  practice: (id: number | string = ':id') => `/library/practices/${id}`,
+  libraryMaterials: '/library/materials',
+  libraryRates: '/library/rates',
+  propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   field: '/field',
   portal: '/portal',
 } as const;

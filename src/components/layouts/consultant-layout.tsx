@@ -8,6 +8,7 @@ import { paths } from '../../config/paths';
 const PLACES = [
   { to: paths.desk, label: 'Desk' },
   { to: paths.clients, label: 'Clients' },
+  { to: paths.library, label: 'Library' },
   { to: paths.team, label: 'Settings' },
 ];
 
