@@ -52,7 +52,7 @@ function RateEditRow({ rate, onDone }: { rate?: RateDto; onDone: () => void }) {
       }
     }
     if (!placed) form.setError('root.server', { type: 'server', message: error.message });
-    toast('error', error.message);
+    toast('error', placed ? 'Not saved: correct the marked fields.' : error.message);
   };
   const save = form.handleSubmit((input) => {
     if (rate) update.mutate({ id: rate.id, input }, { onSuccess: (r) => (toast('success', `${r.name} saved.`), onDone()), onError });

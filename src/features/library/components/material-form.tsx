@@ -55,7 +55,7 @@ function useSave<T extends FieldValues>(kind: MaterialKind, form: UseFormReturn<
       }
     }
     if (!placed) form.setError('root.server' as Path<T>, { type: 'server', message: error.message });
-    toast('error', error.message);
+    toast('error', placed ? 'Not saved: correct the marked fields.' : error.message);
   };
   const submit = form.handleSubmit((input) => {
     if (material) {

@@ -73,7 +73,7 @@ export function PracticeSteps({
                     inputMode="decimal"
                     value={texts[f.id] ?? (f.value === undefined ? '' : String(f.value))}
                     error={errors[f.id]}
-                    hint={f.optional ? 'Optional' : undefined}
+                    hint={f.optional ? (f.path.includes('tonsPerAcre') ? 'Optional; empty asks for the soil-test rate' : 'Optional') : undefined}
                     onChange={(e) => onText(f.id, e.target.value)}
                   />
                 ))}

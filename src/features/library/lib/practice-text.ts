@@ -86,7 +86,8 @@ export function applicationLines(application: StepApplication | undefined, mater
     }
     case 'fertilizer': {
       const m = materials.find((x) => x.key === application.materialKey);
-      const grade = m?.type === 'fertilizer' ? ` (${formatGrade(m.grade)})` : '';
+      const gradeText = m?.type === 'fertilizer' ? formatGrade(m.grade) : '';
+      const grade = gradeText && !m?.name.includes(gradeText) ? ` (${gradeText})` : '';
       return [`${nameOf(materials, application.materialKey)}${grade}: N ${formatQuantity(application.nLbPerAcre)} · P₂O₅ ${formatQuantity(application.p2o5LbPerAcre)} · K₂O ${formatQuantity(application.k2oLbPerAcre)} lb/acre`];
     }
     case 'spray': {

@@ -63,7 +63,10 @@ const CATEGORY_LABELS = [
  * and for the live preview alike.
  */
 export function PrescriptionDetails({ view, summary = true }: { view: PrescriptionView; summary?: boolean }) {
-  const schedule = [...view.schedule.steps].sort((a, b) => (a.earliest < b.earliest ? -1 : a.earliest > b.earliest ? 1 : 0));
+  // The seeding (anchor) step sorts by its target date, the others by the first day of their window.
+  const sortKey = (s: (typeof view.schedule.steps)[number]) => (s.isAnchor ? view.schedule.targetDate : s.earliest);
+  const schedule = [...view.schedule.steps].sort((a, b) => (sortKey(a) < sortKey(b) ? -1 : sortKey(a) > sortKey(b) ? 1 : 0));
+  const targetShown = view.schedule.targetDate !== view.schedule.anchorWindow.earliest;
   const skipped = new Set(view.steps.filter((s) => s.skipped).map((s) => s.stepKey));
   const looseWarnings = view.warnings.filter((w) => !w.stepKey || !schedule.some((s) => s.stepKey === w.stepKey));
   const figures: { label: string; value: string; note?: string }[] = [];
@@ -115,7 +118,10 @@ export function PrescriptionDetails({ view, summary = true }: { view: Prescripti
                   {s.isAnchor ? <span className="ml-2 rounded bg-moss/10 px-1.5 py-0.5 text-xs font-semibold text-moss-deep">window</span> : null}
                   {skipped.has(s.stepKey) ? <span className="ml-2 text-xs text-slate">(skipped)</span> : null}
                 </span>
-                <span className="shrink-0 text-right text-xs tabular-nums text-slate">{formatDateRange(s.earliest, s.latest)}</span>
+                <span className="shrink-0 text-right text-xs tabular-nums text-slate">
+                  {formatDateRange(s.earliest, s.latest)}
+                  {s.isAnchor && targetShown ? <span className="block font-semibold text-ink">target {formatDateRange(view.schedule.targetDate, view.schedule.targetDate)}</span> : null}
+                </span>
               </div>
               {view.warnings
                 .filter((w) => w.stepKey === s.stepKey)

@@ -150,8 +150,9 @@ export function PrescriptionForm({
         const id = fieldForPath(problem.path, steps) ?? (['year', 'targetDate', 'count', 'notes'].includes(problem.path) ? problem.path : null);
         if (id) fields[id] ??= sentence(problem.message);
       }
-      setServerErrors({ fields, message: error.message });
-      toast('error', error.message);
+      const placed = Object.keys(fields).length > 0;
+      setServerErrors({ fields, message: placed ? null : error.message });
+      toast('error', placed ? 'Not saved: correct the marked fields.' : error.message);
     };
     if (existing) {
       update.mutate(

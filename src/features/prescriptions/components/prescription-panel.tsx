@@ -169,7 +169,9 @@ export function PrescriptionPanel({ unit, region }: { unit: PanelUnit; region?: 
           <h2 className="break-words text-lg font-bold">{unit.name}</h2>
           <p className="flex items-center gap-2 text-sm text-slate">
             <span aria-hidden className="inline-block size-3 rounded-sm border" style={{ backgroundColor: style.fill, borderColor: style.stroke }} />
-            {style.label} · <span className="tabular-nums">{measureText(unit)}</span>
+            <span>
+              {style.label} · <span className="tabular-nums">{measureText(unit)}</span>
+            </span>
           </p>
         </div>
       </header>

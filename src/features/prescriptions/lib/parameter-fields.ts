@@ -92,7 +92,8 @@ export function initialParameterTexts(steps: readonly ParameterStep[], parameter
 
 /**
  * `parameters.steps` from the form: every filled value is written (the prescription keeps the rates
- * it was written with), empty boxes are left to the practice, skipped steps carry `skip: true`.
+ * it was written with), skipped steps carry `skip: true`. A box may stay empty only where the
+ * practice has no value either (lime from the soil test); the computation then asks for it.
  * Returns the problems per field id instead when a box holds no usable number.
  */
 export function buildParameters(
@@ -104,11 +105,19 @@ export function buildParameters(
   const out: Record<string, StepParameters> = {};
   for (const step of steps) {
     const params: StepParameters = {};
-    if (skipped.includes(step.stepKey)) params.skip = true;
+    if (skipped.includes(step.stepKey)) {
+      // A skipped step's boxes are hidden, so they are neither checked nor kept.
+      out[step.stepKey] = { skip: true };
+      continue;
+    }
     for (const field of step.fields) {
       const text = texts[field.id] ?? '';
       const value = parseNumberInput(text);
-      if (value === undefined) continue;
+      if (value === undefined) {
+        // An emptied box would silently fall back to the practice's value; ask for a number instead.
+        if (field.practiceValue !== undefined) errors[field.id] = `Enter a number (the practice uses ${field.practiceValue}), or skip the step.`;
+        continue;
+      }
       if (Number.isNaN(value)) {
         errors[field.id] = `“${text.trim()}” is not a number.`;
         continue;
