@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
+import { TextButton } from '../../../components/ui/text-button';
 import { Button } from '../../../components/ui/button';
 import { Card, CautionBox, ErrorPanel, Loading } from '../../../components/ui/card';
 import { TextField } from '../../../components/ui/text-field';
@@ -184,9 +185,9 @@ export function PracticePage() {
               <Button type="button" variant="secondary" onClick={copy} busy={duplicate.isPending}>
                 Duplicate
               </Button>
-              <Button type="button" variant="secondary" className="text-clay hover:border-clay hover:text-clay" onClick={() => setConfirmArchive(true)}>
+              <TextButton tone="clay" onClick={() => setConfirmArchive(true)}>
                 Archive
-              </Button>
+              </TextButton>
             </>
           )}
         </div>

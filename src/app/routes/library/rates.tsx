@@ -2,6 +2,7 @@ import { useState, type KeyboardEvent } from 'react';
 import { get, useForm, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
+import { TextButton } from '../../../components/ui/text-button';
 import { Button } from '../../../components/ui/button';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { useToast } from '../../../components/ui/toast';
@@ -99,12 +100,12 @@ function RateEditRow({ rate, onDone }: { rate?: RateDto; onDone: () => void }) {
         <CellError id={`${rowId}-minimumCents-error`} message={err('minimumCents')} />
       </td>
       <td className="whitespace-nowrap py-2 text-right">
-        <Button type="button" className="px-3 py-1" onClick={() => void save()} busy={create.isPending || update.isPending}>
+        <Button type="button" onClick={() => void save()} busy={create.isPending || update.isPending}>
           Save
         </Button>{' '}
-        <Button type="button" variant="ghost" className="px-2 py-1" onClick={onDone}>
+        <TextButton onClick={onDone}>
           Cancel
-        </Button>
+        </TextButton>
       </td>
     </tr>
   );
@@ -116,9 +117,9 @@ function ArchiveRate({ rate }: { rate: RateDto }) {
   const [confirming, setConfirming] = useState(false);
   if (!confirming) {
     return (
-      <Button type="button" variant="ghost" className="px-2 py-1 text-clay hover:bg-clay/10" aria-label={`Archive ${rate.name}`} onClick={() => setConfirming(true)}>
+      <TextButton tone="clay" aria-label={`Archive ${rate.name}`} onClick={() => setConfirming(true)}>
         Archive
-      </Button>
+      </TextButton>
     );
   }
   return (
@@ -126,7 +127,7 @@ function ArchiveRate({ rate }: { rate: RateDto }) {
       <Button
         type="button"
         variant="danger"
-        className="px-2 py-1"
+       
         busy={archive.isPending}
         onClick={() =>
           archive.mutate(rate.id, {
@@ -140,9 +141,9 @@ function ArchiveRate({ rate }: { rate: RateDto }) {
       >
         Archive it
       </Button>{' '}
-      <Button type="button" variant="ghost" className="px-2 py-1" onClick={() => setConfirming(false)}>
+      <TextButton onClick={() => setConfirming(false)}>
         Keep
-      </Button>
+      </TextButton>
     </>
   );
 }
@@ -196,9 +197,9 @@ export function RatesPage() {
                     <td className="py-2 pr-2 text-right tabular-nums">{formatCents(r.unitPriceCents)}</td>
                     <td className="py-2 pr-2 text-right tabular-nums">{r.minimumCents ? formatCents(r.minimumCents) : '—'}</td>
                     <td className="whitespace-nowrap py-1 text-right">
-                      <Button type="button" variant="ghost" className="px-2 py-1" aria-label={`Edit ${r.name}`} onClick={() => setEditing(r.id)}>
+                      <TextButton aria-label={`Edit ${r.name}`} onClick={() => setEditing(r.id)}>
                         Edit
-                      </Button>
+                      </TextButton>
                       <ArchiveRate rate={r} />
                     </td>
                   </tr>

@@ -1,4 +1,5 @@
 import { Fragment, useState, type ReactNode } from 'react';
+import { TextButton } from '../../../components/ui/text-button';
 import { Button } from '../../../components/ui/button';
 import { useToast } from '../../../components/ui/toast';
 import { formatCents } from '../../../../shared/domain/money';
@@ -70,9 +71,9 @@ function ArchiveButton({ material }: { material: MaterialDto }) {
   const [confirming, setConfirming] = useState(false);
   if (!confirming) {
     return (
-      <Button type="button" variant="ghost" className="px-2 py-1 text-clay hover:bg-clay/10" onClick={() => setConfirming(true)} aria-label={`Archive ${material.name}`}>
+      <TextButton tone="clay" onClick={() => setConfirming(true)} aria-label={`Archive ${material.name}`}>
         Archive
-      </Button>
+      </TextButton>
     );
   }
   return (
@@ -80,7 +81,7 @@ function ArchiveButton({ material }: { material: MaterialDto }) {
       <Button
         type="button"
         variant="danger"
-        className="px-2 py-1"
+       
         busy={archive.isPending}
         onClick={() =>
           archive.mutate(material.id, {
@@ -94,9 +95,9 @@ function ArchiveButton({ material }: { material: MaterialDto }) {
       >
         Archive it
       </Button>
-      <Button type="button" variant="ghost" className="px-2 py-1" onClick={() => setConfirming(false)}>
+      <TextButton onClick={() => setConfirming(false)}>
         Keep
-      </Button>
+      </TextButton>
     </span>
   );
 }
@@ -134,9 +135,9 @@ export function MaterialTable({ kind, materials }: { kind: MaterialKind; materia
                   </td>
                 ))}
                 <td className="whitespace-nowrap py-1 text-right">
-                  <Button type="button" variant="ghost" className="px-2 py-1" onClick={() => setEditingId(editingId === m.id ? null : m.id)} aria-label={`Edit ${m.name}`}>
+                  <TextButton onClick={() => setEditingId(editingId === m.id ? null : m.id)} aria-label={`Edit ${m.name}`}>
                     Edit
-                  </Button>
+                  </TextButton>
                   <ArchiveButton material={m} />
                 </td>
               </tr>

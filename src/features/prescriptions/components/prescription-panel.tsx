@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { TextButton } from '../../../components/ui/text-button';
 import { Button } from '../../../components/ui/button';
 import { EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { useToast } from '../../../components/ui/toast';
@@ -83,9 +84,9 @@ function SavedPrescription({
               <Button type="button" variant="secondary" onClick={onEdit} disabled={busy}>
                 Change
               </Button>
-              <Button type="button" variant="ghost" className="text-clay hover:bg-clay/10" onClick={() => setConfirming(true)}>
+              <TextButton tone="clay" onClick={() => setConfirming(true)}>
                 Delete
-              </Button>
+              </TextButton>
             </div>
           )}
         </div>
