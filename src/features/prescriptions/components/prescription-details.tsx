@@ -74,7 +74,10 @@ export function PrescriptionDetails({ view, summary = true }: { view: Prescripti
   if (view.limeTons > 0) figures.push({ label: 'Lime', value: `${formatQuantity(view.limeTons, 2)} tons` });
   if (view.fertilizerProductLb > 0) figures.push({ label: 'Fertilizer', value: `${formatQuantity(view.fertilizerProductLb, 0)} lb`, note: plural(view.fertilizerBags, 'bag') });
   if (view.herbicideProductGal > 0) figures.push({ label: 'Herbicide', value: `${formatQuantity(view.herbicideProductGal, 2)} gal`, note: plural(view.tankLoads, 'tank load') });
-  if (view.laborHours > 0 || view.equipmentHours > 0) figures.push({ label: 'Hours', value: `${formatQuantity(view.laborHours + view.equipmentHours, 1)} h`, note: `${formatQuantity(view.laborHours, 1)} labor · ${formatQuantity(view.equipmentHours, 1)} equipment` });
+  if (view.laborHours > 0 || view.equipmentHours > 0) {
+    const note = [view.laborHours > 0 ? `${formatQuantity(view.laborHours, 1)} labor` : null, view.equipmentHours > 0 ? `${formatQuantity(view.equipmentHours, 1)} equipment` : null].filter(Boolean).join(' · ');
+    figures.push({ label: 'Hours', value: `${formatQuantity(view.laborHours + view.equipmentHours, 1)} h`, note });
+  }
   return (
     <div className="flex flex-col gap-4 text-sm">
       {summary ? <p className="font-serif leading-relaxed text-ink">{view.summary}</p> : null}
