@@ -2,7 +2,7 @@ import type { ButtonHTMLAttributes } from 'react';
 
 const TONES = {
   moss: 'text-moss-deep hover:bg-moss/10',
-  clay: 'text-clay hover:bg-clay/10',
+  clay: 'text-[#A04A25] hover:bg-clay/10',
 } as const;
 
 /** A compact text-only button for row and card actions; clay for destructive ones (archive, delete). */

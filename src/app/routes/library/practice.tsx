@@ -140,7 +140,7 @@ export function PracticePage() {
   return (
     <div className="flex flex-col gap-4">
       <nav aria-label="Breadcrumb" className="text-sm text-slate">
-        <Link to={paths.libraryPractices} className="text-moss-deep hover:underline">
+        <Link to={paths.libraryPractices} className="text-moss-deep underline">
           Practices
         </Link>{' '}
         › <span>{p.name}</span>

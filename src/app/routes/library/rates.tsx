@@ -24,7 +24,7 @@ const inputClass = (error?: string) =>
 
 function CellError({ id, message }: { id: string; message?: string }) {
   return message ? (
-    <p id={id} className="mt-0.5 text-xs text-clay">
+    <p id={id} className="mt-0.5 text-xs text-[#A04A25]">
       {message}
     </p>
   ) : null;
@@ -71,7 +71,7 @@ function RateEditRow({ rate, onDone }: { rate?: RateDto; onDone: () => void }) {
       <td className="py-2 pr-2">
         <input className={inputClass(err('name'))} {...a11y('name', 'Rate name')} {...form.register('name')} />
         <CellError id={`${rowId}-name-error`} message={err('name')} />
-        {errors.root?.server ? <p role="alert" className="mt-1 text-xs text-clay">{errors.root.server.message}</p> : null}
+        {errors.root?.server ? <p role="alert" className="mt-1 text-xs text-[#A04A25]">{errors.root.server.message}</p> : null}
       </td>
       <td className="py-2 pr-2">
         <select className={inputClass(err('category'))} {...a11y('category', 'Category')} {...form.register('category')}>

@@ -49,7 +49,7 @@ function UnitRow({ unit, prescriptions, selected, onSelect }: { unit: UnitDto; p
               </span>
             ))
           )}
-          {attention ? <span className="block text-xs font-semibold text-clay">Schedule needs attention</span> : null}
+          {attention ? <span className="block text-xs font-semibold text-[#A04A25]">Schedule needs attention</span> : null}
         </span>
         <span className="shrink-0 text-right">
           <span className="block tabular-nums text-slate">{measureText(unit)}</span>

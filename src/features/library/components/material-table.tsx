@@ -47,8 +47,8 @@ const COLUMNS: Record<MaterialKind, Column[]> = {
         m.type === 'herbicide' || m.type === 'adjuvant' ? (
           <>
             {m.activeIngredient}
-            {m.type === 'adjuvant' ? <span className="ml-2 rounded bg-sky/10 px-1.5 text-xs text-sky">adjuvant</span> : null}
-            {m.restrictedUse ? <span className="ml-2 rounded bg-clay/10 px-1.5 text-xs font-semibold text-clay">restricted use</span> : null}
+            {m.type === 'adjuvant' ? <span className="ml-2 rounded border border-sky/40 px-1.5 text-xs text-ink">adjuvant</span> : null}
+            {m.restrictedUse ? <span className="ml-2 rounded bg-clay/10 px-1.5 text-xs font-semibold text-[#A04A25]">restricted use</span> : null}
           </>
         ) : (
           ''

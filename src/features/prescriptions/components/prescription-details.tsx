@@ -44,7 +44,7 @@ function WarningLine({ warning }: { warning: ScheduleWarning }) {
   const isWarning = warning.severity === 'warning';
   return (
     <p className={`mt-1 rounded px-2 py-1 text-xs ${isWarning ? 'border-l-4 border-clay bg-clay/10 text-ink' : 'border-l-4 border-ochre bg-ochre/15 text-ink'}`}>
-      <span className={`font-semibold ${isWarning ? 'text-clay' : 'text-ink'}`}>{isWarning ? 'Warning: ' : 'Note: '}</span>
+      <span className={`font-semibold ${isWarning ? 'text-[#A04A25]' : 'text-ink'}`}>{isWarning ? 'Warning: ' : 'Note: '}</span>
       {warning.message}
     </p>
   );

@@ -49,7 +49,7 @@ function SavedPrescription({
             <span className="block text-xs text-slate">
               Season {prescription.year}
               {prescription.targetDate ? ` · target ${prescription.targetDate}` : ''}
-              {prescription.warnings.some((w) => w.severity === 'warning') ? <span className="ml-1 font-semibold text-clay">· needs attention</span> : null}
+              {prescription.warnings.some((w) => w.severity === 'warning') ? <span className="ml-1 font-semibold text-[#A04A25]">· needs attention</span> : null}
             </span>
           </span>
           <span className="figure shrink-0 font-bold">{formatDollars(prescription.totalCents)}</span>
