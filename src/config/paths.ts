@@ -12,6 +12,12 @@ export const paths = {
   planMap: (id: number | string = ':id') => `/properties/${id}/map`,
   team: '/settings/team',
   mail: '/settings/mail',
+  library: '/library',
+  libraryPractices: '/library/practices',
+  practice: (id: number | string = ':id') => `/library/practices/${id}`,
+  libraryMaterials: '/library/materials',
+  libraryRates: '/library/rates',
+  propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   field: '/field',
   portal: '/portal',
 } as const;
