@@ -11,6 +11,9 @@ import { cautionsForPractice } from '../../shared/domain/cautions';
 import { summarizePrescription } from '../../shared/domain/prescription-summary';
 import { KIND_STYLES } from '../../shared/domain/unit-kinds';
 import type { PrescriptionCreateInput } from '../../shared/schemas/library';
+import type { PrescriptionUpdateSchema } from '../../shared/schemas/library';
+import type { z } from 'zod';
+type PrescriptionUpdateInput = z.infer<typeof PrescriptionUpdateSchema>;
 import type { PrescriptionParameters, UnitMeasures } from '../../shared/domain/practice';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { loadLibrary } from '../services/library/library-reader';
@@ -102,15 +105,16 @@ export async function createPrescription(actor: SessionUser, unitId: number, inp
 }
 
 /** Changes a prescription's parameters or dates and computes it again with the current library. */
-export async function updatePrescription(actor: SessionUser, prescriptionId: number, input: Partial<PrescriptionCreateInput>, ip: string | null): Promise<Prescription> {
+export async function updatePrescription(actor: SessionUser, prescriptionId: number, input: PrescriptionUpdateInput, ip: string | null): Promise<Prescription> {
   const row = await Prescription.findOne({ where: { id: prescriptionId, firmId: actor.firmId } });
   if (!row) throw notFound('That prescription');
   const unit = await findUnit(row.unitId, actor.firmId);
   const practice = await findPractice(row.practiceId, actor.firmId);
   const next = {
     year: input.year ?? row.year,
-    targetDate: input.targetDate !== undefined ? input.targetDate : (row.targetDate ?? undefined),
-    count: input.count ?? row.count ?? undefined,
+    // null clears a value; undefined keeps the stored one.
+    targetDate: input.targetDate !== undefined ? (input.targetDate ?? undefined) : (row.targetDate ?? undefined),
+    count: input.count !== undefined ? (input.count ?? undefined) : (row.count ?? undefined),
     parameters: input.parameters ?? row.parameters,
   };
   const computed = await computePrescriptionRecord({ firmId: actor.firmId, unit, practice, ...next });

@@ -65,8 +65,11 @@ materials.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req
 
 // ---- service rates ----
 
-rates.get('/', STAFF, async (req, res) => {
-  const rows = await ServiceRateEntry.findAll({ where: { firmId: actor(req).firmId, archived: false }, order: [['name', 'ASC']] });
+const RateListQuery = z.object({ includeArchived: z.enum(['true', 'false']).optional() });
+
+rates.get('/', STAFF, validate({ query: RateListQuery }), async (req, res) => {
+  const { includeArchived } = req.validQuery as z.infer<typeof RateListQuery>;
+  const rows = await ServiceRateEntry.findAll({ where: { firmId: actor(req).firmId, ...(includeArchived === 'true' ? {} : { archived: false }) }, order: [['name', 'ASC']] });
   res.json({ data: rows.map(presentRate) });
 });
 
@@ -82,6 +85,7 @@ rates.post('/', STAFF, validate({ body: RateCreateSchema }), async (req, res) =>
 rates.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: RateUpdateSchema }), async (req, res) => {
   const row = await findInFirm(ServiceRateEntry, Number(req.params.id), actor(req).firmId, 'That rate');
   const definition = { ...row.definition, ...req.body, key: row.key };
+  if (req.body.minimumCents === null) delete definition.minimumCents;
   validateServiceRate(definition, 'rate');
   await row.update({ name: definition.name, definition });
   res.json({ data: presentRate(row) });

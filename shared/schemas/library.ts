@@ -89,7 +89,7 @@ export const RateCreateSchema = z.object({
   minimumCents: cents('Minimum charge').optional(),
 });
 export type RateCreateInput = z.infer<typeof RateCreateSchema>;
-export const RateUpdateSchema = RateCreateSchema.partial();
+export const RateUpdateSchema = RateCreateSchema.partial().extend({ minimumCents: cents('Minimum charge').nullish() });
 
 const StepTimingSchema = z.object({ offsetEarliestDays: z.number().int().min(-1000).max(1000), offsetLatestDays: z.number().int().min(-1000).max(1000), source: z.string().max(300) });
 const StepSchema = z.object({
@@ -160,4 +160,4 @@ export const PrescriptionCreateSchema = z.object({
   parameters: PrescriptionParametersSchema.optional(),
 });
 export type PrescriptionCreateInput = z.infer<typeof PrescriptionCreateSchema>;
-export const PrescriptionUpdateSchema = PrescriptionCreateSchema.omit({ practiceId: true }).partial();
+export const PrescriptionUpdateSchema = PrescriptionCreateSchema.omit({ practiceId: true }).partial().extend({ targetDate: isoDate.nullish(), count: z.number().int().min(1).max(1000).nullish() });

@@ -20,6 +20,8 @@ import { MailPage } from './routes/settings/mail';
 import { FieldHomePage } from './routes/field/field-home';
 import { PortalHomePage } from './routes/portal/portal-home';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
+import { libraryRoutes } from './routes/library/library-routes';
+import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
 
 function RootRedirect() {
   const me = useMe();
@@ -50,6 +52,8 @@ const router = createBrowserRouter([
       { path: paths.property(), element: <PropertyPage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
+      libraryRoutes,
+      { path: paths.propertyPrescriptions(), element: <PropertyPrescriptionsPage /> },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
       { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
     ],

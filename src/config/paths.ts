@@ -13,6 +13,12 @@ export const paths = {
   planPrint: (id: number | string = ':id') => `/properties/${id}/print`,
   team: '/settings/team',
   mail: '/settings/mail',
+  library: '/library',
+  libraryPractices: '/library/practices',
+  practice: (id: number | string = ':id') => `/library/practices/${id}`,
+  libraryMaterials: '/library/materials',
+  libraryRates: '/library/rates',
+  propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   field: '/field',
   portal: '/portal',
 } as const;
