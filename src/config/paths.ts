@@ -10,10 +10,15 @@ export const paths = {
   properties: '/properties',
   property: (id: number | string = ':id') => `/properties/${id}`,
   planMap: (id: number | string = ':id') => `/properties/${id}/map`,
+  proposals: '/proposals',
+  proposal: (id: number | string = ':id') => `/proposals/${id}`,
   team: '/settings/team',
   mail: '/settings/mail',
   field: '/field',
   portal: '/portal',
+  portalProposals: '/portal/proposals',
+  /** The link in the proposal e-mail: keep this path. */
+  portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
 } as const;
 
 /** The home of each role after sign-in. */
