@@ -68,15 +68,16 @@ export function linesByGroup(lines: readonly ProposalLineDto[]): { label: string
   return [...groups.entries()].map(([label, ls]) => ({ label, lines: ls }));
 }
 
-function LineTable({ lines, amountOf, includedOf, currency }: { lines: ProposalLineDto[]; amountOf: (l: ProposalLineDto) => number; includedOf: (l: ProposalLineDto) => boolean; currency: string }) {
+function LineTable({ lines, includedOf, currency }: { lines: ProposalLineDto[]; includedOf: (l: ProposalLineDto) => boolean; currency: string }) {
   return (
     <table className="w-full border-collapse text-sm">
       <thead>
         <tr className="border-b border-rule text-left text-xs uppercase tracking-wide text-slate">
           <th scope="col" className="py-1 pr-2 font-semibold">Item</th>
-          <th scope="col" className="hidden py-1 pr-2 text-right font-semibold sm:table-cell">Qty</th>
-          <th scope="col" className="hidden py-1 pr-2 text-right font-semibold sm:table-cell">Unit price</th>
-          <th scope="col" className="py-1 text-right font-semibold">Amount</th>
+          <th scope="col" className="hidden whitespace-nowrap py-1 pr-1 text-right font-semibold sm:table-cell">Qty</th>
+          <th scope="col" className="hidden whitespace-nowrap py-1 pr-2 font-semibold sm:table-cell">Unit</th>
+          <th scope="col" className="hidden whitespace-nowrap py-1 pr-2 text-right font-semibold sm:table-cell">Unit price</th>
+          <th scope="col" className="whitespace-nowrap py-1 text-right font-semibold">Amount</th>
         </tr>
       </thead>
       <tbody>
@@ -91,11 +92,10 @@ function LineTable({ lines, amountOf, includedOf, currency }: { lines: ProposalL
                   {trimDecimal(l.quantity)} {l.unit} × {formatCents(l.unitPriceCents, currency)}
                 </span>
               </td>
-              <td className="hidden whitespace-nowrap py-1.5 pr-2 text-right sm:table-cell">
-                {trimDecimal(l.quantity)} {l.unit}
-              </td>
+              <td className="hidden whitespace-nowrap py-1.5 pr-1 text-right sm:table-cell">{trimDecimal(l.quantity)}</td>
+              <td className="hidden py-1.5 pr-2 text-slate sm:table-cell">{l.unit}</td>
               <td className="hidden whitespace-nowrap py-1.5 pr-2 text-right sm:table-cell">{formatCents(l.unitPriceCents, currency)}</td>
-              <td className="whitespace-nowrap py-1.5 text-right">{included ? formatCents(amountOf(l), currency) : <span title="Not in the total">({formatCents(amountOf(l), currency)})</span>}</td>
+              <td className="whitespace-nowrap py-1.5 text-right">{included ? formatCents(l.amountCents, currency) : <span title="Not in the total">({formatCents(l.amountCents, currency)})</span>}</td>
             </tr>
           );
         })}
@@ -118,7 +118,6 @@ export function LineItemsByUnit({
   includedOf?: (l: ProposalLineDto) => boolean;
 }) {
   const groups = linesByGroup(proposal.lines);
-  const amountOf = (l: ProposalLineDto) => l.amountCents;
   return (
     <div className="flex flex-col gap-3">
       {groups.map((g) => {
@@ -137,7 +136,7 @@ export function LineItemsByUnit({
             </span>
           </span>
         );
-        const table = <LineTable lines={g.lines} amountOf={amountOf} includedOf={includedOf} currency={proposal.currency} />;
+        const table = <LineTable lines={g.lines} includedOf={includedOf} currency={proposal.currency} />;
         return collapsible ? (
           <details key={g.label} className="group rounded border border-rule bg-card px-3 py-2">
             <summary className="flex cursor-pointer list-none items-center gap-2 [&::-webkit-details-marker]:hidden">

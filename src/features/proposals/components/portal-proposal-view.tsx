@@ -228,6 +228,11 @@ export function PortalProposalView({ proposal: p }: { proposal: ProposalDto }) {
                 hint="Your typed name is your signature. It is kept with the date and a fingerprint of this exact proposal."
                 onChange={(e) => setSignedName(e.target.value)}
               />
+              {totals ? (
+                <p className="text-sm">
+                  A deposit of <span className="figure font-bold">{formatCents(totals.depositCents, p.currency)}</span> is due when you approve.
+                </p>
+              ) : null}
               <Button type="submit" busy={approve.isPending} className="w-full py-3 text-base sm:w-auto">
                 Approve{totals ? ` · ${formatCents(totals.totalCents, p.currency)}` : ''}
               </Button>

@@ -23,6 +23,7 @@ import { proposalLabel, proposalPdfUrl, type LineCategory, type ProposalDto } fr
 import {
   CATEGORY_LABELS,
   LINE_CATEGORIES,
+  LINE_LIMITS,
   checkDraft,
   draftFormFrom,
   groupDraftLines,
@@ -34,9 +35,7 @@ import {
   type DraftForm,
   type DraftLine,
   type FieldErrors,
-  type PreviewLine,
 } from '../utils/draft-form';
-import type { PricedLine } from '../../../../shared/domain/proposal-totals';
 import { formatDay } from '../utils/dates';
 import { KindSwatch, TotalsList, groupSize } from './document-parts';
 import { StatusChip } from './status-chip';
@@ -103,7 +102,8 @@ const ROW_GRID = 'grid grid-cols-2 gap-2 sm:grid-cols-4 lg:grid-cols-[minmax(0,1
 interface LineRowProps {
   line: DraftLine;
   number: number;
-  priced: PricedLine<PreviewLine> | undefined;
+  /** The line's amount in cents, when its quantity and price parse. */
+  amountCents: number | undefined;
   errorOf: (key: string) => string | undefined;
   onChange: (patch: Partial<DraftLine>) => void;
   onTouch: (key: string) => void;
@@ -113,7 +113,7 @@ interface LineRowProps {
 }
 
 /** One editable line: description, category, quantity, unit, unit price, taxable, optional, amount. */
-function LineRow({ line, number, priced, errorOf, onChange, onTouch, onRemove, autoFocus, currency }: LineRowProps) {
+function LineRow({ line, number, amountCents, errorOf, onChange, onTouch, onRemove, autoFocus, currency }: LineRowProps) {
   const categoryId = useId();
   const f = (field: keyof DraftLine) => lineField(line.key, field);
   const lineError = errorOf(lineField(line.key, 'line'));
@@ -147,13 +147,13 @@ function LineRow({ line, number, priced, errorOf, onChange, onTouch, onRemove, a
       <LineCheckbox label="Taxable" checked={line.taxable} onChange={(taxable) => onChange({ taxable })} />
       <LineCheckbox label="Optional" checked={line.optional} onChange={(optional) => onChange({ optional })} />
       <p className="figure self-center py-1.5 text-right text-sm tabular-nums" aria-label="Amount">
-        {priced ? (
+        {amountCents !== undefined ? (
           line.optional ? (
             <span className="text-slate" title="An option: counts once the client chooses it">
-              ({formatCents(priced.amountCents, currency)})
+              ({formatCents(amountCents, currency)})
             </span>
           ) : (
-            formatCents(priced.amountCents, currency)
+            formatCents(amountCents, currency)
           )
         ) : (
           <span className="text-slate">—</span>
@@ -190,6 +190,9 @@ function Notice({ children, tone = 'clay' }: { children: ReactNode; tone?: 'clay
     </div>
   );
 }
+
+/** The form's own fields that show an error beside them. */
+const SHOWN_FIELDS = new Set(['title', 'expiresOn', 'introduction', 'terms', 'taxRatePct', 'depositPct', 'discount', 'lines']);
 
 const countFields = (n: number) => `${n} marked ${n === 1 ? 'field' : 'fields'}`;
 
@@ -251,7 +254,7 @@ export function ProposalBuilder({ proposal }: { proposal: ProposalDto }) {
   const addGroup = () => {
     const name = newGroup.trim();
     if (!name) return setNewGroupError('Name the group first, e.g. “Fencing” or “Site visit”.');
-    if (name.length > 120) return setNewGroupError('Keep the group name under 120 characters.');
+    if (name.length > LINE_LIMITS.groupLabelMax) return setNewGroupError(`Keep the group name to ${LINE_LIMITS.groupLabelMax} characters.`);
     if (groups.some((g) => g.label === name)) return setNewGroupError(`“${name}” is a group already; use its “Add a line”.`);
     setNewGroupError(undefined);
     setNewGroup('');
@@ -260,10 +263,14 @@ export function ProposalBuilder({ proposal }: { proposal: ProposalDto }) {
 
   const showError = (e: unknown, what: string) => {
     const message = e instanceof Error ? e.message : 'Something went wrong.';
-    if (e instanceof ApiError && e.status === 422) setServerErrors(serverFieldErrors(form, e.message, e.details));
     if (e instanceof ApiError && e.status === 409) void qc.invalidateQueries({ queryKey: ['proposals', 'detail', proposal.id] });
-    setNotice(`${what}: ${message}`);
-    toast('error', `${what}: ${message}`);
+    const fieldErrors = e instanceof ApiError && e.status === 422 ? serverFieldErrors(form, e.message, e.details) : {};
+    setServerErrors(fieldErrors);
+    const keys = Object.keys(fieldErrors);
+    const marked = keys.every((k) => k.startsWith('lines.') || SHOWN_FIELDS.has(k)) ? keys.length : 0;
+    const text = marked ? `${what}. Fix the ${countFields(marked)} and try again.` : `${what}: ${message}`;
+    setNotice(text);
+    toast('error', text);
   };
 
   /** Saves the draft; the answer (re-priced by the server) becomes the form. */
@@ -460,7 +467,7 @@ export function ProposalBuilder({ proposal }: { proposal: ProposalDto }) {
                   key={line.key}
                   line={line}
                   number={index + 1}
-                  priced={pricedByKey.get(line.key)}
+                  amountCents={check.lineAmounts.get(line.key)}
                   errorOf={errorOf}
                   onChange={(patch) => setLine(line.key, patch)}
                   onTouch={touch}

@@ -1,7 +1,6 @@
 /** A sent, decided or withdrawn proposal as the consultant reads it: a document, read-only, with Revise and Withdraw. */
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
-import { formatCents } from '../../../../shared/domain/money';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
@@ -93,9 +92,11 @@ export function ProposalDocument({ proposal: p }: { proposal: ProposalDto }) {
             <a href={proposalPdfUrl(p.id)} target="_blank" rel="noopener" className={buttonClasses('secondary')}>
               PDF
             </a>
-            <Button onClick={startRevision} busy={revise.isPending}>
-              Revise
-            </Button>
+            {p.status !== 'approved' ? (
+              <Button onClick={startRevision} busy={revise.isPending}>
+                Revise
+              </Button>
+            ) : null}
             {canWithdraw ? (
               <Button variant="danger-outline" onClick={() => setWithdrawing(true)}>
                 Withdraw
@@ -138,7 +139,7 @@ export function ProposalDocument({ proposal: p }: { proposal: ProposalDto }) {
         <div className="flex flex-col gap-4 xl:sticky xl:top-4">
           <Card title="Totals">
             <TotalsList totals={p} taxRatePct={p.taxRatePct} depositPct={p.depositPct} discount={p.discount} currency={p.currency} />
-            <p className="mt-2 text-xs text-slate">Valid until {formatDay(p.expiresOn)}. Total {formatCents(p.totalCents, p.currency)}.</p>
+            {p.status === 'sent' || p.status === 'expired' ? <p className="mt-2 text-xs text-slate">Valid until {formatDay(p.expiresOn)}.</p> : null}
           </Card>
           <VersionsList proposalId={p.id} />
         </div>

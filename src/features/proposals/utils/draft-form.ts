@@ -5,7 +5,7 @@
  */
 import { DomainValidationError } from '../../../../shared/domain/errors';
 import { parseDollarsToCents } from '../../../../shared/domain/money';
-import { MAX_TAX_RATE_PCT, proposalTotals, type OrderDiscount, type ProposalLineInput, type ProposalTotals } from '../../../../shared/domain/proposal-totals';
+import { MAX_TAX_RATE_PCT, lineAmountCents, proposalTotals, type OrderDiscount, type ProposalLineInput, type ProposalTotals } from '../../../../shared/domain/proposal-totals';
 import type { ProposalUpdateInput } from '../../../../shared/schemas/proposal';
 import type { LineCategory, ProposalDto, ProposalLineDto } from '../api/types';
 
@@ -13,6 +13,9 @@ export type DiscountKind = OrderDiscount['kind'];
 
 export const LINE_CATEGORIES: readonly LineCategory[] = ['materials', 'labor', 'equipment', 'fees'];
 export const CATEGORY_LABELS: Record<LineCategory, string> = { materials: 'Materials', labor: 'Labor', equipment: 'Equipment', fees: 'Fees' };
+
+/** Text limits of a line, as in ProposalLineInputSchema (shared/schemas/proposal.ts). */
+export const LINE_LIMITS = { descriptionMax: 300, unitMax: 40, groupLabelMax: 120 } as const;
 
 /** Largest unit price the API takes, in cents ($1,000,000.00). */
 export const MAX_UNIT_PRICE_CENTS = 100_000_000;
@@ -167,6 +170,8 @@ export interface DraftCheck {
   input: ProposalUpdateInput | null;
   /** Live totals, whenever every figure parses (text problems elsewhere do not hide them). */
   totals: ProposalTotals<PreviewLine> | null;
+  /** Each line's amount in cents by line key, for every line whose quantity and price parse. */
+  lineAmounts: Map<string, number>;
 }
 
 /**
@@ -202,10 +207,15 @@ export function checkDraft(form: DraftForm): DraftCheck {
   }
 
   const preview: PreviewLine[] = [];
+  const lineAmounts = new Map<string, number>();
   form.lines.forEach((line, index) => {
-    if (line.description.trim() === '') errors[lineField(line.key, 'description')] = 'Describe the line.';
-    if (line.unit.trim() === '') errors[lineField(line.key, 'unit')] = 'Give the unit (acre, hour, each…).';
-    if (line.groupLabel.trim() === '') errors[lineField(line.key, 'groupLabel')] = 'Name the group.';
+    const description = line.description.trim();
+    if (description === '') errors[lineField(line.key, 'description')] = 'Describe the line.';
+    else if (description.length > LINE_LIMITS.descriptionMax) errors[lineField(line.key, 'description')] = `Keep the description to ${LINE_LIMITS.descriptionMax} characters (it has ${description.length}).`;
+    const unit = line.unit.trim();
+    if (unit === '') errors[lineField(line.key, 'unit')] = 'Give the unit (acre, hour, each…).';
+    else if (unit.length > LINE_LIMITS.unitMax) errors[lineField(line.key, 'unit')] = `Keep the unit to ${LINE_LIMITS.unitMax} characters, e.g. “2.5-gal container”.`;
+    if (line.groupLabel.trim() === '') errors[lineField(line.key, 'line')] = 'The line’s group has no name.';
     const qError = decimalError(line.quantity, 'Quantity');
     if (qError) errors[lineField(line.key, 'quantity')] = qError;
     const price = dollarsOf(line.unitPrice, 'Unit price');
@@ -214,6 +224,7 @@ export function checkDraft(form: DraftForm): DraftCheck {
       moneyOk = false;
       return;
     }
+    lineAmounts.set(line.key, lineAmountCents(line.quantity.trim(), price.cents));
     preview.push({
       key: line.key,
       id: `line-${String(index).padStart(9, '0')}`,
@@ -262,18 +273,15 @@ export function checkDraft(form: DraftForm): DraftCheck {
         })),
       }
     : null;
-  return { errors, input, totals };
+  return { errors, input, totals, lineAmounts };
 }
 
+/** The line inputs that show their own error; problems with anything else of a line show under the whole line. */
 const LINE_FIELDS: Record<string, keyof DraftLine> = {
   unitPriceCents: 'unitPrice',
   quantity: 'quantity',
   description: 'description',
   unit: 'unit',
-  groupLabel: 'groupLabel',
-  category: 'category',
-  taxable: 'taxable',
-  optional: 'optional',
 };
 
 /**

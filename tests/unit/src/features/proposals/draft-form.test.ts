@@ -163,6 +163,23 @@ describe('live totals while editing a draft', () => {
     expect(errors[lineField('r', 'quantity')]).toMatch(/at most 4 decimals/);
   });
 
+  it('still prices the lines that parse when another line blocks the totals', () => {
+    // 2 × $10.00 = 2,000 ¢ (by hand); the other line's price is missing.
+    const { totals, lineAmounts, errors } = checkDraft(form({ lines: [line({ key: 'ok', quantity: '2' }), line({ key: 'no', unitPrice: '' })] }));
+    expect(totals).toBeNull();
+    expect(lineAmounts.get('ok')).toBe(2000);
+    expect(lineAmounts.has('no')).toBe(false);
+    expect(errors[lineField('no', 'unitPrice')]).toBe('Unit price is missing.');
+  });
+
+  it('holds text to the API schema’s limits before sending', () => {
+    // Limits of ProposalLineInputSchema (shared/schemas/proposal.ts): unit ≤ 40, description ≤ 300 characters.
+    const { errors } = checkDraft(form({ lines: [line({ key: 'u', unit: 'x'.repeat(41), description: 'd'.repeat(301) })] }));
+    expect(errors[lineField('u', 'unit')]).toMatch(/40 characters/);
+    expect(errors[lineField('u', 'description')]).toMatch(/300 characters \(it has 301\)/);
+    expect(checkDraft(form({ lines: [line({ key: 'u', unit: 'x'.repeat(40) })] })).errors).toEqual({});
+  });
+
   it('refuses a tax rate above the domain’s guard and a fixed discount above the subtotal', () => {
     // MAX_TAX_RATE_PCT = 30 (shared/domain/proposal-totals.ts, common practice, no source).
     expect(checkDraft(form({ taxRatePct: '72.5' })).errors.taxRatePct).toMatch(/more than 30 %/);
