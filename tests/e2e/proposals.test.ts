@@ -97,6 +97,12 @@ describe('a proposal from the plan to the landowner’s approval', () => {
     await poll(() => page.getByText(/not opened by the client yet/).count()).toBe(1);
     sentTotalCents = await figureCents(page, 'total');
     expect(sentTotalCents).toBe(expectedTotal);
+    // The PDF link serves the document.
+    const pdfHref = await page.getByRole('link', { name: 'PDF', exact: true }).getAttribute('href');
+    const pdf = await page.request.get(`${baseUrl}${pdfHref}`);
+    expect(pdf.status()).toBe(200);
+    expect(pdf.headers()['content-type']).toBe('application/pdf');
+    expect((await pdf.body()).subarray(0, 5).toString()).toBe('%PDF-');
     await screenshot(page, 'proposal-sent-consultant');
     watch.assertClean();
     await context.close();
@@ -159,5 +165,47 @@ describe('a proposal from the plan to the landowner’s approval', () => {
     await screenshot(staff, 'proposal-approved-consultant');
     staffWatch.assertClean();
     await desk.close();
+  });
+
+  it('tells a landowner who approves a version the consultant has just withdrawn why it did not go through', async () => {
+    // The consultant drafts and sends a second proposal for the same farm.
+    const desk = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const staff = await desk.newPage();
+    await signIn(staff, baseUrl, 'consultant@browseline.test');
+    await staff.waitForURL(`${baseUrl}/desk`);
+    await staff.goto(`${baseUrl}/properties`);
+    await staff.getByRole('link', { name: 'Kettle Hollow Farm', exact: true }).click();
+    await staff.getByRole('button', { name: 'New proposal' }).click();
+    await staff.waitForURL(/\/proposals\/\d+$/);
+    const secondId = Number(new URL(staff.url()).pathname.split('/').pop());
+    expect(secondId).not.toBe(proposalId);
+    await staff.getByRole('button', { name: 'Send to client…' }).click();
+    await staff.getByRole('dialog').getByRole('button', { name: 'Send proposal' }).click();
+    await poll(() => staff.locator('[data-status="sent"]').count()).toBeGreaterThan(0);
+
+    // The landowner opens it from the e-mail's link and starts to approve …
+    const phone = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const page = await phone.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'client@browseline.test');
+    await page.waitForURL(`${baseUrl}/portal`);
+    await page.goto(`${baseUrl}/portal/proposals/${secondId}`);
+    await page.getByLabel('Type your full name to approve').fill('Priya Okonkwo');
+
+    // … while the consultant withdraws it.
+    await staff.getByRole('button', { name: 'Withdraw' }).click();
+    await staff.getByRole('dialog').getByRole('button', { name: 'Withdraw' }).click();
+    await poll(() => staff.locator('[data-status="withdrawn"]').count()).toBeGreaterThan(0);
+    await desk.close();
+
+    await page.getByRole('button', { name: /^Approve/ }).click();
+    // The server's 409 (server/commands/proposal-approver.ts) in words, and the page as it stands now.
+    await poll(() => page.getByRole('alert').filter({ hasText: 'withdrawn by your consultant' }).count()).toBe(1);
+    await poll(() => page.locator('[data-status="withdrawn"]').count()).toBeGreaterThan(0);
+    expect(await page.getByLabel('Type your full name to approve').count()).toBe(0);
+    expect(await page.getByText(/Approved by/).count()).toBe(0);
+    await screenshot(page, 'portal-proposal-withdrawn-phone');
+    watch.assertClean();
+    await phone.close();
   });
 });
