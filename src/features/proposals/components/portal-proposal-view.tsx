@@ -139,7 +139,7 @@ export function PortalProposalView({ proposal: p }: { proposal: ProposalDto }) {
       {p.status === 'approved' && p.approval ? <ApprovalRecord approval={p.approval} lines={p.lines} /> : null}
       {p.status === 'declined' ? (
         <section aria-label="Your decision" className="rounded-md border-l-4 border-clay bg-clay/5 px-4 py-3 text-sm">
-          <p className="font-semibold text-clay">You declined this on {p.decidedAt ? formatMoment(p.decidedAt) : '—'}.</p>
+          <p className="font-semibold text-[#8E3F2A]">You declined this on {p.decidedAt ? formatMoment(p.decidedAt) : '—'}.</p>
           {p.declineReason ? <p className="mt-1 whitespace-pre-line">Your reason: {p.declineReason}</p> : null}
         </section>
       ) : null}

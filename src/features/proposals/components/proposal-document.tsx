@@ -24,7 +24,7 @@ function StateNote({ p }: { p: ProposalDto }) {
     case 'declined':
       return (
         <section aria-label="Decline" className="rounded-md border-l-4 border-clay bg-clay/5 px-4 py-3 text-sm">
-          <p className="font-serif text-base font-bold text-clay">Declined on {p.decidedAt ? formatMoment(p.decidedAt) : '—'}</p>
+          <p className="font-serif text-base font-bold text-[#8E3F2A]">Declined on {p.decidedAt ? formatMoment(p.decidedAt) : '—'}</p>
           <p className="mt-1 whitespace-pre-line">
             <span className="font-semibold">The client’s reason: </span>
             {p.declineReason ?? 'none given'}
