@@ -19,6 +19,10 @@ import { TeamPage } from './routes/settings/team';
 import { MailPage } from './routes/settings/mail';
 import { FieldHomePage } from './routes/field/field-home';
 import { PortalHomePage } from './routes/portal/portal-home';
+import { PortalProposalsPage } from './routes/portal/portal-proposals';
+import { PortalProposalPage } from './routes/portal/portal-proposal';
+import { ProposalsPage } from './routes/proposals/proposals';
+import { ProposalPage } from './routes/proposals/proposal';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
 import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
@@ -50,6 +54,8 @@ const router = createBrowserRouter([
       { path: paths.client(), element: <ClientPage /> },
       { path: paths.properties, element: <PropertiesPage /> },
       { path: paths.property(), element: <PropertyPage /> },
+      { path: paths.proposals, element: <ProposalsPage /> },
+      { path: paths.proposal(), element: <ProposalPage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,
@@ -83,7 +89,11 @@ const router = createBrowserRouter([
       </RequireRole>
     ),
     errorElement: <RouteErrorPage />,
-    children: [{ path: paths.portal, element: <PortalHomePage /> }],
+    children: [
+      { path: paths.portal, element: <PortalHomePage /> },
+      { path: paths.portalProposals, element: <PortalProposalsPage /> },
+      { path: paths.portalProposal(), element: <PortalProposalPage /> },
+    ],
   },
   { path: '*', element: <NotFoundPage /> },
 ]);

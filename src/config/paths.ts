@@ -11,6 +11,8 @@ export const paths = {
   property: (id: number | string = ':id') => `/properties/${id}`,
   planMap: (id: number | string = ':id') => `/properties/${id}/map`,
   planPrint: (id: number | string = ':id') => `/properties/${id}/print`,
+  proposals: '/proposals',
+  proposal: (id: number | string = ':id') => `/proposals/${id}`,
   team: '/settings/team',
   mail: '/settings/mail',
   library: '/library',
@@ -21,6 +23,9 @@ export const paths = {
   propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   field: '/field',
   portal: '/portal',
+  portalProposals: '/portal/proposals',
+  /** The link in the proposal e-mail: keep this path. */
+  portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
 } as const;
 
 /** The home of each role after sign-in. */

@@ -19,6 +19,11 @@ export function PortalLayout() {
                 Your land
               </NavLink>
             </li>
+            <li>
+              <NavLink to={paths.portalProposals} className={({ isActive }) => `inline-block border-b-2 py-2 ${isActive ? 'border-moss font-semibold text-moss-deep' : 'border-transparent text-slate hover:text-ink'}`}>
+                Proposals
+              </NavLink>
+            </li>
           </ul>
         </nav>
       </header>

@@ -29,7 +29,7 @@ export function EmptyState({ title, children }: { title: string; children?: Reac
 export function CautionBox({ title, children }: { title: string; children: ReactNode }) {
   return (
     <aside role="note" aria-label={title} className="rounded-md border-l-4 border-clay bg-clay/5 px-4 py-3 text-sm text-ink">
-      <p className="mb-1 font-semibold text-[#A04A25]">{title}</p>
+      <p className="mb-1 font-semibold text-[#8E3F2A]">{title}</p>
       {children}
     </aside>
   );

@@ -5,6 +5,7 @@ import { useProperty } from '../../../features/properties/api/get-property';
 import { useDeleteProperty } from '../../../features/properties/api/delete-property';
 import { EditPropertyForm, regionLabel } from '../../../features/properties/components/property-form';
 import { BoundaryPreview } from '../../../features/properties/components/boundary-preview';
+import { PropertyProposalsCard } from '../../../features/proposals/components/property-proposals-card';
 import { useClients } from '../../../features/clients/api/get-clients';
 import { Card, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -122,6 +123,8 @@ export function PropertyPage() {
           )}
         </Card>
       </div>
+
+      <PropertyProposalsCard propertyId={p.id} propertyName={p.name} />
 
       <ConfirmDialog
         open={confirming}
