@@ -45,7 +45,6 @@ export type ProposalCreateInput = z.infer<typeof ProposalCreateSchema>;
 export const ProposalUpdateSchema = ProposalCreateSchema.omit({ prescriptionIds: true }).extend({
   expiresOn: isoDate.nullish(),
   lines: z.array(ProposalLineInputSchema).max(500).optional(),
-  /** Which lines are taxable, by line id (a shortcut for the lines array). */
 });
 export type ProposalUpdateInput = z.infer<typeof ProposalUpdateSchema>;
 

@@ -91,10 +91,11 @@ describe('plan map', () => {
     const page = await context.newPage();
     const watch = watchPage(page);
     page.on('dialog', (d) => void d.accept());
-    await openPlanMap(page, 'Sawmill Ridge 80');
+    // North 40 is used by no other journey, so replacing its boundary disturbs none of them.
+    await openPlanMap(page, 'Kettle Hollow — North 40');
 
-    // A 600 m × 540 m rectangle near the demo tract: 324,000 m², about 80 acres.
-    const outline = rectangle(-90.7515, 43.4440, 600, 540);
+    // A 600 m × 540 m rectangle: 324,000 m², about 80 acres.
+    const outline = rectangle(-90.9412, 43.2732, 600, 540);
     const coords = outline.coordinates[0].map(([lon, lat]) => `${lon.toFixed(7)},${lat.toFixed(7)}`).join(' ');
     const kml = `<?xml version="1.0" encoding="UTF-8"?>
 <kml xmlns="http://www.opengis.net/kml/2.2"><Document><name>Survey</name>

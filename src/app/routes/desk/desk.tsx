@@ -4,6 +4,8 @@ import { useMe } from '../../../features/auth/api/get-me';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { describeAction, formatAcres, formatRelative } from '../../../lib/format';
 import { paths } from '../../../config/paths';
+import { SeasonStrip } from '../../../features/desk/components/season-strip';
+import { formatCents } from '../../../../shared/domain/money';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -34,6 +36,46 @@ export function DeskPage() {
         <Figure label="Acres under plan" value={d.counts.totalAcres.toLocaleString('en-US')} />
         <Figure label="Crew members" value={String(d.counts.crew)} />
       </div>
+      <div className="grid gap-4 lg:grid-cols-2">
+        <Card title="Waiting on landowners" action={<Link to={paths.proposals} className="text-sm text-moss-deep hover:underline">All proposals</Link>}>
+          {d.waiting.length === 0 ? (
+            <EmptyState title="No proposals out">Write prescriptions on a property, then draft a proposal from its page.</EmptyState>
+          ) : (
+            <ul className="flex flex-col gap-2">
+              {d.waiting.map((w) => (
+                <li key={w.id} className="rounded border border-rule bg-paper/60 px-3 py-2 text-sm">
+                  <Link to={paths.proposal(w.id)} className="font-semibold text-ink hover:underline">
+                    {w.number}{w.version > 1 ? ` v${w.version}` : ''} · {w.propertyName}
+                  </Link>
+                  <span className="block text-slate">
+                    {w.clientName} · <span className="figure text-ink">{formatCents(w.totalCents)}</span> · {w.firstViewedAt ? `opened ${formatRelative(w.firstViewedAt)}` : 'not opened yet'}
+                    {w.expiresOn ? ` · valid until ${w.expiresOn}` : ''}
+                  </span>
+                </li>
+              ))}
+            </ul>
+          )}
+        </Card>
+        <Card title="In the window">
+          {d.inWindow.length === 0 ? (
+            <EmptyState title="No step is in its window today">Steps of your prescriptions show here while their planting or work window is open.</EmptyState>
+          ) : (
+            <ul className="flex flex-col gap-2">
+              {d.inWindow.map((s) => (
+                <li key={`${s.prescriptionId}-${s.stepName}`} className="rounded border border-rule bg-paper/60 px-3 py-2 text-sm">
+                  <span className="font-semibold text-ink">{s.stepName}</span> · {s.unitName}
+                  <span className="block text-slate">
+                    {s.propertyName} · {s.practiceName} · closes <span className="text-clay">{s.latest}</span>
+                  </span>
+                </li>
+              ))}
+            </ul>
+          )}
+        </Card>
+      </div>
+      <Card title="The season">
+        <SeasonStrip season={d.season} />
+      </Card>
       <div className="grid gap-4 lg:grid-cols-3">
         <Card title="Properties" className="lg:col-span-2" action={<Link to={paths.clients} className="text-sm text-moss-deep hover:underline">All clients</Link>}>
           {d.recentProperties.length === 0 ? (
