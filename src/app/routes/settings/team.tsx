@@ -12,6 +12,7 @@ import { Button } from '../../../components/ui/button';
 import { useToast } from '../../../components/ui/toast';
 import { formatRelative } from '../../../lib/format';
 import { paths } from '../../../config/paths';
+import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Client contact' };
 const STATUS_STYLE: Record<string, string> = { active: 'bg-moss/10 text-moss-deep', invited: 'bg-ochre/20 text-ink', disabled: 'bg-rule text-slate' };
@@ -79,6 +80,11 @@ export function TeamPage() {
         <h1 className="text-2xl font-bold">Settings · Team</h1>
         {isOwner ? <Link className="text-sm text-moss-deep hover:underline" to={paths.mail}>Captured mail (development)</Link> : null}
       </div>
+      {isOwner ? (
+        <Card title="Firm settings">
+          <FirmSettingsForm />
+        </Card>
+      ) : null}
       <Card title="Invite someone">
         <InviteForm isOwner={isOwner} />
       </Card>

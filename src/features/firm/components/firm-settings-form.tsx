@@ -1,0 +1,53 @@
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { TileUrlTemplateSchema } from '../../../../shared/schemas/firm';
+import { useFirm, useUpdateFirmSettings } from '../api/firm';
+import { TextField } from '../../../components/ui/text-field';
+import { Button } from '../../../components/ui/button';
+import { ErrorPanel, Loading } from '../../../components/ui/card';
+import { useToast } from '../../../components/ui/toast';
+
+const FormSchema = z.object({
+  tileUrlTemplate: z.union([z.literal(''), TileUrlTemplateSchema]),
+  tileAttribution: z.string().trim().max(200),
+  taxRatePct: z.coerce.number({ message: 'enter the rate as a number' }).min(0, { message: 'cannot be negative' }).max(30, { message: 'above 30 % looks like a typing slip' }),
+});
+
+/** The owner's firm settings: imagery tile service and the default sales-tax rate. */
+export function FirmSettingsForm() {
+  const firm = useFirm();
+  if (firm.isPending) return <Loading />;
+  if (firm.isError) return <ErrorPanel error={firm.error} />;
+  const s = firm.data.settings;
+  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct }} />;
+}
+
+function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema> }) {
+  const update = useUpdateFirmSettings();
+  const toast = useToast();
+  const form = useForm<z.input<typeof FormSchema>, unknown, z.output<typeof FormSchema>>({ resolver: zodResolver(FormSchema), defaultValues: defaults });
+  const submit = form.handleSubmit((v) =>
+    update.mutate(
+      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct },
+      { onSuccess: () => toast('success', 'Firm settings saved.'), onError: (e) => toast('error', e.message) },
+    ),
+  );
+  return (
+    <form onSubmit={submit} noValidate className="grid gap-3 md:grid-cols-2">
+      <TextField
+        className="md:col-span-2"
+        label="Imagery tile service (XYZ address)"
+        placeholder="https://tiles.example.com/{z}/{x}/{y}.jpg"
+        hint="Optional. When set, plan maps show this imagery under the plan. Leave empty for the plain offline background."
+        error={form.formState.errors.tileUrlTemplate?.message}
+        {...form.register('tileUrlTemplate')}
+      />
+      <TextField label="Imagery credit line" placeholder="Imagery © your provider" error={form.formState.errors.tileAttribution?.message} {...form.register('tileAttribution')} />
+      <TextField label="Sales tax rate (%)" inputMode="decimal" hint="The default on new proposals; each proposal can change it." error={form.formState.errors.taxRatePct?.message} {...form.register('taxRatePct')} />
+      <div className="md:col-span-2">
+        <Button type="submit" busy={update.isPending}>Save firm settings</Button>
+      </div>
+    </form>
+  );
+}
