@@ -2,6 +2,7 @@ import type { Proposal, ProposalApproval, ProposalLine } from '../models';
 import { priceProposal } from '../services/proposals/pricing';
 import type { ProposalDisplayStatus } from '../../shared/schemas/proposal';
 import { todayIso } from '../commands/prescription-writer';
+import type { ProposalDto } from '../../shared/schemas/proposal-dto';
 
 /** The state people see: a sent proposal past its date is expired. */
 export function displayStatus(p: Proposal): ProposalDisplayStatus {
@@ -18,7 +19,7 @@ export interface ProposalContext {
 }
 
 /** A proposal with its priced lines, totals, state and approval record. */
-export function presentProposal(p: Proposal, lines: ProposalLine[], approval: ProposalApproval | null, ctx: ProposalContext) {
+export function presentProposal(p: Proposal, lines: ProposalLine[], approval: ProposalApproval | null, ctx: ProposalContext): ProposalDto {
   const totals = priceProposal(p, lines);
   return {
     id: p.id,
@@ -76,4 +77,3 @@ export function presentProposal(p: Proposal, lines: ProposalLine[], approval: Pr
     updatedAt: p.updatedAt.toISOString(),
   };
 }
-export type ProposalDto = ReturnType<typeof presentProposal>;

@@ -15,6 +15,7 @@ import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
 import { displayStatus } from '../presenters/proposal';
 import { notFound } from '../errors';
 import { todayIso } from '../commands/prescription-writer';
+import type { ProposalRowDto } from '../../shared/schemas/proposal-dto';
 
 const perProperty = defineRoutes('/properties');
 const r = defineRoutes('/proposals');
@@ -39,7 +40,7 @@ async function listRows(where: WhereOptions) {
   ]);
   const propertyName = new Map(properties.map((p) => [p.id, p.name]));
   const clientName = new Map(clients.map((c) => [c.id, c.name]));
-  return rows.map((p) => ({
+  return rows.map((p): ProposalRowDto => ({
     id: p.id,
     seriesId: p.seriesId ?? p.id,
     number: p.number,

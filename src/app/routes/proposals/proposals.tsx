@@ -2,7 +2,7 @@ import { useSearchParams } from 'react-router-dom';
 import { formatCents } from '../../../../shared/domain/money';
 import { PROPOSAL_STATES } from '../../../../shared/schemas/proposal';
 import { useProposals } from '../../../features/proposals/api/get-proposals';
-import { proposalLabel, type ProposalRowDto, type ProposalStatus } from '../../../features/proposals/api/types';
+import { proposalLabel, type ProposalRowDto, type ProposalStatus } from '../../../../shared/schemas/proposal-dto';
 import { StatusChip, STATUS_LABELS } from '../../../features/proposals/components/status-chip';
 import { formatMomentDay } from '../../../features/proposals/utils/dates';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ApproveInput } from '../../../../shared/schemas/proposal';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { storeProposal } from './proposal-cache';
 
 /** The client approves a sent proposal with their typed name and the options they chose. */

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { ProposalCreateInput } from '../../../../shared/schemas/proposal';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { storeProposal } from './proposal-cache';
 
 /** Drafts a proposal for a property from its prescriptions (all of them unless some are chosen). */

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { storeProposal } from './proposal-cache';
 
 /** The client declines a sent proposal, telling the consultant why. */

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getData } from '../../../lib/api-client';
-import type { ProposalRowDto } from './types';
+import type { ProposalRowDto } from '../../../../shared/schemas/proposal-dto';
 
 /** Every proposal (all versions) of one property, newest first. */
 export const getPropertyProposals = (propertyId: number, signal?: AbortSignal) => getData<ProposalRowDto[]>(`/api/properties/${propertyId}/proposals`, signal);

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getData } from '../../../lib/api-client';
-import type { ProposalRowDto } from './types';
+import type { ProposalRowDto } from '../../../../shared/schemas/proposal-dto';
 
 /** Every version of the proposal's series, newest first (staff). */
 export const getProposalVersions = (id: number, signal?: AbortSignal) => getData<ProposalRowDto[]>(`/api/proposals/${id}/versions`, signal);

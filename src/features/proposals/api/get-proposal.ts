@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getData } from '../../../lib/api-client';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 
 /** One proposal with lines, totals, unit summaries, cautions and its approval record. */
 export const getProposal = (id: number, signal?: AbortSignal) => getData<ProposalDto>(`/api/proposals/${id}`, signal);

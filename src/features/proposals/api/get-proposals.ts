@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { getData } from '../../../lib/api-client';
-import type { ProposalRowDto, ProposalStatus } from './types';
+import type { ProposalRowDto, ProposalStatus } from '../../../../shared/schemas/proposal-dto';
 
 export interface ProposalListFilter {
   status?: ProposalStatus;

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 
 /**
  * After a write: the answer becomes the cached detail, and every other proposal query (lists,

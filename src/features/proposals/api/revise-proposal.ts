@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { storeProposal } from './proposal-cache';
 
 /** Makes a new draft version with the same lines; a sent earlier version is withdrawn. */

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { ProposalDto } from './types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { storeProposal } from './proposal-cache';
 
 /** Sends a draft to the client: it becomes read-only and the e-mail with the PDF and portal link is queued. */

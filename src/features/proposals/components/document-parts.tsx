@@ -5,7 +5,7 @@ import type { OrderDiscount } from '../../../../shared/domain/proposal-totals';
 import { KIND_STYLES, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import { CautionBox } from '../../../components/ui/card';
 import { formatAcres, formatFeet } from '../../../lib/format';
-import type { ProposalApprovalDto, ProposalDto, ProposalGroupDto, ProposalLineDto } from '../api/types';
+import type { ProposalApprovalDto, ProposalDto, ProposalGroupDto, ProposalLineDto } from '../../../../shared/schemas/proposal-dto';
 import { trimDecimal, percentText } from '../utils/draft-form';
 import { formatMoment } from '../utils/dates';
 

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { formatCents } from '../../../../shared/domain/money';
 import { buttonClasses } from '../../../components/ui/button';
 import { paths } from '../../../config/paths';
-import type { ProposalRowDto } from '../api/types';
+import type { ProposalRowDto } from '../../../../shared/schemas/proposal-dto';
 import { formatDay, formatMomentDay } from '../utils/dates';
 import { StatusChip } from './status-chip';
 

@@ -16,7 +16,7 @@ import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { useApproveProposal } from '../api/approve-proposal';
 import { useDeclineProposal } from '../api/decline-proposal';
-import { proposalPdfUrl, type ProposalDto } from '../api/types';
+import { proposalPdfUrl, type ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { totalsWithOptions } from '../utils/client-totals';
 import { formatDay, formatMoment } from '../utils/dates';
 import { ApprovalRecord, CautionList, LineItemsByUnit, TermsText, TotalsList, WorkByUnit } from './document-parts';

@@ -6,7 +6,7 @@ import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { useCreateProposal } from '../api/create-proposal';
 import { usePropertyProposals } from '../api/get-property-proposals';
-import { proposalLabel } from '../api/types';
+import { proposalLabel } from '../../../../shared/schemas/proposal-dto';
 import { formatMomentDay } from '../utils/dates';
 import { StatusChip } from './status-chip';
 

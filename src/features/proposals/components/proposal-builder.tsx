@@ -19,7 +19,7 @@ import { ApiError } from '../../../lib/api-client';
 import { useSendProposal } from '../api/send-proposal';
 import { useUpdateProposal } from '../api/update-proposal';
 import { useWithdrawProposal } from '../api/withdraw-proposal';
-import { proposalLabel, proposalPdfUrl, type LineCategory, type ProposalDto } from '../api/types';
+import { proposalLabel, proposalPdfUrl, type LineCategory, type ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import {
   CATEGORY_LABELS,
   LINE_CATEGORIES,

@@ -9,7 +9,7 @@ import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { useReviseProposal } from '../api/revise-proposal';
 import { useWithdrawProposal } from '../api/withdraw-proposal';
-import { proposalLabel, proposalPdfUrl, type ProposalDto } from '../api/types';
+import { proposalLabel, proposalPdfUrl, type ProposalDto } from '../../../../shared/schemas/proposal-dto';
 import { formatDay, formatMoment, formatMomentDay } from '../utils/dates';
 import { ApprovalRecord, CautionList, LineItemsByUnit, TermsText, TotalsList, WorkByUnit } from './document-parts';
 import { StatusChip } from './status-chip';

@@ -1,4 +1,4 @@
-import type { ProposalStatus } from '../api/types';
+import type { ProposalStatus } from '../../../../shared/schemas/proposal-dto';
 
 /** How each state reads, and its colours: draft ochre, sent sky, approved moss, declined clay, withdrawn and expired slate. */
 export const STATUS_LABELS: Record<ProposalStatus, string> = {

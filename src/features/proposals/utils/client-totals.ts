@@ -1,7 +1,7 @@
 /** The landowner's live totals: the sent proposal priced with the options they tick, by the shared rule. */
 import { DomainValidationError } from '../../../../shared/domain/errors';
 import { proposalTotals, type ProposalLineInput, type ProposalTotals } from '../../../../shared/domain/proposal-totals';
-import type { ProposalDto } from '../api/types';
+import type { ProposalDto } from '../../../../shared/schemas/proposal-dto';
 
 /** The id the server prices a stored line under (server/services/proposals/pricing.ts). */
 export const pricingLineId = (lineId: number): string => `line-${String(lineId).padStart(9, '0')}`;

@@ -7,7 +7,7 @@ import { DomainValidationError } from '../../../../shared/domain/errors';
 import { parseDollarsToCents } from '../../../../shared/domain/money';
 import { MAX_TAX_RATE_PCT, lineAmountCents, proposalTotals, type OrderDiscount, type ProposalLineInput, type ProposalTotals } from '../../../../shared/domain/proposal-totals';
 import type { ProposalUpdateInput } from '../../../../shared/schemas/proposal';
-import type { LineCategory, ProposalDto, ProposalLineDto } from '../api/types';
+import type { LineCategory, ProposalDto, ProposalLineDto } from '../../../../shared/schemas/proposal-dto';
 
 export type DiscountKind = OrderDiscount['kind'];
 

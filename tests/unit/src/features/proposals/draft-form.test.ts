@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { proposalTotals } from '../../../../../shared/domain/proposal-totals';
 import { ProposalUpdateSchema } from '../../../../../shared/schemas/proposal';
-import type { ProposalDto, ProposalLineDto } from '../../../../../src/features/proposals/api/types';
+import type { ProposalDto, ProposalLineDto } from '../../../../../shared/schemas/proposal-dto';
 import {
   centsToDollarsText,
   checkDraft,

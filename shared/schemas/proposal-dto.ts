@@ -1,9 +1,9 @@
 /**
- * The proposal answers of the API, as the client reads them. They mirror
- * server/presenters/proposal.ts (the client may not import the server), so keep them in step.
+ * The proposal answers of the API. The server's presenter is typed against these
+ * (server/presenters/proposal.ts), and the client reads them, so the two cannot drift apart.
  */
-import type { OrderDiscount } from '../../../../shared/domain/proposal-totals';
-import type { ProposalDisplayStatus } from '../../../../shared/schemas/proposal';
+import type { OrderDiscount } from '../domain/proposal-totals';
+import type { ProposalDisplayStatus } from './proposal';
 
 export type ProposalStatus = ProposalDisplayStatus;
 export type LineCategory = 'materials' | 'labor' | 'equipment' | 'fees';
