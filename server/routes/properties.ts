@@ -81,12 +81,14 @@ r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) =
 
 r.get('/:id/units', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
   const { firmId } = actor(req);
-  const plan = await loadPlan(Number(req.params.id), firmId);
+  const plan = await loadPlan(Number(req.params.id), firmId, { lean: true });
   const etag = planEtag(plan);
   res.setHeader('ETag', etag);
   res.setHeader('Cache-Control', 'private, no-cache');
   if (req.headers['if-none-match'] === etag) return res.status(304).end();
-  res.type('application/json').send(await unitsJson(plan));
+  const body = await unitsJson(plan);
+  res.type('application/json').setHeader('Content-Length', body.length);
+  res.end(body);
 });
 
 r.post('/:id/units', STAFF, validate({ params: IdParamsSchema, body: UnitCreateSchema }), async (req, res) => {

@@ -38,8 +38,9 @@ function remember<T>(key: string, make: () => Promise<T>): Promise<T> {
 }
 
 /** The property (404 outside the firm) and a lazy, memoised reader of its units. */
-export async function loadPlan(propertyId: number, firmId: number): Promise<LoadedPlan> {
-  const property = await Property.findOne({ where: { id: propertyId, firmId } });
+export async function loadPlan(propertyId: number, firmId: number, options: { lean?: boolean } = {}): Promise<LoadedPlan> {
+  // `lean` reads only what the units answer needs (no boundary to parse on every request).
+  const property = await Property.findOne({ where: { id: propertyId, firmId }, attributes: options.lean ? ['id', 'firmId', 'revision'] : undefined });
   if (!property) throw notFound('That property');
   let rows: Promise<UnitRow[]> | null = null;
   return {
@@ -58,9 +59,9 @@ export async function loadPlan(propertyId: number, firmId: number): Promise<Load
 /** A weak ETag that changes with every write to the plan. */
 export const planEtag = (plan: LoadedPlan): string => `W/"plan-${plan.property.id}-r${plan.revision}"`;
 
-/** The serialised `{ data: UnitDto[] }` answer of the plan's units. */
-export function unitsJson(plan: LoadedPlan): Promise<string> {
-  return remember(`units:${plan.property.id}:${plan.revision}`, async () => JSON.stringify({ data: (await plan.units()).map(presentUnit) }));
+/** The serialised `{ data: UnitDto[] }` answer of the plan's units, as bytes ready to send. */
+export function unitsJson(plan: LoadedPlan): Promise<Buffer> {
+  return remember(`units:${plan.property.id}:${plan.revision}`, async () => Buffer.from(JSON.stringify({ data: (await plan.units()).map(presentUnit) })));
 }
 
 /** Share of the property by kind and the plan warnings. */
