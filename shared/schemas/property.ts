@@ -4,8 +4,10 @@ import { LIMITS } from '../limits';
 import { optionalText } from './common';
 import { BoundarySchema } from './geometry';
 
-export const REGIONS = ['south', 'midsouth', 'midwest', 'north'] as const;
-export type Region = (typeof REGIONS)[number];
+import { REGIONS } from '../domain/planting-windows';
+
+export { REGIONS };
+export type { Region } from '../domain/planting-windows';
 
 export const PropertyCreateSchema = z.object({
   clientId: z.coerce.number().int().positive({ message: 'choose the client who owns the property' }),

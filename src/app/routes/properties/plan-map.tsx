@@ -390,6 +390,10 @@ export function PlanMapPage() {
                 <Link to={paths.property(p.id)} className="hover:underline">
                   Property details
                 </Link>
+                {' · '}
+                <Link to={paths.propertyPrescriptions(p.id)} className="hover:underline">
+                  Prescriptions
+                </Link>
               </>
             ) : (
               <Link to={paths.properties} className="hover:underline">

@@ -103,6 +103,9 @@ export function PropertyPage() {
             <Link to={paths.planMap(p.id)} className={buttonClasses('primary')}>
               Open plan map
             </Link>
+            <Link to={paths.propertyPrescriptions(p.id)} className={buttonClasses('secondary')}>
+              Prescriptions
+            </Link>
             <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>
