@@ -26,8 +26,24 @@ bash server/scripts/db.sh start test
 echo "▸ Building the web client for the browser journeys"
 node_modules/.bin/vite build --logLevel warn
 
+results=$(mktemp -d)
+status=0
 echo "▸ Unit and integration tests"
-node_modules/.bin/vitest run --project unit --project integration "$@"
+node_modules/.bin/vitest run --project unit --project integration --reporter=default --reporter=json --outputFile.json="$results/server.json" "$@" || status=$?
 
 echo "▸ Browser journeys"
-node_modules/.bin/vitest run --project e2e "$@"
+node_modules/.bin/vitest run --project e2e --reporter=default --reporter=json --outputFile.json="$results/e2e.json" "$@" || status=$?
+
+# One closing line for the whole suite.
+node -e '
+  const fs = require("fs");
+  let passed = 0, failed = 0, skipped = 0;
+  for (const f of process.argv.slice(1)) {
+    if (!fs.existsSync(f)) { failed++; continue; }
+    const r = JSON.parse(fs.readFileSync(f, "utf8"));
+    passed += r.numPassedTests; failed += r.numFailedTests; skipped += r.numPendingTests + (r.numTodoTests || 0);
+  }
+  console.log(`\nTests: ${passed} passed, ${failed} failed, ${skipped} skipped`);
+' "$results/server.json" "$results/e2e.json"
+rm -rf "$results"
+exit "$status"
