@@ -10,14 +10,6 @@ import { notFound, unprocessable } from '../errors';
 import { assertValidInDatabase } from './geometry-validator';
 import { recordAudit } from './audit-recorder';
 
-/** A Polygon wrapped as a MultiPolygon (the column's type). */
-export const asMultiPolygon = (geom: Polygon | MultiPolygon): MultiPolygon => toMultiPolygon(geom);
-
-/** Acres of a boundary, rounded to the thousandth stored in the database. */
-export function boundaryAcres(geom: Polygon | MultiPolygon): number {
-  return Math.round(measureArea(geom).acres * 1000) / 1000;
-}
-
 /** The stored boundary columns for a boundary (or its absence). */
 export function boundaryColumns(geom: Polygon | MultiPolygon | null) {
   if (!geom) return { boundary: null, acres: null, perimeterFt: null };

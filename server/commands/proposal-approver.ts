@@ -66,7 +66,10 @@ export async function approveProposal(actor: SessionUser, id: number, input: App
     const optional = lines.filter((l) => l.optional);
     const unknown = [...optionIds].filter((oid) => !optional.some((l) => l.id === oid));
     if (unknown.length) throw unprocessable(`optionIds: ${unknown.join(', ')} ${unknown.length === 1 ? 'is' : 'are'} not options of this proposal.`);
-    for (const line of optional) await line.update({ selected: optionIds.has(line.id) }, { transaction });
+    // Two updates, whatever the number of options; the in-memory lines follow for the hash below.
+    await ProposalLine.update({ selected: true }, { where: { proposalId: proposal.id, optional: true, id: [...optionIds] }, transaction });
+    await ProposalLine.update({ selected: false }, { where: { proposalId: proposal.id, optional: true, id: { [Op.notIn]: [...optionIds, 0] } }, transaction });
+    for (const line of optional) line.selected = optionIds.has(line.id);
     await reprice(proposal, transaction);
     const { content, hash } = proposalContentHash(proposal, lines);
     const signedAt = new Date();

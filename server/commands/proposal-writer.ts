@@ -12,6 +12,7 @@ import { proposalSentEmail } from '../../templates/email/proposal-sent';
 import { config } from '../config';
 import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
 import { todayIso } from './prescription-writer';
+import { addDays } from '../../shared/domain/planting-windows';
 
 export const DEFAULT_TERMS = [
   'Prices hold until the date above. Material prices follow the supplier’s price on the day of purchase when they rise more than 5 %; we tell you before we buy.',
@@ -20,7 +21,6 @@ export const DEFAULT_TERMS = [
   'Herbicide, chainsaw and burning work is done by trained, licensed people, following product labels, local codes and state rules.',
 ].join('\n');
 
-const addDays = (iso: string, days: number) => new Date(Date.parse(`${iso}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
 /** The next number of a firm's counter, allocated inside the transaction (no gaps, no duplicates). */
 export async function nextFirmNumber(firmId: number, name: string, transaction: Transaction): Promise<number> {

@@ -11,6 +11,7 @@ import { GEOMETRY_LIMITS } from '../../shared/limits';
 import { conflict, notFound, unprocessable } from '../errors';
 import { assertValidInDatabase } from './geometry-validator';
 import { recordAudit } from './audit-recorder';
+import { stripCrs } from '../presenters/geojson';
 
 /** The stored measure columns of a unit; 422 when the geometry does not fit the kind. */
 function measureColumns(kind: UnitKind, geometry: Geometry, field = 'geometry') {
@@ -93,11 +94,3 @@ export async function deleteUnit(actor: SessionUser, unitId: number, ip: string 
   });
 }
 
-/** GeoJSON read back from PostGIS carries a `crs` member; RFC 7946 has none. */
-export function stripCrs<T extends object>(geometry: T): T {
-  if (geometry && 'crs' in geometry) {
-    const { crs: _crs, ...rest } = geometry as T & { crs: unknown };
-    return rest as T;
-  }
-  return geometry;
-}

@@ -1,7 +1,7 @@
 import type { Property } from '../models';
 import type { PropertyDto } from '../../shared/schemas/property';
 import { sqMetresToHectares, SQ_M_PER_ACRE } from '../../shared/units';
-import { stripCrs } from '../commands/unit-writer';
+import { stripCrs } from './geojson';
 
 /** A property with its client's name and unit count; hectares follow from the stored acres. */
 export function presentProperty(p: Property, clientName: string, unitCount: number): PropertyDto {

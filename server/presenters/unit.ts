@@ -2,7 +2,7 @@ import type { Geometry } from 'geojson';
 import type { UnitDto } from '../../shared/schemas/unit';
 import { kindFamily, type UnitKind } from '../../shared/domain/unit-kinds';
 import { feetToMiles, sqMetresToHectares, SQ_M_PER_ACRE } from '../../shared/units';
-import { stripCrs } from '../commands/unit-writer';
+import { stripCrs } from './geojson';
 
 /** The stored columns of a unit, from a model or a raw row. */
 export interface UnitRow {

@@ -108,18 +108,19 @@ practices.get('/', STAFF, async (req, res) => {
   res.json({ data: rows.map((p) => presentPractice(p, library.materials)) });
 });
 
-async function checkedPractice(firmId: number, definition: PracticeDefinition): Promise<PracticeDefinition> {
+/** Validates a practice against the firm's library; answers the library for presenting it. */
+async function checkedPractice(firmId: number, definition: PracticeDefinition) {
   const library = await loadLibrary(firmId);
   validatePracticeDefinition(definition, library.materials, library.rates);
-  return definition;
+  return { definition, library };
 }
 
 practices.post('/', STAFF, validate({ body: PracticeCreateSchema }), async (req, res) => {
   const { firmId } = actor(req);
   const key = newLibraryKey('practice', req.body.name);
-  const definition = await checkedPractice(firmId, { ...(req.body as Omit<PracticeDefinition, 'key'>), key });
+  const { definition, library } = await checkedPractice(firmId, { ...(req.body as Omit<PracticeDefinition, 'key'>), key });
   const row = await Practice.create({ firmId, key, name: definition.name, definition });
-  res.status(201).json({ data: presentPractice(row, (await loadLibrary(firmId)).materials) });
+  res.status(201).json({ data: presentPractice(row, library.materials) });
 });
 
 practices.get('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
@@ -131,9 +132,9 @@ practices.get('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, r
 practices.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: PracticeUpdateSchema }), async (req, res) => {
   const { firmId } = actor(req);
   const row = await findInFirm(Practice, Number(req.params.id), firmId, 'That practice');
-  const definition = await checkedPractice(firmId, { ...row.definition, ...(req.body as Partial<PracticeDefinition>), key: row.key });
+  const { definition, library } = await checkedPractice(firmId, { ...row.definition, ...(req.body as Partial<PracticeDefinition>), key: row.key });
   await row.update({ name: definition.name, definition });
-  res.json({ data: presentPractice(row, (await loadLibrary(firmId)).materials) });
+  res.json({ data: presentPractice(row, library.materials) });
 });
 
 practices.post('/:id/duplicate', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {

@@ -18,7 +18,7 @@ import { recordAudit } from '../commands/audit-recorder';
 import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
 import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
 import { AppError, badRequest, conflict, unprocessable } from '../errors';
-import { stripCrs } from '../commands/unit-writer';
+import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
 import { Firm, Proposal } from '../models';
 import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';

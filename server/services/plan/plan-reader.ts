@@ -11,7 +11,7 @@ import { notFound } from '../../errors';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
 import { planWarnings, shareByKind } from '../../../shared/domain/plan-checks';
 import type { PlanSummary } from '../../../shared/schemas/unit';
-import { stripCrs } from '../../commands/unit-writer';
+import { stripCrs } from '../../presenters/geojson';
 import { GEOMETRY_LIMITS } from '../../../shared/limits';
 
 export interface LoadedPlan {

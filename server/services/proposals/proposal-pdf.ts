@@ -4,7 +4,7 @@ import { Firm, Property, Proposal } from '../../models';
 import { readProposal } from './proposal-reader';
 import { renderProposalPdf } from '../../../templates/documents/proposal';
 import type { ProposalDocumentInput } from '../../../templates/documents/proposal-input';
-import { stripCrs } from '../../commands/unit-writer';
+import { stripCrs } from '../../presenters/geojson';
 import { loadPlan } from '../plan/plan-reader';
 import { presentUnit } from '../../presenters/unit';
 import { unprocessable } from '../../errors';

@@ -1,4 +1,5 @@
 import { useState, type KeyboardEvent } from 'react';
+import { ArchiveControl } from '../../../features/library/components/archive-control';
 import { get, useForm, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -113,39 +114,7 @@ function RateEditRow({ rate, onDone }: { rate?: RateDto; onDone: () => void }) {
 
 function ArchiveRate({ rate }: { rate: RateDto }) {
   const archive = useArchiveRate();
-  const toast = useToast();
-  const [confirming, setConfirming] = useState(false);
-  if (!confirming) {
-    return (
-      <TextButton tone="clay" aria-label={`Archive ${rate.name}`} onClick={() => setConfirming(true)}>
-        Archive
-      </TextButton>
-    );
-  }
-  return (
-    <>
-      <Button
-        type="button"
-        variant="danger"
-       
-        busy={archive.isPending}
-        onClick={() =>
-          archive.mutate(rate.id, {
-            onSuccess: () => toast('success', `${rate.name} archived.`),
-            onError: (e) => {
-              toast('error', e.message);
-              setConfirming(false);
-            },
-          })
-        }
-      >
-        Archive it
-      </Button>{' '}
-      <TextButton onClick={() => setConfirming(false)}>
-        Keep
-      </TextButton>
-    </>
-  );
+  return <ArchiveControl id={rate.id} name={rate.name} archive={archive} />;
 }
 
 /** The firm's labor, equipment and fee rates, edited in place. */

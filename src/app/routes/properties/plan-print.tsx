@@ -7,6 +7,7 @@ import { ErrorPanel, Loading } from '../../../components/ui/card';
 import { useProperty } from '../../../features/plan-map/api/get-property';
 import { useUnits } from '../../../features/plan-map/api/get-units';
 import { usePlan } from '../../../features/plan-map/api/get-plan';
+import { LegendList } from '../../../features/plan-map/components/legend-list';
 import { KindSwatch } from '../../../features/plan-map/components/kind-swatch';
 import { ShareBar } from '../../../features/plan-map/components/share-bar';
 import { renderPlanImage, type PlanImage } from '../../../features/plan-map/lib/plan-image';
@@ -113,18 +114,7 @@ export function PlanPrintPage() {
       <div className="mt-4 grid break-inside-avoid grid-cols-3 gap-6">
         <section aria-label="Legend">
           <h2 className="mb-1 text-base font-bold">Legend</h2>
-          <ul className="flex flex-col gap-1 text-sm">
-            {boundary ? (
-              <li className="flex items-center gap-2">
-                <KindSwatch kind="boundary" size={14} /> Property boundary
-              </li>
-            ) : null}
-            {kinds.map((k) => (
-              <li key={k} className="flex items-center gap-2">
-                <KindSwatch kind={k} size={14} /> {KIND_STYLES[k].label}
-              </li>
-            ))}
-          </ul>
+          <LegendList kinds={kinds} hasBoundary={!!boundary} className="text-sm" />
         </section>
         <section aria-label="Acres by kind" className="col-span-2">
           <h2 className="mb-1 text-base font-bold">Acres by kind</h2>

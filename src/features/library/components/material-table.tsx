@@ -1,7 +1,6 @@
 import { Fragment, useState, type ReactNode } from 'react';
+import { ArchiveControl } from './archive-control';
 import { TextButton } from '../../../components/ui/text-button';
-import { Button } from '../../../components/ui/button';
-import { useToast } from '../../../components/ui/toast';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatGrade } from '../../../../shared/domain/fertilizer';
 import { plsPercent } from '../../../../shared/domain/seeding';
@@ -67,39 +66,7 @@ const COLUMNS: Record<MaterialKind, Column[]> = {
 
 function ArchiveButton({ material }: { material: MaterialDto }) {
   const archive = useArchiveMaterial();
-  const toast = useToast();
-  const [confirming, setConfirming] = useState(false);
-  if (!confirming) {
-    return (
-      <TextButton tone="clay" onClick={() => setConfirming(true)} aria-label={`Archive ${material.name}`}>
-        Archive
-      </TextButton>
-    );
-  }
-  return (
-    <span className="inline-flex items-center gap-1">
-      <Button
-        type="button"
-        variant="danger"
-       
-        busy={archive.isPending}
-        onClick={() =>
-          archive.mutate(material.id, {
-            onSuccess: () => toast('success', `${material.name} archived.`),
-            onError: (e) => {
-              toast('error', e.message);
-              setConfirming(false);
-            },
-          })
-        }
-      >
-        Archive it
-      </Button>
-      <TextButton onClick={() => setConfirming(false)}>
-        Keep
-      </TextButton>
-    </span>
-  );
+  return <ArchiveControl id={material.id} name={material.name} archive={archive} />;
 }
 
 /** A table of the materials of one kind, each with Edit (the kind's form, inline) and Archive. */
