@@ -10,6 +10,8 @@ export class Client extends Model<InferAttributes<Client>, InferCreationAttribut
   declare phone: string | null;
   declare address: string | null;
   declare notes: string | null;
+  /** Whether the client's contacts may upload their own files in the portal. */
+  declare portalUploadsAllowed: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -23,6 +25,7 @@ Client.init(
     phone: DataTypes.TEXT,
     address: DataTypes.TEXT,
     notes: DataTypes.TEXT,
+    portalUploadsAllowed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

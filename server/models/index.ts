@@ -11,6 +11,8 @@ import { Overlay } from './overlay';
 import { Material, Practice, ServiceRateEntry } from './library';
 import { Prescription } from './prescription';
 import { Proposal, ProposalApproval, ProposalLine } from './proposal';
+import { CalendarFeed, Task, TaskPhoto } from './task';
+import { SharedFile } from './shared-file';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -29,8 +31,11 @@ Prescription.belongsTo(Unit, { foreignKey: 'unitId', as: 'unit' });
 Prescription.belongsTo(Practice, { foreignKey: 'practiceId', as: 'practice' });
 Proposal.hasMany(ProposalLine, { foreignKey: 'proposalId', as: 'lines' });
 Proposal.hasOne(ProposalApproval, { foreignKey: 'proposalId', as: 'approval' });
+Task.hasMany(TaskPhoto, { foreignKey: 'taskId', as: 'photos' });
+TaskPhoto.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval };
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile };
+export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';
 export type { OutboxAttachment } from './outbox-message';

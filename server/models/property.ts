@@ -17,6 +17,8 @@ export class Property extends Model<InferAttributes<Property>, InferCreationAttr
   declare acres: number | null;
   declare perimeterFt: number | null;
   declare revision: CreationOptional<number>;
+  /** E-mail the client when all of a unit's tasks are finished. */
+  declare notifyClientOnUnitDone: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -48,6 +50,7 @@ Property.init(
       },
     },
     revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+    notifyClientOnUnitDone: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

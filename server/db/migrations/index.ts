@@ -3,10 +3,12 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-plan-units';
 import * as m0003 from './0003-practice-library';
 import * as m0004 from './0004-proposals';
+import * as m0005 from './0005-tasks';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-plan-units', ...m0002 },
   { name: '0003-practice-library', ...m0003 },
   { name: '0004-proposals', ...m0004 },
+  { name: '0005-tasks', ...m0005 },
 ];
