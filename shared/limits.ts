@@ -24,3 +24,9 @@ export const GEOMETRY_LIMITS = {
   importMaxBytes: 25 * 1024 * 1024,
   overlayMaxBytes: 40 * 1024 * 1024,
 } as const;
+
+/** Completion photos from the field. */
+export const PHOTO_LIMITS = {
+  maxBytes: 15 * 1024 * 1024,
+  perCompletion: 8,
+} as const;

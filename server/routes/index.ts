@@ -15,6 +15,8 @@ import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
 import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
 import { propertyProposalsRouter, proposalsRouter } from './proposals';
+import { propertyProgressRouter, taskPhotosRouter, tasksRouter } from './tasks';
+import { calendarFeedsRouter, calendarRouter } from './calendar';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -38,4 +40,9 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/prescriptions', router: prescriptionsRouter },
   { path: '/properties', router: propertyProposalsRouter },
   { path: '/proposals', router: proposalsRouter },
+  { path: '/tasks', router: tasksRouter },
+  { path: '/task-photos', router: taskPhotosRouter },
+  { path: '/properties', router: propertyProgressRouter },
+  { path: '/calendar-feeds', router: calendarFeedsRouter },
+  { path: '/calendar', router: calendarRouter },
 ];

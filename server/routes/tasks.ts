@@ -1,0 +1,113 @@
+/** The work schedule: tasks (crew see only their own), completions with photos, progress and the crew's calendar feed. */
+import type { Request } from 'express';
+import { z } from 'zod';
+import { defineRoutes, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { arrayUpload } from '../middlewares/upload';
+import { Property, Task, TaskPhoto } from '../models';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskCompleteSchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, type TaskListQuery } from '../../shared/schemas/task';
+import { PHOTO_LIMITS } from '../../shared/limits';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
+import { listTasks, readTask } from '../services/tasks/task-reader';
+import { inspectPhoto } from '../services/tasks/photo-intake';
+import { propertyProgress } from '../services/tasks/progress';
+import { readFile } from '../services/storage/disk-storage';
+import { badRequest, notFound, unprocessable } from '../errors';
+
+const r = defineRoutes('/tasks');
+const photosRouter = defineRoutes('/task-photos');
+const perProperty = defineRoutes('/properties');
+const WORKERS = ['owner', 'consultant', 'crew'] as const;
+
+r.get('/', WORKERS, validate({ query: TaskListQuerySchema }), async (req, res) => {
+  res.json({ data: await listTasks(actor(req), req.validQuery as TaskListQuery) });
+});
+
+r.get('/:id', WORKERS, validate({ params: IdParamsSchema }), async (req, res) => {
+  const me = actor(req);
+  const task = await Task.findOne({ where: { id: Number(req.params.id), firmId: me.firmId } });
+  // A crew member asking for someone else's task learns nothing about it.
+  if (!task || (me.role === 'crew' && task.assigneeId !== me.id)) throw notFound('That task');
+  res.json({ data: await readTask(me, task) });
+});
+
+r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: TaskUpdateSchema }), async (req, res) => {
+  const task = await updateTask(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.json({ data: await readTask(actor(req), task) });
+});
+
+function idempotencyKey(req: Request): string {
+  const raw = req.get(IDEMPOTENCY_HEADER);
+  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per completion, reused when the same completion is sent again.`);
+  const parsed = IdempotencyKeySchema.safeParse(raw);
+  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
+  return parsed.data;
+}
+
+r.post(
+  '/:id/complete',
+  WORKERS,
+  validate({ params: IdParamsSchema }),
+  async (req, _res, next) => {
+    // Refuse before reading any file: wrong key, someone else's task or a finished task stores nothing.
+    idempotencyKey(req);
+    await taskForActor(actor(req), Number(req.params.id));
+    next();
+  },
+  arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perCompletion, 'photo'),
+  validate({ body: TaskCompleteSchema }),
+  async (req, res) => {
+    const files = (req.files as Express.Multer.File[] | undefined) ?? [];
+    const photos = [];
+    for (const file of files) photos.push(await inspectPhoto(file.buffer, file.originalname || null));
+    const { task, replayed } = await completeTask(actor(req), Number(req.params.id), req.body, photos, idempotencyKey(req), req.ip ?? null);
+    res.status(replayed ? 200 : 201).json({ data: await readTask(actor(req), task), replayed });
+  },
+);
+
+r.post('/:id/skip', WORKERS, validate({ params: IdParamsSchema, body: TaskSkipSchema }), async (req, res) => {
+  const task = await skipTask(actor(req), Number(req.params.id), req.body.reason, req.ip ?? null);
+  res.json({ data: await readTask(actor(req), task) });
+});
+
+r.post('/:id/reopen', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const task = await reopenTask(actor(req), Number(req.params.id), req.ip ?? null);
+  res.json({ data: await readTask(actor(req), task) });
+});
+
+/** A completion photo, for staff of the firm, the crew member of the task, and the client who owns the property. */
+photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {
+  const me = actor(req);
+  const photo = await findInFirm(TaskPhoto, Number(req.params.id), me.firmId, 'That photo');
+  const task = await Task.findByPk(photo.taskId, { attributes: ['id', 'assigneeId', 'propertyId'] });
+  if (!task) throw notFound('That photo');
+  if (me.role === 'crew' && task.assigneeId !== me.id) throw notFound('That photo');
+  if (me.role === 'client') {
+    const property = await Property.findOne({ where: { id: task.propertyId, firmId: me.firmId }, attributes: ['clientId'] });
+    if (!property || property.clientId !== me.clientId) throw notFound('That photo');
+  }
+  res.setHeader('Content-Type', photo.contentType);
+  res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
+  res.setHeader('Content-Disposition', 'inline');
+  res.send(await readFile(photo.storageKey));
+});
+
+perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {
+  const me = actor(req);
+  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
+  if (me.role === 'client' && property.clientId !== me.clientId) throw notFound('That property');
+  res.json({ data: await propertyProgress(property) });
+});
+
+const NotifySchema = z.object({ notifyClientOnUnitDone: z.boolean() }).strict();
+perProperty.patch('/:id/progress-settings', STAFF, validate({ params: IdParamsSchema, body: NotifySchema }), async (req, res) => {
+  const property = await findInFirm(Property, Number(req.params.id), actor(req).firmId, 'That property');
+  await property.update({ notifyClientOnUnitDone: req.body.notifyClientOnUnitDone });
+  res.json({ data: { notifyClientOnUnitDone: property.notifyClientOnUnitDone } });
+});
+
+export const tasksRouter = r.router;
+export const taskPhotosRouter = photosRouter.router;
+export const propertyProgressRouter = perProperty.router;
