@@ -26,6 +26,7 @@ import { ProposalPage } from './routes/proposals/proposal';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
 import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
+import { SchedulePage } from './routes/schedule/schedule';
 
 function RootRedirect() {
   const me = useMe();
@@ -56,6 +57,7 @@ const router = createBrowserRouter([
       { path: paths.property(), element: <PropertyPage /> },
       { path: paths.proposals, element: <ProposalsPage /> },
       { path: paths.proposal(), element: <ProposalPage /> },
+      { path: paths.schedule, element: <SchedulePage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,

@@ -12,6 +12,9 @@ export const paths = {
   planMap: (id: number | string = ':id') => `/properties/${id}/map`,
   planPrint: (id: number | string = ':id') => `/properties/${id}/print`,
   proposals: '/proposals',
+  schedule: '/schedule',
+  /** The schedule filtered to one property. */
+  scheduleForProperty: (propertyId: number | string) => `/schedule?property=${propertyId}`,
   proposal: (id: number | string = ':id') => `/proposals/${id}`,
   team: '/settings/team',
   mail: '/settings/mail',

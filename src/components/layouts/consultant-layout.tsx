@@ -9,6 +9,7 @@ const PLACES = [
   { to: paths.desk, label: 'Desk' },
   { to: paths.clients, label: 'Clients' },
   { to: paths.properties, label: 'Properties' },
+  { to: paths.schedule, label: 'Schedule' },
   { to: paths.proposals, label: 'Proposals' },
   { to: paths.library, label: 'Library' },
   { to: paths.team, label: 'Settings' },

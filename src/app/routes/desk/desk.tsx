@@ -56,7 +56,7 @@ export function DeskPage() {
             </ul>
           )}
         </Card>
-        <Card title="In the window">
+        <Card title="In the window" action={<Link to={paths.schedule} className="text-sm text-moss-deep hover:underline">Open the schedule</Link>}>
           {d.inWindow.length === 0 ? (
             <EmptyState title="No step is in its window today">Steps of your prescriptions show here while their planting or work window is open.</EmptyState>
           ) : (

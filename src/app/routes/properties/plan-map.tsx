@@ -34,6 +34,9 @@ import type { DrawTarget, MeasureReading, PlanMapController, PlanMapCallbacks } 
 import { defaultUnitName, kindsPresent, unitsToCollections } from '../../../features/plan-map/lib/unit-features';
 import { defaultImportChoice, planImportSave, type ImportChoice } from '../../../features/plan-map/lib/import-choices';
 import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../../../features/plan-map/lib/measure-format';
+import type { ColourBy } from '../../../features/plan-map/lib/plan-layers';
+import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
+import type { UnitWorkStatus } from '../../../../shared/domain/tasks';
 
 /** The first field message of a 422 answer, or the error's own message. */
 function errorText(err: unknown): string {
@@ -103,6 +106,8 @@ export function PlanMapPage() {
   const updateBoundary = useUpdatePropertyBoundary(propertyId);
   const updateOverlay = useUpdateOverlay(propertyId);
   const importFile = useImportFile(propertyId);
+  const [colourBy, setColourBy] = useState<ColourBy>('kind');
+  const progress = usePropertyProgress(propertyId, Number.isInteger(propertyId) && propertyId > 0);
 
   const [controller, setController] = useState<PlanMapController | null>(null);
   const [selectedId, setSelectedId] = useState<number | null>(null);
@@ -124,7 +129,9 @@ export function PlanMapPage() {
   });
 
   // Map data, memoised so that the sources are only rewritten when the units change.
-  const collections = useMemo(() => unitsToCollections(unitList), [unitList]);
+  const statuses = useMemo(() => new Map<number, UnitWorkStatus>((progress.data?.units ?? []).map((u) => [u.unitId, u.status])), [progress.data]);
+  const collections = useMemo(() => unitsToCollections(unitList, statuses), [unitList, statuses]);
+  useEffect(() => controller?.setColourBy(colourBy), [controller, colourBy]);
   const legendKinds = useMemo(() => kindsPresent(unitList), [unitList]);
   const boundaryBox = useMemo(() => (boundary ? bboxOf([boundary]) : null), [boundary]);
 
@@ -492,7 +499,7 @@ export function PlanMapPage() {
               />
             </div>
             <div className="pointer-events-auto">
-              <MapLegend kinds={legendKinds} hasBoundary={!!boundary} />
+              <MapLegend kinds={legendKinds} hasBoundary={!!boundary} byStatus={colourBy === 'status'} />
             </div>
           </div>
           {p && !boundary && unitList.length === 0 && !drawTarget && !importState ? (
@@ -538,6 +545,9 @@ export function PlanMapPage() {
               plan={plan.data}
               planError={plan.error}
               selectedId={selectedId}
+              colourBy={colourBy}
+              onColourBy={setColourBy}
+              statuses={statuses}
               onSelect={(id) => {
                 setSelectedId(id);
                 const unit = unitList.find((u) => u.id === id);

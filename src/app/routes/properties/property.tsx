@@ -6,6 +6,7 @@ import { useDeleteProperty } from '../../../features/properties/api/delete-prope
 import { EditPropertyForm, regionLabel } from '../../../features/properties/components/property-form';
 import { BoundaryPreview } from '../../../features/properties/components/boundary-preview';
 import { PropertyProposalsCard } from '../../../features/proposals/components/property-proposals-card';
+import { ProgressCard } from '../../../features/schedule/components/progress-card';
 import { useClients } from '../../../features/clients/api/get-clients';
 import { Card, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -128,6 +129,8 @@ export function PropertyPage() {
       </div>
 
       <PropertyProposalsCard propertyId={p.id} propertyName={p.name} />
+
+      <ProgressCard propertyId={p.id} />
 
       <ConfirmDialog
         open={confirming}

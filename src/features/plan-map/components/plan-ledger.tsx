@@ -6,6 +6,64 @@ import { groupByKind } from '../lib/unit-features';
 import { formatAcresShort, formatFeet } from '../lib/measure-format';
 import { KindSwatch } from './kind-swatch';
 import { ShareBar } from './share-bar';
+import type { UnitWorkStatus } from '../../../../shared/domain/tasks';
+import { UNIT_STATUS_STYLES, UNIT_WORK_STATUSES } from '../../../lib/work-status';
+import type { ColourBy } from '../lib/plan-layers';
+
+/** The "Colour by" switch of the ledger: kind (the default) or work status. */
+export function ColourByToggle({ value, onChange }: { value: ColourBy; onChange: (v: ColourBy) => void }) {
+  return (
+    <div role="group" aria-label="Colour by" className="flex items-center gap-2 text-sm">
+      <span className="text-slate">Colour by</span>
+      <span className="inline-flex rounded border border-rule bg-card p-0.5">
+        {(
+          [
+            ['kind', 'Kind'],
+            ['status', 'Work status'],
+          ] as const
+        ).map(([v, label]) => (
+          <button
+            key={v}
+            type="button"
+            aria-pressed={value === v}
+            onClick={() => onChange(v)}
+            className={`rounded px-2.5 py-0.5 font-semibold ${value === v ? 'bg-moss text-white' : 'text-ink hover:bg-rule/40'}`}
+          >
+            {label}
+          </button>
+        ))}
+      </span>
+    </div>
+  );
+}
+
+/** The work statuses with their map colours and how many units are in each. */
+function StatusLegend({ units, statuses }: { units: UnitDto[]; statuses: ReadonlyMap<number, UnitWorkStatus> }) {
+  const counts = new Map<UnitWorkStatus, number>();
+  for (const u of units) {
+    if (KIND_STYLES[u.kind].family === 'point') continue;
+    const s = statuses.get(u.id) ?? 'no-work';
+    counts.set(s, (counts.get(s) ?? 0) + 1);
+  }
+  return (
+    <section aria-labelledby="ledger-status">
+      <h2 id="ledger-status" className="mb-2 text-base font-bold">
+        Work status
+      </h2>
+      <ul aria-label="Work status legend" className="flex flex-col gap-1 text-sm">
+        {UNIT_WORK_STATUSES.map((s) => (
+          <li key={s} data-legend-status={s} className="flex items-center gap-2">
+            <span aria-hidden className="inline-block size-3.5 rounded-sm border" style={{ background: UNIT_STATUS_STYLES[s].fill, borderColor: UNIT_STATUS_STYLES[s].stroke }} />
+            <span className="flex-1">{UNIT_STATUS_STYLES[s].label}</span>
+            <span className="tabular-nums text-slate">
+              {counts.get(s) ?? 0} unit{(counts.get(s) ?? 0) === 1 ? '' : 's'}
+            </span>
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
 
 function unitMeasure(u: UnitDto): string {
   if (u.family === 'area' || KIND_STYLES[u.kind].family === 'area') return formatAcresShort(u.acres ?? 0);
@@ -23,17 +81,27 @@ export function PlanLedger({
   planError,
   selectedId,
   onSelect,
+  colourBy = 'kind',
+  onColourBy,
+  statuses,
 }: {
   units: UnitDto[];
   plan: PlanSummary | undefined;
   planError: unknown;
   selectedId: number | null;
   onSelect: (unitId: number) => void;
+  colourBy?: ColourBy;
+  onColourBy?: (by: ColourBy) => void;
+  /** Each unit's work status, when the plan has tasks. */
+  statuses?: ReadonlyMap<number, UnitWorkStatus>;
 }) {
+  const byStatus = colourBy === 'status' && statuses !== undefined;
   const groups = useMemo(() => groupByKind(units), [units]);
   const names = useMemo(() => new Map(units.map((u) => [u.id, u.name])), [units]);
   return (
     <div className="flex flex-col gap-5">
+      {onColourBy ? <ColourByToggle value={colourBy} onChange={onColourBy} /> : null}
+      {byStatus ? <StatusLegend units={units} statuses={statuses} /> : null}
       <section aria-labelledby="ledger-share">
         <h2 id="ledger-share" className="mb-2 text-base font-bold">
           Acres by kind
@@ -96,6 +164,12 @@ export function PlanLedger({
                           className={`flex w-full items-baseline justify-between gap-2 rounded px-2 py-1 text-left text-sm ${u.id === selectedId ? 'bg-moss/10 font-semibold text-moss-deep' : 'hover:bg-rule/40'}`}
                         >
                           <span className="truncate">{u.name}</span>
+                          {byStatus && style.family !== 'point' ? (
+                            <span data-unit-status={statuses.get(u.id) ?? 'no-work'} className="flex shrink-0 items-center gap-1 text-xs text-slate">
+                              <span aria-hidden className="inline-block size-2.5 rounded-sm" style={{ background: UNIT_STATUS_STYLES[statuses.get(u.id) ?? 'no-work'].fill }} />
+                              {UNIT_STATUS_STYLES[statuses.get(u.id) ?? 'no-work'].label}
+                            </span>
+                          ) : null}
                           <span className="shrink-0 tabular-nums text-slate">{unitMeasure(u)}</span>
                         </button>
                       </li>

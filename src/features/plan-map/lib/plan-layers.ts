@@ -9,6 +9,7 @@ import type { FeatureCollection, Geometry, MultiPolygon, Polygon } from 'geojson
 import { KIND_STYLES, UNIT_KINDS, type KindStyle, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import { CARD, CLAY, INK, OCHRE, RULE, graticule } from './map-style';
 import { drawKindSymbols } from './symbols';
+import { UNIT_STATUS_STYLES, UNIT_WORK_STATUSES } from '../../../lib/work-status';
 import type { FamilyCollections } from './unit-features';
 
 export const SOURCES = {
@@ -231,4 +232,22 @@ export function setBackgroundTiles(map: MapLibreMap, template: string | null, at
   map.addSource('tiles', { type: 'raster', tiles: [template], tileSize: 256, maxzoom: 19, ...(attribution ? { attribution } : {}) });
   const firstOverlay = (map.getStyle().layers ?? []).find((l) => /^overlay-\d+-raster$/.test(l.id));
   map.addLayer({ id: 'tiles-raster', type: 'raster', source: 'tiles', paint: { 'raster-fade-duration': 100 } }, firstOverlay?.id ?? 'graticule-line');
+}
+
+/** What the units' colours stand for: their kind (the default) or the work done on them. */
+export type ColourBy = 'kind' | 'status';
+
+function statusMatch(field: 'fill' | 'stroke' | 'fillOpacity'): ExpressionSpecification {
+  const pairs = UNIT_WORK_STATUSES.flatMap((s) => [s, UNIT_STATUS_STYLES[s][field]]);
+  return ['match', ['get', 'workStatus'], ...pairs, UNIT_STATUS_STYLES['no-work'][field]] as unknown as ExpressionSpecification;
+}
+
+/** Colours areas and lines by kind or by work status (points keep their kind symbols). */
+export function setColourBy(map: MapLibreMap, by: ColourBy): void {
+  if (!map.getLayer('unit-area-fill')) return;
+  const status = by === 'status';
+  map.setPaintProperty('unit-area-fill', 'fill-color', status ? statusMatch('fill') : kindMatch('fill', '#BDB8AA'));
+  map.setPaintProperty('unit-area-fill', 'fill-opacity', status ? statusMatch('fillOpacity') : kindMatch('fillOpacity', 0.5));
+  map.setPaintProperty('unit-area-outline', 'line-color', status ? statusMatch('stroke') : kindMatch('stroke', '#7B776C'));
+  map.setPaintProperty('unit-line', 'line-color', status ? statusMatch('stroke') : kindMatch('stroke', '#5B6770'));
 }

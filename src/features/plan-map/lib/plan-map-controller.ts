@@ -23,6 +23,8 @@ import { CARD, INK, MOSS_DEEP, OCHRE, SKY, offlineStyle } from './map-style';
 import {
   UNIT_LAYERS,
   addPlanLayers,
+  setColourBy,
+  type ColourBy,
   hideBoundary,
   hideUnit,
   setBackgroundTiles,
@@ -421,6 +423,11 @@ export class PlanMapController {
   /** Puts the units on the map. */
   setUnits(collections: FamilyCollections): void {
     this.whenReady(() => setUnitData(this.map, collections));
+  }
+
+  /** Colours the units by kind or by work status. */
+  setColourBy(by: ColourBy): void {
+    this.whenReady(() => setColourBy(this.map, by));
   }
 
   /** Puts the boundary on the map. */

@@ -1,6 +1,7 @@
 /** Plan units as map data: one FeatureCollection per geometry family, for data-driven layers. */
 import type { Feature, FeatureCollection, Geometry } from 'geojson';
 import { KIND_STYLES, UNIT_KINDS, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
+import type { UnitWorkStatus } from '../../../../shared/domain/tasks';
 
 /** The fields of a unit the map and the ledger need. */
 export interface MapUnit {
@@ -19,16 +20,18 @@ export interface UnitProps {
   name: string;
   /** Smaller areas win a click where areas overlap. */
   acres: number;
+  /** The unit's work status, for the "colour by work status" mode; units without tasks have none. */
+  workStatus: UnitWorkStatus;
 }
 
 export type FamilyCollections = Record<KindFamily, FeatureCollection<Geometry, UnitProps>>;
 
-/** Splits units into one FeatureCollection per family; the feature id is the unit id (for feature-state). */
-export function unitsToCollections(units: readonly MapUnit[]): FamilyCollections {
+/** Splits units into one FeatureCollection per family; the feature id is the unit id (for feature-state). Units missing from `statuses` have no work. */
+export function unitsToCollections(units: readonly MapUnit[], statuses?: ReadonlyMap<number, UnitWorkStatus>): FamilyCollections {
   const out: Record<KindFamily, Feature<Geometry, UnitProps>[]> = { area: [], line: [], point: [] };
   for (const u of units) {
     const family = KIND_STYLES[u.kind]?.family ?? u.family;
-    out[family].push({ type: 'Feature', id: u.id, geometry: u.geometry, properties: { id: u.id, kind: u.kind, name: u.name, acres: u.acres ?? 0 } });
+    out[family].push({ type: 'Feature', id: u.id, geometry: u.geometry, properties: { id: u.id, kind: u.kind, name: u.name, acres: u.acres ?? 0, workStatus: statuses?.get(u.id) ?? 'no-work' } });
   }
   return {
     area: { type: 'FeatureCollection', features: out.area },

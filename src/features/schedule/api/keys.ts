@@ -1,0 +1,9 @@
+/** Query keys of the schedule, hierarchical so that ['tasks'] invalidates every list and detail. */
+import type { TaskListQuery } from '../../../../shared/schemas/task';
+
+export const scheduleKeys = {
+  all: ['tasks'] as const,
+  list: (query: TaskListQuery) => ['tasks', 'list', query] as const,
+  detail: (taskId: number) => ['tasks', 'detail', taskId] as const,
+  progress: (propertyId: number) => ['progress', { propertyId }] as const,
+};
