@@ -159,7 +159,13 @@ export function SchedulePage() {
         </div>
         {tasks.data ? <WarningsPanel warnings={tasks.data.warnings} onOpen={open} /> : null}
       </div>
-      <TaskPanel taskId={params.task} fallback={list.find((t) => t.id === params.task)} people={people} onClose={() => change({ task: null })} />
+      <TaskPanel
+        taskId={params.task}
+        fallback={list.find((t) => t.id === params.task)}
+        people={people}
+        onClose={() => change({ task: null })}
+        onShowWeek={(date) => change({ view: null, week: weekStart(date), task: null })}
+      />
     </div>
   );
 }

@@ -168,7 +168,7 @@ function Completion({ task }: { task: TaskDto }) {
   );
 }
 
-function Details({ task, people }: { task: TaskDto; people: readonly Assignable[] }) {
+function Details({ task, people, onShowWeek }: { task: TaskDto; people: readonly Assignable[]; onShowWeek?: (date: string) => void }) {
   const reopen = useReopenTask();
   const toast = useToast();
   const finished = task.status === 'done' || task.status === 'skipped';
@@ -184,7 +184,14 @@ function Details({ task, people }: { task: TaskDto; people: readonly Assignable[
         <dt className="text-slate">Window</dt>
         <dd className="tabular-nums">{windowText(task)}</dd>
         <dt className="text-slate">Set for</dt>
-        <dd className="tabular-nums">{datesText(task)}</dd>
+        <dd className="tabular-nums">
+          {datesText(task)}
+          {task.startDate && onShowWeek ? (
+            <button type="button" className="ml-2 text-sm font-semibold text-moss-deep underline" onClick={() => onShowWeek(task.startDate as string)}>
+              Show its week
+            </button>
+          ) : null}
+        </dd>
         <dt className="text-slate">Crew member</dt>
         <dd>{task.assigneeName ?? 'Unassigned'}</dd>
         {task.costCents !== null ? (
@@ -262,7 +269,20 @@ function Details({ task, people }: { task: TaskDto; people: readonly Assignable[
 }
 
 /** A side panel over the schedule for one task: its details, the scheduling form or its completion, and Reopen. */
-export function TaskPanel({ taskId, fallback, people, onClose }: { taskId: number | null; fallback: TaskDto | undefined; people: readonly Assignable[]; onClose: () => void }) {
+export function TaskPanel({
+  taskId,
+  fallback,
+  people,
+  onClose,
+  onShowWeek,
+}: {
+  taskId: number | null;
+  fallback: TaskDto | undefined;
+  people: readonly Assignable[];
+  onClose: () => void;
+  /** Opens the week list on the week holding a date. */
+  onShowWeek?: (date: string) => void;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   const task = useTask(taskId);
@@ -304,7 +324,7 @@ export function TaskPanel({ taskId, fallback, people, onClose }: { taskId: numbe
               Close
             </Button>
           </header>
-          {shown ? <Details key={shown.id} task={shown} people={people} /> : task.isError ? <ErrorPanel error={task.error} onRetry={() => void task.refetch()} /> : <Loading label="Loading the task…" />}
+          {shown ? <Details key={shown.id} task={shown} people={people} onShowWeek={onShowWeek} /> : task.isError ? <ErrorPanel error={task.error} onRetry={() => void task.refetch()} /> : <Loading label="Loading the task…" />}
         </div>
       ) : null}
     </dialog>

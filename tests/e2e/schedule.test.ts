@@ -1,0 +1,199 @@
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import fs from 'node:fs';
+import path from 'node:path';
+import crypto from 'node:crypto';
+import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core';
+import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { withGpsExif } from '../support/exif';
+
+const baseUrl = inject('baseUrl');
+const WAIT = { timeout: 15_000 };
+const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
+let browser: Browser;
+
+interface Task {
+  id: number;
+  name: string;
+  unitId: number;
+  unitName: string;
+  status: string;
+  earliest: string;
+  latest: string;
+  startDate: string | null;
+  assigneeId: number | null;
+}
+
+/** A signed-in API session (the browser context's cookies) and its CSRF token. */
+async function apiSession(email: string): Promise<{ context: BrowserContext; request: APIRequestContext; csrf: string }> {
+  const context = await browser.newContext();
+  const request = context.request;
+  const login = await request.post(`${baseUrl}/api/auth/login`, { data: { email, password: DEMO_PASSWORD } });
+  expect(login.status()).toBe(200);
+  const csrf = ((await (await request.get(`${baseUrl}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
+  return { context, request, csrf };
+}
+
+async function json<T>(res: Awaited<ReturnType<APIRequestContext['get']>>, status = 200): Promise<T> {
+  if (res.status() !== status) throw new Error(`${res.url()} answered ${res.status()}: ${await res.text()}`);
+  return ((await res.json()) as { data: T }).data;
+}
+
+/** "Monday, Jun 8" as the week list writes a day (UTC, like the server's dates). */
+const dayHeading = (date: string) => `${new Date(`${date}T00:00:00Z`).toLocaleDateString('en-US', { weekday: 'long', timeZone: 'UTC' })}, ${new Date(`${date}T00:00:00Z`).toLocaleDateString('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' })}`;
+const addDays = (date: string, n: number) => new Date(Date.parse(`${date}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
+
+let propertyId = 0;
+let propertyName = '';
+let crewId = 0;
+let task: Task;
+let consultantApi: Awaited<ReturnType<typeof apiSession>>;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  consultantApi = await apiSession('consultant@browseline.test');
+  const { request, csrf } = consultantApi;
+  // Demo seed: the club's Bluestem Ridge has a fall brassica prescription on "Club plot"; no other
+  // journey writes proposals for it. The consultant sends a proposal and the club approves it,
+  // which makes the tasks (through the API, as a person would, without depending on fixed ids).
+  const properties = await json<{ id: number; name: string }[]>(await request.get(`${baseUrl}/api/properties`));
+  const bluestem = properties.find((p) => p.name === 'Bluestem Ridge');
+  if (!bluestem) throw new Error('The demo property Bluestem Ridge is missing');
+  propertyId = bluestem.id;
+  propertyName = bluestem.name;
+  const team = await json<{ id: number; email: string }[]>(await request.get(`${baseUrl}/api/team`));
+  crewId = team.find((m) => m.email === 'crew@browseline.test')!.id;
+
+  let tasks = (await json<{ tasks: Task[] }>(await request.get(`${baseUrl}/api/tasks?propertyId=${propertyId}`))).tasks;
+  if (tasks.length === 0) {
+    const draft = await json<{ id: number }>(await request.post(`${baseUrl}/api/properties/${propertyId}/proposals`, { headers: { 'X-CSRF-Token': csrf }, data: { depositPct: 30 } }), 201);
+    await json(await request.post(`${baseUrl}/api/proposals/${draft.id}/send`, { headers: { 'X-CSRF-Token': csrf }, data: {} }));
+    const club = await apiSession('club@browseline.test');
+    await json(await club.request.post(`${baseUrl}/api/proposals/${draft.id}/approve`, { headers: { 'X-CSRF-Token': club.csrf }, data: { signedName: 'Marcus Feld' } }));
+    await club.context.close();
+    tasks = (await json<{ tasks: Task[] }>(await request.get(`${baseUrl}/api/tasks?propertyId=${propertyId}`))).tasks;
+  }
+  const open = tasks.filter((t) => t.status === 'planned' && t.assigneeId === null && t.unitName === 'Club plot').sort((a, b) => a.earliest.localeCompare(b.earliest));
+  expect(open.length).toBeGreaterThan(1);
+  task = open[0];
+});
+
+afterAll(async () => {
+  await consultantApi?.context.close();
+  await browser?.close();
+});
+
+describe('the consultant’s schedule', () => {
+  it('assigns an unassigned task on the timeline by crew member; the week list shows it on its day', async () => {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Schedule' }).click();
+    await page.waitForURL(`${baseUrl}/schedule`);
+    await page.getByRole('heading', { name: 'Schedule', level: 1 }).waitFor();
+
+    // Filters live in the address: property, then the timeline by crew member over the task's weeks.
+    await page.getByLabel('Property', { exact: true }).selectOption({ label: propertyName });
+    await expect.poll(() => new URL(page.url()).searchParams.get('property')).toBe(String(propertyId));
+    await page.getByRole('group', { name: 'View' }).getByRole('button', { name: 'Timeline' }).click();
+    await page.getByRole('group', { name: 'Rows' }).getByRole('button', { name: 'By crew member' }).click();
+    await page.getByLabel('From', { exact: true }).fill(task.earliest);
+    await page.getByLabel('To', { exact: true }).fill(addDays(task.earliest, 7 * 11));
+    await expect.poll(() => new URL(page.url()).searchParams.get('by')).toBe('crew');
+
+    const unassigned = page.getByRole('group', { name: 'Unassigned' });
+    await unassigned.locator(`[data-task-id="${task.id}"]`).waitFor(WAIT);
+    await screenshot(page, 'schedule-timeline-by-crew');
+    await unassigned.locator(`[data-task-id="${task.id}"]`).click();
+
+    // The panel: assign the demo crew member (Rosa Quintero, crew@) and a day inside the window.
+    const panel = page.getByRole('dialog', { name: task.name });
+    await panel.waitFor();
+    const day = addDays(task.earliest, 2) <= task.latest ? addDays(task.earliest, 2) : task.earliest;
+    await panel.getByLabel('Crew member', { exact: true }).selectOption({ label: 'Rosa Quintero' });
+    await panel.getByLabel('Start date', { exact: true }).fill(day);
+    // A bad edit first: the end before the start is refused with a sentence, and nothing is saved.
+    await panel.getByLabel('End date', { exact: true }).fill(addDays(day, -1));
+    await panel.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => panel.getByText('the end date must not come before the start date').count()).toBeGreaterThan(0);
+    await panel.getByLabel('End date', { exact: true }).fill('');
+    await panel.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(() => panel.locator('[data-status]').first().getAttribute('data-status'), WAIT).toBe('scheduled');
+    await screenshot(page, 'schedule-task-panel-scheduled');
+
+    const saved = await json<Task>(await consultantApi.request.get(`${baseUrl}/api/tasks/${task.id}`));
+    expect(saved).toMatchObject({ status: 'scheduled', assigneeId: crewId, startDate: day });
+
+    // On the timeline the task moved to the crew member's row.
+    await panel.getByRole('button', { name: 'Close the task panel' }).click();
+    await page.getByRole('group', { name: 'Rosa Quintero' }).locator(`[data-task-id="${task.id}"]`).waitFor(WAIT);
+    expect(await unassigned.locator(`[data-task-id="${task.id}"]`).count()).toBe(0);
+
+    // "Show its week" opens the week list on that week; the task sits under its day.
+    await page.getByRole('group', { name: 'Rosa Quintero' }).locator(`[data-task-id="${task.id}"]`).click();
+    await page.getByRole('dialog', { name: task.name }).getByRole('button', { name: 'Show its week' }).click();
+    const daySection = page.getByRole('region', { name: new RegExp(`^${dayHeading(day)}`) });
+    await daySection.locator(`[data-task-id="${task.id}"]`).waitFor(WAIT);
+    expect(await daySection.locator(`[data-task-id="${task.id}"]`).textContent()).toContain('Rosa Quintero');
+    await screenshot(page, 'schedule-week-list');
+    watch.assertClean();
+    await context.close();
+  });
+
+  it('shows a crew completion with its photo, and the plan map in work-status colours', async () => {
+    // The crew member marks the task done from the field (multipart, with an idempotency key).
+    const crew = await apiSession('crew@browseline.test');
+    const doneOn = new Date().toISOString().slice(0, 10);
+    const photo = withGpsExif(JPEG, 43.5494, -90.8785); // inside Club plot (demo seed geometry)
+    const res = await crew.request.post(`${baseUrl}/api/tasks/${task.id}/complete`, {
+      headers: { 'X-CSRF-Token': crew.csrf, 'Idempotency-Key': `e2e-${crypto.randomUUID()}` },
+      multipart: { doneOn, notes: 'Disked and seeded; soil was mellow.', hours: '3.5', photos: { name: 'club-plot.jpg', mimeType: 'image/jpeg', buffer: photo } },
+    });
+    expect(res.status()).toBe(201);
+    await crew.context.close();
+
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.goto(`${baseUrl}/schedule?property=${propertyId}&view=timeline&by=crew&from=${task.earliest}&to=${addDays(task.earliest, 77)}`);
+    const bar = page.getByRole('group', { name: 'Rosa Quintero' }).locator(`[data-task-id="${task.id}"]`);
+    await bar.waitFor(WAIT);
+    await expect.poll(() => bar.getAttribute('aria-label')).toMatch(/, done$/);
+    await bar.click();
+    const panel = page.getByRole('dialog', { name: task.name });
+    await expect.poll(() => panel.getByRole('heading', { name: /^Done .* by Rosa Quintero$/ }).count(), WAIT).toBe(1);
+    const thumb = panel.getByRole('img', { name: `Photo 1 of ${task.name} on Club plot` });
+    await thumb.waitFor();
+    await expect.poll(() => thumb.evaluate((img) => (img as HTMLImageElement).complete && (img as HTMLImageElement).naturalWidth > 0), WAIT).toBe(true);
+    // The EXIF position read from the photo.
+    expect(await panel.getByText(/at 43\.549\d\d, -90\.878\d\d/).count()).toBe(1);
+    expect(await panel.getByRole('button', { name: 'Reopen task' }).count()).toBe(1);
+    await screenshot(page, 'schedule-task-done-with-photo');
+    await panel.getByRole('button', { name: 'Close the task panel' }).click();
+
+    // The property page's progress card counts it.
+    await page.goto(`${baseUrl}/properties/${propertyId}`);
+    const progress = page.getByRole('region', { name: 'Progress' }).or(page.locator('section', { has: page.getByRole('heading', { name: 'Progress', exact: true }) }));
+    await expect.poll(() => progress.locator('[data-unit-status]').first().getAttribute('data-unit-status'), WAIT).toBe('in-progress');
+    await screenshot(page, 'property-progress');
+
+    // Plan map, coloured by work status: the ledger's legend and the unit's row say "Under way".
+    await page.goto(`${baseUrl}/properties/${propertyId}/map`);
+    await page.locator('[data-testid=plan-map] canvas.maplibregl-canvas').waitFor(WAIT);
+    const ledger = page.getByRole('complementary', { name: 'Plan ledger' });
+    await ledger.getByRole('heading', { name: /^Units/ }).waitFor(WAIT);
+    await ledger.getByRole('group', { name: 'Colour by' }).getByRole('button', { name: 'Work status' }).click();
+    const legend = ledger.getByRole('list', { name: 'Work status legend' });
+    await legend.waitFor();
+    await expect.poll(() => legend.locator('[data-legend-status="in-progress"]').textContent(), WAIT).toMatch(/Under way\s*1 unit$/);
+    const row = ledger.getByRole('button', { name: /Club plot/ });
+    expect(await row.locator('[data-unit-status]').getAttribute('data-unit-status')).toBe('in-progress');
+    expect(await row.textContent()).toContain('Under way');
+    await screenshot(page, 'plan-map-work-status');
+    watch.assertClean();
+    await context.close();
+  });
+});
