@@ -196,4 +196,26 @@ describe('the consultant’s schedule', () => {
     watch.assertClean();
     await context.close();
   });
+
+  it('stays usable at 360 px: the week list fits the screen and the task opens in a full-width panel', async () => {
+    const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    const saved = await json<Task>(await consultantApi.request.get(`${baseUrl}/api/tasks/${task.id}`));
+    await page.goto(`${baseUrl}/schedule?property=${propertyId}&week=${saved.startDate}`);
+    const row = page.locator(`[data-task-id="${task.id}"]`);
+    await row.waitFor(WAIT);
+    // Nothing wider than the phone's screen (the page does not scroll sideways).
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
+    await screenshot(page, 'schedule-week-list-360');
+    await row.click();
+    const panel = page.getByRole('dialog', { name: task.name });
+    await panel.getByRole('button', { name: 'Reopen task' }).waitFor(WAIT);
+    expect((await panel.boundingBox())!.width).toBeLessThanOrEqual(360);
+    await screenshot(page, 'schedule-task-panel-360');
+    watch.assertClean();
+    await context.close();
+  });
 });

@@ -130,7 +130,7 @@ export function SchedulePage() {
               Next →
             </Button>
             <h2 className="text-base font-bold tabular-nums" aria-live="polite">
-              Week of {formatMonthDay(params.week)} – {formatMonthDay(sunday)}
+              Week of {formatMonthDay(params.week)} – {formatMonthDay(sunday)}, {sunday.slice(0, 4)}
             </h2>
           </div>
         )}

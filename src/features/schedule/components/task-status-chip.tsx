@@ -33,7 +33,7 @@ export function WarningMarks({ warnings }: { warnings: readonly TaskWarning[] })
           data-warning={w.code}
           className={`inline-flex size-5 items-center justify-center rounded-full text-xs font-bold ${w.code === 'window-closing' ? 'bg-ochre text-ink' : 'bg-clay text-white'}`}
         >
-          {w.code === 'before-dependency' ? '↰' : w.code === 'window-closing' ? '⏳' : '!'}
+          !
         </span>
       ))}
     </span>

@@ -2,8 +2,11 @@
 import { formatMonthDay } from '../../../../shared/domain/planting-windows';
 import type { TaskDto } from '../../../../shared/schemas/task';
 
-/** "Jun 1 – Jun 30" for a task's window. */
-export const windowText = (t: Pick<TaskDto, 'earliest' | 'latest'>): string => `${formatMonthDay(t.earliest)} – ${formatMonthDay(t.latest)}`;
+/** "Jun 1 – Jun 30, 2026" for a task's window, or "Jul 20, 2026 – Mar 22, 2027" across a new year. */
+export const windowText = (t: Pick<TaskDto, 'earliest' | 'latest'>): string => {
+  const [y1, y2] = [t.earliest.slice(0, 4), t.latest.slice(0, 4)];
+  return y1 === y2 ? `${formatMonthDay(t.earliest)} – ${formatMonthDay(t.latest)}, ${y2}` : `${formatMonthDay(t.earliest)}, ${y1} – ${formatMonthDay(t.latest)}, ${y2}`;
+};
 
 /** "Jun 12", "Jun 12 – Jun 14", or "not scheduled". */
 export const datesText = (t: Pick<TaskDto, 'startDate' | 'endDate'>): string =>

@@ -13,6 +13,8 @@ const BAR: Record<TaskDto['status'], string> = {
 function TaskLane({ task, range, onOpen }: { task: TaskDto; range: ReturnType<typeof timelineRange>; onOpen: (id: number) => void }) {
   const band = spanBox(task.earliest, task.latest, range);
   const bar = task.startDate ? spanBox(task.startDate, task.endDate ?? task.startDate, range) : null;
+  // Only a moment while a new range loads can a task lie wholly outside the weeks shown.
+  if (!band && !bar) return null;
   const label = `${task.name} on ${task.unitName}: window ${windowText(task)}, ${task.startDate ? `set for ${datesText(task)}` : 'not scheduled'}, ${task.assigneeName ?? 'unassigned'}, ${task.status}`;
   return (
     <div className="relative h-7">
@@ -37,6 +39,11 @@ function TaskLane({ task, range, onOpen }: { task: TaskDto; range: ReturnType<ty
         {task.status === 'done' ? <span aria-hidden>✓</span> : null}
         <span className="truncate">{task.name}</span>
       </button>
+      {bar && bar.widthPct < 10 && bar.leftPct + bar.widthPct < 80 ? (
+        <span aria-hidden className="pointer-events-none absolute top-1.5 truncate text-[11px] text-ink" style={{ left: `calc(${bar.leftPct + bar.widthPct}% + ${task.warnings.length > 0 ? 1.75 : 0.35}rem)`, maxWidth: '12rem' }}>
+          {task.name}
+        </span>
+      ) : null}
       {task.warnings.length > 0 && bar ? (
         <span className="pointer-events-none absolute top-1" style={{ left: `calc(${Math.min(bar.leftPct + bar.widthPct, 97)}% + 2px)` }}>
           <WarningMarks warnings={task.warnings.slice(0, 1)} />

@@ -28,8 +28,8 @@ function TaskRow({ task, onOpen }: { task: TaskDto; onOpen: (id: number) => void
         <span className="flex items-center gap-1.5 sm:justify-end">
           <WarningMarks warnings={task.warnings} />
           {task.photos.length > 0 ? (
-            <span className="text-xs text-slate" aria-label={`${task.photos.length} photo${task.photos.length === 1 ? '' : 's'}`}>
-              📷 {task.photos.length}
+            <span className="text-xs text-slate">
+              {task.photos.length} photo{task.photos.length === 1 ? '' : 's'}
             </span>
           ) : null}
           <TaskStatusChip status={task.status} />
