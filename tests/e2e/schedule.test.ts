@@ -92,6 +92,9 @@ describe('the consultant’s schedule', () => {
     await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Schedule' }).click();
     await page.waitForURL(`${baseUrl}/schedule`);
     await page.getByRole('heading', { name: 'Schedule', level: 1 }).waitFor();
+    // This week of the whole firm (the demo's Kettle Hollow Farm work is on it) before any filter.
+    await page.locator('[data-task-id]').first().waitFor(WAIT);
+    await screenshot(page, 'schedule-this-week');
 
     // Filters live in the address: property, then the timeline by crew member over the task's weeks.
     await page.getByLabel('Property', { exact: true }).selectOption({ label: propertyName });

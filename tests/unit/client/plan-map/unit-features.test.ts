@@ -19,7 +19,13 @@ describe('units as map data', () => {
     // Families by kind as listed in shared/domain/unit-kinds.ts (DESIGN.md's kind table).
     expect(c.area.features.map((f) => f.id)).toEqual([1, 4]);
     expect(c.line.features.map((f) => f.properties.kind)).toEqual(['fence']);
-    expect(c.point.features[0].properties).toEqual({ id: 3, kind: 'gate', name: 'C', acres: 0 });
+    expect(c.point.features[0].properties).toEqual({ id: 3, kind: 'gate', name: 'C', acres: 0, workStatus: 'no-work' });
+  });
+
+  it('carries each unit’s work status for the "colour by work status" mode; units without tasks have none', () => {
+    // Status names from shared/domain/tasks.ts (unitWorkStatus); common practice, no source.
+    const c = unitsToCollections([unit(1, 'food-plot', 'A', 'area'), unit(4, 'timber', 'D', 'area')], new Map([[1, 'in-progress' as const]]));
+    expect(c.area.features.map((f) => f.properties.workStatus)).toEqual(['in-progress', 'no-work']);
   });
 
   it('lists the kinds present in palette order, each once', () => {
