@@ -15,38 +15,37 @@ function TaskBuckets({ me }: { me: { id: number; role: string } }) {
   if (tasks.isPending) return <Loading label="Loading your tasks…" />;
   if (tasks.isError) return <ErrorPanel error={tasks.error} onRetry={() => tasks.refetch()} />;
   const open = tasks.data.tasks.filter((t) => t.bucket !== 'finished' || queue.waitingFor(t.id));
-  if (open.length === 0) {
-    return (
-      <Card title="This week">
-        <EmptyState title="No tasks assigned to you">When your consultant assigns work from the schedule, it shows here with the map, the rates to apply and a “Mark done” button.</EmptyState>
-      </Card>
-    );
-  }
   const done = tasks.data.tasks.filter((t) => t.bucket === 'finished' && !queue.waitingFor(t.id));
   return (
     <>
-      {BUCKETS.map(({ bucket, title, empty }) => {
-        const list = open.filter((t) => t.bucket === bucket);
-        if (list.length === 0 && bucket !== 'this-week') return null;
-        return (
-          <section key={bucket} aria-labelledby={`bucket-${bucket}`} className="flex flex-col gap-2">
-            <h2 id={`bucket-${bucket}`} className={`text-base font-bold ${bucket === 'overdue' ? 'text-[#8E3F2A]' : 'text-ink'}`}>
-              {title} <span className="font-normal text-slate">({list.length})</span>
-            </h2>
-            {list.length === 0 ? (
-              <p className="text-sm text-slate">{empty}</p>
-            ) : (
-              <ul className="flex flex-col gap-2">
-                {list.map((t) => (
-                  <li key={t.id}>
-                    <TaskCard task={t} waitingToSend={Boolean(queue.waitingFor(t.id))} />
-                  </li>
-                ))}
-              </ul>
-            )}
-          </section>
-        );
-      })}
+      {open.length === 0 ? (
+        <Card title="This week">
+          <EmptyState title={done.length ? 'Nothing open on your list' : 'No tasks assigned to you'}>When your consultant assigns work from the schedule, it shows here with the map, the rates to apply and a “Mark done” button.</EmptyState>
+        </Card>
+      ) : (
+        BUCKETS.map(({ bucket, title, empty }) => {
+          const list = open.filter((t) => t.bucket === bucket);
+          if (list.length === 0 && bucket !== 'this-week') return null;
+          return (
+            <section key={bucket} aria-labelledby={`bucket-${bucket}`} className="flex flex-col gap-2">
+              <h2 id={`bucket-${bucket}`} className={`text-base font-bold ${bucket === 'overdue' ? 'text-[#8E3F2A]' : 'text-ink'}`}>
+                {title} <span className="font-normal text-slate">({list.length})</span>
+              </h2>
+              {list.length === 0 ? (
+                <p className="text-sm text-slate">{empty}</p>
+              ) : (
+                <ul className="flex flex-col gap-2">
+                  {list.map((t) => (
+                    <li key={t.id}>
+                      <TaskCard task={t} waitingToSend={Boolean(queue.waitingFor(t.id))} />
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </section>
+          );
+        })
+      )}
       {done.length > 0 ? (
         <details className="rounded-md border border-rule bg-card p-3">
           <summary className="cursor-pointer text-sm font-semibold">Finished ({done.length})</summary>

@@ -80,7 +80,7 @@ function RecordCard({ task }: { task: FieldTask }) {
           {task.photos.map((p, i) => (
             <li key={p.id}>
               <a href={p.url} target="_blank" rel="noreferrer">
-                <img src={p.url} alt={`Photo ${i + 1} of ${task.name}`} loading="lazy" className="aspect-square w-full rounded border border-rule object-cover" />
+                <img src={p.url} alt={`Photo ${i + 1} of ${task.name}`} className="aspect-square w-full rounded border border-rule object-cover" />
               </a>
             </li>
           ))}
@@ -117,12 +117,10 @@ export function FieldTaskPage() {
   return (
     <div className="flex flex-col gap-4">
       <BackLink />
-      <QueueNotice />
+      <QueueNotice showWaiting={false} />
       <div>
-        <div className="flex items-start justify-between gap-2">
-          <h1 className="text-2xl font-bold">{t.name}</h1>
-          <TaskStatusChip task={t} waitingToSend={Boolean(waiting)} />
-        </div>
+        <TaskStatusChip task={t} waitingToSend={Boolean(waiting)} />
+        <h1 className="mt-1 break-words text-2xl font-bold">{t.name}</h1>
         <p className="flex flex-wrap items-center gap-x-3">
           <span className="font-semibold">{t.unitName}</span>
           <KindChip kind={t.unitKind} />
@@ -137,7 +135,7 @@ export function FieldTaskPage() {
       </div>
       {waiting ? (
         <div role="status" className="rounded-md border border-ochre bg-ochre/10 px-4 py-3 text-sm">
-          <p className="font-semibold">Done on {waiting.fields.doneOn} — waiting to send</p>
+          <p className="font-semibold">Done on {formatDateRange(waiting.fields.doneOn, waiting.fields.doneOn)} — waiting to send</p>
           <p>{queue.online ? 'Sending now; it stays on this phone until Browseline has it.' : OFFLINE_MESSAGE}</p>
         </div>
       ) : null}

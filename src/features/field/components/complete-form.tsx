@@ -8,7 +8,7 @@ import { useToast } from '../../../components/ui/toast';
 import { sentence } from '../../../lib/api-errors';
 import type { FieldTask } from '../api/get-my-tasks';
 import { useCompletionQueue } from '../hooks/use-completion-queue';
-import { newCompletionKey, OFFLINE_MESSAGE } from '../lib/completion-queue';
+import { newCompletionKey } from '../lib/completion-queue';
 import { CompleteFormSchema, completeFormDefaults, completionFields, photoProblem, type CompleteFormInput, type CompleteFormOutput } from '../lib/complete-form';
 import { localToday } from '../lib/task-text';
 
@@ -86,9 +86,9 @@ export function CompleteForm({ task, onCancel }: { task: FieldTask; onCancel: ()
         fields: completionFields(values),
         photos: photos.map((f) => ({ name: f.name || 'photo.jpg', type: f.type, blob: f })),
       });
+      // A queued completion is shown on the page itself ("Done (waiting to send)").
       if (outcome.kind === 'sent') toast('success', `“${task.name}” marked done.`);
-      else if (outcome.kind === 'queued') toast('success', OFFLINE_MESSAGE);
-      else setProblem(outcome.message);
+      else if (outcome.kind === 'rejected') setProblem(outcome.message);
     } catch {
       setProblem('This phone could not keep the completion (its storage may be full). Free some space, then tap Save again.');
     } finally {

@@ -3,12 +3,12 @@ import { useCompletionQueue } from '../hooks/use-completion-queue';
 import { OFFLINE_MESSAGE } from '../lib/completion-queue';
 
 /** What waits on this phone (with a count and a "Send now") and what the server refused (with its message, until dismissed). */
-export function QueueNotice() {
+export function QueueNotice({ showWaiting = true }: { showWaiting?: boolean }) {
   const queue = useCompletionQueue();
-  if (queue.waiting.length === 0 && queue.rejected.length === 0) return null;
+  if ((queue.waiting.length === 0 || !showWaiting) && queue.rejected.length === 0) return null;
   return (
     <div className="flex flex-col gap-3">
-      {queue.waiting.length > 0 ? (
+      {showWaiting && queue.waiting.length > 0 ? (
         <div role="status" data-testid="pending-completions" className="rounded-md border border-ochre bg-ochre/10 px-4 py-3 text-sm text-ink">
           <p className="font-semibold">
             <span data-testid="pending-count">{queue.waiting.length}</span> {queue.waiting.length === 1 ? 'completion' : 'completions'} waiting to send

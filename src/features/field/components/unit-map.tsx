@@ -8,7 +8,7 @@ const DASH: Record<string, string | undefined> = { solid: undefined, dashed: '6 
 /** The unit as a small static map in its kind's colours, north up, with a dot where each photo with a position was taken. Works with no signal. */
 export function UnitMap({ geometry, kind, name, photos = [], widthPx = 320, heightPx = 200 }: { geometry: Geometry | null | undefined; kind: string | null; name: string; photos?: TaskPhotoDto[]; widthPx?: number; heightPx?: number }) {
   const located = photos.filter((p) => p.latitude !== null && p.longitude !== null);
-  const sketch = sketchUnit(geometry ?? null, widthPx, heightPx, located.map((p) => ({ id: p.id, position: [p.longitude as number, p.latitude as number] })));
+  const sketch = sketchUnit(geometry ?? null, widthPx, heightPx, located.map((p) => ({ id: p.id, position: [p.longitude as number, p.latitude as number] })), 30);
   const style = kind && isUnitKind(kind) ? KIND_STYLES[kind] : KIND_STYLES['other-area'];
   const label = sketch
     ? `Map of ${name} (${style.label.toLowerCase()})${sketch.placed.length ? `, with ${sketch.placed.length} photo position${sketch.placed.length === 1 ? '' : 's'}` : ''}`
