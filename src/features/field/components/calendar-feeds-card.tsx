@@ -41,16 +41,16 @@ export function CalendarFeedsCard() {
   const create = useCreateCalendarFeed();
   const revoke = useRevokeCalendarFeed();
   const toast = useToast();
-  const [fresh, setFresh] = useState<string | null>(null);
+  const [fresh, setFresh] = useState<{ id: number; url: string } | null>(null);
   return (
     <Card title="Calendar">
       <p className="mb-3 text-sm text-slate">Subscribe to your scheduled tasks in your phone’s calendar. The address is private: anyone holding it sees your tasks, so revoke it if it leaks.</p>
       {fresh ? (
         <div className="mb-3 flex flex-col gap-2 rounded border border-moss/50 bg-moss/5 p-3" data-testid="new-feed">
           <p className="text-sm font-semibold">Your new feed — copy it now; it is not shown again.</p>
-          <CopyRow label="Feed address" value={fresh} />
-          <CopyRow label="For calendar apps (webcal)" value={webcalUrl(fresh)} />
-          <a className="text-sm font-semibold text-moss-deep underline" href={webcalUrl(fresh)}>
+          <CopyRow label="Feed address" value={fresh.url} />
+          <CopyRow label="For calendar apps (webcal)" value={webcalUrl(fresh.url)} />
+          <a className="text-sm font-semibold text-moss-deep underline" href={webcalUrl(fresh.url)}>
             Open in my calendar app
           </a>
         </div>
@@ -73,6 +73,7 @@ export function CalendarFeedsCard() {
                 onClick={async () => {
                   try {
                     await revoke.mutateAsync(f.id);
+                    if (fresh?.id === f.id) setFresh(null);
                     toast('success', 'Feed revoked; calendar apps using it get nothing more.');
                   } catch (err) {
                     toast('error', err instanceof Error ? err.message : 'The feed could not be revoked. Try again.');
@@ -92,7 +93,7 @@ export function CalendarFeedsCard() {
         onClick={async () => {
           try {
             const feed = await create.mutateAsync();
-            setFresh(feed.url ?? null);
+            setFresh(feed.url ? { id: feed.id, url: feed.url } : null);
           } catch (err) {
             toast('error', err instanceof Error ? err.message : 'The feed could not be made. Try again.');
           }
