@@ -26,6 +26,9 @@ export async function migrateUp(): Promise<string[]> {
   try {
     await lockClient.query('SELECT pg_advisory_lock(7260410)');
     const done = await createMigrator().up();
+    // A fresh database gets PostGIS from the first migration: reload the type ids this process
+    // cached before, or geometry columns read back as raw WKB in the same process (the seed).
+    if (done.length > 0) await (sequelize.connectionManager as unknown as { _refreshDynamicOIDs(): Promise<void> })._refreshDynamicOIDs();
     return done.map((m) => m.name);
   } finally {
     await lockClient.query('SELECT pg_advisory_unlock(7260410)').catch(() => undefined);

@@ -152,7 +152,8 @@ describe('a proposal from the plan to the landowner’s approval', () => {
     await signIn(staff, baseUrl, 'consultant@browseline.test');
     await staff.waitForURL(`${baseUrl}/desk`);
     await staff.goto(`${baseUrl}/proposals?status=approved`);
-    const row = staff.locator('table tbody tr', { hasText: 'Kettle Hollow Farm' });
+    // The demo has an approved proposal for the farm already: pick this one's row by its link.
+    const row = staff.locator('table tbody tr', { has: staff.locator(`a[href="/proposals/${proposalId}"]`) });
     await poll(() => row.count()).toBe(1);
     expect(await row.locator('[data-status="approved"]').count()).toBe(1);
     await row.getByRole('link').click();

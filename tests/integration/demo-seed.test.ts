@@ -2,19 +2,29 @@ import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { seedDemo } from '../../server/db/seeds/demo';
 import { seedDemoPrescriptions } from '../../server/db/seeds/demo-prescriptions';
-import { Client, Prescription, Property, Unit, User } from '../../server/models';
+import { seedDemoSchedule } from '../../server/db/seeds/demo-schedule';
+import { Client, Prescription, Property, Proposal, Task, TaskPhoto, Unit, User } from '../../server/models';
 import { testApp } from '../support/test-app';
 
-const counts = async () => ({ users: await User.count(), clients: await Client.count(), properties: await Property.count(), units: await Unit.count(), prescriptions: await Prescription.count() });
+const counts = async () => ({ users: await User.count(), clients: await Client.count(), properties: await Property.count(), units: await Unit.count(), prescriptions: await Prescription.count(), proposals: await Proposal.count(), tasks: await Task.count(), photos: await TaskPhoto.count() });
 
 describe('the demo seed', () => {
   it('is idempotent, signs every demo role in, and is refused in production mode', async () => {
     const firm = await seedDemo();
     await seedDemoPrescriptions(firm);
+    await seedDemoSchedule(firm);
     const first = await counts();
-    await seedDemoPrescriptions(await seedDemo());
+    const again = await seedDemo();
+    await seedDemoPrescriptions(again);
+    await seedDemoSchedule(again);
     expect(await counts()).toEqual(first);
     expect(await Prescription.count({ where: { firmId: firm.id } })).toBeGreaterThanOrEqual(6);
+    // Work in progress: an approved proposal whose tasks are on the crew's sheet, one done with a photo.
+    expect(await Proposal.count({ where: { firmId: firm.id, status: 'approved' } })).toBe(1);
+    const crew = await User.findOne({ where: { email: 'crew@browseline.test' } });
+    expect(await Task.count({ where: { firmId: firm.id, assigneeId: crew!.id, status: 'scheduled' } })).toBeGreaterThanOrEqual(2);
+    expect(await Task.count({ where: { firmId: firm.id, status: 'done' } })).toBe(1);
+    expect(await TaskPhoto.count({ where: { firmId: firm.id } })).toBe(1);
     for (const email of ['owner@browseline.test', 'consultant@browseline.test', 'crew@browseline.test', 'client@browseline.test']) {
       const res = await request(testApp()).post('/api/auth/login').send({ email, password: 'demo-browseline' });
       expect(res.status, email).toBe(200);
