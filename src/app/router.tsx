@@ -18,6 +18,8 @@ import { PropertyPage } from './routes/properties/property';
 import { TeamPage } from './routes/settings/team';
 import { MailPage } from './routes/settings/mail';
 import { FieldHomePage } from './routes/field/field-home';
+import { FieldShell } from './routes/field/field-shell';
+import { FieldTaskPage } from './routes/field/field-task';
 import { PortalHomePage } from './routes/portal/portal-home';
 import { PortalProposalsPage } from './routes/portal/portal-proposals';
 import { PortalProposalPage } from './routes/portal/portal-proposal';
@@ -82,7 +84,15 @@ const router = createBrowserRouter([
       </RequireRole>
     ),
     errorElement: <RouteErrorPage />,
-    children: [{ path: paths.field, element: <FieldHomePage /> }],
+    children: [
+      {
+        element: <FieldShell />,
+        children: [
+          { path: paths.field, element: <FieldHomePage /> },
+          { path: paths.fieldTask(), element: <FieldTaskPage /> },
+        ],
+      },
+    ],
   },
   {
     element: (

@@ -25,6 +25,7 @@ export const paths = {
   libraryRates: '/library/rates',
   propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   field: '/field',
+  fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   portal: '/portal',
   portalProposals: '/portal/proposals',
   /** The link in the proposal e-mail: keep this path. */

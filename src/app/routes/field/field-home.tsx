@@ -1,12 +1,72 @@
 import { useFieldHome } from '../../../features/field/api/get-field-home';
 import { useMe } from '../../../features/auth/api/get-me';
+import { useMyTasks } from '../../../features/field/api/get-my-tasks';
+import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
+import { TaskCard } from '../../../features/field/components/task-card';
+import { QueueNotice } from '../../../features/field/components/queue-notice';
+import { CalendarFeedsCard } from '../../../features/field/components/calendar-feeds-card';
+import { BUCKETS } from '../../../features/field/lib/task-text';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 
-/** The crew's field sheet: this week's assigned work, who to call, and the safety rules. */
+/** The assigned tasks grouped Overdue, This week, Coming up. */
+function TaskBuckets({ me }: { me: { id: number; role: string } }) {
+  const tasks = useMyTasks(me);
+  const queue = useCompletionQueue();
+  if (tasks.isPending) return <Loading label="Loading your tasks…" />;
+  if (tasks.isError) return <ErrorPanel error={tasks.error} onRetry={() => tasks.refetch()} />;
+  const open = tasks.data.tasks.filter((t) => t.bucket !== 'finished' || queue.waitingFor(t.id));
+  const done = tasks.data.tasks.filter((t) => t.bucket === 'finished' && !queue.waitingFor(t.id));
+  return (
+    <>
+      {open.length === 0 ? (
+        <Card title="This week">
+          <EmptyState title={done.length ? 'Nothing open on your list' : 'No tasks assigned to you'}>When your consultant assigns work from the schedule, it shows here with the map, the rates to apply and a “Mark done” button.</EmptyState>
+        </Card>
+      ) : (
+        BUCKETS.map(({ bucket, title, empty }) => {
+          const list = open.filter((t) => t.bucket === bucket);
+          if (list.length === 0 && bucket !== 'this-week') return null;
+          return (
+            <section key={bucket} aria-labelledby={`bucket-${bucket}`} className="flex flex-col gap-2">
+              <h2 id={`bucket-${bucket}`} className={`text-base font-bold ${bucket === 'overdue' ? 'text-[#8E3F2A]' : 'text-ink'}`}>
+                {title} <span className="font-normal text-slate">({list.length})</span>
+              </h2>
+              {list.length === 0 ? (
+                <p className="text-sm text-slate">{empty}</p>
+              ) : (
+                <ul className="flex flex-col gap-2">
+                  {list.map((t) => (
+                    <li key={t.id}>
+                      <TaskCard task={t} waitingToSend={Boolean(queue.waitingFor(t.id))} />
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </section>
+          );
+        })
+      )}
+      {done.length > 0 ? (
+        <details className="rounded-md border border-rule bg-card p-3">
+          <summary className="cursor-pointer text-sm font-semibold">Finished ({done.length})</summary>
+          <ul className="mt-2 flex flex-col gap-2">
+            {done.map((t) => (
+              <li key={t.id}>
+                <TaskCard task={t} waitingToSend={false} />
+              </li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
+    </>
+  );
+}
+
+/** The crew's field sheet: assigned work by week, what waits to send, who to call, the calendar feed and the safety rules. */
 export function FieldHomePage() {
   const me = useMe();
   const home = useFieldHome();
-  if (home.isPending) return <Loading />;
+  if (home.isPending || !me.data) return <Loading />;
   if (home.isError) return <ErrorPanel error={home.error} />;
   const today = new Date().toLocaleDateString('en-US', { weekday: 'long', month: 'long', day: 'numeric' });
   return (
@@ -14,11 +74,10 @@ export function FieldHomePage() {
       <div>
         <p className="text-sm text-slate">{today}</p>
         <h1 className="text-2xl font-bold">Field sheet</h1>
-        <p className="text-slate">{me.data?.name} · {home.data.firm.name}</p>
+        <p className="text-slate">{me.data.name} · {home.data.firm.name}</p>
       </div>
-      <Card title="This week">
-        <EmptyState title="No tasks assigned to you">When your consultant assigns work from the schedule, it shows here with the map, the rates to apply and a “Mark done” button.</EmptyState>
-      </Card>
+      <QueueNotice />
+      <TaskBuckets me={me.data} />
       <Card title="Who to call">
         <ul className="flex flex-col gap-3">
           {home.data.contacts.map((c) => (
@@ -46,6 +105,7 @@ export function FieldHomePage() {
           <li>Follow local codes, state wildlife rules and licensed practice; ask your consultant when unsure.</li>
         </ul>
       </CautionBox>
+      <CalendarFeedsCard />
     </div>
   );
 }

@@ -1,0 +1,289 @@
+/**
+ * The crew's field sheet at a phone's size: marking a task done with a photo (seen by the
+ * consultant's schedule and the landowner's progress), marking one done with no signal (sent once
+ * when the phone is back online), and a completion whose answer is lost on the way back (sent again
+ * with the same key, recorded once).
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { request, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { launchBrowser, screenshot, signIn, watchPage, DEMO_PASSWORD } from '../support/browser';
+import { withGpsExif } from '../support/exif';
+
+const baseUrl = inject('baseUrl');
+const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
+/** Waits for the page or the server to catch up (a sync, a refetch): up to 20 s, no fixed sleeps. */
+const poll = <T>(fn: () => Promise<T> | T, timeout = 20_000) => expect.poll(fn, { timeout, interval: 150 });
+
+interface ApiTask {
+  id: number;
+  name: string;
+  unitId: number;
+  unitName: string;
+  status: string;
+  assigneeId: number | null;
+  costCents: number | null;
+  photos: { id: number; url: string; latitude: number | null }[];
+  hours: number | null;
+  notes: string | null;
+}
+
+/** A signed-in API session (cookie + CSRF token) for setting up and checking through the API. */
+async function apiAs(email: string): Promise<{ ctx: APIRequestContext; csrf: string }> {
+  const ctx = await request.newContext({ baseURL: baseUrl });
+  const res = await ctx.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD } });
+  expect(res.status()).toBe(200);
+  return { ctx, csrf: ((await res.json()) as { csrfToken: string }).csrfToken };
+}
+
+let browser: Browser;
+let consultant: Awaited<ReturnType<typeof apiAs>>;
+let club: Awaited<ReturnType<typeof apiAs>>;
+let propertyId = 0;
+let crewId = 0;
+/** Three tasks on the Bluestem Ridge club plot, assigned to the demo crew member for today. */
+let tasks: ApiTask[] = [];
+
+const write = (who: { ctx: APIRequestContext; csrf: string }, method: 'post' | 'patch', url: string, data: unknown = {}) => who.ctx[method](url, { data, headers: { 'X-CSRF-Token': who.csrf } });
+const taskById = async (id: number): Promise<ApiTask> => {
+  const res = await consultant.ctx.get(`/api/tasks?propertyId=${propertyId}`);
+  expect(res.status()).toBe(200);
+  return ((await res.json()) as { data: { tasks: ApiTask[] } }).data.tasks.find((t) => t.id === id)!;
+};
+const today = () => new Date().toISOString().slice(0, 10);
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  consultant = await apiAs('consultant@browseline.test');
+  club = await apiAs('club@browseline.test');
+  // Demo data: Bluestem Ridge (club@'s land) has a fall brassica prescription on its Club plot; no other journey approves a proposal there.
+  const properties = (await (await consultant.ctx.get('/api/properties')).json()) as { data: { id: number; name: string }[] };
+  propertyId = properties.data.find((p) => p.name === 'Bluestem Ridge')!.id;
+  const team = (await (await consultant.ctx.get('/api/team')).json()) as { data: { id: number; email: string }[] };
+  crewId = team.data.find((m) => m.email === 'crew@browseline.test')!.id;
+
+  let list = (await (await consultant.ctx.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
+  if (list.data.tasks.length === 0) {
+    const draft = await write(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 30 });
+    expect(draft.status()).toBe(201);
+    const proposalId = ((await draft.json()) as { data: { id: number } }).data.id;
+    expect((await write(consultant, 'post', `/api/proposals/${proposalId}/send`)).status()).toBe(200);
+    expect((await write(club, 'post', `/api/proposals/${proposalId}/approve`, { signedName: 'Marcus Feld' })).status()).toBe(200);
+    list = (await (await consultant.ctx.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
+  }
+  const open = list.data.tasks.filter((t) => t.status === 'planned' || t.status === 'scheduled');
+  expect(open.length).toBeGreaterThanOrEqual(3);
+  tasks = open.slice(0, 3);
+  for (const t of tasks) {
+    const res = await write(consultant, 'patch', `/api/tasks/${t.id}`, { assigneeId: crewId, startDate: today() });
+    expect(res.status()).toBe(200);
+  }
+});
+
+afterAll(async () => {
+  await consultant?.ctx.dispose();
+  await club?.ctx.dispose();
+  await browser?.close();
+});
+
+/** A phone: 360 × 740, touch, in the demo firm's time zone (behind UTC, like the server's calendar or earlier). */
+async function phone(): Promise<{ context: BrowserContext; page: Page; assertClean: () => void }> {
+  const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, timezoneId: 'America/Chicago' });
+  const page = await context.newPage();
+  const { errors } = watchPage(page);
+  // Requests that fail while the phone is offline are the point of the second journey, not errors.
+  return { context, page, assertClean: () => expect(errors.filter((e) => !/net::ERR_INTERNET_DISCONNECTED|ERR_CONNECTION_RESET|ERR_FAILED|Failed to fetch/.test(e))).toEqual([]) };
+}
+
+async function openTask(page: Page, task: ApiTask): Promise<void> {
+  await page.goto(`${baseUrl}/field`);
+  await page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} — ${task.unitName}`) }).click();
+  await page.waitForURL(new RegExp(`/field/tasks/${task.id}$`));
+  await poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(task.name);
+}
+
+/** No horizontal scrolling at the phone's width. */
+const fitsWidth = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1);
+
+describe('the crew’s field sheet on a phone', () => {
+  it('the crew member opens the field sheet, marks a task done with a photo; the schedule and the landowner’s progress show it', async () => {
+    const { context, page, assertClean } = await phone();
+    await signIn(page, baseUrl, 'crew@browseline.test');
+    await page.waitForURL(`${baseUrl}/field`);
+    await poll(() => page.getByRole('link', { name: new RegExp(tasks[0].unitName) }).count()).toBeGreaterThanOrEqual(3);
+    expect(await page.getByText('$').count()).toBe(0); // crew never see prices
+    expect(await fitsWidth(page)).toBe(true);
+    await screenshot(page, 'field-home-360');
+
+    const task = tasks[0];
+    await openTask(page, task);
+    const maps = page.getByRole('link', { name: /Open in maps/ });
+    // RFC 5870: geo:<latitude>,<longitude>; Bluestem Ridge lies near 43.55° N, 90.88° W (demo data).
+    expect(await maps.getAttribute('href')).toMatch(/^geo:43\.5\d*,-90\.8\d*/);
+    await expect.poll(() => page.getByRole('img', { name: /Map of Club plot/ }).count()).toBe(1);
+    expect(await page.getByText('$').count()).toBe(0);
+    await screenshot(page, 'field-task-360');
+
+    await page.getByRole('button', { name: 'Mark done' }).click();
+    const form = page.getByRole('form', { name: 'Mark done' });
+    await form.getByLabel('Hours worked').fill('2.5');
+    await form.getByLabel('Notes').fill('Broadcast before the rain; good seed-to-soil contact.');
+    // A photo taken in the plot (its GPS position is read back and drawn on the unit map).
+    await form.getByLabel('Photos').setInputFiles({ name: 'club-plot.jpg', mimeType: 'image/jpeg', buffer: withGpsExif(JPEG, 43.5494, -90.8785) });
+    await poll(() => form.getByRole('img', { name: /Photo 1: club-plot\.jpg/ }).count()).toBe(1);
+    expect(await fitsWidth(page)).toBe(true);
+    await screenshot(page, 'field-mark-done-360');
+    await form.getByRole('button', { name: /Save/ }).click();
+
+    await poll(() => page.getByRole('heading', { name: 'Done', exact: true }).count()).toBe(1);
+    await poll(() => page.getByRole('img', { name: new RegExp(`Photo 1 of ${task.name}`) }).count()).toBe(1);
+    // The photo's position is a dot on the unit map.
+    await poll(() => page.locator('[data-photo-dot]').count()).toBe(1);
+    await poll(() => page.getByRole('img', { name: new RegExp(`Photo 1 of ${task.name}`) }).evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+    expect(await fitsWidth(page)).toBe(true);
+    await screenshot(page, 'field-task-done-360');
+
+    // The consultant's schedule (GET /api/tasks) has it done, with the one photo, the hours and notes.
+    const done = await taskById(task.id);
+    expect(done).toMatchObject({ status: 'done', hours: 2.5, notes: 'Broadcast before the rain; good seed-to-soil contact.' });
+    expect(done.photos).toHaveLength(1);
+    expect(done.photos[0].latitude).toBeCloseTo(43.5494, 4);
+
+    // The landowner's progress shows the plot under way (or finished), and they may see the crew's photo.
+    const progress = await club.ctx.get(`/api/properties/${propertyId}/progress`);
+    expect(progress.status()).toBe(200);
+    const body = (await progress.json()) as { data: { plan: { done: number }; units: { unitId: number; status: string; percentByCount: number }[] } };
+    const unit = body.data.units.find((u) => u.unitId === task.unitId)!;
+    expect(['in-progress', 'done']).toContain(unit.status);
+    expect(unit.percentByCount).toBeGreaterThan(0);
+    expect(body.data.plan.done).toBeGreaterThanOrEqual(1);
+    expect((await club.ctx.get(done.photos[0].url)).status()).toBe(200);
+
+    // Back on the field sheet the task has left the open lists for "Finished".
+    await page.getByRole('link', { name: '← Field sheet' }).click();
+    await poll(() => page.getByText(/Finished \(\d+\)/).count()).toBe(1);
+    assertClean();
+    await context.close();
+  });
+
+  it('marks a task done with no signal: it waits on the phone, then lands exactly once when the phone is back online', async () => {
+    const { context, page, assertClean } = await phone();
+    await signIn(page, baseUrl, 'crew@browseline.test');
+    await page.waitForURL(`${baseUrl}/field`);
+    const task = tasks[1];
+    await openTask(page, task);
+
+    await context.setOffline(true);
+    await page.getByRole('button', { name: 'Mark done' }).click();
+    const form = page.getByRole('form', { name: 'Mark done' });
+    await form.getByLabel('Notes').fill('No signal in the bottom; saved on the phone.');
+    await form.getByLabel('Photos').setInputFiles({ name: 'offline.jpg', mimeType: 'image/jpeg', buffer: JPEG });
+    await form.getByRole('button', { name: /Save/ }).click();
+    await poll(() => page.getByText('Saved on this phone — will send when you’re back online.').first().isVisible()).toBe(true);
+    await poll(() => page.getByText('Done (waiting to send)').count()).toBeGreaterThanOrEqual(1);
+    expect(await fitsWidth(page)).toBe(true);
+    await screenshot(page, 'field-offline-task-360');
+
+    // The field sheet (reached inside the app, no reload) shows the pending count and the card as waiting.
+    await page.getByRole('link', { name: '← Field sheet' }).click();
+    await poll(() => page.getByTestId('pending-count').textContent()).toBe('1');
+    const card = page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} — `) });
+    await poll(() => card.getByText('Done (waiting to send)').count()).toBe(1);
+    expect(await fitsWidth(page)).toBe(true);
+    await screenshot(page, 'field-offline-home-360');
+    expect((await taskById(task.id)).status).not.toBe('done'); // nothing reached the server
+
+    await context.setOffline(false);
+    await poll(() => page.getByTestId('pending-completions').count()).toBe(0);
+    await poll(async () => (await taskById(task.id)).status).toBe('done');
+    const landed = await taskById(task.id);
+    expect(landed.photos).toHaveLength(1);
+    expect(landed.notes).toBe('No signal in the bottom; saved on the phone.');
+
+    // Another "online" (a flaky link flapping) sends nothing more: the queue on the phone is empty.
+    await page.evaluate(() => window.dispatchEvent(new Event('online')));
+    await poll(() =>
+      page.evaluate(
+        () =>
+          new Promise<number>((resolve, reject) => {
+            const open = indexedDB.open('browseline-field');
+            open.onerror = () => reject(open.error);
+            open.onsuccess = () => {
+              const count = open.result.transaction('completions').objectStore('completions').count();
+              count.onsuccess = () => resolve(count.result);
+            };
+          }),
+      ),
+    ).toBe(0);
+    expect((await taskById(task.id)).photos).toHaveLength(1);
+    await screenshot(page, 'field-back-online-360');
+    assertClean();
+    await context.close();
+  });
+
+  it('sends a completion again with the same key when the server’s answer is lost, and it is recorded once', async () => {
+    const { context, page, assertClean } = await phone();
+    await signIn(page, baseUrl, 'crew@browseline.test');
+    await page.waitForURL(`${baseUrl}/field`);
+    const task = tasks[2];
+    await openTask(page, task);
+
+    // The first send reaches the server, but the answer never gets back to the phone.
+    const keys: string[] = [];
+    let lost = 0;
+    let firstStatus = 0;
+    await page.route(`**/api/tasks/${task.id}/complete`, async (route) => {
+      keys.push(route.request().headers()['idempotency-key'] ?? '');
+      if (lost === 0) {
+        lost += 1;
+        firstStatus = (await route.fetch()).status();
+        await route.abort('connectionreset');
+        return;
+      }
+      await route.continue();
+    });
+    await page.getByRole('button', { name: 'Mark done' }).click();
+    const form = page.getByRole('form', { name: 'Mark done' });
+    await form.getByLabel('Photos').setInputFiles({ name: 'lost-answer.jpg', mimeType: 'image/jpeg', buffer: JPEG });
+    await form.getByRole('button', { name: /Save/ }).click();
+    await poll(() => firstStatus).toBe(201);
+    await poll(() => page.getByText('Sending now; it stays on this phone until Browseline has it.').count()).toBe(1);
+    expect((await taskById(task.id)).status).toBe('done'); // the server has it; the phone does not know yet
+    await page.getByRole('link', { name: '← Field sheet' }).click();
+    await poll(() => page.getByTestId('pending-count').textContent()).toBe('1');
+    await screenshot(page, 'field-answer-lost-360');
+    // "Send now" (the runner's timer may beat the tap to it; either way the same key goes again).
+    await page.getByRole('button', { name: 'Send now' }).click({ timeout: 3000 }).catch(() => undefined);
+    await poll(() => page.getByTestId('pending-completions').count()).toBe(0);
+    expect(keys).toHaveLength(2);
+    expect(keys[1]).toBe(keys[0]);
+    expect(keys[0]).toMatch(/^done-[0-9a-f-]{36}$/);
+    expect((await taskById(task.id)).photos).toHaveLength(1);
+    await poll(() => page.getByText(/Finished \(\d+\)/).count()).toBe(1);
+    assertClean();
+    await context.close();
+  });
+
+  it('makes a private calendar feed, shows its address once with a webcal:// twin, and revokes it', async () => {
+    const { context, page, assertClean } = await phone();
+    await signIn(page, baseUrl, 'crew@browseline.test');
+    await page.waitForURL(`${baseUrl}/field`);
+    await page.getByRole('button', { name: 'Make a calendar feed' }).click();
+    const fresh = page.getByTestId('new-feed');
+    await poll(() => fresh.getByLabel('Feed address').inputValue()).toMatch(/\/api\/calendar\/[A-Za-z0-9_-]+\.ics$/);
+    const url = await fresh.getByLabel('Feed address').inputValue();
+    expect(await fresh.getByLabel('For calendar apps (webcal)').inputValue()).toBe(url.replace(/^https?:\/\//, 'webcal://'));
+    // RFC 5545: the feed is an iCalendar object, and the crew member's tasks are in it.
+    const anon = await request.newContext();
+    const feed = await anon.get(url);
+    expect(feed.status()).toBe(200);
+    expect(await feed.text()).toMatch(/^BEGIN:VCALENDAR\r\n/);
+    await screenshot(page, 'field-calendar-360');
+    await page.getByRole('button', { name: /^Revoke the feed/ }).first().click();
+    await poll(async () => (await anon.get(url)).status()).toBe(404);
+    await anon.dispose();
+    assertClean();
+    await context.close();
+  });
+});
