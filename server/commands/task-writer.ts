@@ -8,6 +8,7 @@ import { Client, Firm, Property, Task, TaskPhoto, User } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { TaskCompleteInput, TaskUpdateInput } from '../../shared/schemas/task';
 import { plannedOrScheduled, progressOf } from '../../shared/domain/tasks';
+import { addDays } from '../../shared/domain/planting-windows';
 import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { deleteFile, saveFile } from '../services/storage/disk-storage';
@@ -115,7 +116,8 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
   }
   const probe = await taskForActor(actor, id);
   if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn}` : 'skipped'} already; nothing was changed.`);
-  if (input.doneOn > todayIso()) throw unprocessable('doneOn: the date the work was done cannot be in the future.');
+  // A day of slack: the phone sends its own calendar day, which runs ahead of UTC east of Greenwich.
+  if (input.doneOn > addDays(todayIso(), 1)) throw unprocessable('doneOn: the date the work was done cannot be in the future.');
   const saved: string[] = [];
   try {
     for (const photo of photos) saved.push(await saveFile('photos', photo.bytes, photo.extension));
