@@ -15,6 +15,8 @@ import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
 import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
 import { propertyProposalsRouter, proposalsRouter } from './proposals';
+import { invoicesRouter } from './invoices';
+import { webhooksRouter } from './webhooks';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -38,4 +40,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/prescriptions', router: prescriptionsRouter },
   { path: '/properties', router: propertyProposalsRouter },
   { path: '/proposals', router: proposalsRouter },
+  { path: '/invoices', router: invoicesRouter },
+  { path: '/webhooks', router: webhooksRouter },
 ];
