@@ -3,10 +3,10 @@ import type { Request } from 'express';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
-import { Invoice } from '../models';
+import { Invoice, Task } from '../models';
 import { sequelize } from '../db/sequelize';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type InvoiceListQuery, type ReceivablesDto } from '../../shared/schemas/invoice';
+import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type BillableTaskDto, type InvoiceListQuery, type ReceivablesDto } from '../../shared/schemas/invoice';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { addManualLine, createInvoice, removeManualLine, sendInvoice, updateInvoice, voidInvoice } from '../commands/invoice-writer';
 import { refundPayment, startCheckout } from '../commands/payment-recorder';
@@ -61,6 +61,13 @@ r.get('/receivables', STAFF, async (req, res) => {
     draftCount: await Invoice.count({ where: { firmId, status: 'draft' } }),
   };
   res.json({ data: answer });
+});
+
+r.get('/billable-tasks', STAFF, validate({ query: BillableTasksQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { proposalId } = req.validQuery as { proposalId: number };
+  const tasks = await Task.findAll({ where: { firmId, proposalId, status: 'done', invoiceId: null }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  res.json({ data: tasks.map((t): BillableTaskDto => ({ id: t.id, name: t.name, unitName: t.unitName, doneOn: t.doneOn, costCents: t.costCents })) });
 });
 
 r.post('/', STAFF, validate({ body: InvoiceCreateSchema }), async (req, res) => {

@@ -1,5 +1,6 @@
 /** Invoices: what the API takes (zod) and answers (types shared by the server's presenter and the client). */
 import { z } from 'zod';
+import { parseDollarsToCents } from '../domain/money';
 import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceKind, type InvoiceLineSource, type InvoiceStatus } from '../domain/invoicing';
 
 const id = z.number({ message: 'must be a record id' }).int().positive({ message: 'must be a positive whole number' });
@@ -130,4 +131,25 @@ export interface ReceivablesDto {
   overdueCents: number;
   paidThisMonthCents: number;
   draftCount: number;
+}
+
+/** The manual-line form: the same rules as ManualLineSchema, with the price typed in dollars ("65.00"). */
+export const ManualLineFormSchema = ManualLineSchema.omit({ unitPriceCents: true }).extend({
+  unitPrice: z
+    .string()
+    .trim()
+    .regex(/^\$?\d{1,7}(,\d{3})*(\.\d{1,2})?$/, { message: 'write the price like 65.00 (dollars and cents)' })
+    .transform((v) => parseDollarsToCents(v, 'unitPrice')),
+});
+export type ManualLineFormInput = z.input<typeof ManualLineFormSchema>;
+
+export const BillableTasksQuerySchema = z.object({ proposalId: z.coerce.number().int().positive() });
+
+/** A done task not billed yet, offered for a progress invoice. */
+export interface BillableTaskDto {
+  id: number;
+  name: string;
+  unitName: string;
+  doneOn: string | null;
+  costCents: number;
 }

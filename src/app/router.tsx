@@ -26,6 +26,10 @@ import { ProposalPage } from './routes/proposals/proposal';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
 import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
+import { InvoicesPage } from './routes/invoices/invoices';
+import { InvoicePage } from './routes/invoices/invoice';
+import { PortalInvoicesPage } from './routes/portal/portal-invoices';
+import { PortalInvoicePage } from './routes/portal/portal-invoice';
 
 function RootRedirect() {
   const me = useMe();
@@ -56,6 +60,8 @@ const router = createBrowserRouter([
       { path: paths.property(), element: <PropertyPage /> },
       { path: paths.proposals, element: <ProposalsPage /> },
       { path: paths.proposal(), element: <ProposalPage /> },
+      { path: paths.invoices, element: <InvoicesPage /> },
+      { path: paths.invoice(), element: <InvoicePage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,
@@ -93,6 +99,8 @@ const router = createBrowserRouter([
       { path: paths.portal, element: <PortalHomePage /> },
       { path: paths.portalProposals, element: <PortalProposalsPage /> },
       { path: paths.portalProposal(), element: <PortalProposalPage /> },
+      { path: paths.portalInvoices, element: <PortalInvoicesPage /> },
+      { path: paths.portalInvoice(), element: <PortalInvoicePage /> },
     ],
   },
   { path: '*', element: <NotFoundPage /> },
