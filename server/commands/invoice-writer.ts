@@ -79,7 +79,7 @@ export async function draftDepositInvoice(proposal: Proposal, transaction: Trans
       position: 0,
       source: 'deposit',
       taskId: null,
-      description: `Deposit on approval of proposal ${proposal.number} (${Number(proposal.depositPct)} % of ${proposal.number}’s total)`,
+      description: `Deposit on approval of proposal ${proposal.number} (${Number(proposal.depositPct)} % of the approved total)`,
       quantity: '1',
       unitPriceCents: proposal.depositCents,
       amountCents: proposal.depositCents,

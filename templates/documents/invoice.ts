@@ -160,13 +160,15 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
 
   const howToPay: Content[] =
     invoice.status === 'open'
-      ? [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any cheque.', style: 'small', margin: [0, 3, 0, 0] }]
+      ? [{ unbreakable: true, stack: [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any cheque.', style: 'small', margin: [0, 3, 0, 0] }] }]
       : [];
 
   const frame = pageFrame({ title: `Invoice ${invoice.number}`, firmName: firm.name, firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined, preparedOn: issued ?? undefined });
   return {
     ...frame,
     header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : frame.header(currentPage, pageCount, pageSize)),
+    // Short sections are unbreakable stacks, so a heading never sits alone at a page's foot.
+    pageBreakBefore: () => false,
     watermark: invoice.status === 'draft' || invoice.status === 'void' ? { text: invoice.status.toUpperCase(), color: invoice.status === 'void' ? DOC_COLORS.clay : OCHRE, opacity: 0.09, bold: true, font: FONT_HEADING, fontSize: 110 } : undefined,
     info: { title: `Invoice ${invoice.number}`, author: firm.name, subject: `${KIND_TITLE[invoice.kind]} for ${input.client.name}` },
     content: [
@@ -178,9 +180,9 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
       { text: 'Lines', style: 'h2' },
       { table: { headerRows: 1, widths: ['*', 'auto', 'auto', 'auto'], body, dontBreakRows: true }, layout: ruledTableLayout },
       totalsBlock,
-      ...payments,
-      ...(invoice.notes?.trim() ? [{ text: 'Notes', style: 'h2' } as Content, { text: invoice.notes, fontSize: 9.5 } as Content] : []),
       ...howToPay,
+      ...payments,
+      ...(invoice.notes?.trim() ? [{ unbreakable: true, stack: [{ text: 'Notes', style: 'h2' }, { text: invoice.notes, fontSize: 9.5 }] } as Content] : []),
     ],
   };
 }
