@@ -8,7 +8,7 @@ import Stripe from 'stripe';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, testApp, type Agent } from '../support/test-app';
-import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
+import { makeClient, makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { Invoice, InvoicePayment, OutboxMessage, Practice, Proposal, Task } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
@@ -337,5 +337,31 @@ describe('receivables and reminders', () => {
     expect(await sendOverdueReminders(today)).toBe(0); // not twice in a week
     expect(await sendOverdueReminders(addDays(today, 7))).toBeGreaterThanOrEqual(1);
     expect((await other.reload()).reminderCount).toBe(2);
+  });
+});
+
+describe('void invoices and other clients', () => {
+  it('voids an open invoice without payments, frees its tasks, and refuses to take payment for it', async () => {
+    const progress = (await consultant.get(`/api/invoices?proposalId=${proposal.id}&status=open`)).body.data.find((i: { kind: string }) => i.kind === 'progress');
+    expect(progress).toBeTruthy();
+    expect((await send(consultant, 'post', `/api/invoices/${progress.id}/void`, { reason: 'x' })).status).toBe(422); // a reason is required
+    const res = await send(consultant, 'post', `/api/invoices/${progress.id}/void`, { reason: 'Billed on the wrong proposal' });
+    expect(res.status).toBe(200);
+    expect(res.body.data.status).toBe('void');
+    expect(await Task.count({ where: { invoiceId: progress.id } })).toBe(0);
+    const pay = await send(client, 'post', `/api/invoices/${progress.id}/checkout`);
+    expect(pay.status).toBe(409);
+    expect(pay.body.error).toMatch(/void/);
+  });
+
+  it('shows a client only their own invoices', async () => {
+    const neighbour = await makeClient(ctx.firm.id);
+    const other = await signedInAgent((await makeUser(ctx.firm.id, 'client', neighbour.id)).email, PASSWORD);
+    expect((await other.get('/api/invoices')).body.data).toEqual([]);
+    const mine = (await client.get('/api/invoices')).body.data;
+    expect(mine.length).toBeGreaterThan(0);
+    expect((await other.get(`/api/invoices/${mine[0].id}`)).status).toBe(404);
+    expect((await send(other, 'post', `/api/invoices/${mine[0].id}/checkout`)).status).toBe(404);
+    expect((await other.get(`/api/invoices/${mine[0].id}/pdf`)).status).toBe(404);
   });
 });
