@@ -75,6 +75,8 @@ export function createApp(): Express {
   );
 
   const PgStore = connectPgSimple(session);
+  // Signed webhooks are verified on the exact bytes sent, so this path takes its body raw, before the JSON parser.
+  app.use('/api/webhooks/payments', express.raw({ type: 'application/json', limit: LIMITS.jsonBodyBytes }));
   app.use(
     '/api',
     express.json({ limit: LIMITS.jsonBodyBytes }),

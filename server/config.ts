@@ -33,6 +33,8 @@ export const config = {
   /** The local SMTP capture server's HTTP reader (development only). */
   mailCaptureUrl: env.MAIL_CAPTURE_URL ?? `http://127.0.0.1:${int(env.MAIL_CAPTURE_HTTP_PORT, 1081)}`,
   outboxPollMs: int(env.OUTBOX_POLL_MS, 2000),
+  /** How often the server looks for overdue invoices to remind (default hourly). */
+  reminderPollMs: int(env.REMINDER_POLL_MS, 60 * 60 * 1000),
   loginRateLimit: { windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000), max: int(env.LOGIN_RATE_MAX, 10) },
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
   clientDist: path.join(projectRoot, 'dist'),

@@ -5,6 +5,7 @@ import { logger } from './logger';
 import { migrateUp } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { startOutboxWorker } from './services/mail/outbox';
+import { startReminderJob } from './commands/reminder-sender';
 
 if (process.env.MIGRATE_ON_START !== 'false') {
   const applied = await migrateUp();
@@ -16,10 +17,12 @@ const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
 });
 const stopOutbox = startOutboxWorker();
+const stopReminders = startReminderJob();
 
 async function shutdown(signal: string) {
   logger.info({ signal }, 'shutting down');
   stopOutbox();
+  stopReminders();
   server.close();
   await closeSessionPool().catch(() => undefined);
   await sequelize.close().catch(() => undefined);

@@ -17,6 +17,7 @@ import { proposalDecidedEmail } from '../../templates/email/proposal-sent';
 import { config } from '../config';
 import { todayIso } from './prescription-writer';
 import { generateTasksForProposal } from './task-generator';
+import { draftDepositInvoice } from './invoice-writer';
 
 interface RequestContext {
   ip: string | null;
@@ -77,6 +78,7 @@ export async function approveProposal(actor: SessionUser, id: number, input: App
     await ProposalApproval.create({ proposalId: proposal.id, userId: actor.id, signedName: input.signedName, signedAt, ip: ctx.ip, userAgent: ctx.userAgent?.slice(0, 500) ?? null, contentHash: hash, content, selectedOptionIds: [...optionIds] }, { transaction });
     await proposal.update({ status: 'approved', decidedAt: signedAt }, { transaction });
     await generateTasksForProposal(proposal, transaction);
+    await draftDepositInvoice(proposal, transaction);
     await notifyFirm(proposal, 'approved', { signedName: input.signedName }, transaction);
     await recordAudit({ firmId: proposal.firmId, userId: actor.id, action: 'proposal.approved', subjectType: 'Proposal', subjectId: proposal.id, data: { contentHash: hash, totalCents: proposal.totalCents }, ip: ctx.ip }, transaction);
     return proposal;

@@ -187,7 +187,7 @@ export async function reviseProposal(actor: SessionUser, id: number, ip: string 
 }
 
 /** The addresses a proposal goes to: the client's portal contacts, or the client's own e-mail. */
-async function clientRecipients(clientId: number, transaction: Transaction): Promise<string[]> {
+export async function clientRecipients(clientId: number, transaction: Transaction): Promise<string[]> {
   const contacts = await User.findAll({ where: { clientId, role: 'client', active: true }, attributes: ['email'], transaction });
   const client = await Client.findByPk(clientId, { attributes: ['email'], transaction });
   const emails = contacts.map((c) => c.email);

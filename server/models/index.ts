@@ -13,6 +13,7 @@ import { Prescription } from './prescription';
 import { Proposal, ProposalApproval, ProposalLine } from './proposal';
 import { CalendarFeed, Task, TaskPhoto } from './task';
 import { SharedFile } from './shared-file';
+import { Invoice, InvoiceLine, InvoicePayment, InvoiceRefund } from './invoice';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -33,8 +34,10 @@ Proposal.hasMany(ProposalLine, { foreignKey: 'proposalId', as: 'lines' });
 Proposal.hasOne(ProposalApproval, { foreignKey: 'proposalId', as: 'approval' });
 Task.hasMany(TaskPhoto, { foreignKey: 'taskId', as: 'photos' });
 TaskPhoto.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
+Invoice.hasMany(InvoiceLine, { foreignKey: 'invoiceId', as: 'lines' });
+Invoice.hasMany(InvoicePayment, { foreignKey: 'invoiceId', as: 'payments' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile };
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund };
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

@@ -17,6 +17,8 @@ import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRout
 import { propertyProposalsRouter, proposalsRouter } from './proposals';
 import { propertyProgressRouter, taskPhotosRouter, tasksRouter } from './tasks';
 import { calendarFeedsRouter, calendarRouter } from './calendar';
+import { invoicesRouter } from './invoices';
+import { webhooksRouter } from './webhooks';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -45,4 +47,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertyProgressRouter },
   { path: '/calendar-feeds', router: calendarFeedsRouter },
   { path: '/calendar', router: calendarRouter },
+  { path: '/invoices', router: invoicesRouter },
+  { path: '/webhooks', router: webhooksRouter },
 ];

@@ -29,6 +29,10 @@ import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
 import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
 import { SchedulePage } from './routes/schedule/schedule';
+import { InvoicesPage } from './routes/invoices/invoices';
+import { InvoicePage } from './routes/invoices/invoice';
+import { PortalInvoicesPage } from './routes/portal/portal-invoices';
+import { PortalInvoicePage } from './routes/portal/portal-invoice';
 
 function RootRedirect() {
   const me = useMe();
@@ -60,6 +64,8 @@ const router = createBrowserRouter([
       { path: paths.proposals, element: <ProposalsPage /> },
       { path: paths.proposal(), element: <ProposalPage /> },
       { path: paths.schedule, element: <SchedulePage /> },
+      { path: paths.invoices, element: <InvoicesPage /> },
+      { path: paths.invoice(), element: <InvoicePage /> },
       { path: paths.team, element: <TeamPage /> },
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,
@@ -105,6 +111,8 @@ const router = createBrowserRouter([
       { path: paths.portal, element: <PortalHomePage /> },
       { path: paths.portalProposals, element: <PortalProposalsPage /> },
       { path: paths.portalProposal(), element: <PortalProposalPage /> },
+      { path: paths.portalInvoices, element: <PortalInvoicesPage /> },
+      { path: paths.portalInvoice(), element: <PortalInvoicePage /> },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

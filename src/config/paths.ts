@@ -16,6 +16,8 @@ export const paths = {
   /** The schedule filtered to one property. */
   scheduleForProperty: (propertyId: number | string) => `/schedule?property=${propertyId}`,
   proposal: (id: number | string = ':id') => `/proposals/${id}`,
+  invoices: '/invoices',
+  invoice: (id: number | string = ':id') => `/invoices/${id}`,
   team: '/settings/team',
   mail: '/settings/mail',
   library: '/library',
@@ -30,6 +32,9 @@ export const paths = {
   portalProposals: '/portal/proposals',
   /** The link in the proposal e-mail: keep this path. */
   portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
+  portalInvoices: '/portal/invoices',
+  /** The link in the invoice e-mails: keep this path. */
+  portalInvoice: (id: number | string = ':id') => `/portal/invoices/${id}`,
 } as const;
 
 /** The home of each role after sign-in. */

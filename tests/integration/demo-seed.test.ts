@@ -3,10 +3,10 @@ import request from 'supertest';
 import { seedDemo } from '../../server/db/seeds/demo';
 import { seedDemoPrescriptions } from '../../server/db/seeds/demo-prescriptions';
 import { seedDemoSchedule } from '../../server/db/seeds/demo-schedule';
-import { Client, Prescription, Property, Proposal, Task, TaskPhoto, Unit, User } from '../../server/models';
+import { Client, Invoice, Prescription, Property, Proposal, Task, TaskPhoto, Unit, User } from '../../server/models';
 import { testApp } from '../support/test-app';
 
-const counts = async () => ({ users: await User.count(), clients: await Client.count(), properties: await Property.count(), units: await Unit.count(), prescriptions: await Prescription.count(), proposals: await Proposal.count(), tasks: await Task.count(), photos: await TaskPhoto.count() });
+const counts = async () => ({ users: await User.count(), clients: await Client.count(), properties: await Property.count(), units: await Unit.count(), prescriptions: await Prescription.count(), proposals: await Proposal.count(), tasks: await Task.count(), photos: await TaskPhoto.count(), invoices: await Invoice.count() });
 
 describe('the demo seed', () => {
   it('is idempotent, signs every demo role in, and is refused in production mode', async () => {
@@ -25,6 +25,10 @@ describe('the demo seed', () => {
     expect(await Task.count({ where: { firmId: firm.id, assigneeId: crew!.id, status: 'scheduled' } })).toBeGreaterThanOrEqual(2);
     expect(await Task.count({ where: { firmId: firm.id, status: 'done' } })).toBe(1);
     expect(await TaskPhoto.count({ where: { firmId: firm.id } })).toBe(1);
+    const club = await Client.findOne({ where: { firmId: firm.id, name: 'Bluestem Ridge Hunting Club' } });
+    const clubInvoices = await Invoice.findAll({ where: { clientId: club!.id } });
+    expect(clubInvoices.map((i) => i.status).sort()).toEqual(['open', 'paid']); // Receivables is not empty
+    expect(clubInvoices.every((i) => i.totalCents > 0)).toBe(true);
     for (const email of ['owner@browseline.test', 'consultant@browseline.test', 'crew@browseline.test', 'client@browseline.test']) {
       const res = await request(testApp()).post('/api/auth/login').send({ email, password: 'demo-browseline' });
       expect(res.status, email).toBe(200);

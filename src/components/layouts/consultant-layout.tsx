@@ -11,6 +11,7 @@ const PLACES = [
   { to: paths.properties, label: 'Properties' },
   { to: paths.schedule, label: 'Schedule' },
   { to: paths.proposals, label: 'Proposals' },
+  { to: paths.invoices, label: 'Invoices' },
   { to: paths.library, label: 'Library' },
   { to: paths.team, label: 'Settings' },
 ];

@@ -7,6 +7,7 @@ import { MissingRecord } from '../../../components/ui/missing-record';
 import { ApiError } from '../../../lib/api-client';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
+import { ProposalInvoicesCard } from '../../../features/invoices/components/proposal-invoices-card';
 
 /** One proposal: the builder while it is a draft, a read-only document after. */
 export function ProposalPage() {
@@ -18,5 +19,11 @@ export function ProposalPage() {
   if (proposal.isPending) return <Loading label="Loading proposal…" />;
   if (proposal.isError) return <ErrorPanel error={proposal.error} onRetry={() => void proposal.refetch()} />;
   const p = proposal.data;
-  return p.status === 'draft' ? <ProposalBuilder key={p.id} proposal={p} /> : <ProposalDocument key={p.id} proposal={p} />;
+  if (p.status === 'draft') return <ProposalBuilder key={p.id} proposal={p} />;
+  return (
+    <div className="flex flex-col gap-4">
+      <ProposalDocument key={p.id} proposal={p} />
+      {p.status === 'approved' ? <ProposalInvoicesCard proposalId={p.id} totalCents={p.totalCents} /> : null}
+    </div>
+  );
 }

@@ -1,0 +1,119 @@
+/** Invoices: made from approved proposals by staff, paid by the client from the portal. */
+import type { Request } from 'express';
+import { Op, QueryTypes, type WhereOptions } from 'sequelize';
+import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { Invoice, Task } from '../models';
+import { sequelize } from '../db/sequelize';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type BillableTaskDto, type InvoiceListQuery, type ReceivablesDto } from '../../shared/schemas/invoice';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { addManualLine, createInvoice, removeManualLine, sendInvoice, updateInvoice, voidInvoice } from '../commands/invoice-writer';
+import { refundPayment, startCheckout } from '../commands/payment-recorder';
+import { listInvoiceRows, readInvoice } from '../services/invoices/invoice-reader';
+import { renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
+import { notFound } from '../errors';
+import { todayIso } from '../commands/prescription-writer';
+import { ageReceivables } from '../../shared/domain/invoicing';
+
+const r = defineRoutes('/invoices');
+const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
+
+/** An invoice the signed-in person may read: staff of its firm, or its own client once issued. */
+async function readable(req: Request): Promise<Invoice> {
+  const me = actor(req);
+  const invoice = await findInFirm(Invoice, Number(req.params.id), me.firmId, 'That invoice');
+  if (me.role === 'client' && (invoice.clientId !== me.clientId || invoice.status === 'draft')) throw notFound('That invoice');
+  return invoice;
+}
+
+r.get('/', STAFF_AND_CLIENT, validate({ query: InvoiceListQuerySchema }), async (req, res) => {
+  const me = actor(req);
+  const q = req.validQuery as InvoiceListQuery;
+  const where: Record<string | symbol, unknown> = { firmId: me.firmId };
+  if (me.role === 'client') Object.assign(where, { clientId: me.clientId, status: { [Op.ne]: 'draft' } });
+  else if (q.clientId) where.clientId = q.clientId;
+  if (q.propertyId) where.propertyId = q.propertyId;
+  if (q.proposalId) where.proposalId = q.proposalId;
+  if (q.status) {
+    if (me.role === 'client' && q.status === 'draft') return res.json({ data: [] });
+    where.status = q.status;
+  }
+  res.json({ data: await listInvoiceRows(where as WhereOptions) });
+});
+
+r.get('/receivables', STAFF, async (req, res) => {
+  const { firmId } = actor(req);
+  const today = todayIso();
+  const open = await Invoice.findAll({ where: { firmId, status: 'open' }, attributes: ['dueOn', 'totalCents', 'amountPaidCents'] });
+  const items = open.map((i) => ({ dueOn: i.dueOn ?? today, balanceCents: Math.max(0, i.totalCents - i.amountPaidCents) }));
+  const buckets = ageReceivables(items, today);
+  const [paid] = await sequelize.query<{ cents: string | null }>(
+    `SELECT sum(p.amount_cents - p.refunded_cents) AS cents FROM invoice_payments p WHERE p.firm_id = :firmId AND p.received_at >= date_trunc('month', now())`,
+    { replacements: { firmId }, type: QueryTypes.SELECT },
+  );
+  const answer: ReceivablesDto = {
+    asOf: today,
+    buckets,
+    outstandingCents: buckets.reduce((s, b) => s + b.amountCents, 0),
+    overdueCents: buckets.filter((b) => b.key !== 'current').reduce((s, b) => s + b.amountCents, 0),
+    paidThisMonthCents: Number(paid?.cents ?? 0),
+    draftCount: await Invoice.count({ where: { firmId, status: 'draft' } }),
+  };
+  res.json({ data: answer });
+});
+
+r.get('/billable-tasks', STAFF, validate({ query: BillableTasksQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { proposalId } = req.validQuery as { proposalId: number };
+  const tasks = await Task.findAll({ where: { firmId, proposalId, status: 'done', invoiceId: null }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  res.json({ data: tasks.map((t): BillableTaskDto => ({ id: t.id, name: t.name, unitName: t.unitName, doneOn: t.doneOn, costCents: t.costCents })) });
+});
+
+r.post('/', STAFF, validate({ body: InvoiceCreateSchema }), async (req, res) => {
+  const { invoice, created } = await createInvoice(actor(req), req.body, req.ip ?? null);
+  res.status(created ? 201 : 200).json({ data: await readInvoice(invoice) });
+});
+
+r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  res.json({ data: await readInvoice(await readable(req)) });
+});
+
+r.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const invoice = await readable(req);
+  const pdf = await renderInvoicePdfFor(invoice);
+  res.setHeader('Content-Type', 'application/pdf');
+  res.setHeader('Content-Disposition', `inline; filename="${invoice.number}.pdf"`);
+  res.send(pdf);
+});
+
+r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: InvoiceUpdateSchema }), async (req, res) => {
+  res.json({ data: await readInvoice(await updateInvoice(actor(req), Number(req.params.id), req.body, req.ip ?? null)) });
+});
+
+r.post('/:id/lines', STAFF, validate({ params: IdParamsSchema, body: ManualLineSchema }), async (req, res) => {
+  res.status(201).json({ data: await readInvoice(await addManualLine(actor(req), Number(req.params.id), req.body, req.ip ?? null)) });
+});
+
+r.delete('/:id/lines/:lineId', STAFF, validate({ params: LineParamsSchema }), async (req, res) => {
+  res.json({ data: await readInvoice(await removeManualLine(actor(req), Number(req.params.id), Number(req.params.lineId), req.ip ?? null)) });
+});
+
+r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  res.json({ data: await readInvoice(await sendInvoice(actor(req), Number(req.params.id), req.ip ?? null)) });
+});
+
+r.post('/:id/void', STAFF, validate({ params: IdParamsSchema, body: VoidSchema }), async (req, res) => {
+  res.json({ data: await readInvoice(await voidInvoice(actor(req), Number(req.params.id), req.body.reason, req.ip ?? null)) });
+});
+
+r.post('/:id/refunds', OWNER, validate({ params: IdParamsSchema, body: RefundSchema }), async (req, res) => {
+  res.json({ data: await readInvoice(await refundPayment(actor(req), Number(req.params.id), req.body, req.ip ?? null)) });
+});
+
+r.post('/:id/checkout', ['client'], validate({ params: IdParamsSchema, body: CheckoutSchema }), async (req, res) => {
+  const { url, amountCents } = await startCheckout(actor(req), Number(req.params.id), req.body);
+  res.json({ data: { url, amountCents } });
+});
+
+export const invoicesRouter = r.router;

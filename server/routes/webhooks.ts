@@ -1,0 +1,23 @@
+/** Signed events from the payments service. The body arrives raw (see app.ts) so the signature can be checked. */
+import { defineRoutes } from '../middlewares/access';
+import { badRequest } from '../errors';
+import { verifyWebhook } from '../services/payments/payments-client';
+import { processPaymentEvent } from '../commands/payment-recorder';
+
+const r = defineRoutes('/webhooks');
+
+r.post('/payments', 'public', async (req, res) => {
+  const signature = req.get('stripe-signature');
+  if (!signature) throw badRequest('The Stripe-Signature header is missing; only the payments service may call this address.');
+  if (!Buffer.isBuffer(req.body)) throw badRequest('Send the event as application/json.');
+  let event;
+  try {
+    event = verifyWebhook(req.body, signature);
+  } catch {
+    throw badRequest('The webhook signature does not match or is too old. Check PAYMENTS_WEBHOOK_SECRET; nothing was changed.');
+  }
+  const result = await processPaymentEvent(event);
+  res.json({ received: true, duplicate: result.duplicate });
+});
+
+export const webhooksRouter = r.router;

@@ -1,0 +1,38 @@
+/** Reads invoices with the names they show (client, property, proposal). */
+import type { Transaction, WhereOptions } from 'sequelize';
+import { Client, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, Property, Proposal } from '../../models';
+import { presentInvoice, presentInvoiceRow, type InvoiceNames } from '../../presenters/invoice';
+import type { InvoiceDto, InvoiceRowDto } from '../../../shared/schemas/invoice';
+import { todayIso } from '../../commands/prescription-writer';
+
+async function namesFor(invoices: readonly Invoice[], transaction?: Transaction): Promise<(i: Invoice) => InvoiceNames> {
+  const ids = (pick: (i: Invoice) => number | null) => [...new Set(invoices.map(pick).filter((v): v is number => v !== null))];
+  const [clients, properties, proposals] = await Promise.all([
+    Client.findAll({ where: { id: ids((i) => i.clientId) }, attributes: ['id', 'name'], transaction }),
+    Property.findAll({ where: { id: ids((i) => i.propertyId) }, attributes: ['id', 'name'], transaction }),
+    Proposal.findAll({ where: { id: ids((i) => i.proposalId) }, attributes: ['id', 'number'], transaction }),
+  ]);
+  const c = new Map(clients.map((x) => [x.id, x.name]));
+  const p = new Map(properties.map((x) => [x.id, x.name]));
+  const n = new Map(proposals.map((x) => [x.id, x.number]));
+  return (i) => ({ clientName: c.get(i.clientId) ?? '', propertyName: (i.propertyId && p.get(i.propertyId)) || '', proposalNumber: (i.proposalId && n.get(i.proposalId)) || null });
+}
+
+/** The invoice answer: totals, lines, payments and refunds. */
+export async function readInvoice(invoice: Invoice, transaction?: Transaction): Promise<InvoiceDto> {
+  const [names, lines, payments, refunds] = await Promise.all([
+    namesFor([invoice], transaction),
+    InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
+    InvoicePayment.findAll({ where: { invoiceId: invoice.id }, order: [['receivedAt', 'ASC'], ['id', 'ASC']], transaction }),
+    InvoiceRefund.findAll({ where: { invoiceId: invoice.id }, order: [['id', 'ASC']], transaction }),
+  ]);
+  return presentInvoice(invoice, names(invoice), todayIso(), lines, payments, refunds);
+}
+
+/** List rows, newest first. */
+export async function listInvoiceRows(where: WhereOptions): Promise<InvoiceRowDto[]> {
+  const rows = await Invoice.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+  const names = await namesFor(rows);
+  const today = todayIso();
+  return rows.map((i) => presentInvoiceRow(i, names(i), today));
+}

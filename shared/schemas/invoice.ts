@@ -1,0 +1,155 @@
+/** Invoices: what the API takes (zod) and answers (types shared by the server's presenter and the client). */
+import { z } from 'zod';
+import { parseDollarsToCents } from '../domain/money';
+import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceKind, type InvoiceLineSource, type InvoiceStatus } from '../domain/invoicing';
+
+const id = z.number({ message: 'must be a record id' }).int().positive({ message: 'must be a positive whole number' });
+
+export const InvoiceCreateSchema = z
+  .object({
+    proposalId: id,
+    kind: z.enum(INVOICE_KINDS, { message: 'kind must be deposit, progress or final' }),
+    taskIds: z.array(id).min(1, { message: 'choose at least one done task' }).max(500).optional(),
+  })
+  .refine((v) => v.kind === 'progress' || v.taskIds === undefined, { message: 'taskIds are only for progress invoices', path: ['taskIds'] });
+export type InvoiceCreateInput = z.infer<typeof InvoiceCreateSchema>;
+
+export const InvoiceListQuerySchema = z.object({
+  clientId: z.coerce.number().int().positive().optional(),
+  propertyId: z.coerce.number().int().positive().optional(),
+  proposalId: z.coerce.number().int().positive().optional(),
+  status: z.enum(INVOICE_STATUSES, { message: 'status must be draft, open, paid or void' }).optional(),
+});
+export type InvoiceListQuery = z.infer<typeof InvoiceListQuerySchema>;
+
+export const InvoiceUpdateSchema = z.object({
+  termsDays: z.number({ message: 'terms must be a number of days' }).int({ message: 'terms are whole days' }).min(0, { message: 'terms cannot be negative' }).max(365, { message: 'terms are at most 365 days' }).optional(),
+  notes: z.string().trim().max(2000, { message: 'notes are at most 2,000 characters' }).nullish(),
+});
+export type InvoiceUpdateInput = z.infer<typeof InvoiceUpdateSchema>;
+
+export const ManualLineSchema = z.object({
+  description: z.string().trim().min(1, { message: 'describe the line' }).max(300, { message: 'at most 300 characters' }),
+  quantity: z
+    .union([z.number(), z.string()])
+    .transform((v) => String(v).trim())
+    .refine((v) => /^\d+(\.\d{1,4})?$/.test(v) && Number(v) > 0, { message: 'quantity must be a positive number with at most 4 decimals' }),
+  unit: z.string().trim().min(1).max(40).default('each'),
+  unitPriceCents: z.number({ message: 'the price must be a number of cents' }).int({ message: 'prices are whole cents' }).min(0, { message: 'a price cannot be negative' }).max(100_000_000, { message: 'that price is too large' }),
+  taxable: z.boolean().default(false),
+});
+export type ManualLineInput = z.infer<typeof ManualLineSchema>;
+
+export const LineParamsSchema = z.object({ id: z.coerce.number().int().positive(), lineId: z.coerce.number().int().positive() });
+
+export const CheckoutSchema = z.object({
+  amountCents: z.number({ message: 'the amount must be a number of cents' }).int({ message: 'the amount is whole cents' }).positive({ message: 'the amount must be more than zero' }).optional(),
+});
+export type CheckoutInput = z.infer<typeof CheckoutSchema>;
+
+export const VoidSchema = z.object({
+  reason: z.string().trim().min(3, { message: 'say briefly why the invoice is void' }).max(500),
+});
+
+export const RefundSchema = z.object({
+  paymentId: id,
+  amountCents: z.number({ message: 'the amount must be a number of cents' }).int({ message: 'the amount is whole cents' }).positive({ message: 'the amount must be more than zero' }),
+  reason: z.string().trim().max(500).optional(),
+});
+export type RefundInput = z.infer<typeof RefundSchema>;
+
+export interface InvoiceLineDto {
+  id: number;
+  position: number;
+  source: InvoiceLineSource;
+  taskId: number | null;
+  description: string;
+  quantity: string;
+  unit: string;
+  unitPriceCents: number;
+  amountCents: number;
+  taxable: boolean;
+}
+
+export interface InvoiceRefundDto {
+  id: number;
+  amountCents: number;
+  reason: string | null;
+  createdAt: string;
+}
+
+export interface InvoicePaymentDto {
+  id: number;
+  amountCents: number;
+  refundedCents: number;
+  receivedAt: string;
+  refunds: InvoiceRefundDto[];
+}
+
+export interface InvoiceRowDto {
+  id: number;
+  number: string;
+  kind: InvoiceKind;
+  status: InvoiceStatus;
+  clientId: number;
+  clientName: string;
+  propertyId: number | null;
+  propertyName: string;
+  proposalId: number | null;
+  proposalNumber: string | null;
+  issuedOn: string | null;
+  dueOn: string | null;
+  totalCents: number;
+  amountPaidCents: number;
+  amountRefundedCents: number;
+  balanceCents: number;
+  /** Days past the due date while open (0 when not overdue). */
+  daysOverdue: number;
+  updatedAt: string;
+}
+
+export interface InvoiceDto extends InvoiceRowDto {
+  currency: string;
+  taxRatePct: number;
+  termsDays: number;
+  notes: string | null;
+  subtotalCents: number;
+  taxCents: number;
+  billedCents: number;
+  sentAt: string | null;
+  paidAt: string | null;
+  voidedAt: string | null;
+  voidReason: string | null;
+  lines: InvoiceLineDto[];
+  payments: InvoicePaymentDto[];
+}
+
+export interface ReceivablesDto {
+  asOf: string;
+  buckets: { key: AgeingBucketKey; label: string; amountCents: number; count: number }[];
+  outstandingCents: number;
+  overdueCents: number;
+  paidThisMonthCents: number;
+  draftCount: number;
+}
+
+/** The manual-line form: the same rules as ManualLineSchema, with the price typed in dollars ("65.00"). */
+export const ManualLineFormSchema = ManualLineSchema.omit({ unitPriceCents: true }).extend({
+  unitPrice: z
+    .string()
+    .trim()
+    .regex(/^\$?\d{1,7}(,\d{3})*(\.\d{1,2})?$/, { message: 'write the price like 65.00 (dollars and cents)' })
+    .transform((v) => parseDollarsToCents(v, 'unitPrice')),
+});
+export type ManualLineFormInput = z.input<typeof ManualLineFormSchema>;
+
+export const BillableTasksQuerySchema = z.object({ proposalId: z.coerce.number().int().positive() });
+
+/** A done task not billed yet, offered for a progress invoice. */
+export interface BillableTaskDto {
+  id: number;
+  name: string;
+  unitName: string;
+  doneOn: string | null;
+  costCents: number;
+}
