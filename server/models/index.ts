@@ -13,6 +13,7 @@ import { Prescription } from './prescription';
 import { Proposal, ProposalApproval, ProposalLine } from './proposal';
 import { CalendarFeed, Task, TaskPhoto } from './task';
 import { SharedFile } from './shared-file';
+import { CameraSurvey, HarvestRecord, SeasonReport } from './results';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -33,8 +34,9 @@ Proposal.hasMany(ProposalLine, { foreignKey: 'proposalId', as: 'lines' });
 Proposal.hasOne(ProposalApproval, { foreignKey: 'proposalId', as: 'approval' });
 Task.hasMany(TaskPhoto, { foreignKey: 'taskId', as: 'photos' });
 TaskPhoto.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
+SeasonReport.belongsTo(SharedFile, { foreignKey: 'sharedFileId', as: 'file' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile };
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, CameraSurvey, HarvestRecord, SeasonReport };
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

@@ -4,6 +4,7 @@ import * as m0002 from './0002-plan-units';
 import * as m0003 from './0003-practice-library';
 import * as m0004 from './0004-proposals';
 import * as m0005 from './0005-tasks';
+import * as m0008 from './0008-results';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -11,4 +12,5 @@ export const migrations = [
   { name: '0003-practice-library', ...m0003 },
   { name: '0004-proposals', ...m0004 },
   { name: '0005-tasks', ...m0005 },
+  { name: '0008-results', ...m0008 },
 ];
