@@ -72,7 +72,7 @@ export const SurveyFieldsSchema = z.object({
 type SurveyFields = z.output<typeof SurveyFieldsSchema>;
 
 /** Checks between fields; each issue names the field to change and says how. */
-function checkSurvey(v: Partial<SurveyFields>, ctx: z.RefinementCtx): void {
+function checkSurvey(v: Partial<SurveyFields>, ctx: z.RefinementCtx, whole: boolean): void {
   if (v.uniqueBucks === 0) {
     ctx.addIssue({ code: 'custom', path: ['uniqueBucks'], message: 'enter at least one buck you can tell apart by its antlers: the method counts does and fawns from photos per buck' });
   }
@@ -86,7 +86,7 @@ function checkSurvey(v: Partial<SurveyFields>, ctx: z.RefinementCtx): void {
     ctx.addIssue({ code: 'custom', path: ['endDate'], message: `the survey ends (${v.endDate}) before it starts (${v.startDate})` });
   }
   const picked = v.cameraUnitIds?.length ?? 0;
-  if (picked === 0 && (v.cameraCount === null || v.cameraCount === undefined)) {
+  if (whole && picked === 0 && (v.cameraCount === null || v.cameraCount === undefined)) {
     ctx.addIssue({ code: 'custom', path: ['cameraCount'], message: 'pick the camera sites used, or enter how many cameras ran' });
   }
   if (picked > 0 && typeof v.cameraCount === 'number' && v.cameraCount < picked) {
@@ -98,12 +98,12 @@ function checkSurvey(v: Partial<SurveyFields>, ctx: z.RefinementCtx): void {
 }
 
 /** A new camera survey: dates, cameras and the tallies. */
-export const SurveyCreateSchema = SurveyFieldsSchema.superRefine(checkSurvey);
+export const SurveyCreateSchema = SurveyFieldsSchema.superRefine((v, ctx) => checkSurvey(v, ctx, true));
 export type SurveyCreateInput = z.input<typeof SurveyCreateSchema>;
 export type SurveyCreateValues = z.output<typeof SurveyCreateSchema>;
 
 /** A change to a survey: any of its fields; the result is checked whole. */
-export const SurveyUpdateSchema = SurveyFieldsSchema.partial().superRefine(checkSurvey);
+export const SurveyUpdateSchema = SurveyFieldsSchema.partial().superRefine((v, ctx) => checkSurvey(v, ctx, false));
 export type SurveyUpdateInput = z.input<typeof SurveyUpdateSchema>;
 
 /** One harvested deer. */

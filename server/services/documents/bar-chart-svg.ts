@@ -24,6 +24,8 @@ export interface BarChartInput {
   valueDecimals?: number;
   /** Label of the value axis ("deer", "does per buck"). */
   axisLabel?: string;
+  /** Counts: gridlines at whole numbers only. */
+  wholeTicks?: boolean;
 }
 
 export interface BarChartLayout {
@@ -53,7 +55,7 @@ export function barChartLayout(input: BarChartInput): BarChartLayout {
   const values = input.series.flatMap((s) => s.values.filter((v): v is number => v !== null));
   for (const v of values) if (!Number.isFinite(v) || v < 0) throw new RangeError(`Bar values must be finite and zero or more (got ${v}).`);
   const top = Math.max(0, ...values);
-  const step = niceStep(top);
+  const step = input.wholeTicks ? Math.max(1, niceStep(top)) : niceStep(top);
   const axisMax = top > 0 ? Math.ceil(top / step) * step : step;
   const ticks: number[] = [];
   for (let t = 0; t <= axisMax + step / 1000; t += step) ticks.push(Math.round(t * 1e6) / 1e6);
