@@ -26,6 +26,8 @@ import { ProposalPage } from './routes/proposals/proposal';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
 import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
+import { PropertyResultsPage } from './routes/properties/property-results';
+import { PortalPropertyResultsPage, PortalResultsPage } from './routes/portal/portal-results';
 
 function RootRedirect() {
   const me = useMe();
@@ -60,6 +62,7 @@ const router = createBrowserRouter([
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,
       { path: paths.propertyPrescriptions(), element: <PropertyPrescriptionsPage /> },
+      { path: paths.propertyResults(), element: <PropertyResultsPage /> },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
       { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
     ],
@@ -93,6 +96,8 @@ const router = createBrowserRouter([
       { path: paths.portal, element: <PortalHomePage /> },
       { path: paths.portalProposals, element: <PortalProposalsPage /> },
       { path: paths.portalProposal(), element: <PortalProposalPage /> },
+      { path: paths.portalResults, element: <PortalResultsPage /> },
+      { path: paths.portalPropertyResults(), element: <PortalPropertyResultsPage /> },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

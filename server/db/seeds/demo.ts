@@ -6,6 +6,7 @@ import { installStarterLibrary } from '../../commands/library-installer';
 import { hashPassword } from '../../services/auth/passwords';
 import { boundaryColumns } from '../../commands/property-writer';
 import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
+import { seedDemoResults } from './demo-results';
 
 /** Creates whatever part of the demo is missing; answers the firm. */
 export async function seedDemo(): Promise<Firm> {
@@ -52,6 +53,7 @@ export async function seedDemo(): Promise<Firm> {
         }
       }
     }
+    await seedDemoResults(firm, transaction);
     return firm;
   });
 }
