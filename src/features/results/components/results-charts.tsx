@@ -87,7 +87,8 @@ export function SurveyRatioChart({ trend }: { trend: readonly SurveyTrendPoint[]
 /** Bucks and does taken by age class. */
 export function AgeStructureChart({ summary }: { summary: HarvestSummary }) {
   if (summary.total === 0) return <EmptyState title="No harvest recorded">Add the deer taken this season to see the age structure.</EmptyState>;
-  const data = summary.ageClasses.map((c) => ({ label: AGE_CLASS_LABELS[c.ageClass], bucks: c.bucks, does: c.does }));
+  // The axis takes the short form of the oldest class so that the labels fit a phone's width.
+  const data = summary.ageClasses.map((c) => ({ label: c.ageClass === '5.5+' ? '5½+' : AGE_CLASS_LABELS[c.ageClass], bucks: c.bucks, does: c.does }));
   return (
     <ChartFigure title="Harvest by age class" caption="All seasons recorded." table={{ head: ['Age class', 'Bucks', 'Does'], rows: data.map((d) => [d.label, d.bucks, d.does]) }}>
       <ResponsiveContainer width="100%" height="100%">

@@ -27,6 +27,7 @@ export function SurveyForm({ propertyId, cameraSites, onSaved }: { propertyId: n
   });
   const bucks = useFieldArray({ control: form.control, name: 'bucks' });
   const errors = form.formState.errors;
+  const picked = form.watch('cameraUnitIds') ?? [];
   const submit = form.handleSubmit((values) =>
     create.mutate(
       { propertyId, input: values },
@@ -58,7 +59,14 @@ export function SurveyForm({ propertyId, cameraSites, onSaved }: { propertyId: n
           <div className="flex flex-wrap gap-x-4 gap-y-1">
             {cameraSites.map((c) => (
               <label key={c.id} className="flex items-center gap-2 text-sm">
-                <input type="checkbox" value={c.id} className="size-4 accent-moss" {...form.register('cameraUnitIds', { setValueAs: (v: unknown) => (Array.isArray(v) ? v.map(Number) : v ? [Number(v)] : []) })} />
+                <input
+                  type="checkbox"
+                  className="size-4 accent-moss"
+                  checked={picked.includes(c.id)}
+                  onChange={(e) =>
+                    form.setValue('cameraUnitIds', e.target.checked ? [...picked, c.id] : picked.filter((x) => x !== c.id), { shouldValidate: form.formState.isSubmitted })
+                  }
+                />
                 {c.name}
               </label>
             ))}
