@@ -88,8 +88,16 @@ describe('season results from the consultant to the landowner', () => {
     await page.getByRole('button', { name: 'Send to client' }).first().click();
     await poll(() => page.getByText(/Sent .* to client@browseline\.test/).count()).toBeGreaterThan(0);
 
-    await page.setViewportSize({ width: 360, height: 800 });
-    await screenshot(page, 'results-consultant-360');
+    // On a 360 px phone nothing is wider than the screen: the page scrolls only up and down.
+    const phone = await browser.newContext({ viewport: { width: 360, height: 800 }, storageState: await context.storageState() });
+    const phonePage = await phone.newPage();
+    await phonePage.goto(page.url());
+    await poll(() => phonePage.getByRole('heading', { name: 'Early-autumn check' }).count()).toBe(1);
+    await poll(() => phonePage.getByRole('figure', { name: 'Harvest by age class' }).locator('.recharts-surface').first().isVisible()).toBe(true);
+    const overflow = await phonePage.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await screenshot(phonePage, 'results-consultant-360');
+    await phone.close();
     watch.assertClean();
     await context.close();
   });
@@ -116,6 +124,7 @@ describe('season results from the consultant to the landowner', () => {
     const pdf = await page.request.get(`${baseUrl}${await report.getAttribute('href')}`);
     expect(pdf.status()).toBe(200);
     expect((await pdf.body()).subarray(0, 5).toString()).toBe('%PDF-');
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
     await screenshot(page, 'results-portal-360');
 
     // Another landowner's property answers "not found".

@@ -7,7 +7,8 @@ import { formatDate, formatNumber } from '../../../lib/format';
 export function HarvestTable({ harvests, onDelete, busyId }: { harvests: readonly HarvestDto[]; onDelete?: (record: HarvestDto) => void; busyId?: number | null }) {
   if (harvests.length === 0) return <EmptyState title="No harvest recorded">Deer taken on the property show here.</EmptyState>;
   return (
-    <div className="overflow-x-auto">
+    // relative: the visually-hidden texts inside (absolutely placed) stay within the scrolling box.
+    <div className="relative overflow-x-auto">
       <table className="w-full min-w-[32rem] text-sm">
         <caption className="sr-only">Harvest records</caption>
         <thead>

@@ -16,20 +16,23 @@ function ChartFigure({ title, caption, table, children }: { title: string; capti
         <span className="font-serif text-sm font-bold text-ink">{title}</span>
         {caption ? <span className="block text-xs text-slate">{caption}</span> : null}
       </figcaption>
-      <div className="h-56 w-full" aria-hidden>
+      <div className="h-56 w-full overflow-hidden" aria-hidden>
         {children}
       </div>
-      <table className="sr-only">
-        <caption>{title}</caption>
-        <thead>
-          <tr>{table.head.map((h) => <th key={h}>{h}</th>)}</tr>
-        </thead>
-        <tbody>
-          {table.rows.map((r, i) => (
-            <tr key={i}>{r.map((c, j) => <td key={j}>{c}</td>)}</tr>
-          ))}
-        </tbody>
-      </table>
+      {/* A table box grows to its content whatever its width, so the visually-hidden wrapper is a div. */}
+      <div className="sr-only">
+        <table>
+          <caption>{title}</caption>
+          <thead>
+            <tr>{table.head.map((h) => <th key={h}>{h}</th>)}</tr>
+          </thead>
+          <tbody>
+            {table.rows.map((r, i) => (
+              <tr key={i}>{r.map((c, j) => <td key={j}>{c}</td>)}</tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </figure>
   );
 }
