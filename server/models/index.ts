@@ -14,6 +14,7 @@ import { Proposal, ProposalApproval, ProposalLine } from './proposal';
 import { CalendarFeed, Task, TaskPhoto } from './task';
 import { SharedFile } from './shared-file';
 import { Invoice, InvoiceLine, InvoicePayment, InvoiceRefund } from './invoice';
+import { CameraSurvey, HarvestRecord, SeasonReport } from './results';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -37,7 +38,9 @@ TaskPhoto.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
 Invoice.hasMany(InvoiceLine, { foreignKey: 'invoiceId', as: 'lines' });
 Invoice.hasMany(InvoicePayment, { foreignKey: 'invoiceId', as: 'payments' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund };
+SeasonReport.belongsTo(SharedFile, { foreignKey: 'sharedFileId', as: 'file' });
+
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport };
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

@@ -19,6 +19,7 @@ import { propertyProgressRouter, taskPhotosRouter, tasksRouter } from './tasks';
 import { calendarFeedsRouter, calendarRouter } from './calendar';
 import { invoicesRouter } from './invoices';
 import { webhooksRouter } from './webhooks';
+import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRouter } from './results';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -49,4 +50,8 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/calendar', router: calendarRouter },
   { path: '/invoices', router: invoicesRouter },
   { path: '/webhooks', router: webhooksRouter },
+  { path: '/properties', router: propertyResultsRouter },
+  { path: '/surveys', router: surveysRouter },
+  { path: '/harvests', router: harvestsRouter },
+  { path: '/season-reports', router: seasonReportsRouter },
 ];

@@ -50,7 +50,7 @@ export interface SurveyEstimates {
 /** The estimates rounded for display (see the file header for the precision of each). */
 export type SurveyEstimatesDisplay = Record<keyof SurveyEstimates, string>;
 
-export type SurveyWarningCode = 'camera-density-low' | 'survey-short' | 'no-does' | 'method-undercounts' | 'baiting-rules';
+export type SurveyWarningCode = 'camera-density-low' | 'survey-short' | 'no-does' | 'method-undercounts' | 'baiting-rules' | 'no-area';
 
 /** Something the reader of the estimates should know; `note`s are always shown. */
 export interface SurveyWarning {

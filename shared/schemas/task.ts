@@ -129,6 +129,8 @@ export interface UnitProgressDto extends Progress {
 export interface PropertyProgressDto {
   propertyId: number;
   propertyName: string;
+  /** Staff setting: e-mail the client when all of a unit's tasks are finished. */
+  notifyClientOnUnitDone?: boolean;
   plan: Progress;
   units: UnitProgressDto[];
 }

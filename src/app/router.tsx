@@ -33,6 +33,8 @@ import { InvoicesPage } from './routes/invoices/invoices';
 import { InvoicePage } from './routes/invoices/invoice';
 import { PortalInvoicesPage } from './routes/portal/portal-invoices';
 import { PortalInvoicePage } from './routes/portal/portal-invoice';
+import { PropertyResultsPage } from './routes/properties/property-results';
+import { PortalPropertyResultsPage, PortalResultsPage } from './routes/portal/portal-results';
 
 function RootRedirect() {
   const me = useMe();
@@ -70,6 +72,7 @@ const router = createBrowserRouter([
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,
       { path: paths.propertyPrescriptions(), element: <PropertyPrescriptionsPage /> },
+      { path: paths.propertyResults(), element: <PropertyResultsPage /> },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
       { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
     ],
@@ -113,6 +116,8 @@ const router = createBrowserRouter([
       { path: paths.portalProposal(), element: <PortalProposalPage /> },
       { path: paths.portalInvoices, element: <PortalInvoicesPage /> },
       { path: paths.portalInvoice(), element: <PortalInvoicePage /> },
+      { path: paths.portalResults, element: <PortalResultsPage /> },
+      { path: paths.portalPropertyResults(), element: <PortalPropertyResultsPage /> },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

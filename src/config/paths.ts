@@ -26,10 +26,14 @@ export const paths = {
   libraryMaterials: '/library/materials',
   libraryRates: '/library/rates',
   propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
+  propertyResults: (id: number | string = ':id') => `/properties/${id}/results`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   portal: '/portal',
   portalProposals: '/portal/proposals',
+  portalResults: '/portal/results',
+  /** The link in the season-report e-mail: keep this path. */
+  portalPropertyResults: (id: number | string = ':id') => `/portal/properties/${id}/results`,
   /** The link in the proposal e-mail: keep this path. */
   portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
   portalInvoices: '/portal/invoices',

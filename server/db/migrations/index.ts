@@ -5,6 +5,7 @@ import * as m0003 from './0003-practice-library';
 import * as m0004 from './0004-proposals';
 import * as m0005 from './0005-tasks';
 import * as m0006 from './0006-invoices';
+import * as m0008 from './0008-results';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -13,4 +14,5 @@ export const migrations = [
   { name: '0004-proposals', ...m0004 },
   { name: '0005-tasks', ...m0005 },
   { name: '0006-invoices', ...m0006 },
+  { name: '0008-results', ...m0008 },
 ];

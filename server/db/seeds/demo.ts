@@ -7,6 +7,7 @@ import { hashPassword } from '../../services/auth/passwords';
 import { boundaryColumns } from '../../commands/property-writer';
 import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
 import { seedDemoInvoices } from './demo-invoices';
+import { seedDemoResults } from './demo-results';
 
 /** Creates whatever part of the demo is missing; answers the firm. */
 export async function seedDemo(): Promise<Firm> {
@@ -54,6 +55,7 @@ export async function seedDemo(): Promise<Firm> {
       }
     }
     await seedDemoInvoices(firm, transaction);
+    await seedDemoResults(firm, transaction);
     return firm;
   });
 }

@@ -29,6 +29,11 @@ export function PortalLayout() {
                 Invoices
               </NavLink>
             </li>
+            <li>
+              <NavLink to={paths.portalResults} className={({ isActive }) => `inline-block border-b-2 py-2 ${isActive ? 'border-moss font-semibold text-moss-deep' : 'border-transparent text-slate hover:text-ink'}`}>
+                Results
+              </NavLink>
+            </li>
           </ul>
         </nav>
       </header>

@@ -107,6 +107,9 @@ export function PropertyPage() {
             <Link to={paths.propertyPrescriptions(p.id)} className={buttonClasses('secondary')}>
               Prescriptions
             </Link>
+            <Link to={paths.propertyResults(p.id)} className={buttonClasses('secondary')}>
+              Results
+            </Link>
             <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>

@@ -1,0 +1,151 @@
+/** Results: camera surveys, harvest records, the season summary and the season report. */
+import type { Request } from 'express';
+import { z } from 'zod';
+import { defineRoutes, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { CameraSurvey, HarvestRecord, Property, SeasonReport, SharedFile, Unit } from '../models';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import {
+  HarvestCreateSchema,
+  HarvestUpdateSchema,
+  SeasonParamsSchema,
+  SeasonReportCreateSchema,
+  SurveyCreateSchema,
+  SurveyUpdateSchema,
+} from '../../shared/schemas/results';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { notFound } from '../errors';
+import { createHarvest, createSurvey, deleteHarvest, deleteSurvey, updateHarvest, updateSurvey } from '../commands/results-writer';
+import { deleteSeasonReport, makeSeasonReport, sendSeasonReport } from '../commands/season-report-maker';
+import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
+import { presentHarvest, presentSeasonReport } from '../presenters/results';
+import { readFile } from '../services/storage/disk-storage';
+
+const perProperty = defineRoutes('/properties');
+const surveys = defineRoutes('/surveys');
+const harvests = defineRoutes('/harvests');
+const reports = defineRoutes('/season-reports');
+const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
+
+const propertyOf = (req: Request) => readableProperty(actor(req), Number(req.params.id));
+
+/** A record of a property the person may read (staff of its firm, or the client who owns the property). */
+async function readableRecord<M extends CameraSurvey | HarvestRecord>(req: Request, model: typeof CameraSurvey | typeof HarvestRecord, label: string): Promise<{ record: M; property: Property }> {
+  const me = actor(req);
+  const record = (await findInFirm(model as typeof CameraSurvey, Number(req.params.id), me.firmId, label)) as unknown as M;
+  try {
+    return { record, property: await readableProperty(me, record.propertyId) };
+  } catch {
+    throw notFound(label);
+  }
+}
+
+async function harvestAnswer(record: HarvestRecord) {
+  const unit = record.unitId ? await Unit.findByPk(record.unitId, { attributes: ['id', 'name'] }) : null;
+  return presentHarvest(record, new Map(unit ? [[unit.id, unit.name]] : []));
+}
+
+// ---- per property ----
+
+perProperty.get('/:id/results', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const property = await propertyOf(req);
+  res.json({ data: await readResults(actor(req), property) });
+});
+
+perProperty.get('/:id/surveys', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  res.json({ data: await listSurveys(await propertyOf(req)) });
+});
+
+perProperty.post('/:id/surveys', STAFF, validate({ params: IdParamsSchema, body: SurveyCreateSchema }), async (req, res) => {
+  const { survey, property } = await createSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.status(201).json({ data: await readSurvey(survey, property) });
+});
+
+perProperty.get('/:id/harvests', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  res.json({ data: await listHarvests(await propertyOf(req)) });
+});
+
+perProperty.post('/:id/harvests', STAFF, validate({ params: IdParamsSchema, body: HarvestCreateSchema }), async (req, res) => {
+  const record = await createHarvest(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.status(201).json({ data: await harvestAnswer(record) });
+});
+
+perProperty.get('/:id/seasons/:season', STAFF_AND_CLIENT, validate({ params: SeasonParamsSchema }), async (req, res) => {
+  const property = await propertyOf(req);
+  const { photos, ...summary } = await readSeasonSummary(property, Number(req.params.season));
+  res.json({ data: { ...summary, photoCount: photos.length } });
+});
+
+perProperty.get('/:id/season-reports', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  res.json({ data: await listSeasonReports(actor(req), await propertyOf(req)) });
+});
+
+perProperty.post('/:id/season-reports', STAFF, validate({ params: IdParamsSchema, body: SeasonReportCreateSchema }), async (req, res) => {
+  const report = await makeSeasonReport(actor(req), Number(req.params.id), req.body as z.output<typeof SeasonReportCreateSchema>, req.ip ?? null);
+  const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
+  res.status(201).json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
+});
+
+// ---- surveys ----
+
+surveys.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { record, property } = await readableRecord<CameraSurvey>(req, CameraSurvey, 'That survey');
+  res.json({ data: await readSurvey(record, property) });
+});
+
+surveys.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: SurveyUpdateSchema }), async (req, res) => {
+  const { survey, property } = await updateSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.json({ data: await readSurvey(survey, property) });
+});
+
+surveys.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  await deleteSurvey(actor(req), Number(req.params.id), req.ip ?? null);
+  res.status(204).end();
+});
+
+// ---- harvest records ----
+
+harvests.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const { record } = await readableRecord<HarvestRecord>(req, HarvestRecord, 'That harvest record');
+  res.json({ data: await harvestAnswer(record) });
+});
+
+harvests.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: HarvestUpdateSchema }), async (req, res) => {
+  const record = await updateHarvest(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  res.json({ data: await harvestAnswer(record) });
+});
+
+harvests.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  await deleteHarvest(actor(req), Number(req.params.id), req.ip ?? null);
+  res.status(204).end();
+});
+
+// ---- season reports ----
+
+reports.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+  const me = actor(req);
+  const report = await findInFirm(SeasonReport, Number(req.params.id), me.firmId, 'That season report');
+  if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null)) throw notFound('That season report');
+  const file = await SharedFile.findByPk(report.sharedFileId);
+  if (!file) throw notFound('That season report’s PDF');
+  const pdf = await readFile(file.storageKey);
+  res.setHeader('Content-Type', 'application/pdf');
+  res.setHeader('Content-Disposition', `inline; filename="season-report-${report.season}.pdf"`);
+  res.send(pdf);
+});
+
+reports.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const report = await sendSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+  const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
+  res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
+});
+
+reports.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  await deleteSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+  res.status(204).end();
+});
+
+export const propertyResultsRouter = perProperty.router;
+export const surveysRouter = surveys.router;
+export const harvestsRouter = harvests.router;
+export const seasonReportsRouter = reports.router;

@@ -1,0 +1,102 @@
+import { useState } from 'react';
+import type { SeasonReportDto } from '../../../../shared/schemas/results';
+import { Card, EmptyState } from '../../../components/ui/card';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { SelectField } from '../../../components/ui/select-field';
+import { TextAreaField } from '../../../components/ui/text-area-field';
+import { useToast } from '../../../components/ui/toast';
+import { formatDate } from '../../../lib/format';
+import { useCreateSeasonReport, useSendSeasonReport } from '../api/season-reports';
+
+/** The hunting season (July–June) of today, named by the year it starts. */
+export function currentSeason(today = new Date()): number {
+  return today.getMonth() >= 6 ? today.getFullYear() : today.getFullYear() - 1;
+}
+
+function ReportList({ reports, onSend, sendingId }: { reports: readonly SeasonReportDto[]; onSend?: (r: SeasonReportDto) => void; sendingId?: number | null }) {
+  return (
+    <ul className="flex flex-col divide-y divide-rule">
+      {reports.map((r) => (
+        <li key={r.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
+          <div>
+            <p className="font-semibold">Season report {r.seasonLabel}</p>
+            <p className="text-sm text-slate">{r.sentAt ? `Sent ${formatDate(r.sentAt)} to ${r.sentTo.join(', ')}` : `Made ${formatDate(r.createdAt)} · not sent yet`}</p>
+          </div>
+          <div className="flex flex-wrap gap-2">
+            <a href={r.pdfUrl} target="_blank" rel="noreferrer" className={buttonClasses('secondary', '', 'sm')}>
+              {onSend ? 'Preview PDF' : 'Open the report (PDF)'}
+            </a>
+            {onSend ? (
+              <Button size="sm" busy={sendingId === r.id} onClick={() => onSend(r)}>
+                {r.sentAt ? 'Send again' : 'Send to client'}
+              </Button>
+            ) : null}
+          </div>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** Staff: make a season's report (a PDF) and send it to the landowner. */
+export function SeasonReportsCard({ propertyId, reports, seasons }: { propertyId: number; reports: readonly SeasonReportDto[]; seasons: readonly number[] }) {
+  const toast = useToast();
+  const make = useCreateSeasonReport(propertyId);
+  const send = useSendSeasonReport(propertyId);
+  const choices = [...new Set([currentSeason(), ...seasons])].sort((a, b) => b - a);
+  const [season, setSeason] = useState(choices[0]);
+  const [recommendations, setRecommendations] = useState('');
+  const label = (s: number) => `${s}–${String((s + 1) % 100).padStart(2, '0')}`;
+  const makeReport = () =>
+    make.mutate(
+      { propertyId, season, recommendations: recommendations.trim() || null },
+      {
+        onSuccess: (r) => toast('success', `Season report ${r.seasonLabel} made. Preview it, then send it to the client.`),
+        onError: (e) => toast('error', `The report was not made: ${e.message}`),
+      },
+    );
+  const sendReport = (r: SeasonReportDto) =>
+    send.mutate(r.id, {
+      onSuccess: (sent) => toast('success', `Season report ${sent.seasonLabel} sent to ${sent.sentTo.join(', ')}.`),
+      onError: (e) => toast('error', `The report was not sent: ${e.message}`),
+    });
+  return (
+    <Card title="Season report">
+      <div className="grid gap-3 sm:grid-cols-[12rem_1fr]">
+        <SelectField label="Season" value={season} onChange={(e) => setSeason(Number(e.target.value))}>
+          {choices.map((s) => (
+            <option key={s} value={s}>
+              {label(s)} (July–June)
+            </option>
+          ))}
+        </SelectField>
+        <TextAreaField
+          label="Recommendations for next season"
+          hint="Printed in the report; leave a blank line between paragraphs."
+          value={recommendations}
+          maxLength={4000}
+          onChange={(e) => setRecommendations(e.target.value)}
+        />
+      </div>
+      <Button className="mt-3" busy={make.isPending} onClick={makeReport}>
+        Make season report
+      </Button>
+      <div className="mt-4">
+        {reports.length === 0 ? (
+          <EmptyState title="No season report yet">Make one when the season closes: work done, surveys, harvest and your recommendations, as a PDF.</EmptyState>
+        ) : (
+          <ReportList reports={reports} onSend={sendReport} sendingId={send.isPending ? (send.variables ?? null) : null} />
+        )}
+      </div>
+    </Card>
+  );
+}
+
+/** The landowner: the season reports sent to them. */
+export function PortalSeasonReports({ reports }: { reports: readonly SeasonReportDto[] }) {
+  return (
+    <Card title="Season reports">
+      {reports.length === 0 ? <EmptyState title="No season report yet">Your consultant sends one when the season closes.</EmptyState> : <ReportList reports={reports} />}
+    </Card>
+  );
+}
