@@ -36,6 +36,7 @@ import { defaultImportChoice, planImportSave, type ImportChoice } from '../../..
 import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../../../features/plan-map/lib/measure-format';
 import type { ColourBy } from '../../../features/plan-map/lib/plan-layers';
 import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
+import { useTasks } from '../../../features/schedule/api/get-tasks';
 import type { UnitWorkStatus } from '../../../../shared/domain/tasks';
 
 /** The first field message of a 422 answer, or the error's own message. */
@@ -108,6 +109,8 @@ export function PlanMapPage() {
   const importFile = useImportFile(propertyId);
   const [colourBy, setColourBy] = useState<ColourBy>('kind');
   const progress = usePropertyProgress(propertyId, Number.isInteger(propertyId) && propertyId > 0);
+  // In work-status mode the crew's photos with a position show as dots.
+  const doneTasks = useTasks({ propertyId, status: 'done' }, colourBy === 'status' && Number.isInteger(propertyId) && propertyId > 0);
 
   const [controller, setController] = useState<PlanMapController | null>(null);
   const [selectedId, setSelectedId] = useState<number | null>(null);
@@ -132,6 +135,16 @@ export function PlanMapPage() {
   const statuses = useMemo(() => new Map<number, UnitWorkStatus>((progress.data?.units ?? []).map((u) => [u.unitId, u.status])), [progress.data]);
   const collections = useMemo(() => unitsToCollections(unitList, statuses), [unitList, statuses]);
   useEffect(() => controller?.setColourBy(colourBy), [controller, colourBy]);
+  const photoPoints = useMemo(
+    () =>
+      colourBy === 'status'
+        ? (doneTasks.data?.tasks ?? []).flatMap((t) =>
+            t.photos.filter((p) => p.latitude !== null && p.longitude !== null).map((p) => ({ id: p.id, lon: p.longitude as number, lat: p.latitude as number, label: `${t.name}, ${t.unitName}` })),
+          )
+        : [],
+    [colourBy, doneTasks.data],
+  );
+  useEffect(() => controller?.setPhotoPoints(photoPoints), [controller, photoPoints]);
   const legendKinds = useMemo(() => kindsPresent(unitList), [unitList]);
   const boundaryBox = useMemo(() => (boundary ? bboxOf([boundary]) : null), [boundary]);
 

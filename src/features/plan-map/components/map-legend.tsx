@@ -19,6 +19,10 @@ export function MapLegend({ kinds, hasBoundary, byStatus = false }: { kinds: Uni
               {UNIT_STATUS_STYLES[s].label}
             </li>
           ))}
+          <li className="flex items-center gap-2">
+            <span aria-hidden className="inline-block size-3 rounded-full border-2 border-card bg-sky" />
+            Crew photo
+          </li>
         </ul>
       ) : (
         <LegendList kinds={kinds} hasBoundary={hasBoundary} className="mt-1 pb-0.5" />

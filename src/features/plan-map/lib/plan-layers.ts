@@ -7,7 +7,7 @@ import type { ExpressionSpecification, FilterSpecification } from '@maplibre/map
 import type { GeoJSONSource, Map as MapLibreMap } from 'maplibre-gl';
 import type { FeatureCollection, Geometry, MultiPolygon, Polygon } from 'geojson';
 import { KIND_STYLES, UNIT_KINDS, type KindStyle, type UnitKind } from '../../../../shared/domain/unit-kinds';
-import { CARD, CLAY, INK, OCHRE, RULE, graticule } from './map-style';
+import { CARD, CLAY, INK, OCHRE, RULE, SKY, graticule } from './map-style';
 import { drawKindSymbols } from './symbols';
 import { UNIT_STATUS_STYLES, UNIT_WORK_STATUSES } from '../../../lib/work-status';
 import type { FamilyCollections } from './unit-features';
@@ -250,4 +250,28 @@ export function setColourBy(map: MapLibreMap, by: ColourBy): void {
   map.setPaintProperty('unit-area-fill', 'fill-opacity', status ? statusMatch('fillOpacity') : kindMatch('fillOpacity', 0.5));
   map.setPaintProperty('unit-area-outline', 'line-color', status ? statusMatch('stroke') : kindMatch('stroke', '#7B776C'));
   map.setPaintProperty('unit-line', 'line-color', status ? statusMatch('stroke') : kindMatch('stroke', '#5B6770'));
+}
+
+/** A crew photo's position from its EXIF data. */
+export interface PhotoPoint {
+  id: number;
+  lon: number;
+  lat: number;
+  label: string;
+}
+
+/** Shows the crew's photo positions as small sky dots over the units (an empty list hides them). */
+export function setPhotoPoints(map: MapLibreMap, points: readonly PhotoPoint[]): void {
+  const data: FeatureCollection = {
+    type: 'FeatureCollection',
+    features: points.map((p) => ({ type: 'Feature', id: p.id, geometry: { type: 'Point', coordinates: [p.lon, p.lat] }, properties: { label: p.label } })),
+  };
+  const source = map.getSource('task-photos') as GeoJSONSource | undefined;
+  if (source) {
+    source.setData(data);
+    return;
+  }
+  if (points.length === 0) return;
+  map.addSource('task-photos', { type: 'geojson', data });
+  map.addLayer({ id: 'task-photo-point', type: 'circle', source: 'task-photos', paint: { 'circle-radius': 5, 'circle-color': SKY, 'circle-stroke-color': CARD, 'circle-stroke-width': 2 } });
 }

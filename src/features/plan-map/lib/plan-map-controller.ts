@@ -24,7 +24,9 @@ import {
   UNIT_LAYERS,
   addPlanLayers,
   setColourBy,
+  setPhotoPoints,
   type ColourBy,
+  type PhotoPoint,
   hideBoundary,
   hideUnit,
   setBackgroundTiles,
@@ -428,6 +430,11 @@ export class PlanMapController {
   /** Colours the units by kind or by work status. */
   setColourBy(by: ColourBy): void {
     this.whenReady(() => setColourBy(this.map, by));
+  }
+
+  /** Shows the crew's photo positions (an empty list hides them). */
+  setPhotoPoints(points: readonly PhotoPoint[]): void {
+    this.whenReady(() => setPhotoPoints(this.map, points));
   }
 
   /** Puts the boundary on the map. */
