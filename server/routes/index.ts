@@ -15,6 +15,7 @@ import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
 import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
 import { propertyProposalsRouter, proposalsRouter } from './proposals';
+import { filesRouter } from './files';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -38,4 +39,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/prescriptions', router: prescriptionsRouter },
   { path: '/properties', router: propertyProposalsRouter },
   { path: '/proposals', router: proposalsRouter },
+  { path: '/files', router: filesRouter },
 ];

@@ -3,11 +3,13 @@ import { migrateUp } from '../db/migrator';
 import { sequelize } from '../db/sequelize';
 import { seedDemo } from '../db/seeds/demo';
 import { seedDemoPrescriptions } from '../db/seeds/demo-prescriptions';
+import { seedDemoPortal } from '../db/seeds/demo-portal';
 
 try {
   await migrateUp();
   const firm = await seedDemo();
   await seedDemoPrescriptions(firm);
+  await seedDemoPortal(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {
   console.error((err as Error).message);
