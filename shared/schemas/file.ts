@@ -74,3 +74,25 @@ export const SharedFileSchema = z.object({
   createdAt: z.string(),
 });
 export type SharedFileDto = z.infer<typeof SharedFileSchema>;
+
+/** File name endings the upload forms offer (the server still decides by content). */
+export const UPLOAD_ACCEPT = '.pdf,.png,.jpg,.jpeg,.webp,.csv,.txt,application/pdf,image/png,image/jpeg,image/webp,text/csv,text/plain';
+
+/** What is wrong with a chosen file before it is sent (size and name only), or null. */
+export function chosenFileProblem(file: { name: string; size: number } | null | undefined): string | null {
+  if (!file) return 'choose a file';
+  if (file.size === 0) return 'the file is empty';
+  if (file.size > FILE_LIMITS.maxBytes) return `the file is ${(file.size / 1048576).toFixed(1)} MB; files can be at most ${FILE_LIMITS.maxBytes / 1048576} MB`;
+  if (!/\.(pdf|png|jpe?g|webp|csv|txt)$/i.test(file.name)) return 'choose a PDF, PNG, JPEG, WebP, CSV or .txt file';
+  return null;
+}
+
+/** The client's upload form: the shared text fields plus the chosen file. */
+export const ClientFileUploadFormSchema = ClientFileUploadSchema.extend({
+  file: z.custom<File | null>((v) => chosenFileProblem(v as File | null) === null, { message: 'choose a PDF, PNG, JPEG, WebP, CSV or .txt file of at most 15 MB' }),
+});
+
+/** The consultant's upload form: the shared fields plus the chosen file. */
+export const StaffFileUploadFormSchema = StaffFileUploadSchema.extend({
+  file: z.custom<File | null>((v) => chosenFileProblem(v as File | null) === null, { message: 'choose a PDF, PNG, JPEG, WebP, CSV or .txt file of at most 15 MB' }),
+});

@@ -26,6 +26,11 @@ import { ProposalPage } from './routes/proposals/proposal';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
 import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
+import { PortalPropertyPage } from './routes/portal/portal-property';
+import { PortalProgressHomePage, PortalProgressPage } from './routes/portal/portal-progress';
+import { PortalFilesPage } from './routes/portal/portal-files';
+import { PreviewLayout } from './routes/portal/preview-layout';
+import { PreviewProposalsPage } from './routes/portal/preview-proposals';
 
 function RootRedirect() {
   const me = useMe();
@@ -60,6 +65,19 @@ const router = createBrowserRouter([
       { path: paths.mail, element: <MailPage /> },
       libraryRoutes,
       { path: paths.propertyPrescriptions(), element: <PropertyPrescriptionsPage /> },
+      {
+        // Preview as client: the portal's pages with the client's scope, writes off.
+        path: paths.previewClient(),
+        element: <PreviewLayout />,
+        children: [
+          { index: true, element: <PortalHomePage /> },
+          { path: 'properties/:id', element: <PortalPropertyPage /> },
+          { path: 'properties/:id/progress', element: <PortalProgressPage /> },
+          { path: 'progress', element: <PortalProgressHomePage /> },
+          { path: 'files', element: <PortalFilesPage /> },
+          { path: 'proposals', element: <PreviewProposalsPage /> },
+        ],
+      },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
       { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
     ],
@@ -93,6 +111,10 @@ const router = createBrowserRouter([
       { path: paths.portal, element: <PortalHomePage /> },
       { path: paths.portalProposals, element: <PortalProposalsPage /> },
       { path: paths.portalProposal(), element: <PortalProposalPage /> },
+      { path: paths.portalProperty(), element: <PortalPropertyPage /> },
+      { path: paths.portalPropertyProgress(), element: <PortalProgressPage /> },
+      { path: paths.portalProgress, element: <PortalProgressHomePage /> },
+      { path: paths.portalFiles, element: <PortalFilesPage /> },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

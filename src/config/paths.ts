@@ -26,6 +26,17 @@ export const paths = {
   portalProposals: '/portal/proposals',
   /** The link in the proposal e-mail: keep this path. */
   portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
+  portalProperty: (id: number | string = ':id') => `/portal/properties/${id}`,
+  portalPropertyProgress: (id: number | string = ':id') => `/portal/properties/${id}/progress`,
+  portalProgress: '/portal/progress',
+  portalFiles: '/portal/files',
+  /** A consultant's read-only preview of a client's portal. */
+  previewClient: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}`,
+  previewProperty: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}`,
+  previewPropertyProgress: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}/progress`,
+  previewProgress: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/progress`,
+  previewFiles: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/files`,
+  previewProposals: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/proposals`,
 } as const;
 
 /** The home of each role after sign-in. */

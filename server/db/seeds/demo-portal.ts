@@ -112,26 +112,24 @@ export async function seedDemoPortal(firm: Firm): Promise<void> {
   if (prescriptions.length === 0) return;
   const photoKey = await saveFile('photos', demoPhotoPng(), 'png');
   await sequelize.transaction(async (transaction) => {
-    let doneCount = 0;
-    for (const p of prescriptions) {
+    for (const [n, p] of prescriptions.entries()) {
       const practice = await Practice.findByPk(p.practiceId, { transaction });
       if (!practice) continue;
       const unitName = (p as Prescription & { unit?: { name: string } }).unit?.name ?? 'Unit';
       const drafts = tasksFromPrescription({ practice: practice.definition, result: p.result, steps: p.schedule.steps }, p.cautions);
       for (const [i, d] of drafts.entries()) {
-        // The first step of the first three prescriptions is done; the next one is scheduled.
-        const done = i === 0 && doneCount < 3;
+        // The first two steps of the first four prescriptions are done (the first with a crew photo); the next is scheduled.
+        const done = i < 2 && n < 4;
         const task = await Task.create(
           {
             firmId: firm.id, propertyId: farm.id, unitId: p.unitId, prescriptionId: p.id, proposalId: null, stepKey: d.stepKey, name: d.name, kind: d.kind,
-            practiceName: practice.name, unitName, dependsOn: d.dependsOn, earliest: d.earliest, latest: d.latest, startDate: done || i === 1 ? d.earliest : null, endDate: null,
-            status: done ? 'done' : i === 1 && crew ? 'scheduled' : 'planned', assigneeId: crew?.id ?? null, quantities: d.quantities, cautions: d.cautions, costCents: d.costCents,
+            practiceName: practice.name, unitName, dependsOn: d.dependsOn, earliest: d.earliest, latest: d.latest, startDate: done || i === 2 ? d.earliest : null, endDate: null,
+            status: done ? 'done' : i === 2 && crew ? 'scheduled' : 'planned', assigneeId: crew?.id ?? null, quantities: d.quantities, cautions: d.cautions, costCents: d.costCents,
             position: d.position, doneOn: done ? d.earliest : null, completedAt: done ? new Date(`${d.earliest}T15:00:00Z`) : null, completedById: done ? (crew?.id ?? null) : null,
           },
           { transaction },
         );
-        if (done) {
-          doneCount++;
+        if (done && i === 0) {
           await TaskPhoto.create({ firmId: firm.id, taskId: task.id, storageKey: photoKey, originalName: 'field.png', contentType: 'image/png', byteSize: demoPhotoPng().length, latitude: null, longitude: null, takenAt: new Date(`${d.earliest}T15:00:00Z`), uploadedById: crew?.id ?? null }, { transaction });
         }
       }
