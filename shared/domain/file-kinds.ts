@@ -41,8 +41,12 @@ export function isPlainUtf8Text(bytes: Uint8Array): boolean {
   } catch {
     return false;
   }
-  // C0 controls except \t \n \r, DEL, and C1 controls.
-  return !/[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]/.test(text);
+  // C0 controls except tab (9), LF (10) and CR (13); DEL (127) and the C1 controls (128–159).
+  for (let i = 0; i < text.length; i++) {
+    const code = text.charCodeAt(i);
+    if ((code < 32 && code !== 9 && code !== 10 && code !== 13) || (code >= 127 && code <= 159)) return false;
+  }
+  return true;
 }
 
 /** The lower-case extension of a file name ("Report.PDF" → "pdf"), or "" without one. */

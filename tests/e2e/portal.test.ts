@@ -250,6 +250,10 @@ describe('preview as client', () => {
     await page.getByRole('link', { name: 'Okonkwo-Larsen Family' }).first().click();
     await page.waitForURL(/\/clients\/\d+$/);
     await poll(() => page.getByRole('heading', { name: 'Files' }).count()).toBe(1);
+    // The staff side: the family's files with share/unshare and delete, and the upload switch (on in the demo).
+    await poll(() => page.getByRole('button', { name: /^Unshare Soil test/ }).count()).toBe(1);
+    expect(await page.getByLabel('Client may upload files in the portal').isChecked()).toBe(true);
+    await screenshot(page, 'client-files-staff');
     await page.getByRole('link', { name: 'Preview as client' }).click();
     await page.waitForURL(/\/preview\/clients\/\d+$/);
     await poll(() => page.getByText('Preview: what Okonkwo-Larsen Family sees.').count()).toBe(1);
@@ -257,6 +261,7 @@ describe('preview as client', () => {
     await page.getByRole('link', { name: 'See the plan of Kettle Hollow Farm' }).click();
     await page.waitForURL(/\/preview\/clients\/\d+\/properties\/\d+$/);
     await poll(() => page.getByRole('heading', { name: 'Ridge clover plot' }).count()).toBe(1);
+    await poll(() => page.locator('[data-testid="portal-plan-map"]').getAttribute('data-ready')).toBe('true');
     await screenshot(page, 'preview-property');
     await page.getByRole('navigation', { name: 'Portal' }).getByRole('link', { name: 'Files' }).click();
     await page.waitForURL(/\/preview\/clients\/\d+\/files$/);

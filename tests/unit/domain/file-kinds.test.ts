@@ -3,6 +3,7 @@ import { decideFileKind, downloadName, extensionOf, isPlainUtf8Text } from '../.
 
 const bytes = (s: string) => new TextEncoder().encode(s);
 
+// Check values are common practice, no source, unless a source is named beside them.
 describe('decideFileKind', () => {
   it('keeps sniffed PDF, PNG, JPEG and WebP whatever the name says', () => {
     // The sniffer's ext/mime pairs as file-type 21 reports them (file-type README, "Supported file types").

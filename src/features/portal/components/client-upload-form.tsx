@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useForm, Controller } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -14,6 +15,8 @@ type Values = z.input<typeof ClientFileUploadFormSchema>;
 /** The client's own upload: a file, an optional title and property. `disabled` in preview. */
 export function ClientUploadForm({ properties, disabled = false }: { properties: PortalPropertyRow[]; disabled?: boolean }) {
   const upload = useUploadPortalFile();
+  // A new key empties the file input after an upload (a file input cannot be set from code).
+  const [inputKey, setInputKey] = useState(0);
   const toast = useToast();
   const form = useForm<Values, unknown, z.output<typeof ClientFileUploadFormSchema>>({
     resolver: zodResolver(ClientFileUploadFormSchema),
@@ -27,6 +30,7 @@ export function ClientUploadForm({ properties, disabled = false }: { properties:
         onSuccess: (f) => {
           toast('success', `“${f.title}” uploaded. Your consultant can see it now.`);
           form.reset({ title: '', propertyId: '', file: null });
+          setInputKey((k) => k + 1);
         },
         onError: (e) => toast('error', `The file was not uploaded: ${e.message}`),
       },
@@ -43,6 +47,7 @@ export function ClientUploadForm({ properties, disabled = false }: { properties:
               File
             </label>
             <input
+              key={inputKey}
               id="portal-upload-file"
               type="file"
               accept={UPLOAD_ACCEPT}
