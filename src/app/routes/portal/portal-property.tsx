@@ -6,7 +6,6 @@ import { usePortalProperties } from '../../../features/portal/api/get-portal-pro
 import { usePortalProperty } from '../../../features/portal/api/get-portal-property';
 import { usePortalScope } from '../../../features/portal/api/portal-scope';
 import { PropertySwitcher } from '../../../features/portal/components/property-switcher';
-import { ShareChart } from '../../../features/portal/components/share-chart';
 import { PortalMissing } from '../../../features/portal/components/portal-missing';
 import { dayText } from '../../../features/portal/components/dates';
 import { KindSwatch } from '../../../features/plan-map/components/kind-swatch';
@@ -16,6 +15,8 @@ import { formatAcres, formatFeet } from '../../../lib/format';
 import { parseId } from '../../../lib/route-params';
 
 const PortalPlanMap = lazy(() => import('./portal-plan-map'));
+// recharts loads only with the chart.
+const ShareChart = lazy(() => import('../../../features/portal/components/share-chart').then((m) => ({ default: m.ShareChart })));
 
 const WORK: Record<PortalUnit['workStatus'], string> = { 'no-work': '', 'not-started': 'Not started', 'in-progress': 'Under way', done: 'Done' };
 
@@ -106,7 +107,9 @@ export function PortalPropertyPage() {
       </Card>
 
       <Card title="How the land is used">
-        <ShareChart rows={d.shareByKind} />
+        <Suspense fallback={<p className="text-sm text-slate">Drawing the chart…</p>}>
+          <ShareChart rows={d.shareByKind} />
+        </Suspense>
       </Card>
 
       <Card
