@@ -106,7 +106,7 @@ function FileRow({ file }: { file: SharedFileDto }) {
           {file.title}
         </a>
         <p className="text-sm text-slate">
-          {FILE_CATEGORY_LABELS[file.category]} · {file.propertyName ?? 'All properties'}
+          {file.category === 'client-upload' ? 'Client upload' : FILE_CATEGORY_LABELS[file.category]} · {file.propertyName ?? 'All properties'}
           {file.uploadedByRole === 'client' ? ` · from ${file.uploadedByName ?? 'the client'}` : ''} · {file.visibleToClient ? 'Shared' : 'Private'}
         </p>
       </div>
