@@ -10,6 +10,7 @@ export function presentClient(client: Client, stats: { propertyCount: number; to
     phone: client.phone,
     address: client.address,
     notes: client.notes,
+    portalUploadsAllowed: client.portalUploadsAllowed,
     propertyCount: stats.propertyCount,
     totalAcres: Math.round(stats.totalAcres * 100) / 100,
     createdAt: client.createdAt.toISOString(),

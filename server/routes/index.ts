@@ -20,6 +20,7 @@ import { calendarFeedsRouter, calendarRouter } from './calendar';
 import { invoicesRouter } from './invoices';
 import { webhooksRouter } from './webhooks';
 import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRouter } from './results';
+import { filesRouter } from './files';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -54,4 +55,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/surveys', router: surveysRouter },
   { path: '/harvests', router: harvestsRouter },
   { path: '/season-reports', router: seasonReportsRouter },
+  { path: '/files', router: filesRouter },
 ];

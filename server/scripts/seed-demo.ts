@@ -4,12 +4,14 @@ import { sequelize } from '../db/sequelize';
 import { seedDemo } from '../db/seeds/demo';
 import { seedDemoPrescriptions } from '../db/seeds/demo-prescriptions';
 import { seedDemoSchedule } from '../db/seeds/demo-schedule';
+import { seedDemoPortal } from '../db/seeds/demo-portal';
 
 try {
   await migrateUp();
   const firm = await seedDemo();
   await seedDemoPrescriptions(firm);
   await seedDemoSchedule(firm);
+  await seedDemoPortal(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {
   console.error((err as Error).message);

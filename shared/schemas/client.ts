@@ -13,7 +13,10 @@ export const ClientCreateSchema = z.object({
   notes: optionalText(LIMITS.textMax),
 });
 export type ClientCreateInput = z.infer<typeof ClientCreateSchema>;
-export const ClientUpdateSchema = ClientCreateSchema.partial();
+export const ClientUpdateSchema = ClientCreateSchema.partial().extend({
+  /** Whether the client's contacts may upload their own files in the portal. */
+  portalUploadsAllowed: z.boolean().optional(),
+});
 export type ClientUpdateInput = z.infer<typeof ClientUpdateSchema>;
 
 export const ClientSchema = z.object({
@@ -23,6 +26,7 @@ export const ClientSchema = z.object({
   phone: z.string().nullable(),
   address: z.string().nullable(),
   notes: z.string().nullable(),
+  portalUploadsAllowed: z.boolean(),
   propertyCount: z.number().int(),
   totalAcres: z.number(),
   createdAt: z.string(),

@@ -35,6 +35,11 @@ import { PortalInvoicesPage } from './routes/portal/portal-invoices';
 import { PortalInvoicePage } from './routes/portal/portal-invoice';
 import { PropertyResultsPage } from './routes/properties/property-results';
 import { PortalPropertyResultsPage, PortalResultsPage } from './routes/portal/portal-results';
+import { PortalPropertyPage } from './routes/portal/portal-property';
+import { PortalProgressHomePage, PortalProgressPage } from './routes/portal/portal-progress';
+import { PortalFilesPage } from './routes/portal/portal-files';
+import { PreviewLayout } from './routes/portal/preview-layout';
+import { PreviewProposalsPage } from './routes/portal/preview-proposals';
 
 function RootRedirect() {
   const me = useMe();
@@ -73,6 +78,19 @@ const router = createBrowserRouter([
       libraryRoutes,
       { path: paths.propertyPrescriptions(), element: <PropertyPrescriptionsPage /> },
       { path: paths.propertyResults(), element: <PropertyResultsPage /> },
+      {
+        // Preview as client: the portal's pages with the client's scope, writes off.
+        path: paths.previewClient(),
+        element: <PreviewLayout />,
+        children: [
+          { index: true, element: <PortalHomePage /> },
+          { path: 'properties/:id', element: <PortalPropertyPage /> },
+          { path: 'properties/:id/progress', element: <PortalProgressPage /> },
+          { path: 'progress', element: <PortalProgressHomePage /> },
+          { path: 'files', element: <PortalFilesPage /> },
+          { path: 'proposals', element: <PreviewProposalsPage /> },
+        ],
+      },
       // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
       { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
     ],
@@ -118,6 +136,10 @@ const router = createBrowserRouter([
       { path: paths.portalInvoice(), element: <PortalInvoicePage /> },
       { path: paths.portalResults, element: <PortalResultsPage /> },
       { path: paths.portalPropertyResults(), element: <PortalPropertyResultsPage /> },
+      { path: paths.portalProperty(), element: <PortalPropertyPage /> },
+      { path: paths.portalPropertyProgress(), element: <PortalProgressPage /> },
+      { path: paths.portalProgress, element: <PortalProgressHomePage /> },
+      { path: paths.portalFiles, element: <PortalFilesPage /> },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

@@ -39,6 +39,17 @@ export const paths = {
   portalInvoices: '/portal/invoices',
   /** The link in the invoice e-mails: keep this path. */
   portalInvoice: (id: number | string = ':id') => `/portal/invoices/${id}`,
+  portalProperty: (id: number | string = ':id') => `/portal/properties/${id}`,
+  portalPropertyProgress: (id: number | string = ':id') => `/portal/properties/${id}/progress`,
+  portalProgress: '/portal/progress',
+  portalFiles: '/portal/files',
+  /** A consultant's read-only preview of a client's portal. */
+  previewClient: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}`,
+  previewProperty: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}`,
+  previewPropertyProgress: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}/progress`,
+  previewProgress: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/progress`,
+  previewFiles: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/files`,
+  previewProposals: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/proposals`,
 } as const;
 
 /** The home of each role after sign-in. */

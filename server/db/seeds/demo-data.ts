@@ -63,7 +63,11 @@ export const demoClients = [
     phone: '(608) 555-0161',
     address: 'S2291 Kettle Hollow Road, Soldiers Grove, WI',
     notes: 'Three generations hunt the farm. Want more mature bucks and a place for the kids to sit.',
-    contacts: [{ email: 'client@browseline.test', name: 'Priya Okonkwo' }],
+    contacts: [
+      { email: 'client@browseline.test', name: 'Priya Okonkwo' },
+      // A second household member with their own sign-in: both see the family's properties.
+      { email: 'client2@browseline.test', name: 'Anders Larsen' },
+    ],
     properties: [
       {
         name: 'Kettle Hollow Farm',

@@ -16,6 +16,9 @@ import { formatAcres, formatNumber } from '../../../lib/format';
 import { paths } from '../../../config/paths';
 import { MissingRecord } from '../../../components/ui/missing-record';
 import { parseId } from '../../../lib/route-params';
+import { ClientFiles } from '../../../features/files/components/client-files';
+import { PortalUploadsToggle } from '../../../features/clients/components/portal-uploads-toggle';
+import { buttonClasses } from '../../../components/ui/button';
 
 const PROPERTY_COLUMNS: DataColumn<PropertyDto>[] = [
   { id: 'name', header: 'Property', value: (p) => p.name },
@@ -122,7 +125,12 @@ function ClientProperties({ client }: { client: ClientDto }) {
   );
 }
 
-/** One client: details, properties and portal contacts. */
+function ClientFilesWithProperties({ clientId }: { clientId: number }) {
+  const properties = useProperties({ clientId });
+  return <ClientFiles clientId={clientId} properties={(properties.data ?? []).map((p) => ({ id: p.id, name: p.name }))} />;
+}
+
+/** One client: details, properties, portal contacts and shared files. */
 export function ClientPage() {
   const id = parseId(useParams().id);
   const client = useClient(id ?? 0);
@@ -134,7 +142,15 @@ export function ClientPage() {
   const c = client.data;
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title={c.name} crumbs={[{ label: 'Clients', to: paths.clients }]}>
+      <PageHeader
+        title={c.name}
+        crumbs={[{ label: 'Clients', to: paths.clients }]}
+        actions={
+          <Link to={paths.previewClient(c.id)} className={buttonClasses('secondary', '', 'sm')}>
+            Preview as client
+          </Link>
+        }
+      >
         <span className="tabular-nums">
           {c.propertyCount > 0 ? (
             <>
@@ -154,6 +170,9 @@ export function ClientPage() {
           <ClientContacts clientId={c.id} clientName={c.name} />
         </Card>
       </div>
+      <Card title="Files" action={<PortalUploadsToggle client={c} />}>
+        <ClientFilesWithProperties clientId={c.id} />
+      </Card>
     </div>
   );
 }

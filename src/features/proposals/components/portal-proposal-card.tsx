@@ -15,8 +15,8 @@ const ACTION: Record<ProposalRowDto['status'], string> = {
   expired: 'View',
 };
 
-/** One proposal in the portal: a document card with one clear action. */
-export function PortalProposalCard({ proposal: p }: { proposal: ProposalRowDto }) {
+/** One proposal in the portal: a document card with one clear action (`to` overrides the link, for the consultant's preview). */
+export function PortalProposalCard({ proposal: p, to }: { proposal: ProposalRowDto; to?: string }) {
   const waiting = p.status === 'sent';
   const when =
     p.status === 'sent'
@@ -46,7 +46,7 @@ export function PortalProposalCard({ proposal: p }: { proposal: ProposalRowDto }
         <span className="text-sm text-slate">deposit {formatCents(p.depositCents)}</span>
       </p>
       <p className="text-sm">{when}</p>
-      <Link to={paths.portalProposal(p.id)} className={buttonClasses(waiting ? 'primary' : 'secondary', 'mt-1 w-full sm:w-auto sm:self-start')}>
+      <Link to={to ?? paths.portalProposal(p.id)} className={buttonClasses(waiting ? 'primary' : 'secondary', 'mt-1 w-full sm:w-auto sm:self-start')}>
         {ACTION[p.status]}
       </Link>
     </article>
