@@ -165,6 +165,30 @@ describe('the crew’s field sheet on a phone', () => {
     await poll(() => page.getByText(/Finished \(\d+\)/).count()).toBe(1);
     assertClean();
     await context.close();
+
+    // The consultant's schedule page: the task opens done, by the crew member, with the photo.
+    const desk = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const staff = await desk.newPage();
+    await signIn(staff, baseUrl, 'consultant@browseline.test');
+    await staff.waitForURL(`${baseUrl}/desk`);
+    await staff.goto(`${baseUrl}/schedule?property=${propertyId}&task=${task.id}`);
+    const panel = staff.getByRole('dialog', { name: task.name });
+    await poll(() => panel.getByRole('heading', { name: /^Done / }).count()).toBe(1);
+    await poll(() => panel.getByRole('img', { name: new RegExp(`Photo 1 of ${task.name}`) }).evaluate((img) => (img as HTMLImageElement).naturalWidth)).toBeGreaterThan(0);
+    await screenshot(staff, 'field-done-on-schedule');
+    await desk.close();
+
+    // The landowner's progress page in the portal, on a phone: the crew's photo of this task.
+    const landowner = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
+    const owner = await landowner.newPage();
+    await signIn(owner, baseUrl, 'club@browseline.test');
+    await owner.waitForURL(`${baseUrl}/portal`);
+    await owner.goto(`${baseUrl}/portal/properties/${propertyId}/progress`);
+    await poll(() => owner.getByRole('heading', { name: 'Progress', level: 1 }).count()).toBe(1);
+    const crewPhoto = owner.getByRole('img', { name: new RegExp(`Crew photo: ${task.name}`) }).first();
+    await poll(() => crewPhoto.evaluate((img) => (img as HTMLImageElement).naturalWidth).catch(() => 0)).toBeGreaterThan(0);
+    await screenshot(owner, 'field-done-on-portal-progress');
+    await landowner.close();
   });
 
   it('marks a task done with no signal: it waits on the phone, then lands exactly once when the phone is back online', async () => {

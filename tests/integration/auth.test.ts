@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { anonymousAgent, capturedMailTo, capturedMessage, signedInAgent, testApp } from '../support/test-app';
+import { deliverAllMail } from '../support/test-app';
 import { makeFirm, makeUser, PASSWORD } from '../support/factories';
-import { deliverDueMessages } from '../../server/services/mail/outbox';
 import { SessionUserSchema } from '../../shared/schemas/auth';
 
 describe('sign-in', () => {
@@ -98,7 +98,7 @@ describe('password reset', () => {
     const { users } = await makeFirm();
     const res = await request(testApp()).post('/api/auth/password-reset').send({ email: users.crew.email });
     expect(res.status).toBe(202);
-    await deliverDueMessages();
+    await deliverAllMail();
     const [mail] = await capturedMailTo(users.crew.email);
     expect(mail.subject).toMatch(/Reset your Browseline password/);
     const text = (await capturedMessage(mail.id)).text;
@@ -117,7 +117,7 @@ describe('password reset', () => {
     const address = `ghost-${Date.now()}@example.test`;
     const res = await request(testApp()).post('/api/auth/password-reset').send({ email: address });
     expect(res.status).toBe(202);
-    await deliverDueMessages();
+    await deliverAllMail();
     expect(await capturedMailTo(address)).toHaveLength(0);
   });
 });
@@ -130,7 +130,7 @@ describe('invitations', () => {
     const res = await consultant.post('/api/team/invitations').set('X-CSRF-Token', consultant.csrf).send({ email, name: 'Nell Crew', role: 'crew' });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({ email, role: 'crew', status: 'invited' });
-    await deliverDueMessages();
+    await deliverAllMail();
     const [mail] = await capturedMailTo(email);
     const token = /invite\/([\w-]+)/.exec((await capturedMessage(mail.id)).text)![1];
     const info = await request(testApp()).get(`/api/auth/invitations/${token}`).expect(200);

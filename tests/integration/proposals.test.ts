@@ -2,10 +2,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import crypto from 'node:crypto';
 import { execFileSync } from 'node:child_process';
 import { capturedMailTo, capturedMessage, signedInAgent, type Agent } from '../support/test-app';
+import { deliverAllMail } from '../support/test-app';
 import { makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { Practice, Proposal } from '../../server/models';
-import { deliverDueMessages } from '../../server/services/mail/outbox';
 import { canonicalProposalContent, proposalTotals } from '../../shared/domain/proposal-totals';
 import { formatCents } from '../../shared/domain/money';
 
@@ -108,7 +108,7 @@ describe('sending, approval and versions', () => {
     const sent = await send(consultant, 'post', `/api/proposals/${p.id}/send`);
     expect(sent.status).toBe(200);
     expect(sent.body.data.status).toBe('sent');
-    await deliverDueMessages();
+    await deliverAllMail();
     const [mail] = await capturedMailTo(ctx.users.client.email);
     const full = await capturedMessage(mail.id);
     expect(full.text).toContain(`/portal/proposals/${p.id}`);
@@ -143,7 +143,7 @@ describe('sending, approval and versions', () => {
 
     expect((await send(client, 'post', `/api/proposals/${p.id}/approve`, { signedName: 'Pat Landowner' })).status).toBe(409);
     expect((await send(consultant, 'patch', `/api/proposals/${p.id}`, { terms: 'New terms' })).status).toBe(409);
-    await deliverDueMessages();
+    await deliverAllMail();
     const notices = await capturedMailTo(ctx.users.consultant.email);
     expect(notices.some((m) => /approved proposal/.test(m.subject))).toBe(true);
 

@@ -2,11 +2,11 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { encode } from 'fast-png';
 import { capturedMailTo, capturedMessage, signedInAgent, type Agent } from '../support/test-app';
+import { deliverAllMail } from '../support/test-app';
 import { makeClient, makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { OutboxMessage, Property, SharedFile, Task, TaskPhoto } from '../../server/models';
 import { saveFile } from '../../server/services/storage/disk-storage';
-import { deliverDueMessages } from '../../server/services/mail/outbox';
 import { SurveyCreateSchema } from '../../shared/schemas/results';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
@@ -322,7 +322,7 @@ describe('season summary and report', () => {
     expect((await pdfBytes(client, made.body.data.pdfUrl)).status).toBe(200);
     expect((await client.get(`/api/properties/${propertyId}/season-reports`)).body.data.map((r: { id: number }) => r.id)).toEqual([reportId]);
 
-    await deliverDueMessages();
+    await deliverAllMail();
     const mail = await capturedMailTo(ctx.users.client.email);
     const full = await capturedMessage(mail.find((m) => m.subject.startsWith('Season report 2024–25'))!.id);
     expect(full.attachments.map((a) => a.filename)).toEqual(['season-report-2024.pdf']);

@@ -2,12 +2,11 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
-import { signedInAgent, anonymousAgent, capturedMailTo, type Agent } from '../support/test-app';
+import { signedInAgent, anonymousAgent, capturedMailTo, deliverAllMail, type Agent } from '../support/test-app';
 import { makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { withGpsExif } from '../support/exif';
 import { AuditEvent, OutboxMessage, Practice, Property, Task, TaskPhoto } from '../../server/models';
-import { deliverDueMessages } from '../../server/services/mail/outbox';
 import { config } from '../../server/config';
 import { PHOTO_LIMITS } from '../../shared/limits';
 
@@ -234,7 +233,7 @@ describe('progress', () => {
     // The client reads their own progress; one e-mail tells them the plot is finished.
     await client.get(`/api/properties/${propertyId}/progress`).expect(200);
     expect(await OutboxMessage.count({ where: { kind: 'unit-done', toAddress: ctx.users.client.email } })).toBe(1);
-    await deliverDueMessages(50);
+    await deliverAllMail();
     const mail = await capturedMailTo(ctx.users.client.email);
     expect(mail.some((m) => /Work finished on North plot/.test(m.subject))).toBe(true);
     await crew.get(`/api/properties/${propertyId}/progress`).expect(403);

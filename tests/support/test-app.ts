@@ -42,3 +42,12 @@ export async function capturedMessage(id: number): Promise<{ text: string; subje
   const res = await fetch(`${process.env.MAIL_CAPTURE_URL}/messages/${id}`);
   return ((await res.json()) as { data: { text: string; subject: string; attachments: { filename: string }[] } }).data;
 }
+
+/** Delivers every due outbox message (the worker takes 20 at a time), so a test finds its mail whatever ran before. */
+export async function deliverAllMail(): Promise<void> {
+  const { deliverDueMessages } = await import('../../server/services/mail/outbox');
+  for (let round = 0; round < 50; round++) {
+    const { sent } = await deliverDueMessages(100);
+    if (sent === 0) return;
+  }
+}
