@@ -18,6 +18,7 @@ const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000,
 let browser: Browser;
 let kettleId = 0;
 let familyFileId = 0;
+let depositNumber = '';
 
 interface AxeViolation {
   id: string;
@@ -63,6 +64,11 @@ beforeAll(async () => {
   const lines = [{ groupLabel: 'North 40', category: 'labor', description: 'Mark the oaks to thin and the hinge-cut edge', quantity: '1', unit: 'visit', unitPriceCents: 45000, taxable: false, optional: false }];
   expect((await api.patch(`/api/proposals/${id}`, { headers: { 'X-CSRF-Token': csrf }, data: { lines } })).status()).toBe(200);
   expect((await api.post(`/api/proposals/${id}/send`, { headers: { 'X-CSRF-Token': csrf } })).status()).toBe(200);
+  // The farm's approved demo proposal drafted its deposit invoice on approval: issue it, so the family has an invoice to read.
+  const drafts = (await (await api.get(`/api/invoices?propertyId=${kettleId}&status=draft`)).json()) as { data: { id: number; number: string }[] };
+  expect(drafts.data.length).toBeGreaterThan(0);
+  depositNumber = drafts.data[0].number;
+  expect((await api.post(`/api/invoices/${drafts.data[0].id}/send`, { headers: { 'X-CSRF-Token': csrf } })).status()).toBe(200);
   const files = (await (await api.get('/api/files')).json()) as { data: { id: number; title: string }[] };
   familyFileId = files.data.find((f) => f.title.startsWith('Soil test'))!.id;
   await api.dispose();
@@ -173,14 +179,19 @@ describe('the landowner’s portal on a phone (360 × 740)', () => {
     await poll(() => page.locator('[data-status="declined"]').count()).toBeGreaterThan(0);
   });
 
-  it('shows the invoices once issue 7’s route exists', async () => {
-    // Invoices belong to issue 7: checked here once that route exists.
-    const invoices = await page.request.get(`${baseUrl}/api/invoices`);
-    if (invoices.status() !== 404) {
-      await page.goto(`${baseUrl}/portal/invoices`);
-      await poll(() => page.getByRole('heading', { level: 1 }).textContent()).toMatch(/Invoices/);
-      await expectNoAxeViolations(page, '/portal/invoices');
-    }
+  it('lists the family’s invoice and opens it, with no accessibility violations', async () => {
+    await page.goto(`${baseUrl}/portal/invoices`);
+    await poll(() => page.getByRole('heading', { level: 1 }).textContent()).toMatch(/Invoices/);
+    const link = page.getByRole('link', { name: new RegExp(depositNumber) }).first();
+    await poll(() => link.count()).toBe(1);
+    expect(await fitsWidth(page)).toBe(true);
+    await expectNoAxeViolations(page, '/portal/invoices');
+    await link.click();
+    await poll(() => page.getByRole('heading', { level: 1 }).textContent()).toMatch(new RegExp(depositNumber));
+    await poll(() => page.getByRole('button', { name: /^Pay/ }).count()).toBeGreaterThan(0);
+    expect(await fitsWidth(page)).toBe(true);
+    await expectNoAxeViolations(page, 'the invoice page');
+    await screenshot(page, 'portal-invoice-phone');
   });
 
   it('lists the shared files for download and takes the landowner’s own upload', async () => {
