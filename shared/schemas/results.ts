@@ -7,6 +7,7 @@ import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
 import { AGE_CLASSES, type HarvestSummary, type SeasonSummary, type SurveyEstimates, type SurveyEstimatesDisplay, type SurveyWarning } from '../domain/survey-estimates';
 import type { Caution } from '../domain/cautions';
+import type { SurveyTrendRow } from '../domain/season-results';
 
 export { AGE_CLASSES };
 
@@ -227,21 +228,8 @@ export interface SeasonReportDto {
   createdAt: string;
 }
 
-/** One season of surveys, for charts compared season over season (the season's latest survey). */
-export interface SurveyTrendPoint {
-  season: number;
-  label: string;
-  surveyId: number;
-  surveyName: string;
-  bucks: number;
-  does: number;
-  fawns: number;
-  total: number;
-  deerPerSqMi: number;
-  /** Does per buck. */
-  buckDoeRatio: number;
-  fawnDoeRatio: number | null;
-}
+/** One season of surveys, for charts compared season over season (the season's latest survey); buckDoeRatio is does per buck. */
+export type SurveyTrendPoint = SurveyTrendRow;
 
 /** Everything the Results page shows for one property. */
 export interface ResultsDto {
