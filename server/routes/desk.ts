@@ -5,7 +5,7 @@ import { sequelize } from '../db/sequelize';
 import { Firm } from '../models';
 import { actor } from '../policies/firm-scope';
 import type { DeskSummary } from '../../shared/schemas/desk';
-import { Practice, Prescription, Property, Unit } from '../models';
+import { Practice, Prescription, Property, Task, Unit } from '../models';
 import { practiceWindow, REGIONS, type Region } from '../../shared/domain/planting-windows';
 import { todayIso } from '../commands/prescription-writer';
 import { Op } from 'sequelize';
@@ -44,17 +44,20 @@ r.get('/', STAFF, async (req, res) => {
     Prescription.findAll({ where: { firmId, year: { [Op.gte]: year - 1 } }, attributes: ['id', 'propertyId', 'unitId', 'practiceId', 'schedule'] }),
     Practice.findAll({ where: { firmId, archived: false }, attributes: ['id', 'name', 'definition'] }),
   ]);
-  const [unitRows, propertyRows] = await Promise.all([
+  const [unitRows, propertyRows, finishedTasks] = await Promise.all([
     Unit.findAll({ where: { id: [...new Set(prescriptions.map((p) => p.unitId))] }, attributes: ['id', 'name'] }),
     Property.findAll({ where: { id: [...new Set(prescriptions.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
+    Task.findAll({ where: { firmId, prescriptionId: prescriptions.map((p) => p.id), status: ['done', 'skipped'] }, attributes: ['prescriptionId', 'stepKey'] }),
   ]);
+  // A step whose task is done or skipped needs no attention, whatever the prescription's own schedule says.
+  const finished = new Set(finishedTasks.map((t) => `${t.prescriptionId}:${t.stepKey}`));
   const unitName = new Map(unitRows.map((u) => [u.id, u.name]));
   const propertyName = new Map(propertyRows.map((p) => [p.id, p.name]));
   const practiceName = new Map(practices.map((p) => [p.id, p.name]));
   const inWindow = prescriptions
     .flatMap((p) =>
       p.schedule.steps
-        .filter((s) => !s.done && s.earliest <= today && today <= s.latest)
+        .filter((s) => !s.done && !finished.has(`${p.id}:${s.stepKey}`) && s.earliest <= today && today <= s.latest)
         .map((s) => ({ prescriptionId: p.id, propertyId: p.propertyId, propertyName: propertyName.get(p.propertyId) ?? '', unitName: unitName.get(p.unitId) ?? '', practiceName: practiceName.get(p.practiceId) ?? '', stepName: s.name, earliest: s.earliest, latest: s.latest })),
     )
     .sort((a, b) => a.latest.localeCompare(b.latest))

@@ -237,6 +237,11 @@ describe('progress', () => {
     const mail = await capturedMailTo(ctx.users.client.email);
     expect(mail.some((m) => /Work finished on North plot/.test(m.subject))).toBe(true);
     await crew.get(`/api/properties/${propertyId}/progress`).expect(403);
+    // The Desk's "in the window" list leaves out steps whose task is finished.
+    const finishedSteps = new Set(done.map((t) => `${t.prescriptionId}:${t.name}`));
+    const desk = await consultant.get('/api/desk').expect(200);
+    const listed = (desk.body.data.inWindow as { prescriptionId: number; stepName: string }[]).map((s) => `${s.prescriptionId}:${s.stepName}`);
+    expect(listed.filter((k) => finishedSteps.has(k))).toEqual([]);
   });
 });
 

@@ -111,7 +111,7 @@ export function DeskPage() {
               {d.activity.map((a) => (
                 <li key={a.id} className="flex justify-between gap-2">
                   <span>
-                    <span className="font-semibold">{a.actorName ?? 'Someone'}</span> {describeAction(a.action)}
+                    <span className="font-semibold">{a.actorName ?? 'Browseline'}</span> {describeAction(a.action)}
                   </span>
                   <span className="shrink-0 text-xs text-slate">{formatRelative(a.createdAt)}</span>
                 </li>
