@@ -12,7 +12,7 @@ import type { SessionUser } from '../../shared/schemas/auth';
 import type { CheckoutInput, RefundInput } from '../../shared/schemas/invoice';
 import { conflict, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { clientRecipients } from './proposal-writer';
+import { clientRecipients } from '../services/mail/client-recipients';
 import { lockInvoice } from './invoice-writer';
 import { callPayments, payments } from '../services/payments/payments-client';
 import { checkoutAmountCents, paymentStanding } from '../../shared/domain/invoicing';

@@ -1,7 +1,8 @@
 /** Drafts, edits, revises, sends and withdraws proposals. Approved and sent versions are immutable. */
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Client, Firm, Prescription, Property, Proposal, ProposalLine, Unit, User } from '../models';
+import { clientRecipients } from '../services/mail/client-recipients';
+import { Firm, Prescription, Property, Proposal, ProposalLine, Unit } from '../models';
 import type { ProposalCreateInput, ProposalUpdateInput } from '../../shared/schemas/proposal';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { conflict, notFound, unprocessable } from '../errors';
@@ -184,15 +185,6 @@ export async function reviseProposal(actor: SessionUser, id: number, ip: string 
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.revised', subjectType: 'Proposal', subjectId: next.id, data: { from: old.id, version: next.version }, ip }, transaction);
     return next;
   });
-}
-
-/** The addresses a proposal goes to: the client's portal contacts, or the client's own e-mail. */
-export async function clientRecipients(clientId: number, transaction: Transaction): Promise<string[]> {
-  const contacts = await User.findAll({ where: { clientId, role: 'client', active: true }, attributes: ['email'], transaction });
-  const client = await Client.findByPk(clientId, { attributes: ['email'], transaction });
-  const emails = contacts.map((c) => c.email);
-  if (emails.length === 0 && client?.email) emails.push(client.email);
-  return emails;
 }
 
 /** Sends a draft: marks it sent and queues the e-mail with the PDF attached and the portal link. */

@@ -7,7 +7,7 @@
 import { Op } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { Firm, Invoice, Property } from '../models';
-import { clientRecipients } from './proposal-writer';
+import { clientRecipients } from '../services/mail/client-recipients';
 import { recordAudit } from './audit-recorder';
 import { enqueueEmail } from '../services/mail/outbox';
 import { overdueReminderEmail } from '../../templates/email/invoice';

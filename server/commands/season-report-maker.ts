@@ -2,7 +2,7 @@
  * Season reports: makes the PDF for a property's season (kept as a shared file of category
  * 'season-report', private to the firm until sent) and sends it to the landowner through the outbox.
  */
-import { Client, Firm, Property, SeasonReport, SharedFile, User, type TaskPhoto } from '../models';
+import { Client, Firm, Property, SeasonReport, SharedFile, type TaskPhoto } from '../models';
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
@@ -19,6 +19,7 @@ import { seasonRange } from '../../shared/domain/season-results';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { config } from '../config';
 import { logger } from '../logger';
+import { clientRecipients } from '../services/mail/client-recipients';
 
 /** Photos larger than this are left out of the PDF (a report should stay small enough to e-mail). */
 const MAX_PHOTO_BYTES = 4 * 1024 * 1024;
@@ -102,16 +103,6 @@ export async function makeSeasonReport(actor: SessionUser, propertyId: number, i
     await deleteFile(storageKey);
     throw err;
   }
-}
-
-async function clientRecipients(clientId: number, transaction: Transaction): Promise<string[]> {
-  const contacts = await User.findAll({ where: { clientId, role: 'client', active: true }, attributes: ['email'], transaction });
-  const emails = contacts.map((c) => c.email);
-  if (emails.length === 0) {
-    const client = await Client.findByPk(clientId, { attributes: ['email'], transaction });
-    if (client?.email) emails.push(client.email);
-  }
-  return emails;
 }
 
 /** Sends a season report to the landowner (PDF attached) and shows it in their portal's files. */

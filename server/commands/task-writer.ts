@@ -4,7 +4,7 @@
  */
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Client, Firm, Property, Task, TaskPhoto, User } from '../models';
+import { Firm, Property, Task, TaskPhoto, User } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { TaskCompleteInput, TaskUpdateInput } from '../../shared/schemas/task';
 import { plannedOrScheduled, progressOf } from '../../shared/domain/tasks';
@@ -15,6 +15,7 @@ import { deleteFile, saveFile } from '../services/storage/disk-storage';
 import type { InspectedPhoto } from '../services/tasks/photo-intake';
 import { enqueueEmail } from '../services/mail/outbox';
 import { unitDoneEmail } from '../../templates/email/unit-done';
+import { clientRecipients } from '../services/mail/client-recipients';
 import { config } from '../config';
 import { todayIso } from './prescription-writer';
 
@@ -83,13 +84,7 @@ async function notifyUnitDone(task: Task, transaction: Transaction): Promise<voi
   const unitTasks = await Task.findAll({ where: { unitId: task.unitId }, attributes: ['status', 'costCents', 'unitId', 'name'], transaction });
   const progress = progressOf(unitTasks);
   if (progress.open > 0 || progress.done === 0) return;
-  const [firm, client, contacts] = await Promise.all([
-    Firm.findByPk(task.firmId, { transaction }),
-    Client.findByPk(property.clientId, { transaction }),
-    User.findAll({ where: { firmId: task.firmId, clientId: property.clientId, role: 'client', active: true }, transaction }),
-  ]);
-  const recipients = contacts.map((c) => c.email);
-  if (recipients.length === 0 && client?.email) recipients.push(client.email);
+  const [firm, recipients] = await Promise.all([Firm.findByPk(task.firmId, { transaction }), clientRecipients(property.clientId, transaction)]);
   for (const to of recipients) {
     await enqueueEmail(
       {
