@@ -8,7 +8,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { request, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage, DEMO_PASSWORD } from '../support/browser';
+import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
 
 const baseUrl = inject('baseUrl');
@@ -29,13 +29,7 @@ interface ApiTask {
   notes: string | null;
 }
 
-/** A signed-in API session (cookie + CSRF token) for setting up and checking through the API. */
-async function apiAs(email: string): Promise<{ ctx: APIRequestContext; csrf: string }> {
-  const ctx = await request.newContext({ baseURL: baseUrl });
-  const res = await ctx.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD } });
-  expect(res.status()).toBe(200);
-  return { ctx, csrf: ((await res.json()) as { csrfToken: string }).csrfToken };
-}
+const apiAs = (email: string) => apiSignIn(baseUrl, email);
 
 let browser: Browser;
 let consultant: Awaited<ReturnType<typeof apiAs>>;
@@ -45,9 +39,9 @@ let crewId = 0;
 /** Three tasks on the Bluestem Ridge club plot, assigned to the demo crew member for today. */
 let tasks: ApiTask[] = [];
 
-const write = (who: { ctx: APIRequestContext; csrf: string }, method: 'post' | 'patch', url: string, data: unknown = {}) => who.ctx[method](url, { data, headers: { 'X-CSRF-Token': who.csrf } });
+const write = (who: { request: APIRequestContext; csrf: string }, method: 'post' | 'patch', url: string, data: unknown = {}) => who.request[method](url, { data, headers: { 'X-CSRF-Token': who.csrf } });
 const taskById = async (id: number): Promise<ApiTask> => {
-  const res = await consultant.ctx.get(`/api/tasks?propertyId=${propertyId}`);
+  const res = await consultant.request.get(`/api/tasks?propertyId=${propertyId}`);
   expect(res.status()).toBe(200);
   return ((await res.json()) as { data: { tasks: ApiTask[] } }).data.tasks.find((t) => t.id === id)!;
 };
@@ -58,19 +52,19 @@ beforeAll(async () => {
   consultant = await apiAs('consultant@browseline.test');
   club = await apiAs('club@browseline.test');
   // Demo data: Bluestem Ridge (club@'s land) has a fall brassica prescription on its Club plot; no other journey approves a proposal there.
-  const properties = (await (await consultant.ctx.get('/api/properties')).json()) as { data: { id: number; name: string }[] };
+  const properties = (await (await consultant.request.get('/api/properties')).json()) as { data: { id: number; name: string }[] };
   propertyId = properties.data.find((p) => p.name === 'Bluestem Ridge')!.id;
-  const team = (await (await consultant.ctx.get('/api/team')).json()) as { data: { id: number; email: string }[] };
+  const team = (await (await consultant.request.get('/api/team')).json()) as { data: { id: number; email: string }[] };
   crewId = team.data.find((m) => m.email === 'crew@browseline.test')!.id;
 
-  let list = (await (await consultant.ctx.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
+  let list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
   if (list.data.tasks.length === 0) {
     const draft = await write(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 30 });
     expect(draft.status()).toBe(201);
     const proposalId = ((await draft.json()) as { data: { id: number } }).data.id;
     expect((await write(consultant, 'post', `/api/proposals/${proposalId}/send`)).status()).toBe(200);
     expect((await write(club, 'post', `/api/proposals/${proposalId}/approve`, { signedName: 'Marcus Feld' })).status()).toBe(200);
-    list = (await (await consultant.ctx.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
+    list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
   }
   const open = list.data.tasks.filter((t) => t.status === 'planned' || t.status === 'scheduled');
   expect(open.length).toBeGreaterThanOrEqual(3);
@@ -82,8 +76,8 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await consultant?.ctx.dispose();
-  await club?.ctx.dispose();
+  await consultant?.request.dispose();
+  await club?.request.dispose();
   await browser?.close();
 });
 
@@ -151,14 +145,14 @@ describe('the crew’s field sheet on a phone', () => {
     expect(done.photos[0].latitude).toBeCloseTo(43.5494, 4);
 
     // The landowner's progress shows the plot under way (or finished), and they may see the crew's photo.
-    const progress = await club.ctx.get(`/api/properties/${propertyId}/progress`);
+    const progress = await club.request.get(`/api/properties/${propertyId}/progress`);
     expect(progress.status()).toBe(200);
     const body = (await progress.json()) as { data: { plan: { done: number }; units: { unitId: number; status: string; percentByCount: number }[] } };
     const unit = body.data.units.find((u) => u.unitId === task.unitId)!;
     expect(['in-progress', 'done']).toContain(unit.status);
     expect(unit.percentByCount).toBeGreaterThan(0);
     expect(body.data.plan.done).toBeGreaterThanOrEqual(1);
-    expect((await club.ctx.get(done.photos[0].url)).status()).toBe(200);
+    expect((await club.request.get(done.photos[0].url)).status()).toBe(200);
 
     // Back on the field sheet the task has left the open lists for "Finished".
     await page.getByRole('link', { name: '← Field sheet' }).click();

@@ -5,9 +5,8 @@
  */
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { APIRequestContext, Browser, BrowserContext, Page } from 'playwright-core';
-import { request as playwrightRequest } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 
 const baseUrl = inject('baseUrl');
 const AXE = path.resolve(import.meta.dirname, '../../node_modules/axe-core/axe.min.js');
@@ -42,19 +41,12 @@ async function expectNoAxeViolations(page: Page, label: string): Promise<void> {
 /** True when nothing on the page is wider than the viewport (no sideways scrolling at 360 px). */
 const fitsWidth = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
 
-/** A signed-in API client for set-up through the same routes the app uses. */
-async function apiAs(email: string): Promise<{ api: APIRequestContext; csrf: string }> {
-  const api = await playwrightRequest.newContext({ baseURL: baseUrl });
-  const res = await api.post('/api/auth/login', { data: { email, password: 'demo-browseline' } });
-  expect(res.status()).toBe(200);
-  return { api, csrf: ((await res.json()) as { csrfToken: string }).csrfToken };
-}
 
 beforeAll(async () => {
   browser = await launchBrowser();
   // A sent proposal for the family's second property (the client declines it below, so it leaves no
   // "waiting" proposal behind for other journeys).
-  const { api, csrf } = await apiAs('consultant@browseline.test');
+  const { request: api, csrf } = await apiSignIn(baseUrl, 'consultant@browseline.test');
   const props = (await (await api.get('/api/properties')).json()) as { data: { id: number; name: string }[] };
   kettleId = props.data.find((p) => p.name === 'Kettle Hollow Farm')!.id;
   const north = props.data.find((p) => p.name === 'Kettle Hollow — North 40')!.id;

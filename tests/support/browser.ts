@@ -1,7 +1,7 @@
 /** Headless Chromium (Debian's) through playwright-core, and helpers for journeys. */
 import fs from 'node:fs';
 import path from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, request, type APIRequestContext, type Browser, type Page } from 'playwright-core';
 import { expect } from 'vitest';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -40,4 +40,12 @@ export function watchPage(page: Page): { errors: string[]; assertClean: () => vo
     if (m.type() === 'error' && !/Failed to load resource: the server responded with a status of 4\d\d/.test(m.text())) errors.push(`console: ${m.text()}`);
   });
   return { errors, assertClean: () => expect(errors).toEqual([]) };
+}
+
+/** A signed-in API session (cookie + CSRF token) of a demo account, for setting up and checking through the same routes the app uses. */
+export async function apiSignIn(baseUrl: string, email: string, password = DEMO_PASSWORD): Promise<{ request: APIRequestContext; csrf: string }> {
+  const api = await request.newContext({ baseURL: baseUrl });
+  const res = await api.post('/api/auth/login', { data: { email, password } });
+  expect(res.status(), `sign-in of ${email}`).toBe(200);
+  return { request: api, csrf: ((await res.json()) as { csrfToken: string }).csrfToken };
 }

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { FILE_CATEGORY_LABELS, FILE_LIMITS, STAFF_FILE_CATEGORIES, StaffFileUploadFormSchema, UPLOAD_ACCEPT, chosenFileProblem, type SharedFileDto } from '../../../../shared/schemas/file';
+import { FILE_CATEGORY_LABELS, FILE_LIMITS, STAFF_FILE_CATEGORIES, StaffFileUploadFormSchema, type SharedFileDto } from '../../../../shared/schemas/file';
+import { FileInputField } from './file-input-field';
 import { useDeleteFile, useFiles, useShareFile, useUpdateFile } from '../api/files';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
@@ -38,25 +39,7 @@ function ShareFileForm({ clientId, properties, onDone }: { clientId: number; pro
       <Controller
         control={form.control}
         name="file"
-        render={({ field }) => (
-          <div className="flex flex-col gap-1 sm:col-span-2">
-            <label htmlFor="share-file-input" className="text-sm font-semibold text-ink">
-              File
-            </label>
-            <input
-              id="share-file-input"
-              type="file"
-              accept={UPLOAD_ACCEPT}
-              aria-describedby="share-file-help"
-              aria-invalid={errors.file ? true : undefined}
-              onChange={(e) => field.onChange(e.target.files?.[0] ?? null)}
-              className="rounded border border-rule bg-white px-3 py-2 text-sm"
-            />
-            <p id="share-file-help" className={`text-sm ${errors.file ? 'text-clay' : 'text-slate'}`}>
-              {errors.file ? (chosenFileProblem(field.value as File | null) ?? errors.file.message) : `PDF, PNG, JPEG, WebP, CSV or plain text, up to ${FILE_LIMITS.maxBytes / 1048576} MB.`}
-            </p>
-          </div>
-        )}
+        render={({ field }) => <FileInputField id="share-file-input" value={field.value as File | null} onChange={field.onChange} errorMessage={errors.file?.message} />}
       />
       <TextField label="Title" hint="Left empty, the file name is used." maxLength={FILE_LIMITS.titleMax} error={errors.title?.message} {...form.register('title')} />
       <SelectField label="Category" error={errors.category?.message} {...form.register('category')}>

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { useForm, Controller } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { ClientFileUploadFormSchema, chosenFileProblem, FILE_LIMITS, UPLOAD_ACCEPT } from '../../../../shared/schemas/file';
+import { ClientFileUploadFormSchema, FILE_LIMITS } from '../../../../shared/schemas/file';
+import { FileInputField } from '../../files/components/file-input-field';
 import type { PortalPropertyRow } from '../../../../shared/schemas/portal';
 import { useUploadPortalFile } from '../api/upload-portal-file';
 import { TextField } from '../../../components/ui/text-field';
@@ -41,27 +42,7 @@ export function ClientUploadForm({ properties, disabled = false }: { properties:
       <Controller
         control={form.control}
         name="file"
-        render={({ field }) => (
-          <div className="flex flex-col gap-1 sm:col-span-2">
-            <label htmlFor="portal-upload-file" className="text-sm font-semibold text-ink">
-              File
-            </label>
-            <input
-              key={inputKey}
-              id="portal-upload-file"
-              type="file"
-              accept={UPLOAD_ACCEPT}
-              disabled={disabled}
-              aria-describedby="portal-upload-file-help"
-              aria-invalid={errors.file ? true : undefined}
-              onChange={(e) => field.onChange(e.target.files?.[0] ?? null)}
-              className="rounded border border-rule bg-white px-3 py-2 text-sm file:mr-3 file:rounded file:border-0 file:bg-moss/10 file:px-3 file:py-1 file:font-semibold file:text-moss-deep"
-            />
-            <p id="portal-upload-file-help" className={`text-sm ${errors.file ? 'text-clay' : 'text-slate'}`}>
-              {errors.file ? (chosenFileProblem(field.value as File | null) ?? errors.file.message) : `PDF, PNG, JPEG, WebP, CSV or plain text, up to ${FILE_LIMITS.maxBytes / 1048576} MB.`}
-            </p>
-          </div>
-        )}
+        render={({ field }) => <FileInputField key={inputKey} id="portal-upload-file" value={field.value as File | null} onChange={field.onChange} errorMessage={errors.file?.message} disabled={disabled} />}
       />
       <TextField label="Title (optional)" disabled={disabled} maxLength={FILE_LIMITS.titleMax} error={errors.title?.message} {...form.register('title')} />
       <SelectField label="Property" disabled={disabled} error={errors.propertyId?.message} {...form.register('propertyId')}>
