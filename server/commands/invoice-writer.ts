@@ -11,7 +11,7 @@ import { conflict, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { nextFirmNumber } from './proposal-writer';
 import { clientRecipients } from '../services/mail/client-recipients';
-import { todayIso } from './prescription-writer';
+import { firmToday } from '../services/clock';
 import { enqueueEmail } from '../services/mail/outbox';
 import { invoiceSentEmail } from '../../templates/email/invoice';
 import { config } from '../config';
@@ -50,7 +50,7 @@ async function newInvoice(proposal: Proposal, kind: InvoiceKind, createdById: nu
       propertyId: proposal.propertyId,
       proposalId: proposal.id,
       kind,
-      number: `INV-${todayIso().slice(0, 4)}-${String(seq).padStart(4, '0')}`,
+      number: `INV-${(await firmToday(proposal.firmId, transaction)).slice(0, 4)}-${String(seq).padStart(4, '0')}`,
       currency: proposal.currency,
       taxRatePct: proposal.taxRatePct,
       termsDays: settings.invoiceTermsDays ?? DEFAULT_TERMS_DAYS,
@@ -221,7 +221,7 @@ export async function sendInvoice(actor: SessionUser, id: number, ip: string | n
     const recipients = await clientRecipients(invoice.clientId, transaction);
     if (recipients.length === 0) throw unprocessable('The client has no e-mail address or portal contact. Add one on the client’s page, then send.');
     if (invoice.status === 'draft') {
-      const issuedOn = todayIso();
+      const issuedOn = await firmToday(invoice.firmId, transaction);
       await invoice.update({ status: 'open', issuedOn, dueOn: dueDate(issuedOn, invoice.termsDays), sentAt: new Date() }, { transaction });
     }
     const pdf = await renderInvoicePdfFor(invoice, transaction);

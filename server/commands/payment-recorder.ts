@@ -20,6 +20,8 @@ import { enqueueEmail } from '../services/mail/outbox';
 import { paymentReceiptEmail, refundEmail } from '../../templates/email/invoice';
 import { config } from '../config';
 import { logger } from '../logger';
+import { usableZone } from '../services/clock';
+import { todayIn } from '../../shared/domain/clock';
 
 /** The idempotency key of a checkout: the same invoice, paid-so-far and amount always gives the same key. */
 export function checkoutIdempotencyKey(invoice: Pick<Invoice, 'id' | 'firmId' | 'amountPaidCents'>, amountCents: number): string {
@@ -127,7 +129,7 @@ async function recordPayment(facts: PaymentFacts, transaction: Transaction): Pro
         firmId,
         kind: 'payment-receipt',
         to,
-        email: paymentReceiptEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: payment.receivedAt.toISOString().slice(0, 10), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+        email: paymentReceiptEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: todayIn(usableZone(firm?.timezone), payment.receivedAt), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
       },
       transaction,
     );

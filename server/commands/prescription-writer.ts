@@ -19,9 +19,8 @@ import type { SessionUser } from '../../shared/schemas/auth';
 import { loadLibrary } from '../services/library/library-reader';
 import { notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
+import { firmToday } from '../services/clock';
 
-/** Today as YYYY-MM-DD (the server's calendar date). */
-export const todayIso = (): string => new Date().toISOString().slice(0, 10);
 
 interface ComputeInput {
   firmId: number;
@@ -50,7 +49,7 @@ export async function computePrescriptionRecord(input: ComputeInput) {
     ...(unit.perimeterFt !== null ? { perimeterFt: unit.perimeterFt } : {}),
     count: input.count ?? 1,
   };
-  const today = todayIso();
+  const today = await firmToday(input.firmId);
   let year = input.year ?? (input.targetDate ? Number(input.targetDate.slice(0, 4)) : Number(today.slice(0, 4)));
   // Without a year, plan for the next window that has not closed yet.
   if (input.year === undefined && !input.targetDate && practiceWindow(definition, region, year).latest < today) year += 1;

@@ -15,7 +15,8 @@ import { reprice } from './proposal-writer';
 import { enqueueEmail } from '../services/mail/outbox';
 import { proposalDecidedEmail } from '../../templates/email/proposal-sent';
 import { config } from '../config';
-import { todayIso } from './prescription-writer';
+import { firmToday, now, usableZone } from '../services/clock';
+import { formatDate } from '../../shared/domain/clock';
 import { generateTasksForProposal } from './task-generator';
 import { draftDepositInvoice } from './invoice-writer';
 
@@ -30,11 +31,12 @@ async function lockForClient(actor: SessionUser, id: number, transaction: Transa
   return proposal;
 }
 
-function assertOpen(proposal: Proposal): void {
+async function assertOpen(proposal: Proposal, transaction: Transaction): Promise<void> {
   if (proposal.status === 'approved') throw conflict('This proposal is approved already.');
   if (proposal.status === 'declined') throw conflict('This proposal was declined. Ask your consultant for a new version.');
   if (proposal.status === 'withdrawn') throw conflict('This version was withdrawn by your consultant. Look for the newer version in your portal.');
-  if (proposal.expiresOn && proposal.expiresOn < todayIso()) throw conflict(`This proposal expired on ${proposal.expiresOn}. Ask your consultant to renew it.`);
+  // Expired means past its date in the firm's time zone: at 11:30 pm in Chicago it is still that day.
+  if (proposal.expiresOn && proposal.expiresOn < (await firmToday(proposal.firmId, transaction))) throw conflict(`This proposal expired on ${formatDate(proposal.expiresOn)}. Ask your consultant to renew it.`);
 }
 
 async function notifyFirm(proposal: Proposal, decision: 'approved' | 'declined', extra: { signedName?: string; reason?: string }, transaction: Transaction) {
@@ -50,7 +52,7 @@ async function notifyFirm(proposal: Proposal, decision: 'approved' | 'declined',
         firmId: proposal.firmId,
         kind: `proposal-${decision}`,
         to: user.email,
-        email: proposalDecidedEmail({ firmName: firm?.name ?? '', clientName: client?.name ?? '', propertyName: property?.name ?? '', number: proposal.number, version: proposal.version, decision, totalCents: proposal.totalCents, url: `${config.publicUrl}/proposals/${proposal.id}`, ...extra }),
+        email: proposalDecidedEmail({ firmName: firm?.name ?? '', clientName: client?.name ?? '', propertyName: property?.name ?? '', number: proposal.number, version: proposal.version, decision, totalCents: proposal.totalCents, url: `${config.publicUrl}/proposals/${proposal.id}`, decidedAt: proposal.decidedAt ?? undefined, timeZone: usableZone(firm?.timezone), ...extra }),
       },
       transaction,
     );
@@ -62,7 +64,7 @@ export async function approveProposal(actor: SessionUser, id: number, input: App
   if (actor.role !== 'client' || !actor.clientId) throw forbidden('Only the landowner can approve a proposal.');
   return sequelize.transaction(async (transaction) => {
     const proposal = await lockForClient(actor, id, transaction);
-    assertOpen(proposal);
+    await assertOpen(proposal, transaction);
     const lines = await ProposalLine.findAll({ where: { proposalId: proposal.id }, order: [['position', 'ASC']], transaction });
     const optionIds = new Set(input.optionIds ?? []);
     const optional = lines.filter((l) => l.optional);
@@ -74,7 +76,7 @@ export async function approveProposal(actor: SessionUser, id: number, input: App
     for (const line of optional) line.selected = optionIds.has(line.id);
     await reprice(proposal, transaction);
     const { content, hash } = proposalContentHash(proposal, lines);
-    const signedAt = new Date();
+    const signedAt = now();
     await ProposalApproval.create({ proposalId: proposal.id, userId: actor.id, signedName: input.signedName, signedAt, ip: ctx.ip, userAgent: ctx.userAgent?.slice(0, 500) ?? null, contentHash: hash, content, selectedOptionIds: [...optionIds] }, { transaction });
     await proposal.update({ status: 'approved', decidedAt: signedAt }, { transaction });
     await generateTasksForProposal(proposal, transaction);
@@ -90,7 +92,7 @@ export async function declineProposal(actor: SessionUser, id: number, reason: st
   if (actor.role !== 'client' || !actor.clientId) throw forbidden('Only the landowner can decline a proposal.');
   return sequelize.transaction(async (transaction) => {
     const proposal = await lockForClient(actor, id, transaction);
-    assertOpen(proposal);
+    await assertOpen(proposal, transaction);
     await proposal.update({ status: 'declined', decidedAt: new Date(), declineReason: reason }, { transaction });
     await notifyFirm(proposal, 'declined', { reason }, transaction);
     await recordAudit({ firmId: proposal.firmId, userId: actor.id, action: 'proposal.declined', subjectType: 'Proposal', subjectId: proposal.id, ip: ctx.ip }, transaction);

@@ -12,7 +12,8 @@ import { enqueueEmail } from '../services/mail/outbox';
 import { proposalSentEmail } from '../../templates/email/proposal-sent';
 import { config } from '../config';
 import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
-import { todayIso } from './prescription-writer';
+import { firmToday } from '../services/clock';
+import { formatDate } from '../../shared/domain/clock';
 import { addDays } from '../../shared/domain/planting-windows';
 
 export const DEFAULT_TERMS = [
@@ -60,7 +61,7 @@ export async function draftProposal(actor: SessionUser, propertyId: number, inpu
     const firm = await Firm.findByPk(actor.firmId, { transaction });
     const settings = (firm?.settings ?? {}) as { taxRatePct?: number; depositPct?: number };
     const seq = await nextFirmNumber(actor.firmId, 'proposal', transaction);
-    const today = todayIso();
+    const today = await firmToday(actor.firmId, transaction);
     const proposal = await Proposal.create(
       {
         firmId: actor.firmId,
@@ -155,6 +156,7 @@ export async function reviseProposal(actor: SessionUser, id: number, ip: string 
     if (await Proposal.count({ where: { seriesId: old.seriesId ?? old.id, status: 'draft' }, transaction })) {
       throw conflict('A draft version of this proposal exists already. Edit that one.');
     }
+    const today = await firmToday(actor.firmId, transaction);
     const next = await Proposal.create(
       {
         firmId: old.firmId,
@@ -170,7 +172,7 @@ export async function reviseProposal(actor: SessionUser, id: number, ip: string 
         discount: old.discount,
         taxRatePct: old.taxRatePct,
         depositPct: old.depositPct,
-        expiresOn: old.expiresOn && old.expiresOn >= todayIso() ? old.expiresOn : addDays(todayIso(), 30),
+        expiresOn: old.expiresOn && old.expiresOn >= today ? old.expiresOn : addDays(today, 30),
         createdById: actor.id,
       },
       { transaction },
@@ -194,7 +196,7 @@ export async function sendProposal(actor: SessionUser, id: number, ip: string | 
     if (proposal.status !== 'draft') throw conflict(`This proposal is ${proposal.status}; only a draft can be sent. Revise it to send a new version.`);
     const lineCount = await ProposalLine.count({ where: { proposalId: proposal.id }, transaction });
     if (lineCount === 0) throw unprocessable('Add at least one line before sending the proposal.');
-    if (proposal.expiresOn && proposal.expiresOn < todayIso()) throw unprocessable('expiresOn: the valid-until date has passed. Set a later date, then send.');
+    if (proposal.expiresOn && proposal.expiresOn < (await firmToday(actor.firmId, transaction))) throw unprocessable(`expiresOn: the valid-until date (${formatDate(proposal.expiresOn)}) has passed. Set a later date, then send.`);
     const recipients = await clientRecipients(proposal.clientId, transaction);
     if (recipients.length === 0) throw unprocessable('The client has no e-mail address or portal contact. Add one on the client’s page, then send.');
     await proposal.update({ status: 'sent', sentAt: new Date() }, { transaction });

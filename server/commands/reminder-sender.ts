@@ -14,22 +14,36 @@ import { overdueReminderEmail } from '../../templates/email/invoice';
 import { config } from '../config';
 import { logger } from '../logger';
 import { addDays } from '../../shared/domain/planting-windows';
+import { firmToday, now } from '../services/clock';
+import { todayIn } from '../../shared/domain/clock';
 import { REMINDER_INTERVAL_DAYS, daysPastDue, reminderDue } from '../../shared/domain/invoicing';
 
-/** Queues the reminders due on `today` (YYYY-MM-DD); answers how many invoices were reminded. */
-export async function sendOverdueReminders(today: string = new Date().toISOString().slice(0, 10)): Promise<number> {
+/**
+ * Queues the reminders due today — each firm's today in its own time zone, or `onDate` (YYYY-MM-DD)
+ * for every firm when given — and answers how many invoices were reminded.
+ */
+export async function sendOverdueReminders(onDate?: string): Promise<number> {
+  // No zone is more than a day ahead of UTC: this bound finds every candidate; each is then checked against its firm's today.
+  const bound = onDate ?? addDays(todayIn('UTC', now()), 1);
+  const todays = new Map<number, string>();
+  const todayOf = async (firmId: number): Promise<string> => {
+    if (onDate) return onDate;
+    if (!todays.has(firmId)) todays.set(firmId, await firmToday(firmId));
+    return todays.get(firmId)!;
+  };
   const candidates = await Invoice.findAll({
     where: {
       status: 'open',
-      dueOn: { [Op.lt]: today },
-      [Op.or]: [{ lastReminderOn: null }, { lastReminderOn: { [Op.lte]: addDays(today, -REMINDER_INTERVAL_DAYS) } }],
+      dueOn: { [Op.lt]: bound },
+      [Op.or]: [{ lastReminderOn: null }, { lastReminderOn: { [Op.lte]: addDays(bound, -REMINDER_INTERVAL_DAYS) } }],
     },
-    attributes: ['id'],
+    attributes: ['id', 'firmId'],
     order: [['id', 'ASC']],
     limit: 500,
   });
   let reminded = 0;
-  for (const { id } of candidates) {
+  for (const { id, firmId } of candidates) {
+    const today = await todayOf(firmId);
     const done = await sequelize.transaction(async (transaction) => {
       const invoice = await Invoice.findOne({ where: { id }, lock: transaction.LOCK.UPDATE, skipLocked: true, transaction });
       if (!invoice || invoice.status !== 'open' || !invoice.dueOn) return false;

@@ -6,7 +6,8 @@ import { CameraSurvey, HarvestRecord, Property, Unit } from '../models';
 import { findInFirm } from '../policies/firm-scope';
 import { unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { todayIso } from './prescription-writer';
+import { firmToday } from '../services/clock';
+import { formatDate } from '../../shared/domain/clock';
 import { cameraSurveyEstimates, huntingSeasonOf } from '../../shared/domain/survey-estimates';
 import { HarvestCreateSchema, SurveyCreateSchema, type HarvestCreateValues, type HarvestUpdateSchema, type SurveyCreateValues, type SurveyUpdateSchema } from '../../shared/schemas/results';
 import type { SessionUser } from '../../shared/schemas/auth';
@@ -127,9 +128,9 @@ export async function deleteSurvey(actor: SessionUser, id: number, ip: string | 
 }
 
 /** Checks a harvest record against the property: its unit must be on the plan, its date not in the future. */
-async function checkHarvest(propertyId: number, values: HarvestCreateValues, transaction: Transaction): Promise<void> {
-  if (values.date > todayIso()) {
-    throw unprocessable(`date: ${values.date} is in the future. Enter the day the deer was taken.`, [{ path: 'date', message: 'in the future' }]);
+async function checkHarvest(firmId: number, propertyId: number, values: HarvestCreateValues, transaction: Transaction): Promise<void> {
+  if (values.date > (await firmToday(firmId, transaction))) {
+    throw unprocessable(`date: ${formatDate(values.date)} is in the future. Enter the day the deer was taken.`, [{ path: 'date', message: 'in the future' }]);
   }
   if (values.unitId) {
     const unit = await Unit.findOne({ where: { id: values.unitId, propertyId }, attributes: ['id'], transaction });
@@ -141,7 +142,7 @@ async function checkHarvest(propertyId: number, values: HarvestCreateValues, tra
 export async function createHarvest(actor: SessionUser, propertyId: number, values: HarvestCreateValues, ip: string | null): Promise<HarvestRecord> {
   return sequelize.transaction(async (transaction) => {
     await findInFirm(Property, propertyId, actor.firmId, 'That property', { transaction });
-    await checkHarvest(propertyId, values, transaction);
+    await checkHarvest(actor.firmId, propertyId, values, transaction);
     const record = await HarvestRecord.create(
       {
         firmId: actor.firmId,
@@ -181,7 +182,7 @@ export async function updateHarvest(actor: SessionUser, id: number, patch: z.out
       notes: record.notes,
       ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)),
     });
-    await checkHarvest(record.propertyId, merged, transaction);
+    await checkHarvest(actor.firmId, record.propertyId, merged, transaction);
     await record.update(
       {
         date: merged.date,

@@ -8,7 +8,7 @@ import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
 import { unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { todayIso } from './prescription-writer';
+import { firmToday } from '../services/clock';
 import { enqueueEmail } from '../services/mail/outbox';
 import { deleteFile, readFile, saveFile } from '../services/storage/disk-storage';
 import { readSeasonSummary } from '../services/results/results-reader';
@@ -52,7 +52,7 @@ export async function seasonReportInput(property: Property, season: number, reco
     client: { name: client?.name ?? '' },
     property: { name: property.name, acres: property.acres, locality: [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || null },
     season: { label: range.label, startsOn: range.startsOn, endsOn: range.endsOn },
-    preparedOn: todayIso(),
+    preparedOn: await firmToday(property.firmId, transaction),
     work: summary.work,
     acresEstablished: summary.acresEstablished,
     unitsEstablished: summary.unitsEstablished,

@@ -17,7 +17,7 @@ import { enqueueEmail } from '../services/mail/outbox';
 import { unitDoneEmail } from '../../templates/email/unit-done';
 import { clientRecipients } from '../services/mail/client-recipients';
 import { config } from '../config';
-import { todayIso } from './prescription-writer';
+import { firmToday } from '../services/clock';
 
 const STAFF_ROLES = new Set(['owner', 'consultant']);
 const isStaff = (actor: SessionUser) => STAFF_ROLES.has(actor.role);
@@ -91,7 +91,7 @@ async function notifyUnitDone(task: Task, transaction: Transaction): Promise<voi
         firmId: task.firmId,
         kind: 'unit-done',
         to,
-        email: unitDoneEmail({ firmName: firm?.name ?? '', propertyName: property.name, unitName: task.unitName, taskNames: unitTasks.filter((t) => t.status === 'done').map((t) => t.name), doneOn: task.doneOn ?? todayIso(), url: `${config.publicUrl}/portal/properties/${property.id}/progress` }),
+        email: unitDoneEmail({ firmName: firm?.name ?? '', propertyName: property.name, unitName: task.unitName, taskNames: unitTasks.filter((t) => t.status === 'done').map((t) => t.name), doneOn: task.doneOn ?? (await firmToday(task.firmId, transaction)), url: `${config.publicUrl}/portal/properties/${property.id}/progress` }),
       },
       transaction,
     );
@@ -111,8 +111,8 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
   }
   const probe = await taskForActor(actor, id);
   if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn}` : 'skipped'} already; nothing was changed.`);
-  // A day of slack: the phone sends its own calendar day, which runs ahead of UTC east of Greenwich.
-  if (input.doneOn > addDays(todayIso(), 1)) throw unprocessable('doneOn: the date the work was done cannot be in the future.');
+  // The firm's today, with a day of slack for a crew phone set to a zone east of the firm's.
+  if (input.doneOn > addDays(await firmToday(actor.firmId), 1)) throw unprocessable('doneOn: the day the work was done cannot be after today. Pick today or an earlier day.');
   const saved: string[] = [];
   try {
     for (const photo of photos) saved.push(await saveFile('photos', photo.bytes, photo.extension));

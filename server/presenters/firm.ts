@@ -1,5 +1,6 @@
 import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
+import { usableZone } from '../services/clock';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
@@ -10,6 +11,7 @@ export function presentFirm(firm: Firm): FirmDto {
     email: firm.email,
     phone: firm.phone,
     region: firm.region,
+    timezone: usableZone(firm.timezone),
     settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0 },
   };
 }

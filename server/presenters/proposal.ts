@@ -1,12 +1,11 @@
 import type { Proposal, ProposalApproval, ProposalLine } from '../models';
 import { priceProposal } from '../services/proposals/pricing';
 import type { ProposalDisplayStatus } from '../../shared/schemas/proposal';
-import { todayIso } from '../commands/prescription-writer';
 import type { ProposalDto } from '../../shared/schemas/proposal-dto';
 
-/** The state people see: a sent proposal past its date is expired. */
-export function displayStatus(p: Proposal): ProposalDisplayStatus {
-  if (p.status === 'sent' && p.expiresOn && p.expiresOn < todayIso()) return 'expired';
+/** The state people see: a sent proposal past its date (in the firm's time zone) is expired. */
+export function displayStatus(p: Proposal, today: string): ProposalDisplayStatus {
+  if (p.status === 'sent' && p.expiresOn && p.expiresOn < today) return 'expired';
   return p.status;
 }
 
@@ -16,6 +15,8 @@ export interface ProposalContext {
   /** Per unit: its name, kind, size and the plain summaries of its prescriptions. */
   groups: { unitId: number | null; label: string; kind: string | null; acres: number | null; lengthFt: number | null; summaries: string[] }[];
   cautions: { id: string; title: string; text: string }[];
+  /** Today in the firm's time zone (a sent proposal past its date reads as expired). */
+  today: string;
 }
 
 /** A proposal with its priced lines, totals, state and approval record. */
@@ -26,7 +27,7 @@ export function presentProposal(p: Proposal, lines: ProposalLine[], approval: Pr
     seriesId: p.seriesId ?? p.id,
     number: p.number,
     version: p.version,
-    status: displayStatus(p),
+    status: displayStatus(p, ctx.today),
     propertyId: p.propertyId,
     propertyName: ctx.propertyName,
     clientId: p.clientId,

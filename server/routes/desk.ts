@@ -7,14 +7,16 @@ import { actor } from '../policies/firm-scope';
 import type { DeskSummary } from '../../shared/schemas/desk';
 import { Practice, Prescription, Property, Task, Unit } from '../models';
 import { practiceWindow, REGIONS, type Region } from '../../shared/domain/planting-windows';
-import { todayIso } from '../commands/prescription-writer';
+import { todayInZone } from '../services/clock';
 import { Op } from 'sequelize';
 
 const r = defineRoutes('/desk');
 
 r.get('/', STAFF, async (req, res) => {
-  const { firmId } = actor(req);
-  const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: { firmId }, type: QueryTypes.SELECT });
+  const { firmId, firmTimezone } = actor(req);
+  // Today in the firm's time zone, not the database's or the server's.
+  const today = todayInZone(firmTimezone);
+  const q = <T extends object>(sql: string) => sequelize.query<T>(sql, { replacements: { firmId, today }, type: QueryTypes.SELECT });
   const [firm, counts, recent, activity] = await Promise.all([
     Firm.findByPk(firmId),
     q<{ clients: string; properties: string; acres: string | null; pending: string; crew: string }>(`
@@ -32,14 +34,13 @@ r.get('/', STAFF, async (req, res) => {
       WHERE a.firm_id = :firmId AND a.action <> 'user.signed-in' ORDER BY a.created_at DESC LIMIT 8`),
   ]);
   const c = counts[0];
-  const today = todayIso();
   const year = Number(today.slice(0, 4));
   const region: Region = (REGIONS as readonly string[]).includes(firm?.region ?? '') ? (firm!.region as Region) : 'midwest';
   const [waiting, prescriptions, practices] = await Promise.all([
     q<{ id: number; number: string; version: number; property_name: string; client_name: string; total_cents: number; sent_at: Date | null; first_viewed_at: Date | null; expires_on: string | null }>(`
       SELECT p.id, p.number, p.version, pr.name AS property_name, c.name AS client_name, p.total_cents, p.sent_at, p.first_viewed_at, p.expires_on::text
       FROM proposals p JOIN properties pr ON pr.id = p.property_id JOIN clients c ON c.id = p.client_id
-      WHERE p.firm_id = :firmId AND p.status = 'sent' AND (p.expires_on IS NULL OR p.expires_on >= CURRENT_DATE)
+      WHERE p.firm_id = :firmId AND p.status = 'sent' AND (p.expires_on IS NULL OR p.expires_on >= CAST(:today AS date))
       ORDER BY p.sent_at ASC LIMIT 12`),
     Prescription.findAll({ where: { firmId, year: { [Op.gte]: year - 1 } }, attributes: ['id', 'propertyId', 'unitId', 'practiceId', 'schedule'] }),
     Practice.findAll({ where: { firmId, archived: false }, attributes: ['id', 'name', 'definition'] }),

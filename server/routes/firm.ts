@@ -23,9 +23,10 @@ r.patch('/settings', OWNER, validate({ body: FirmSettingsUpdateSchema }), async 
   const firm = await sequelize.transaction(async (transaction) => {
     const row = await Firm.findByPk(me.firmId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!row) throw notFound('Your firm');
+    const { timezone, ...rest } = req.body;
     const settings = { ...row.settings };
-    for (const [key, value] of Object.entries(req.body)) if (value !== undefined) settings[key] = value;
-    await row.update({ settings }, { transaction });
+    for (const [key, value] of Object.entries(rest)) if (value !== undefined) settings[key] = value;
+    await row.update({ settings, ...(timezone !== undefined ? { timezone } : {}) }, { transaction });
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.settings-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(req.body) }, ip: req.ip ?? null }, transaction);
     return row;
   });

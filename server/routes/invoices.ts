@@ -13,7 +13,7 @@ import { refundPayment, startCheckout } from '../commands/payment-recorder';
 import { listInvoiceRows, readInvoice } from '../services/invoices/invoice-reader';
 import { renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
 import { notFound } from '../errors';
-import { todayIso } from '../commands/prescription-writer';
+import { todayInZone, usableZone } from '../services/clock';
 import { ageReceivables } from '../../shared/domain/invoicing';
 
 const r = defineRoutes('/invoices');
@@ -39,18 +39,18 @@ r.get('/', STAFF_AND_CLIENT, validate({ query: InvoiceListQuerySchema }), async 
     if (me.role === 'client' && q.status === 'draft') return res.json({ data: [] });
     where.status = q.status;
   }
-  res.json({ data: await listInvoiceRows(where as WhereOptions) });
+  res.json({ data: await listInvoiceRows(where as WhereOptions, todayInZone(me.firmTimezone)) });
 });
 
 r.get('/receivables', STAFF, async (req, res) => {
-  const { firmId } = actor(req);
-  const today = todayIso();
+  const { firmId, firmTimezone } = actor(req);
+  const today = todayInZone(firmTimezone);
   const open = await Invoice.findAll({ where: { firmId, status: 'open' }, attributes: ['dueOn', 'totalCents', 'amountPaidCents'] });
   const items = open.map((i) => ({ dueOn: i.dueOn ?? today, balanceCents: Math.max(0, i.totalCents - i.amountPaidCents) }));
   const buckets = ageReceivables(items, today);
   const [paid] = await sequelize.query<{ cents: string | null }>(
-    `SELECT sum(p.amount_cents - p.refunded_cents) AS cents FROM invoice_payments p WHERE p.firm_id = :firmId AND p.received_at >= date_trunc('month', now())`,
-    { replacements: { firmId }, type: QueryTypes.SELECT },
+    `SELECT sum(p.amount_cents - p.refunded_cents) AS cents FROM invoice_payments p WHERE p.firm_id = :firmId AND p.received_at >= (date_trunc('month', now() AT TIME ZONE :zone) AT TIME ZONE :zone)`,
+    { replacements: { firmId, zone: usableZone(firmTimezone) }, type: QueryTypes.SELECT },
   );
   const answer: ReceivablesDto = {
     asOf: today,

@@ -14,7 +14,7 @@ import { readProposal } from '../services/proposals/proposal-reader';
 import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
 import { displayStatus } from '../presenters/proposal';
 import { notFound } from '../errors';
-import { todayIso } from '../commands/prescription-writer';
+import { todayInZone } from '../services/clock';
 import type { ProposalRowDto } from '../../shared/schemas/proposal-dto';
 
 const perProperty = defineRoutes('/properties');
@@ -32,7 +32,7 @@ async function readable(req: Request): Promise<Proposal> {
 const ctx = (req: Request) => ({ ip: req.ip ?? null, userAgent: req.get('user-agent') ?? null });
 
 /** List rows: numbers and totals without lines. */
-async function listRows(where: WhereOptions) {
+async function listRows(where: WhereOptions, today: string) {
   const rows = await Proposal.findAll({ where, order: [['createdAt', 'DESC'], ['version', 'DESC']] });
   const [properties, clients] = await Promise.all([
     Property.findAll({ where: { id: [...new Set(rows.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
@@ -45,7 +45,7 @@ async function listRows(where: WhereOptions) {
     seriesId: p.seriesId ?? p.id,
     number: p.number,
     version: p.version,
-    status: displayStatus(p),
+    status: displayStatus(p, today),
     title: p.title,
     propertyId: p.propertyId,
     propertyName: propertyName.get(p.propertyId) ?? '',
@@ -64,7 +64,7 @@ async function listRows(where: WhereOptions) {
 perProperty.get('/:id/proposals', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
   const { firmId } = actor(req);
   const property = await findInFirm(Property, Number(req.params.id), firmId, 'That property');
-  res.json({ data: await listRows({ firmId, propertyId: property.id }) });
+  res.json({ data: await listRows({ firmId, propertyId: property.id }, todayInZone(actor(req).firmTimezone)) });
 });
 
 perProperty.post('/:id/proposals', STAFF, validate({ params: IdParamsSchema, body: ProposalCreateSchema }), async (req, res) => {
@@ -78,13 +78,14 @@ r.get('/', STAFF_AND_CLIENT, validate({ query: ProposalListQuerySchema }), async
   const where: Record<string | symbol, unknown> = { firmId: me.firmId };
   if (me.role === 'client') Object.assign(where, { clientId: me.clientId, status: { [Op.ne]: 'draft' } });
   if (propertyId) where.propertyId = propertyId;
-  if (status === 'expired') Object.assign(where, { status: 'sent', expiresOn: { [Op.lt]: todayIso() } });
+  const today = todayInZone(me.firmTimezone);
+  if (status === 'expired') Object.assign(where, { status: 'sent', expiresOn: { [Op.lt]: today } });
   else if (status) {
     if (me.role === 'client' && status === 'draft') return res.json({ data: [] });
     where.status = status;
-    if (status === 'sent') where.expiresOn = { [Op.or]: [{ [Op.gte]: todayIso() }, { [Op.is]: null }] };
+    if (status === 'sent') where.expiresOn = { [Op.or]: [{ [Op.gte]: today }, { [Op.is]: null }] };
   }
-  res.json({ data: await listRows(where as WhereOptions) });
+  res.json({ data: await listRows(where as WhereOptions, today) });
 });
 
 r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
@@ -96,7 +97,7 @@ r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req
 r.get('/:id/versions', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
   const { firmId } = actor(req);
   const proposal = await findInFirm(Proposal, Number(req.params.id), firmId, 'That proposal');
-  res.json({ data: await listRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }) });
+  res.json({ data: await listRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }, todayInZone(actor(req).firmTimezone)) });
 });
 
 r.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {

@@ -25,6 +25,8 @@ export const SessionUserSchema = z.object({
   role: z.enum(ROLES),
   firmId: z.number().int(),
   firmName: z.string(),
+  /** The firm's IANA time zone: "today" and times are read in it on every screen. */
+  firmTimezone: z.string(),
   clientId: z.number().int().nullable(),
 });
 export type SessionUser = z.infer<typeof SessionUserSchema>;

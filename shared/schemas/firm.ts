@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isTimeZone } from '../domain/clock';
 
 /** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png */
 export const TileUrlTemplateSchema = z
@@ -12,6 +13,7 @@ export const FirmSettingsUpdateSchema = z.object({
   tileUrlTemplate: z.union([TileUrlTemplateSchema, z.literal('').transform(() => null), z.null()]).optional(),
   tileAttribution: z.string().trim().max(200).nullish(),
   taxRatePct: z.number().min(0).max(30).optional(),
+  timezone: z.string().trim().refine(isTimeZone, { message: 'choose a time zone from the list, such as America/Chicago' }).optional(),
 });
 export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
 
@@ -21,6 +23,8 @@ export const FirmSchema = z.object({
   email: z.string().nullable(),
   phone: z.string().nullable(),
   region: z.string(),
+  /** IANA time zone: the firm's "today" and the times on its documents. */
+  timezone: z.string(),
   settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number() }),
 });
 export type FirmDto = z.infer<typeof FirmSchema>;

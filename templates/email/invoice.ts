@@ -1,5 +1,6 @@
 import { renderEmail, type RenderedEmail } from './layout';
 import { formatCents } from '../../shared/domain/money';
+import { formatDate } from '../../shared/domain/clock';
 
 interface InvoiceMailBase {
   firmName: string;
@@ -17,7 +18,7 @@ export function invoiceSentEmail(input: InvoiceMailBase & { kind: keyof typeof K
     firmName: input.firmName,
     greeting: 'Hello,',
     paragraphs: [
-      `Invoice ${input.number} bills ${KIND_WORDS[input.kind]} on ${input.propertyName}. The total is ${formatCents(input.totalCents)}${input.balanceCents !== input.totalCents ? `, of which ${formatCents(input.balanceCents)} is still to pay` : ''}${input.dueOn ? `, due ${input.dueOn}` : ''}. The PDF is attached.`,
+      `Invoice ${input.number} bills ${KIND_WORDS[input.kind]} on ${input.propertyName}. The total is ${formatCents(input.totalCents)}${input.balanceCents !== input.totalCents ? `, of which ${formatCents(input.balanceCents)} is still to pay` : ''}${input.dueOn ? `, due ${formatDate(input.dueOn)}` : ''}. The PDF is attached.`,
       'You can pay it by card in your portal, all at once or in parts.',
     ],
     action: { label: 'View and pay the invoice', url: input.url },
@@ -31,7 +32,7 @@ export function paymentReceiptEmail(input: InvoiceMailBase & { amountCents: numb
     firmName: input.firmName,
     greeting: 'Thank you,',
     paragraphs: [
-      `We received ${formatCents(input.amountCents)} on ${input.receivedOn} for invoice ${input.number} (${input.propertyName}).`,
+      `We received ${formatCents(input.amountCents)} on ${formatDate(input.receivedOn)} for invoice ${input.number} (${input.propertyName}).`,
       input.balanceCents > 0 ? `${formatCents(input.balanceCents)} is still to pay on this invoice.` : 'The invoice is now paid in full.',
     ],
     action: { label: 'See the invoice', url: input.url },
@@ -41,11 +42,11 @@ export function paymentReceiptEmail(input: InvoiceMailBase & { amountCents: numb
 /** A reminder for an invoice past its due date. */
 export function overdueReminderEmail(input: InvoiceMailBase & { balanceCents: number; dueOn: string; daysOverdue: number }): RenderedEmail {
   return renderEmail({
-    subject: `Reminder: invoice ${input.number} was due ${input.dueOn}`,
+    subject: `Reminder: invoice ${input.number} was due ${formatDate(input.dueOn)}`,
     firmName: input.firmName,
     greeting: 'Hello,',
     paragraphs: [
-      `Invoice ${input.number} for ${input.propertyName} was due on ${input.dueOn} (${input.daysOverdue} ${input.daysOverdue === 1 ? 'day' : 'days'} ago); ${formatCents(input.balanceCents)} is still to pay.`,
+      `Invoice ${input.number} for ${input.propertyName} was due on ${formatDate(input.dueOn)} (${input.daysOverdue} ${input.daysOverdue === 1 ? 'day' : 'days'} ago); ${formatCents(input.balanceCents)} is still to pay.`,
       'If you have paid it in the last day or two, thank you, and please ignore this reminder. If something is wrong with the invoice, reply and tell us.',
     ],
     action: { label: 'Pay the invoice', url: input.url },

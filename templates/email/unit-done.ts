@@ -1,3 +1,4 @@
+import { formatDate } from '../../shared/domain/clock';
 import { renderEmail, type RenderedEmail } from './layout';
 
 /** Tells the landowner the planned work on one unit is finished, with a link to the progress page. */
@@ -7,7 +8,7 @@ export function unitDoneEmail(input: { firmName: string; propertyName: string; u
     firmName: input.firmName,
     greeting: 'Hello,',
     paragraphs: [
-      `The crew finished the planned work on ${input.unitName} at ${input.propertyName} on ${input.doneOn}: ${input.taskNames.join('; ')}.`,
+      `The crew finished the planned work on ${input.unitName} at ${input.propertyName} on ${formatDate(input.doneOn)}: ${input.taskNames.join('; ')}.`,
       'The crew’s notes and photos are on the progress page of your portal.',
     ],
     action: { label: 'See the progress', url: input.url },

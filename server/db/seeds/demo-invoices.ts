@@ -8,6 +8,7 @@ import { Client, Invoice, InvoiceLine, InvoicePayment, Property, type Firm } fro
 import { nextFirmNumber } from '../../commands/proposal-writer';
 import { recalcInvoice } from '../../commands/invoice-writer';
 import { addDays } from '../../../shared/domain/planting-windows';
+import { firmToday } from '../../services/clock';
 
 const DAY_MS = 24 * 3600 * 1000;
 
@@ -17,7 +18,7 @@ export async function seedDemoInvoices(firm: Firm, transaction: Transaction): Pr
   if (!client) return 0;
   if (await Invoice.count({ where: { clientId: client.id }, transaction })) return 0;
   const property = await Property.findOne({ where: { firmId: firm.id, clientId: client.id, name: 'Bluestem Ridge' }, transaction });
-  const today = new Date().toISOString().slice(0, 10);
+  const today = await firmToday(firm.id, transaction);
   const year = today.slice(0, 4);
   const plans = [
     {

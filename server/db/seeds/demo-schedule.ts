@@ -13,7 +13,7 @@ import { completeTask, updateTask } from '../../commands/task-writer';
 import { toSessionUser } from '../../services/auth/passport';
 import { inspectPhoto } from '../../services/tasks/photo-intake';
 import { addDays } from '../../../shared/domain/planting-windows';
-import { todayIso } from '../../commands/prescription-writer';
+import { firmToday } from '../../services/clock';
 
 const PROPERTY = 'Kettle Hollow Farm';
 const PHOTO = path.resolve(import.meta.dirname, 'assets/brassica-plot.jpg');
@@ -47,7 +47,7 @@ export async function seedDemoSchedule(firm: Firm): Promise<number> {
   await sendProposal(staff, draft.id, null);
   await approveProposal(await toSessionUser(landowner), draft.id, { signedName: landowner.name }, { ip: null, userAgent: 'demo seed' });
 
-  const today = todayIso();
+  const today = await firmToday(firm.id);
   const tasks = await Task.findAll({ where: { proposalId: draft.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
   const crew = await User.findAll({ where: { firmId: firm.id, role: 'crew', email: { [Op.in]: ASSIGNMENTS.map((a) => a[2]) } } });
   const find = (name: string, unit: string) => tasks.find((t) => t.name === name && t.unitName === unit);

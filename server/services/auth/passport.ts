@@ -3,6 +3,7 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { Firm, User } from '../../models';
 import { verifyPassword } from './passwords';
+import { usableZone } from '../clock';
 import type { SessionUser } from '../../../shared/schemas/auth';
 
 declare global {
@@ -21,7 +22,7 @@ declare module 'express-session' {
 
 /** The session view of a user. */
 export async function toSessionUser(user: User & { Firm?: Firm }): Promise<SessionUser> {
-  const firm = user.Firm ?? (await Firm.findByPk(user.firmId, { attributes: ['name'] }));
+  const firm = user.Firm ?? (await Firm.findByPk(user.firmId, { attributes: ['name', 'timezone'] }));
   return {
     id: user.id,
     email: user.email,
@@ -29,6 +30,7 @@ export async function toSessionUser(user: User & { Firm?: Firm }): Promise<Sessi
     role: user.role,
     firmId: user.firmId,
     firmName: firm?.name ?? '',
+    firmTimezone: usableZone(firm?.timezone),
     clientId: user.clientId,
   };
 }
@@ -50,7 +52,7 @@ passport.use(
 passport.serializeUser((user, done) => done(null, user.id));
 passport.deserializeUser(async (id: number, done) => {
   try {
-    const user = await User.findByPk(id, { include: [{ model: Firm, attributes: ['name'] }] });
+    const user = await User.findByPk(id, { include: [{ model: Firm, attributes: ['name', 'timezone'] }] });
     if (!user || !user.active) return done(null, false);
     done(null, await toSessionUser(user));
   } catch (err) {

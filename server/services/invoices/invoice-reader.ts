@@ -3,7 +3,7 @@ import type { Transaction, WhereOptions } from 'sequelize';
 import { Client, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, Property, Proposal } from '../../models';
 import { presentInvoice, presentInvoiceRow, type InvoiceNames } from '../../presenters/invoice';
 import type { InvoiceDto, InvoiceRowDto } from '../../../shared/schemas/invoice';
-import { todayIso } from '../../commands/prescription-writer';
+import { firmToday } from '../clock';
 
 async function namesFor(invoices: readonly Invoice[], transaction?: Transaction): Promise<(i: Invoice) => InvoiceNames> {
   const ids = (pick: (i: Invoice) => number | null) => [...new Set(invoices.map(pick).filter((v): v is number => v !== null))];
@@ -20,19 +20,19 @@ async function namesFor(invoices: readonly Invoice[], transaction?: Transaction)
 
 /** The invoice answer: totals, lines, payments and refunds. */
 export async function readInvoice(invoice: Invoice, transaction?: Transaction): Promise<InvoiceDto> {
-  const [names, lines, payments, refunds] = await Promise.all([
+  const [names, lines, payments, refunds, today] = await Promise.all([
     namesFor([invoice], transaction),
     InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
     InvoicePayment.findAll({ where: { invoiceId: invoice.id }, order: [['receivedAt', 'ASC'], ['id', 'ASC']], transaction }),
     InvoiceRefund.findAll({ where: { invoiceId: invoice.id }, order: [['id', 'ASC']], transaction }),
+    firmToday(invoice.firmId, transaction),
   ]);
-  return presentInvoice(invoice, names(invoice), todayIso(), lines, payments, refunds);
+  return presentInvoice(invoice, names(invoice), today, lines, payments, refunds);
 }
 
-/** List rows, newest first. */
-export async function listInvoiceRows(where: WhereOptions): Promise<InvoiceRowDto[]> {
+/** List rows, newest first; `today` is the firm's (overdue is read against it). */
+export async function listInvoiceRows(where: WhereOptions, today: string): Promise<InvoiceRowDto[]> {
   const rows = await Invoice.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
   const names = await namesFor(rows);
-  const today = todayIso();
   return rows.map((i) => presentInvoiceRow(i, names(i), today));
 }

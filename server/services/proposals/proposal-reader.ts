@@ -2,16 +2,18 @@
 import type { Transaction } from 'sequelize';
 import { Client, Prescription, Property, Proposal, ProposalApproval, ProposalLine, Unit } from '../../models';
 import { presentProposal, type ProposalContext } from '../../presenters/proposal';
+import { firmToday } from '../clock';
 
 /** The context of a proposal: names, unit groups with prescription summaries, cautions. */
 export async function proposalContext(p: Proposal, lines: ProposalLine[], transaction?: Transaction): Promise<ProposalContext> {
   const prescriptionIds = [...new Set(lines.map((l) => l.prescriptionId).filter((x): x is number => !!x))];
   const unitIds = [...new Set(lines.map((l) => l.unitId).filter((x): x is number => !!x))];
-  const [property, client, prescriptions, units] = await Promise.all([
+  const [property, client, prescriptions, units, today] = await Promise.all([
     Property.findByPk(p.propertyId, { attributes: ['name'], transaction }),
     Client.findByPk(p.clientId, { attributes: ['name'], transaction }),
     prescriptionIds.length ? Prescription.findAll({ where: { id: prescriptionIds }, transaction }) : Promise.resolve([] as Prescription[]),
     unitIds.length ? Unit.findAll({ where: { id: unitIds }, attributes: ['id', 'name', 'kind', 'acres', 'lengthFt'], transaction }) : Promise.resolve([] as Unit[]),
+    firmToday(p.firmId, transaction),
   ]);
   const groups = new Map<string, ProposalContext['groups'][number]>();
   for (const line of lines) {
@@ -26,7 +28,7 @@ export async function proposalContext(p: Proposal, lines: ProposalLine[], transa
   }
   const cautions = new Map<string, ProposalContext['cautions'][number]>();
   for (const p2 of prescriptions) for (const c of p2.cautions) cautions.set(c.id, { id: c.id, title: c.title, text: c.text });
-  return { propertyName: property?.name ?? '', clientName: client?.name ?? '', groups: [...groups.values()], cautions: [...cautions.values()] };
+  return { propertyName: property?.name ?? '', clientName: client?.name ?? '', groups: [...groups.values()], cautions: [...cautions.values()], today };
 }
 
 /** The presented proposal by id (the caller has checked access). */

@@ -10,7 +10,7 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 import type { TaskDto, TaskListQuery } from '../../../shared/schemas/task';
 import { fieldBucket, taskWarnings, type TaskWarning } from '../../../shared/domain/tasks';
 import { stripCrs } from '../../presenters/geojson';
-import { todayIso } from '../../commands/prescription-writer';
+import { todayInZone } from '../clock';
 
 export type TaskView = TaskDto & { unitGeometry: Geometry | null };
 
@@ -50,7 +50,7 @@ export async function presentTasks(actor: SessionUser, tasks: Task[], options: {
   const propertyName = new Map(properties.map((p) => [p.id, p.name]));
   const userName = new Map(users.map((u) => [u.id, u.name]));
   const unit = new Map(units.map((u) => [u.id, u]));
-  const today = todayIso();
+  const today = todayInZone(actor.firmTimezone);
   const warnings = taskWarnings(
     tasks.map((t) => ({ id: t.id, prescriptionId: t.prescriptionId, stepKey: t.stepKey, name: t.name, unitName: t.unitName, status: t.status, earliest: t.earliest, latest: t.latest, startDate: t.startDate, endDate: t.endDate, doneOn: t.doneOn, dependsOn: t.dependsOn })),
     today,

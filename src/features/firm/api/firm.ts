@@ -9,6 +9,10 @@ export function useUpdateFirmSettings() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: FirmSettingsUpdateInput) => api.patch<{ data: FirmDto }>('/api/firm/settings', input),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ['firm'] }),
+    onSuccess: async () => {
+      await qc.invalidateQueries({ queryKey: ['firm'] });
+      // The firm's time zone travels with the signed-in user; every page's "today" follows it.
+      await qc.invalidateQueries({ queryKey: ['auth', 'me'] });
+    },
   });
 }

@@ -4,6 +4,8 @@ import { z } from 'zod';
 import { TileUrlTemplateSchema } from '../../../../shared/schemas/firm';
 import { useFirm, useUpdateFirmSettings } from '../api/firm';
 import { TextField } from '../../../components/ui/text-field';
+import { SelectField } from '../../../components/ui/select-field';
+import { formatMoment, isTimeZone, timeZoneChoices } from '../../../../shared/domain/clock';
 import { Button } from '../../../components/ui/button';
 import { ErrorPanel, Loading } from '../../../components/ui/card';
 import { useToast } from '../../../components/ui/toast';
@@ -12,24 +14,27 @@ const FormSchema = z.object({
   tileUrlTemplate: z.union([z.literal(''), TileUrlTemplateSchema]),
   tileAttribution: z.string().trim().max(200),
   taxRatePct: z.coerce.number({ message: 'enter the rate as a number' }).min(0, { message: 'cannot be negative' }).max(30, { message: 'above 30 % looks like a typing slip' }),
+  timezone: z.string().refine(isTimeZone, { message: 'choose the firm’s time zone from the list' }),
 });
 
-/** The owner's firm settings: imagery tile service and the default sales-tax rate. */
+/** The owner's firm settings: imagery tile service, the default sales-tax rate and the firm's time zone. */
 export function FirmSettingsForm() {
   const firm = useFirm();
   if (firm.isPending) return <Loading />;
   if (firm.isError) return <ErrorPanel error={firm.error} />;
   const s = firm.data.settings;
-  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct }} />;
+  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct, timezone: firm.data.timezone }} />;
 }
 
 function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema> }) {
   const update = useUpdateFirmSettings();
   const toast = useToast();
   const form = useForm<z.input<typeof FormSchema>, unknown, z.output<typeof FormSchema>>({ resolver: zodResolver(FormSchema), defaultValues: defaults });
+  const zones = timeZoneChoices();
+  const zone = form.watch('timezone');
   const submit = form.handleSubmit((v) =>
     update.mutate(
-      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct },
+      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct, timezone: v.timezone },
       { onSuccess: () => toast('success', 'Firm settings saved.'), onError: (e) => toast('error', e.message) },
     ),
   );
@@ -45,6 +50,18 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
       />
       <TextField label="Imagery credit line" placeholder="Imagery © your provider" error={form.formState.errors.tileAttribution?.message} {...form.register('tileAttribution')} />
       <TextField label="Sales tax rate (%)" inputMode="decimal" hint="The default on new proposals; each proposal can change it." error={form.formState.errors.taxRatePct?.message} {...form.register('taxRatePct')} />
+      <SelectField
+        label="Time zone"
+        hint={isTimeZone(zone) ? `“Today” on every page, e-mail and document is the date here. Now: ${formatMoment(new Date(), zone)}.` : undefined}
+        error={form.formState.errors.timezone?.message}
+        {...form.register('timezone')}
+      >
+        {(zones.includes(defaults.timezone) ? zones : [defaults.timezone, ...zones]).map((z) => (
+          <option key={z} value={z}>
+            {z.replace(/_/g, ' ')}
+          </option>
+        ))}
+      </SelectField>
       <div className="md:col-span-2">
         <Button type="submit" busy={update.isPending}>Save firm settings</Button>
       </div>
