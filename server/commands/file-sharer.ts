@@ -5,10 +5,11 @@
  */
 import { fileTypeFromBuffer } from 'file-type';
 import type { SessionUser } from '../../shared/schemas/auth';
-import { Client, Property, SharedFile } from '../models';
+import { Op } from 'sequelize';
+import { Client, Property, SeasonReport, SharedFile } from '../models';
 import { sequelize } from '../db/sequelize';
 import { recordAudit } from './audit-recorder';
-import { badRequest, forbidden, notFound, unsupportedMedia } from '../errors';
+import { badRequest, conflict, forbidden, notFound, unsupportedMedia } from '../errors';
 import { findInFirm } from '../policies/firm-scope';
 import { deleteFile, saveFile } from '../services/storage/disk-storage';
 import { decideFileKind } from '../../shared/domain/file-kinds';
@@ -98,6 +99,10 @@ export async function updateSharedFile(me: SessionUser, id: number, input: FileU
 export async function removeSharedFile(me: SessionUser, id: number, ip: string | null): Promise<void> {
   const key = await sequelize.transaction(async (transaction) => {
     const file = await findInFirm(SharedFile, id, me.firmId, 'That file', { transaction, lock: true });
+    // A sent season report is a document the landowner received: it stays as sent.
+    if (file.category === 'season-report' && (await SeasonReport.count({ where: { sharedFileId: file.id, sentAt: { [Op.ne]: null } }, transaction }))) {
+      throw conflict('This is a season report that was sent to the landowner; it stays as sent. Make a new report for changes.');
+    }
     await file.destroy({ transaction });
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'file.deleted', subjectType: 'SharedFile', subjectId: file.id, data: { title: file.title, clientId: file.clientId }, ip }, transaction);
     return file.storageKey;

@@ -16,7 +16,7 @@ import { enqueueEmail } from '../services/mail/outbox';
 import { invoiceSentEmail } from '../../templates/email/invoice';
 import { config } from '../config';
 import { DEFAULT_TERMS_DAYS, dueDate, finalInvoiceCents, invoiceAmounts, progressInvoicePlan, remainingToBillCents, type InvoiceKind, type InvoiceLineSource } from '../../shared/domain/invoicing';
-import { renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
+import { invoiceDocumentSnapshot, renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
 
 /** Locks an invoice of the firm for update, or 404. */
 export async function lockInvoice(id: number, firmId: number, transaction: Transaction): Promise<Invoice> {
@@ -223,6 +223,8 @@ export async function sendInvoice(actor: SessionUser, id: number, ip: string | n
     if (invoice.status === 'draft') {
       const issuedOn = await firmToday(invoice.firmId, transaction);
       await invoice.update({ status: 'open', issuedOn, dueOn: dueDate(issuedOn, invoice.termsDays), sentAt: new Date() }, { transaction });
+      // Issued: what the PDF shows is kept, so the sent invoice reads the same forever.
+      await invoice.update({ documentSnapshot: await invoiceDocumentSnapshot(invoice, transaction) }, { transaction });
     }
     const pdf = await renderInvoicePdfFor(invoice, transaction);
     const [firm, property] = await Promise.all([Firm.findByPk(invoice.firmId, { transaction }), invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null]);

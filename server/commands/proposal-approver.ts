@@ -12,6 +12,7 @@ import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { proposalContentHash } from '../services/proposals/pricing';
 import { reprice } from './proposal-writer';
+import { takePlanSnapshot } from '../services/proposals/plan-snapshot';
 import { enqueueEmail } from '../services/mail/outbox';
 import { proposalDecidedEmail } from '../../templates/email/proposal-sent';
 import { config } from '../config';
@@ -75,6 +76,8 @@ export async function approveProposal(actor: SessionUser, id: number, input: App
     await ProposalLine.update({ selected: false }, { where: { proposalId: proposal.id, optional: true, id: { [Op.notIn]: [...optionIds, 0] } }, transaction });
     for (const line of optional) line.selected = optionIds.has(line.id);
     await reprice(proposal, transaction);
+    // A version sent before plans were frozen is frozen now, at approval.
+    if (!proposal.planSnapshot) await proposal.update({ planSnapshot: await takePlanSnapshot(proposal, transaction) }, { transaction });
     const { content, hash } = proposalContentHash(proposal, lines);
     const signedAt = now();
     await ProposalApproval.create({ proposalId: proposal.id, userId: actor.id, signedName: input.signedName, signedAt, ip: ctx.ip, userAgent: ctx.userAgent?.slice(0, 500) ?? null, contentHash: hash, content, selectedOptionIds: [...optionIds] }, { transaction });

@@ -13,6 +13,7 @@ import { proposalSentEmail } from '../../templates/email/proposal-sent';
 import { config } from '../config';
 import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
 import { firmToday } from '../services/clock';
+import { takePlanSnapshot } from '../services/proposals/plan-snapshot';
 import { formatDate } from '../../shared/domain/clock';
 import { addDays } from '../../shared/domain/planting-windows';
 
@@ -199,7 +200,8 @@ export async function sendProposal(actor: SessionUser, id: number, ip: string | 
     if (proposal.expiresOn && proposal.expiresOn < (await firmToday(actor.firmId, transaction))) throw unprocessable(`expiresOn: the valid-until date (${formatDate(proposal.expiresOn)}) has passed. Set a later date, then send.`);
     const recipients = await clientRecipients(proposal.clientId, transaction);
     if (recipients.length === 0) throw unprocessable('The client has no e-mail address or portal contact. Add one on the client’s page, then send.');
-    await proposal.update({ status: 'sent', sentAt: new Date() }, { transaction });
+    // The plan is frozen with the version: its PDF and its approval cover this geometry, whatever is drawn later.
+    await proposal.update({ status: 'sent', sentAt: new Date(), planSnapshot: await takePlanSnapshot(proposal, transaction) }, { transaction });
     const pdf = await renderProposalPdfFor(proposal, transaction);
     const firm = await Firm.findByPk(actor.firmId, { transaction });
     const property = await Property.findByPk(proposal.propertyId, { attributes: ['name'], transaction });

@@ -6,7 +6,7 @@ import { Client, Firm, Property, SeasonReport, SharedFile, type TaskPhoto } from
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
-import { unprocessable } from '../errors';
+import { conflict, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { firmToday } from '../services/clock';
 import { enqueueEmail } from '../services/mail/outbox';
@@ -142,6 +142,7 @@ export async function sendSeasonReport(actor: SessionUser, id: number, ip: strin
 export async function deleteSeasonReport(actor: SessionUser, id: number, ip: string | null): Promise<void> {
   const storageKey = await sequelize.transaction(async (transaction) => {
     const report = await findInFirm(SeasonReport, id, actor.firmId, 'That season report', { transaction, lock: true });
+    if (report.sentAt) throw conflict('This season report was sent to the landowner, so it stays as sent. Make a new report for changes.');
     const file = await SharedFile.findByPk(report.sharedFileId, { transaction });
     await report.destroy({ transaction });
     await file?.destroy({ transaction });

@@ -45,3 +45,4 @@ export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';
 export type { OutboxAttachment } from './outbox-message';
+export type { InvoiceDocumentSnapshot } from './invoice';

@@ -1,6 +1,12 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import type { InvoiceKind, InvoiceLineSource, InvoiceStatus } from '../../shared/domain/invoicing';
+import type { InvoiceDocumentInput } from '../../templates/documents/invoice';
+
+/** The issued part of an invoice's PDF, kept when it is sent; status and payments stay live. */
+export type InvoiceDocumentSnapshot = Pick<InvoiceDocumentInput, 'firm' | 'client' | 'property' | 'invoice' | 'lines'> & {
+  totals: Pick<InvoiceDocumentInput['totals'], 'subtotalCents' | 'taxCents' | 'totalCents'>;
+};
 
 /** A bill to a client: deposit, progress or final, from an approved proposal, plus manual lines. */
 export class Invoice extends Model<InferAttributes<Invoice>, InferCreationAttributes<Invoice>> {
@@ -31,6 +37,8 @@ export class Invoice extends Model<InferAttributes<Invoice>, InferCreationAttrib
   declare voidReason: CreationOptional<string | null>;
   declare lastReminderOn: CreationOptional<string | null>;
   declare reminderCount: CreationOptional<number>;
+  /** What the PDF showed when the invoice was issued (payments are added live); null while a draft. */
+  declare documentSnapshot: CreationOptional<InvoiceDocumentSnapshot | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -71,6 +79,7 @@ Invoice.init(
     voidReason: DataTypes.TEXT,
     lastReminderOn: DataTypes.DATEONLY,
     reminderCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    documentSnapshot: DataTypes.JSONB,
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import type { OrderDiscount } from '../../shared/domain/proposal-totals';
+import type { OrderDiscount, PlanSnapshot } from '../../shared/domain/proposal-totals';
 
 export type ProposalStatus = 'draft' | 'sent' | 'approved' | 'declined' | 'withdrawn';
 
@@ -42,6 +42,8 @@ export class Proposal extends Model<InferAttributes<Proposal>, InferCreationAttr
   declare decidedAt: CreationOptional<Date | null>;
   declare declineReason: CreationOptional<string | null>;
   declare withdrawnAt: CreationOptional<Date | null>;
+  /** The plan (boundary and units) as sent; null while a draft. */
+  declare planSnapshot: CreationOptional<PlanSnapshot | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -75,6 +77,7 @@ Proposal.init(
     decidedAt: DataTypes.DATE,
     declineReason: DataTypes.TEXT,
     withdrawnAt: DataTypes.DATE,
+    planSnapshot: DataTypes.JSONB,
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

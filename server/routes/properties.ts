@@ -22,6 +22,7 @@ import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
 import { Firm, Proposal } from '../models';
 import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
+import { todayInZone } from '../services/clock';
 
 const r = defineRoutes('/properties');
 
@@ -156,7 +157,7 @@ r.get('/:id/plan.pdf', STAFF, validate({ params: IdParamsSchema }), async (req, 
       boundary: stripCrs(property.boundary),
       locality: [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || undefined,
     },
-    preparedOn: new Date().toISOString().slice(0, 10),
+    preparedOn: todayInZone(actor(req).firmTimezone),
     units: units.map((u) => presentUnit(u)).map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
   } as Parameters<typeof renderPlanSummaryPdf>[0]);
   res.setHeader('Content-Type', 'application/pdf');

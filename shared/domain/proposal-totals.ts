@@ -242,16 +242,34 @@ export function invoiceTotals<L extends InvoiceLineInput>(
   };
 }
 
+/** A GeoJSON geometry as the plan stores it (any type; coordinates in degrees, WGS84). */
+export interface PlanGeometry {
+  type: string;
+  coordinates?: unknown;
+  geometries?: PlanGeometry[];
+}
+
+/**
+ * The plan a proposal was sent with: the property's boundary and every unit, frozen with the
+ * version so its document reads the same forever (units drawn later are not part of it).
+ */
+export interface PlanSnapshot {
+  property: { name: string; acres: number | null; boundary: PlanGeometry | null; locality?: string | null };
+  units: { id: number; name: string; kind: string; geometry: PlanGeometry; acres: number | null; lengthFt: number | null }[];
+}
+
 /** The proposal fields the approval record covers. */
 export interface ProposalContentInput extends ProposalPricingInput {
   /** The terms and conditions the client approves, as shown. */
   terms: string;
   /** ISO 4217 code; "USD" when omitted. */
   currency?: string;
+  /** The plan's geometry as sent; when given, the content (format version 2) covers it too. */
+  plan?: PlanSnapshot | null;
 }
 
-/** Version of the canonical content format; bump it when the format changes. */
-export const CANONICAL_PROPOSAL_CONTENT_VERSION = 1;
+/** Version of the canonical content format; bump it when the format changes. Version 1 is the same content without the plan. */
+export const CANONICAL_PROPOSAL_CONTENT_VERSION = 2;
 
 type CanonicalValue = string | number | boolean | null | CanonicalValue[] | { [key: string]: CanonicalValue };
 
@@ -270,9 +288,37 @@ function canonicalText(text: string): string {
   return text.replace(/\r\n?/g, '\n').normalize('NFC');
 }
 
+/** Coordinates as fixed seven-decimal strings (about 1 cm; canonical JSON holds no fractions). */
+function canonicalCoordinates(value: unknown, field: string): CanonicalValue {
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new DomainValidationError(field, 'A plan coordinate is not a finite number.');
+    const fixed = value.toFixed(7);
+    return fixed === '-0.0000000' ? '0.0000000' : fixed;
+  }
+  if (Array.isArray(value)) return value.map((v) => canonicalCoordinates(v, field));
+  throw new DomainValidationError(field, 'A plan geometry has coordinates that are not numbers.');
+}
+
+function canonicalGeometry(geometry: PlanGeometry | null, field: string): CanonicalValue {
+  if (geometry === null) return null;
+  if (geometry.type === 'GeometryCollection') return { type: geometry.type, geometries: (geometry.geometries ?? []).map((g) => canonicalGeometry(g, field)) };
+  return { type: geometry.type, coordinates: canonicalCoordinates(geometry.coordinates, field) };
+}
+
+/** The canonical form of a plan snapshot: boundary and every unit (by id) with name, kind and shape. */
+export function canonicalPlan(plan: PlanSnapshot): CanonicalValue {
+  return {
+    boundary: canonicalGeometry(plan.property.boundary, 'plan.property.boundary'),
+    units: [...plan.units]
+      .sort((a, b) => a.id - b.id)
+      .map((u) => ({ id: u.id, name: canonicalText(u.name), kind: u.kind, geometry: canonicalGeometry(u.geometry, `plan.units.${u.id}.geometry`) })),
+  };
+}
+
 /**
  * The canonical JSON of everything a client approves: every priced field of every line, the
- * discount, tax rate, deposit, currency, terms and the computed totals. Keys are sorted; integers
+ * discount, tax rate, deposit, currency, terms, the computed totals and — from version 2 — the
+ * plan's geometry as sent (boundary and units, coordinates to seven decimals). Keys are sorted; integers
  * are plain JSON integers; quantities and percentages are fixed four-decimal strings ("2.3700");
  * text is NFC with LF line ends. Line order is NOT part of the content (lines are sorted by id):
  * reordering lines changes no amount. Hash it with SHA-256 (node:crypto on the server,
@@ -310,7 +356,8 @@ export function canonicalProposalContent(proposal: ProposalContentInput): string
       }),
     );
   return canonicalJson({
-    version: CANONICAL_PROPOSAL_CONTENT_VERSION,
+    version: proposal.plan ? CANONICAL_PROPOSAL_CONTENT_VERSION : 1,
+    ...(proposal.plan ? { plan: canonicalPlan(proposal.plan) } : {}),
     currency,
     lines,
     discount: discountContent,

@@ -56,4 +56,6 @@ export interface ProposalDocumentInput {
   /** Caution texts that apply to the work (titles then text). */
   cautions: { title: string; text: string }[];
   approval?: { signedName: string; signedAt: string; contentHash: string } | null;
+  /** The firm's IANA time zone: times (the approval) are written in it, with its abbreviation. Default UTC. */
+  timeZone?: string;
 }

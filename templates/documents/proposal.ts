@@ -17,6 +17,7 @@ import { z } from 'zod';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatLatLon } from '../../shared/domain/geometry';
 import { formatCents } from '../../shared/domain/money';
+import { formatDate, formatMoment, isTimeZone } from '../../shared/domain/clock';
 import { formatAcres } from '../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
 import { kindSwatchSvg, renderPlanMap } from '../../server/services/documents/map-svg';
@@ -149,6 +150,7 @@ const ProposalDocumentInputSchema = z.object({
       contentHash: z.string().regex(/^[0-9a-f]{64}$/i, { message: 'must be a SHA-256 hash written as 64 hexadecimal digits' }),
     })
     .nullish(),
+  timeZone: z.string().refine(isTimeZone, { message: 'must be an IANA time zone such as America/Chicago' }).default('UTC'),
 });
 
 type DocData = z.output<typeof ProposalDocumentInputSchema>;
@@ -198,17 +200,15 @@ function formatCalendarDate(isoDate: string, field: string): string {
   const [y, m, d] = isoDate.split('-').map(Number);
   const date = new Date(Date.UTC(y, m - 1, d));
   if (date.getUTCMonth() !== m - 1 || date.getUTCDate() !== d) fail(field, `${isoDate} is not a calendar date`);
-  return date.toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+  return formatDate(isoDate, { long: true });
 }
 
-/** "March 14, 2027 at 3:42 PM UTC" from an ISO date-time; the date alone from a date. */
-function formatSignedAt(value: string): string {
+/** "March 14, 2027, 10:42 AM CDT" from an ISO date-time, in the firm's zone; the date alone from a date. */
+function formatSignedAt(value: string, timeZone: string): string {
   if (/^\d{4}-\d{2}-\d{2}$/.test(value)) return formatCalendarDate(value, 'approval.signedAt');
   const instant = new Date(/(Z|[+-]\d{2}:?\d{2})$/.test(value) ? value : `${value}Z`);
   if (Number.isNaN(instant.getTime())) fail('approval.signedAt', `${value} is not a date-time`);
-  const date = instant.toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
-  const time = instant.toLocaleTimeString('en-US', { hour: 'numeric', minute: '2-digit', timeZone: 'UTC' });
-  return `${date} at ${time} UTC`;
+  return formatMoment(instant, timeZone, { long: true });
 }
 
 /** "1,200" from "1200.0000", "2.37" from "2.3700": the decimal string as written, grouped, zeros trimmed. */
@@ -736,7 +736,7 @@ function approvalSection(data: DocData, money: (c: number) => string): Content {
   if (approval) {
     body = [
       { text: 'Approved', font: FONT_HEADING, bold: true, fontSize: 11, color: DOC_COLORS.mossDeep, margin: [0, 0, 0, 4] },
-      { text: [{ text: 'Approved by ' }, { text: approval.signedName, bold: true }, { text: ` on ${formatSignedAt(approval.signedAt)}.` }] },
+      { text: [{ text: 'Approved by ' }, { text: approval.signedName, bold: true }, { text: ` on ${formatSignedAt(approval.signedAt, data.timeZone)}.` }] },
       {
         text: `The approval covers version ${proposal.version} exactly as printed: its lines, prices, options, discount, sales tax, deposit and terms. The SHA-256 hash of that content:`,
         style: 'small',
@@ -811,7 +811,7 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
   const approvedLook =
     proposal.status === 'approved' && data.approval
       ? {
-          headline: `APPROVED — by ${data.approval.signedName} on ${formatSignedAt(data.approval.signedAt)}`,
+          headline: `APPROVED — by ${data.approval.signedName} on ${formatSignedAt(data.approval.signedAt, data.timeZone)}`,
           detail: 'The approval record is at the end of this proposal.',
           color: DOC_COLORS.moss,
           tint: MOSS_TINT,

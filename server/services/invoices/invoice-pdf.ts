@@ -1,20 +1,21 @@
 /** Assembles an invoice's document input and renders its PDF. */
 import type { Transaction } from 'sequelize';
-import { Client, Firm, Invoice, InvoiceLine, InvoicePayment, Property, Proposal } from '../../models';
+import { Client, Firm, Invoice, InvoiceLine, InvoicePayment, Property, Proposal, type InvoiceDocumentSnapshot } from '../../models';
 import { renderInvoicePdf } from '../../../templates/documents/invoice';
 import { config } from '../../config';
+import { usableZone } from '../clock';
+import { todayIn } from '../../../shared/domain/clock';
 
-/** The PDF of an invoice as it stands. */
-export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transaction): Promise<Buffer> {
-  const [firm, client, property, proposal, lines, payments] = await Promise.all([
+/** The issued part of the invoice's document as it stands now (firm, client, property, dates, lines, totals). */
+export async function invoiceDocumentSnapshot(invoice: Invoice, transaction?: Transaction): Promise<InvoiceDocumentSnapshot> {
+  const [firm, client, property, proposal, lines] = await Promise.all([
     Firm.findByPk(invoice.firmId, { transaction }),
     Client.findByPk(invoice.clientId, { attributes: ['name'], transaction }),
     invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null,
     invoice.proposalId ? Proposal.findByPk(invoice.proposalId, { attributes: ['number'], transaction }) : null,
     InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
-    InvoicePayment.findAll({ where: { invoiceId: invoice.id }, order: [['receivedAt', 'ASC']], transaction }),
   ]);
-  return renderInvoicePdf({
+  return {
     firm: { name: firm!.name, phone: firm!.phone, email: firm!.email, address: firm!.address },
     client: { name: client?.name ?? '' },
     property: property ? { name: property.name } : null,
@@ -32,7 +33,25 @@ export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transa
       portalUrl: `${config.publicUrl}/portal/invoices/${invoice.id}`,
     },
     lines: lines.map((l) => ({ description: l.description, quantity: String(l.quantity), unit: l.unit, unitPriceCents: l.unitPriceCents, amountCents: l.amountCents, taxable: l.taxable })),
-    totals: { subtotalCents: invoice.subtotalCents, taxCents: invoice.taxCents, totalCents: invoice.totalCents, amountPaidCents: invoice.amountPaidCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents) },
-    payments: payments.map((p) => ({ receivedOn: p.receivedAt.toISOString().slice(0, 10), amountCents: p.amountCents, refundedCents: p.refundedCents })),
+    totals: { subtotalCents: invoice.subtotalCents, taxCents: invoice.taxCents, totalCents: invoice.totalCents },
+  };
+}
+
+/**
+ * The PDF of an invoice. Once sent, the issued part comes from the snapshot kept at sending, so later
+ * changes to the firm, client or property never alter it; status, payments and balance are live.
+ */
+export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transaction): Promise<Buffer> {
+  const [issued, payments, firm] = await Promise.all([
+    invoice.documentSnapshot ? Promise.resolve(invoice.documentSnapshot) : invoiceDocumentSnapshot(invoice, transaction),
+    InvoicePayment.findAll({ where: { invoiceId: invoice.id }, order: [['receivedAt', 'ASC']], transaction }),
+    Firm.findByPk(invoice.firmId, { attributes: ['id', 'timezone'], transaction }),
+  ]);
+  const zone = usableZone(firm?.timezone);
+  return renderInvoicePdf({
+    ...issued,
+    invoice: { ...issued.invoice, status: invoice.status },
+    totals: { ...issued.totals, amountPaidCents: invoice.amountPaidCents, balanceCents: Math.max(0, issued.totals.totalCents - invoice.amountPaidCents) },
+    payments: payments.map((p) => ({ receivedOn: todayIn(zone, p.receivedAt), amountCents: p.amountCents, refundedCents: p.refundedCents })),
   });
 }

@@ -46,6 +46,7 @@ export function proposalContentHash(proposal: Proposal, lines: readonly Proposal
     depositPct: proposal.depositPct.toFixed(4),
     terms: proposal.terms,
     currency: proposal.currency,
+    plan: proposal.planSnapshot ?? null,
   });
   return { content, hash: crypto.createHash('sha256').update(content, 'utf8').digest('hex') };
 }

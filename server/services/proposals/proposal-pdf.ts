@@ -8,30 +8,52 @@ import { stripCrs } from '../../presenters/geojson';
 import { loadPlan } from '../plan/plan-reader';
 import { presentUnit } from '../../presenters/unit';
 import { unprocessable } from '../../errors';
+import { usableZone } from '../clock';
+import { todayIn } from '../../../shared/domain/clock';
+import type { PlanSnapshot } from '../../../shared/domain/proposal-totals';
 
-/** The PDF of a proposal as it stands (totals from the shared rule, the plan map from the units). */
+/** The plan a draft shows: the property's boundary and units as they stand now. */
+async function livePlan(proposal: Proposal, transaction?: Transaction): Promise<PlanSnapshot> {
+  const property = await Property.findByPk(proposal.propertyId, { transaction });
+  const plan = await loadPlan(proposal.propertyId, proposal.firmId);
+  const units = (await plan.units()).map(presentUnit);
+  return {
+    property: {
+      name: property?.name ?? '',
+      acres: property?.acres ?? null,
+      boundary: property?.boundary ? stripCrs(property.boundary) : null,
+      locality: property ? [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || null : null,
+    },
+    units: units.map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
+  };
+}
+
+/**
+ * The PDF of a proposal: totals from the shared rule; the plan map from the plan frozen when the
+ * version was sent (a draft shows the live plan), so a sent or approved proposal reads the same forever.
+ */
 export async function renderProposalPdfFor(proposal: Proposal, transaction?: Transaction): Promise<Buffer> {
   const dto = await readProposal(proposal, transaction);
-  const [firm, property] = await Promise.all([Firm.findByPk(proposal.firmId, { transaction }), Property.findByPk(proposal.propertyId, { transaction })]);
-  if (!property?.boundary || !property.acres) throw unprocessable('Draw the property boundary before making the proposal’s PDF.');
-  const plan = await loadPlan(property.id, proposal.firmId);
-  const units = (await plan.units()).map(presentUnit);
+  const [firm, plan] = await Promise.all([Firm.findByPk(proposal.firmId, { transaction }), proposal.planSnapshot ? Promise.resolve(proposal.planSnapshot) : livePlan(proposal, transaction)]);
+  const { property } = plan;
+  if (!property.boundary || !property.acres) throw unprocessable('Draw the property boundary before making the proposal’s PDF.');
+  const zone = usableZone(firm?.timezone);
   const input: ProposalDocumentInput = {
     firm: { name: firm!.name, phone: firm!.phone, email: firm!.email, address: firm!.address },
     client: { name: dto.clientName },
-    property: { name: property.name, acres: property.acres, boundary: stripCrs(property.boundary), locality: [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || undefined },
+    property: { name: property.name, acres: property.acres, boundary: property.boundary as ProposalDocumentInput['property']['boundary'], locality: property.locality ?? undefined },
     proposal: {
       number: dto.number,
       version: dto.version,
       title: dto.title,
       introduction: dto.introduction,
-      preparedOn: (proposal.sentAt ?? proposal.updatedAt).toISOString().slice(0, 10),
+      preparedOn: todayIn(zone, proposal.sentAt ?? proposal.updatedAt),
       expiresOn: dto.expiresOn,
       status: dto.status,
       terms: dto.terms,
       currency: dto.currency,
     },
-    units: units.map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
+    units: plan.units.map((u) => ({ name: u.name, kind: u.kind as ProposalDocumentInput['units'][number]['kind'], geometry: u.geometry as ProposalDocumentInput['units'][number]['geometry'], acres: u.acres, lengthFt: u.lengthFt })),
     groups: dto.groups.map((g) => ({ label: g.label, kind: g.kind as ProposalDocumentInput['groups'][number]['kind'], acres: g.acres, lengthFt: g.lengthFt, summaries: g.summaries })),
     lines: dto.lines.map((l) => ({ id: l.id, groupLabel: l.groupLabel, category: l.category, description: l.description, quantity: String(l.quantity), unit: l.unit, unitPriceCents: l.unitPriceCents, amountCents: l.amountCents, taxable: l.taxable, optional: l.optional, included: l.included })),
     totals: {
@@ -48,6 +70,7 @@ export async function renderProposalPdfFor(proposal: Proposal, transaction?: Tra
     },
     cautions: dto.cautions.map((c) => ({ title: c.title, text: c.text })),
     approval: dto.approval ? { signedName: dto.approval.signedName, signedAt: dto.approval.signedAt, contentHash: dto.approval.contentHash } : null,
+    timeZone: zone,
   };
   return renderProposalPdf(input);
 }
