@@ -18,6 +18,7 @@ import { unitDoneEmail } from '../../templates/email/unit-done';
 import { clientRecipients } from '../services/mail/client-recipients';
 import { config } from '../config';
 import { firmToday } from '../services/clock';
+import { formatDate } from '../../shared/domain/clock';
 
 const STAFF_ROLES = new Set(['owner', 'consultant']);
 const isStaff = (actor: SessionUser) => STAFF_ROLES.has(actor.role);
@@ -110,7 +111,7 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
     return { task: replay, replayed: true };
   }
   const probe = await taskForActor(actor, id);
-  if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn}` : 'skipped'} already; nothing was changed.`);
+  if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn ? formatDate(probe.doneOn) : 'an earlier day'}` : 'skipped'} already; nothing was changed.`);
   // The firm's today, with a day of slack for a crew phone set to a zone east of the firm's.
   if (input.doneOn > addDays(await firmToday(actor.firmId), 1)) throw unprocessable('doneOn: the day the work was done cannot be after today. Pick today or an earlier day.');
   const saved: string[] = [];
@@ -120,7 +121,7 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
       const task = await taskForActor(actor, id, transaction);
       if (task.status === 'done' || task.status === 'skipped') {
         if (task.completionKey === key) return { task, replayed: true };
-        throw conflict(`This task was ${task.status === 'done' ? `marked done on ${task.doneOn}` : 'skipped'} already; nothing was changed.`);
+        throw conflict(`This task was ${task.status === 'done' ? `marked done on ${task.doneOn ? formatDate(task.doneOn) : 'an earlier day'}` : 'skipped'} already; nothing was changed.`);
       }
       await task.update(
         { status: 'done', doneOn: input.doneOn, completedAt: new Date(), completedById: actor.id, notes: input.notes, hours: input.hours, quantitiesUsed: input.quantitiesUsed ?? [], completionKey: key, skipReason: null },

@@ -9,6 +9,7 @@
 import { DomainValidationError } from './errors';
 import type { PracticeDefinition, PracticeStep } from './practice';
 import { requireNumber } from './validation';
+import { formatDate, formatDateSpan } from './clock';
 
 export const REGIONS = ['south', 'midsouth', 'midwest', 'north'] as const;
 export type Region = (typeof REGIONS)[number];
@@ -230,7 +231,7 @@ export function parseIsoDate(value: IsoDate, field = 'date'): number {
       return Math.round(ms / DAY_MS);
     }
   }
-  throw new DomainValidationError(field, `Dates must be real calendar dates written YYYY-MM-DD (got ${JSON.stringify(value)}).`);
+  throw new DomainValidationError(field, 'Enter a whole, real date: month, day and year.');
 }
 
 /** Format a day number as "YYYY-MM-DD". */
@@ -338,7 +339,7 @@ export interface ScheduleInput {
   region: Region;
   /** Season year: the anchor window starts in this year. */
   year: number;
-  /** Target date of the anchor step (seeding); default the window's first day. */
+  /** Target date of the anchor step (seeding); default `defaultTargetDate` (today when the window is open). */
   targetDate?: IsoDate;
   today: IsoDate;
   /** Dates the consultant has put steps on, by step key. */
@@ -376,6 +377,14 @@ function stepTiming(step: PracticeStep, practice: PracticeDefinition): { earlies
   return { earliest: offsetEarliestDays, latest: offsetLatestDays };
 }
 
+/**
+ * The target date a new prescription gets when none is chosen: today when today falls inside the
+ * window (its first day may have passed), otherwise the window's first day.
+ */
+export function defaultTargetDate(window: DateWindow, today: IsoDate): IsoDate {
+  return today >= window.earliest && today <= window.latest ? today : window.earliest;
+}
+
 /** Each step's window (earliest, latest ISO dates) from a target anchor date, with warnings for passed windows, out-of-order steps and late brassicas. */
 export function schedulePrescription(input: ScheduleInput): ScheduleResult {
   const { practice } = input;
@@ -387,7 +396,7 @@ export function schedulePrescription(input: ScheduleInput): ScheduleResult {
   if (!anchorStep) {
     throw new DomainValidationError('practice.anchorStepKey', `Practice "${practice.name}" has no step "${practice.anchorStepKey}" to time the others from.`);
   }
-  const targetDate = input.targetDate ?? anchorWindow.earliest;
+  const targetDate = input.targetDate ?? defaultTargetDate(anchorWindow, input.today);
   const target = parseIsoDate(targetDate, 'targetDate');
   const scheduledDates = input.scheduledDates ?? {};
   const stepKeys = new Set(practice.steps.map((s) => s.key));
@@ -422,7 +431,7 @@ export function schedulePrescription(input: ScheduleInput): ScheduleResult {
         code: 'window-passed',
         severity: 'warning',
         stepKey: step.stepKey,
-        message: `The window for "${step.name}" closed on ${step.latest} and the step is not done; move the target date or plan it for next season.`,
+        message: `The window for "${step.name}" closed on ${formatDate(step.latest)} and the step is not done; move the target date or plan it for next season.`,
       });
     }
     if (step.scheduled && (step.scheduled < step.earliest || step.scheduled > step.latest)) {
@@ -430,7 +439,7 @@ export function schedulePrescription(input: ScheduleInput): ScheduleResult {
         code: 'scheduled-outside-window',
         severity: 'info',
         stepKey: step.stepKey,
-        message: `"${step.name}" is scheduled for ${step.scheduled}, outside its window ${step.earliest} to ${step.latest}.`,
+        message: `"${step.name}" is scheduled for ${formatDate(step.scheduled)}, outside its window ${formatDateSpan(step.earliest, step.latest)}.`,
       });
     }
   }

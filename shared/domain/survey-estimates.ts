@@ -15,6 +15,7 @@
  */
 import { ACRES_PER_SQ_MI } from '../units';
 import { DomainValidationError } from './errors';
+import { formatDate } from './clock';
 
 /** Acres one camera should cover at most: about one camera per 100 acres (Jacobson et al. 1997, from memory). */
 export const MAX_ACRES_PER_CAMERA = 100;
@@ -73,7 +74,7 @@ const MS_PER_DAY = 86_400_000;
 /** Days since 1970-01-01 of a "YYYY-MM-DD" calendar date, or a validation error naming the field. */
 export function parseCalendarDate(value: unknown, field: string): number {
   const match = typeof value === 'string' ? /^(\d{4})-(\d{2})-(\d{2})$/.exec(value) : null;
-  if (!match) throw new DomainValidationError(field, `${field} must be a date written YYYY-MM-DD (got ${JSON.stringify(value)}).`);
+  if (!match) throw new DomainValidationError(field, 'Enter the whole date: month, day and year.');
   const [year, month, day] = [Number(match[1]), Number(match[2]), Number(match[3])];
   const ms = Date.UTC(year, month - 1, day);
   const check = new Date(ms);
@@ -125,7 +126,7 @@ export function cameraSurveyEstimates(input: CameraSurveyInput): CameraSurveyRes
   const startDay = parseCalendarDate(input.startDate, 'startDate');
   const endDay = parseCalendarDate(input.endDate, 'endDate');
   if (endDay < startDay) {
-    throw new DomainValidationError('endDate', `The survey ends (${input.endDate}) before it starts (${input.startDate}).`);
+    throw new DomainValidationError('endDate', `The survey ends (${formatDate(input.endDate)}) before it starts (${formatDate(input.startDate)}).`);
   }
 
   const propertyAcres = input.propertyAcres;

@@ -9,6 +9,7 @@ import type { PracticeDefinition } from './practice';
 import type { PrescriptionResult } from './prescription-quantities';
 import type { StepWindow } from './planting-windows';
 import { addDays, parseIsoDate, type IsoDate } from './planting-windows';
+import { formatDate, formatDateSpan } from './clock';
 
 export const TASK_STATUSES = ['planned', 'scheduled', 'done', 'skipped'] as const;
 export type TaskStatus = (typeof TASK_STATUSES)[number];
@@ -182,13 +183,13 @@ export function taskWarnings(tasks: readonly ScheduledTask[], today: IsoDate, cl
     const label = `"${t.name}" on ${t.unitName}`;
     if (open(t)) {
       if (t.latest < today) {
-        out.push({ taskId: t.id, code: 'window-missed', message: `${label}: its window closed on ${t.latest} and it is not done. Move it to next season or skip it with a reason.` });
+        out.push({ taskId: t.id, code: 'window-missed', message: `${label}: its window closed on ${formatDate(t.latest)} and it is not done. Move it to next season or skip it with a reason.` });
       } else if (t.latest <= addDays(today, closingDays) && (!t.startDate || t.startDate > t.latest)) {
-        out.push({ taskId: t.id, code: 'window-closing', message: `${label}: its window closes on ${t.latest}; schedule it before then.` });
+        out.push({ taskId: t.id, code: 'window-closing', message: `${label}: its window closes on ${formatDate(t.latest)}; schedule it before then.` });
       }
       const end = t.endDate ?? t.startDate;
       if (t.startDate && (t.startDate < t.earliest || (end && end > t.latest))) {
-        out.push({ taskId: t.id, code: 'outside-window', message: `${label} is set for ${t.startDate}${end && end !== t.startDate ? ` to ${end}` : ''}, outside its window ${t.earliest} to ${t.latest}.` });
+        out.push({ taskId: t.id, code: 'outside-window', message: `${label} is set for ${end && end !== t.startDate ? formatDateSpan(t.startDate, end) : formatDate(t.startDate)}, outside its window ${formatDateSpan(t.earliest, t.latest)}.` });
       }
     }
     if (!open(t) || !t.startDate) continue;
@@ -199,7 +200,7 @@ export function taskWarnings(tasks: readonly ScheduledTask[], today: IsoDate, cl
       if (dep.status !== 'done' && !depFinish) {
         out.push({ taskId: t.id, code: 'before-dependency', message: `${label} is scheduled but "${dep.name}", which must come first, has no date yet.` });
       } else if (depFinish && t.startDate < depFinish) {
-        out.push({ taskId: t.id, code: 'before-dependency', message: `${label} starts ${t.startDate}, before "${dep.name}" (${depFinish}), which must come first.` });
+        out.push({ taskId: t.id, code: 'before-dependency', message: `${label} starts ${formatDate(t.startDate)}, before "${dep.name}" (${formatDate(depFinish)}), which must come first.` });
       }
     }
   }

@@ -4,10 +4,13 @@ import { z } from 'zod';
 export const IdSchema = z.coerce.number().int().positive({ message: 'must be a positive whole number' });
 export const IdParamsSchema = z.object({ id: IdSchema });
 
-/** A calendar date written YYYY-MM-DD that exists (no 2026-02-30). */
+/** What a date control says when its date is missing or partial (it shows month/day/year, never YYYY-MM-DD). */
+export const DATE_FIELD_MESSAGE = 'enter the whole date: month, day and year';
+
+/** A calendar date sent as YYYY-MM-DD that exists (no 2026-02-30). */
 export const IsoDateSchema = z
   .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'write dates as YYYY-MM-DD' })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, { message: DATE_FIELD_MESSAGE })
   .refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v), { message: 'is not a real calendar date' });
 
 /** The error answer of every API route. */

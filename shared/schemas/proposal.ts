@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
+import { DATE_FIELD_MESSAGE } from './common';
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'write dates as YYYY-MM-DD' });
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: DATE_FIELD_MESSAGE });
 const pct = (label: string, max: number) =>
   z.number({ message: `${label} must be a number` }).min(0, { message: `${label} cannot be negative` }).max(max, { message: `${label} cannot be more than ${max} %` });
 const decimalQuantity = z

@@ -8,6 +8,7 @@ import { LIMITS } from '../limits';
 import { AGE_CLASSES, type HarvestSummary, type SeasonSummary, type SurveyEstimates, type SurveyEstimatesDisplay, type SurveyWarning } from '../domain/survey-estimates';
 import type { Caution } from '../domain/cautions';
 import type { SurveyTrendRow } from '../domain/season-results';
+import { formatDate } from '../domain/clock';
 
 export { AGE_CLASSES };
 
@@ -84,7 +85,7 @@ function checkSurvey(v: Partial<SurveyFields>, ctx: z.RefinementCtx, whole: bool
     ctx.addIssue({ code: 'custom', path: ['bucks'], message: `list one entry per unique buck: ${v.bucks.length} listed, ${v.uniqueBucks} unique bucks entered` });
   }
   if (v.startDate && v.endDate && v.endDate < v.startDate) {
-    ctx.addIssue({ code: 'custom', path: ['endDate'], message: `the survey ends (${v.endDate}) before it starts (${v.startDate})` });
+    ctx.addIssue({ code: 'custom', path: ['endDate'], message: `the survey ends (${formatDate(v.endDate)}) before it starts (${formatDate(v.startDate)})` });
   }
   const picked = v.cameraUnitIds?.length ?? 0;
   if (whole && picked === 0 && (v.cameraCount === null || v.cameraCount === undefined)) {

@@ -1,25 +1,46 @@
-/** The client's side of the firm's clock (shared/domain/clock.ts): the zone comes with the signed-in user. */
+/**
+ * The client's side of the firm's clock (shared/domain/clock.ts). The firm's zone comes with the
+ * signed-in user (`/api/auth/me`, `firmTimezone`); "today" and every time on screen are read in it,
+ * whatever zone the browser is in.
+ */
 import { useMe } from '../features/auth/api/get-me';
-import { DEFAULT_TIME_ZONE, formatDayOf, formatMoment, todayIn, type IsoDate } from '../../shared/domain/clock';
+import { DEFAULT_TIME_ZONE, formatDate, formatDayOf, formatMoment, isTimeZone, todayIn, type IsoDate } from '../../shared/domain/clock';
 
-/** The firm's IANA time zone (the default until the signed-in user is known). */
+let currentZone = DEFAULT_TIME_ZONE;
+
+/** Records the signed-in firm's zone (called when the signed-in user is read). */
+export function setFirmZone(zone: string | null | undefined): void {
+  currentZone = zone && isTimeZone(zone) ? zone : DEFAULT_TIME_ZONE;
+}
+
+/** The firm's zone as last read from the server. */
+export function firmZone(): string {
+  return currentZone;
+}
+
+/** Today in the firm's zone. */
+export function firmToday(now: Date = new Date()): IsoDate {
+  return todayIn(currentZone, now);
+}
+
+/** A date ("2026-12-05") or an instant (read in the firm's zone) as people write it: "Dec 5, 2026". */
+export function formatDay(value: string | Date, options: { long?: boolean } = {}): string {
+  if (typeof value === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(value)) return formatDate(value, options);
+  return formatDayOf(value, currentZone, options);
+}
+
+/** An instant in the firm's zone with its abbreviation: "Dec 5, 2026, 7:42 PM CST". */
+export function formatTime(value: string | Date): string {
+  return formatMoment(value, currentZone);
+}
+
+/** The firm's zone for a component (re-renders when the signed-in user is read again). */
 export function useFirmZone(): string {
   const me = useMe();
-  return me.data?.firmTimezone ?? DEFAULT_TIME_ZONE;
+  return me.data?.firmTimezone && isTimeZone(me.data.firmTimezone) ? me.data.firmTimezone : DEFAULT_TIME_ZONE;
 }
 
-/** Today's date in the firm's time zone, whatever zone the browser is in. */
+/** Today's date in the firm's time zone, for a component. */
 export function useFirmToday(): IsoDate {
   return todayIn(useFirmZone(), new Date());
-}
-
-/** Formatters bound to the firm's zone: the day of an instant and the instant with its zone. */
-export function useFirmTime() {
-  const zone = useFirmZone();
-  return {
-    zone,
-    today: todayIn(zone, new Date()),
-    day: (instant: string | Date) => formatDayOf(instant, zone),
-    moment: (instant: string | Date) => formatMoment(instant, zone),
-  };
 }

@@ -1,10 +1,12 @@
 /** Display helpers for the client. */
 import { feetToMiles } from '../../shared/units';
+import { formatDay } from './firm-clock';
 
 export const formatAcres = (acres: number | null | undefined, digits = 1): string =>
   acres === null || acres === undefined ? '—' : `${acres.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })} ac`;
 
-export const formatDate = (iso: string): string => new Date(iso).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric' });
+/** A date or an instant (read in the firm's time zone) as people write it: "Dec 5, 2026". */
+export const formatDate = (iso: string): string => formatDay(iso);
 
 export const formatRelative = (iso: string): string => {
   const minutes = Math.round((Date.now() - new Date(iso).getTime()) / 60000);

@@ -5,6 +5,7 @@ import { Op } from 'sequelize';
 import { CalendarFeed, Firm, Task, User } from '../../models';
 import { addDays } from '../../../shared/domain/planting-windows';
 import { config } from '../../config';
+import { formatDateSpan } from '../../../shared/domain/clock';
 
 /** SHA-256 of a feed token: the database never holds the token itself. */
 export const hashFeedToken = (token: string): string => crypto.createHash('sha256').update(token).digest('hex');
@@ -36,7 +37,7 @@ export async function calendarForToken(token: string): Promise<string | null> {
       end: new Date(`${end}T00:00:00Z`),
       allDay: true,
       summary: `${t.status === 'done' ? '✓ ' : ''}${t.name} — ${t.unitName}`,
-      description: [`${t.practiceName}. Window ${t.earliest} to ${t.latest}.`, ...quantities, ...t.cautions.map((c) => `Caution — ${c.title}`), `${config.publicUrl}/field/tasks/${t.id}`].join('\n'),
+      description: [`${t.practiceName}. Window ${formatDateSpan(t.earliest, t.latest)}.`, ...quantities, ...t.cautions.map((c) => `Caution — ${c.title}`), `${config.publicUrl}/field/tasks/${t.id}`].join('\n'),
       url: `${config.publicUrl}/field/tasks/${t.id}`,
       stamp: t.updatedAt,
       lastModified: t.updatedAt,

@@ -6,6 +6,7 @@ import { describeAction, formatAcres, formatRelative } from '../../../lib/format
 import { paths } from '../../../config/paths';
 import { SeasonStrip } from '../../../features/desk/components/season-strip';
 import { formatCents } from '../../../../shared/domain/money';
+import { formatDay } from '../../../lib/firm-clock';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -49,7 +50,7 @@ export function DeskPage() {
                   </Link>
                   <span className="block text-slate">
                     {w.clientName} · <span className="figure text-ink">{formatCents(w.totalCents)}</span> · {w.firstViewedAt ? `opened ${formatRelative(w.firstViewedAt)}` : 'not opened yet'}
-                    {w.expiresOn ? ` · valid until ${w.expiresOn}` : ''}
+                    {w.expiresOn ? ` · valid until ${formatDay(w.expiresOn)}` : ''}
                   </span>
                 </li>
               ))}
@@ -65,7 +66,7 @@ export function DeskPage() {
                 <li key={`${s.prescriptionId}-${s.stepName}`} className="rounded border border-rule bg-paper/60 px-3 py-2 text-sm">
                   <span className="font-semibold text-ink">{s.stepName}</span> · {s.unitName}
                   <span className="block text-slate">
-                    {s.propertyName} · {s.practiceName} · closes <span className="text-clay">{s.latest}</span>
+                    {s.propertyName} · {s.practiceName} · closes <span className="text-clay">{formatDay(s.latest)}</span>
                   </span>
                 </li>
               ))}

@@ -7,6 +7,7 @@ import { QueueNotice } from '../../../features/field/components/queue-notice';
 import { CalendarFeedsCard } from '../../../features/field/components/calendar-feeds-card';
 import { BUCKETS } from '../../../features/field/lib/task-text';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
+import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock';
 
 /** The assigned tasks grouped Overdue, This week, Coming up. */
 function TaskBuckets({ me }: { me: { id: number; role: string } }) {
@@ -68,11 +69,14 @@ export function FieldHomePage() {
   const home = useFieldHome();
   if (home.isPending || !me.data) return <Loading />;
   if (home.isError) return <ErrorPanel error={home.error} />;
-  const today = new Date().toLocaleDateString('en-US', { weekday: 'long', month: 'long', day: 'numeric' });
+  // Today in the firm's time zone, whatever zone the phone is set to.
+  const today = formatDateWithWeekday(todayIn(me.data.firmTimezone, new Date()));
   return (
     <div className="flex flex-col gap-4">
       <div>
-        <p className="text-sm text-slate">{today}</p>
+        <p className="text-sm text-slate" data-firm-today={todayIn(me.data.firmTimezone, new Date())}>
+          {today}
+        </p>
         <h1 className="text-2xl font-bold">Field sheet</h1>
         <p className="text-slate">{me.data.name} · {home.data.firm.name}</p>
       </div>

@@ -21,6 +21,7 @@ import { ApiError } from '../../../lib/api-client';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
 import { parseDollarsToCents } from '../../../../shared/domain/money';
+import { formatDay } from '../../../lib/firm-clock';
 
 const KIND = { deposit: 'Deposit invoice', progress: 'Progress invoice', final: 'Final invoice' } as const;
 
@@ -128,7 +129,7 @@ export function InvoicePage() {
             {' '}· proposal <Link className="text-moss-deep underline" to={paths.proposal(inv.proposalId)}>{inv.proposalNumber}</Link>
           </>
         ) : null}
-        {inv.dueOn ? ` · due ${inv.dueOn}` : ''}
+        {inv.dueOn ? ` · due ${formatDay(inv.dueOn)}` : ''}
         {inv.voidReason ? ` · void: ${inv.voidReason}` : ''}
       </PageHeader>
       <Card title="Lines">

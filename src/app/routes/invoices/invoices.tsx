@@ -10,6 +10,7 @@ import { DataTable, type DataColumn } from '../../../components/ui/data-table';
 import { PageHeader } from '../../../components/ui/page-header';
 import { SelectField } from '../../../components/ui/select-field';
 import { paths } from '../../../config/paths';
+import { formatDay } from '../../../lib/firm-clock';
 
 const KIND = { deposit: 'Deposit', progress: 'Progress', final: 'Final' } as const;
 
@@ -19,7 +20,7 @@ const COLUMNS: DataColumn<InvoiceRowDto>[] = [
   { id: 'property', header: 'Property', value: (i) => i.propertyName, hideBelow: 'md' },
   { id: 'kind', header: 'Kind', value: (i) => KIND[i.kind], hideBelow: 'lg' },
   { id: 'status', header: 'Status', value: (i) => INVOICE_STATUS_LABELS[i.status], cell: (i) => <InvoiceStatusChip status={i.status} daysOverdue={i.daysOverdue} /> },
-  { id: 'due', header: 'Due', value: (i) => i.dueOn, hideBelow: 'sm', className: 'whitespace-nowrap', searchable: false },
+  { id: 'due', header: 'Due', value: (i) => i.dueOn, cell: (i) => (i.dueOn ? formatDay(i.dueOn) : '—'), hideBelow: 'sm', className: 'whitespace-nowrap', searchable: false },
   { id: 'total', header: 'Total', value: (i) => i.totalCents, cell: (i) => formatCents(i.totalCents), align: 'right', hideBelow: 'sm', className: 'whitespace-nowrap' },
   { id: 'balance', header: 'Balance', value: (i) => i.balanceCents, cell: (i) => formatCents(i.balanceCents), align: 'right', className: 'whitespace-nowrap' },
 ];

@@ -15,6 +15,7 @@ import { useToast } from '../../../components/ui/toast';
 import { ApiError } from '../../../lib/api-client';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
+import { formatDay } from '../../../lib/firm-clock';
 
 const KIND = { deposit: 'Deposit invoice', progress: 'Progress invoice', final: 'Final invoice' } as const;
 
@@ -62,8 +63,8 @@ export function PortalInvoicePage() {
       </div>
       <p className="text-slate">
         {inv.propertyName}
-        {inv.issuedOn ? ` · issued ${inv.issuedOn}` : ''}
-        {inv.dueOn && inv.status === 'open' ? ` · due ${inv.dueOn}` : ''}
+        {inv.issuedOn ? ` · issued ${formatDay(inv.issuedOn)}` : ''}
+        {inv.dueOn && inv.status === 'open' ? ` · due ${formatDay(inv.dueOn)}` : ''}
       </p>
       {returned && polling ? (
         <p role="status" className="rounded-md border border-sky bg-card p-3">Thank you. We are waiting for the payment service to confirm your payment; this page updates by itself.</p>

@@ -14,6 +14,7 @@ import { renderPlanImage, type PlanImage } from '../../../features/plan-map/lib/
 import { niceScaleBar } from '../../../features/plan-map/lib/scale-bar';
 import { groupByKind, kindsPresent, unitsToCollections } from '../../../features/plan-map/lib/unit-features';
 import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../../../features/plan-map/lib/measure-format';
+import { firmToday, formatDay } from '../../../lib/firm-clock';
 
 const IMAGE_W = 960;
 const IMAGE_H = 640;
@@ -80,7 +81,7 @@ export function PlanPrintPage() {
         </div>
         <div className="text-right">
           {p.acres ? <p className="figure text-xl font-bold">{formatAcresShort(p.acres)}</p> : null}
-          <p className="text-xs text-slate">Printed {new Date().toLocaleDateString('en-US', { month: 'long', day: 'numeric', year: 'numeric' })}</p>
+          <p className="text-xs text-slate">Printed {formatDay(firmToday(), { long: true })}</p>
         </div>
       </header>
 

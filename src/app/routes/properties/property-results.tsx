@@ -20,6 +20,7 @@ import { ApiError } from '../../../lib/api-client';
 import { formatAcres } from '../../../lib/format';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
+import { formatDay } from '../../../lib/firm-clock';
 
 /** A property's results: camera surveys with estimates and charts, harvest records, and the season report. */
 export function PropertyResultsPage() {
@@ -176,7 +177,7 @@ export function PropertyResultsPage() {
         }
         onCancel={() => setDeletingHarvest(null)}
       >
-        <p>The deer taken on {deletingHarvest?.date} leaves the charts.</p>
+        <p>The deer taken on {deletingHarvest ? formatDay(deletingHarvest.date) : ''} leaves the charts.</p>
       </ConfirmDialog>
     </div>
   );

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '../../../lib/api-client';
 import type { LoginInput, SessionUser } from '../../../../shared/schemas/auth';
+import { setFirmZone } from '../../../lib/firm-clock';
 
 interface SignInAnswer {
   user: SessionUser;
@@ -20,6 +21,7 @@ export function useLogin() {
     mutationFn: login,
     onSuccess: (user) => {
       qc.clear();
+      setFirmZone(user.firmTimezone);
       qc.setQueryData(['auth', 'me'], user);
     },
   });

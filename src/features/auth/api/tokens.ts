@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, getData, setCsrfToken } from '../../../lib/api-client';
 import type { PasswordResetRequestInput, SessionUser, TokenPasswordInput } from '../../../../shared/schemas/auth';
+import { setFirmZone } from '../../../lib/firm-clock';
 
 export interface InvitationInfo {
   name: string;
@@ -23,6 +24,7 @@ export function useAcceptInvitation() {
     },
     onSuccess: (user) => {
       qc.clear();
+      setFirmZone(user.firmTimezone);
       qc.setQueryData(['auth', 'me'], user);
     },
   });

@@ -1,4 +1,6 @@
 import type { DeskSummary } from '../../../../shared/schemas/desk';
+import { firmToday } from '../../../lib/firm-clock';
+import { formatDateSpan } from '../../../../shared/domain/clock';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
@@ -13,7 +15,7 @@ function dayOf(iso: string, year: number): number {
 /** The months of the year with each practice's window shaded, and today marked in clay. */
 export function SeasonStrip({ season }: { season: DeskSummary['season'] }) {
   const daysInYear = (Date.UTC(season.year + 1, 0, 1) - Date.UTC(season.year, 0, 1)) / 86_400_000;
-  const todayPct = (dayOf(new Date().toISOString().slice(0, 10), season.year) / daysInYear) * 100;
+  const todayPct = (dayOf(firmToday(), season.year) / daysInYear) * 100;
   const rows = [...season.windows].sort((a, b) => a.earliest.localeCompare(b.earliest));
   return (
     <figure aria-label={`Planting windows for ${season.year}`} className="overflow-x-auto">
@@ -34,7 +36,7 @@ export function SeasonStrip({ season }: { season: DeskSummary['season'] }) {
               <li key={w.practiceName} className="flex items-center border-b border-rule/40 py-0.5 text-xs">
                 <span className="w-48 shrink-0 truncate pr-2 text-ink" title={w.practiceName}>{w.practiceName}</span>
                 <span className="relative h-3 flex-1">
-                  <span className="absolute inset-y-0 rounded-sm bg-moss/40" style={{ left: `${from}%`, width: `${Math.max(0.6, to - from)}%` }} title={`${w.earliest} – ${w.latest}`} />
+                  <span className="absolute inset-y-0 rounded-sm bg-moss/40" style={{ left: `${from}%`, width: `${Math.max(0.6, to - from)}%` }} title={formatDateSpan(w.earliest, w.latest)} />
                   <span aria-hidden className="absolute inset-y-[-2px] w-px bg-clay" style={{ left: `${todayPct}%` }} />
                 </span>
               </li>

@@ -10,7 +10,7 @@ import type { FieldTask } from '../api/get-my-tasks';
 import { useCompletionQueue } from '../hooks/use-completion-queue';
 import { newCompletionKey } from '../lib/completion-queue';
 import { CompleteFormSchema, completeFormDefaults, completionFields, photoProblem, type CompleteFormInput, type CompleteFormOutput } from '../lib/complete-form';
-import { localToday } from '../lib/task-text';
+import { firmToday } from '../../../lib/firm-clock';
 
 /** Photos picked for a completion, with previews. */
 function PhotoPicker({ files, onChange, error }: { files: File[]; onChange: (files: File[]) => void; error: string | null }) {
@@ -62,7 +62,7 @@ export function CompleteForm({ task, onCancel }: { task: FieldTask; onCancel: ()
   const [photos, setPhotos] = useState<File[]>([]);
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
-  const today = useRef(localToday()).current;
+  const today = useRef(firmToday()).current;
   const form = useForm<CompleteFormInput, unknown, CompleteFormOutput>({ resolver: zodResolver(CompleteFormSchema), defaultValues: completeFormDefaults(task.quantities, today) });
   const quantities = useFieldArray({ control: form.control, name: 'quantitiesUsed' });
   const errors = form.formState.errors;
@@ -70,8 +70,8 @@ export function CompleteForm({ task, onCancel }: { task: FieldTask; onCancel: ()
 
   const onSubmit = form.handleSubmit(async (values) => {
     if (photoError) return;
-    if (values.doneOn > localToday()) {
-      form.setError('doneOn', { message: 'The date cannot be in the future.' });
+    if (values.doneOn > firmToday()) {
+      form.setError('doneOn', { message: 'The day cannot be after today. Pick today or an earlier day.' });
       return;
     }
     setBusy(true);

@@ -1,6 +1,7 @@
 import { Button } from '../../../components/ui/button';
 import { useCompletionQueue } from '../hooks/use-completion-queue';
 import { OFFLINE_MESSAGE } from '../lib/completion-queue';
+import { formatDay } from '../../../lib/firm-clock';
 
 /** What waits on this phone (with a count and a "Send now") and what the server refused (with its message, until dismissed). */
 export function QueueNotice({ showWaiting = true }: { showWaiting?: boolean }) {
@@ -36,7 +37,7 @@ export function QueueNotice({ showWaiting = true }: { showWaiting?: boolean }) {
           </p>
           <p>{i.rejected?.message}</p>
           <p className="mt-1 text-slate">
-            Done on {i.fields.doneOn}
+            Done on {formatDay(i.fields.doneOn)}
             {i.fields.hours ? `, ${i.fields.hours} h` : ''}
             {i.fields.notes ? ` — “${i.fields.notes}”` : ''}. Ask your consultant if the task should be reopened; this copy stays here until you dismiss it.
           </p>

@@ -2,6 +2,7 @@
 import type { TaskDto } from '../../../../shared/schemas/task';
 import type { FieldBucket } from '../../../../shared/domain/tasks';
 import { formatDateRange } from '../../../lib/quantity-format';
+import { firmToday } from '../../../lib/firm-clock';
 
 export type FieldStatus = 'waiting-to-send' | TaskDto['status'];
 
@@ -33,8 +34,7 @@ export const BUCKETS: { bucket: Exclude<FieldBucket, 'finished'>; title: string;
   { bucket: 'upcoming', title: 'Coming up', empty: 'Nothing later on your list yet.' },
 ];
 
-/** Today on this phone as YYYY-MM-DD (local time: the day the crew member is living). */
+/** Today as YYYY-MM-DD in the firm's time zone (the day the firm — and the server — is living). */
 export function localToday(now: Date = new Date()): string {
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+  return firmToday(now);
 }

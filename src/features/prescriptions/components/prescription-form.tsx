@@ -231,7 +231,7 @@ export function PrescriptionForm({
               type="date"
               value={state.targetDate}
               error={fieldErrors.targetDate}
-              hint={existing?.targetDate ? 'A saved target date can be moved, not removed.' : 'Optional; the window opens first.'}
+              hint={existing?.targetDate ? 'A saved target date can be moved, not removed.' : 'Optional; by default today while the window is open, else its first day.'}
               onChange={(e) => change({ targetDate: e.target.value })}
             />
             {showCount ? <TextField label="How many" inputMode="numeric" value={state.count} placeholder="1" error={fieldErrors.count} onChange={(e) => change({ count: e.target.value })} /> : null}

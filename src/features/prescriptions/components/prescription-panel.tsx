@@ -13,6 +13,7 @@ import { asRegion } from '../lib/preview';
 import type { PanelUnit, PrescriptionDto } from '../lib/types';
 import { PrescriptionDetails } from './prescription-details';
 import { PrescriptionForm } from './prescription-form';
+import { formatDay } from '../../../lib/firm-clock';
 
 /** "3.3 acres", "1,549 ft" or the kind's name for a point. */
 function measureText(unit: PanelUnit): string {
@@ -48,7 +49,7 @@ function SavedPrescription({
             <span className="block font-semibold text-ink">{prescription.practiceName}</span>
             <span className="block text-xs text-slate">
               Season {prescription.year}
-              {prescription.targetDate ? ` · target ${prescription.targetDate}` : ''}
+              {prescription.targetDate ? ` · target ${formatDay(prescription.targetDate)}` : ''}
               {prescription.warnings.some((w) => w.severity === 'warning') ? <span className="ml-1 font-semibold text-[#A04A25]">· needs attention</span> : null}
             </span>
           </span>

@@ -10,9 +10,10 @@ import { computePrescription } from '../../../../shared/domain/prescription-quan
 import { summarizePrescription } from '../../../../shared/domain/prescription-summary';
 import type { ServiceRate } from '../../../../shared/domain/service-rates';
 import type { PanelUnit, PrescriptionView } from './types';
+import { firmToday } from '../../../lib/firm-clock';
 
-/** Today's calendar date as YYYY-MM-DD (UTC, like the server). */
-export const todayIso = (): string => new Date().toISOString().slice(0, 10);
+/** Today's calendar date as YYYY-MM-DD in the firm's time zone, like the server. */
+export const todayIso = (): string => firmToday();
 
 /** A region name as the schedule takes it; unknown or missing regions fall back to the Midwest, as on the server. */
 export function asRegion(value: string | null | undefined): Region {

@@ -184,7 +184,7 @@ export function checkDraft(form: DraftForm): DraftCheck {
   const errors: FieldErrors = {};
   let moneyOk = true;
   if (form.title.trim() === '') errors.title = 'Give the proposal a title.';
-  if (form.expiresOn && !/^\d{4}-\d{2}-\d{2}$/.test(form.expiresOn)) errors.expiresOn = 'Write the date as YYYY-MM-DD.';
+  if (form.expiresOn && !/^\d{4}-\d{2}-\d{2}$/.test(form.expiresOn)) errors.expiresOn = 'Enter the whole date: month, day and year.';
   const taxError = decimalError(form.taxRatePct, 'Sales tax', MAX_TAX_RATE_PCT);
   if (taxError) errors.taxRatePct = taxError;
   const depositError = decimalError(form.depositPct, 'Deposit', 100);

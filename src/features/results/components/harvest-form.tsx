@@ -9,6 +9,7 @@ import { SelectField } from '../../../components/ui/select-field';
 import { Button } from '../../../components/ui/button';
 import { useToast } from '../../../components/ui/toast';
 import { applyServerErrors } from './apply-server-errors';
+import { formatDay } from '../../../lib/firm-clock';
 
 type Input = z.input<typeof HarvestCreateSchema>;
 type Output = z.output<typeof HarvestCreateSchema>;
@@ -30,7 +31,7 @@ export function HarvestForm({ propertyId, units, onSaved }: { propertyId: number
       { propertyId, input: values },
       {
         onSuccess: (record) => {
-          toast('success', `Harvest of ${record.date} saved.`);
+          toast('success', `Harvest of ${formatDay(record.date)} saved.`);
           form.reset();
           onSaved?.(record);
         },

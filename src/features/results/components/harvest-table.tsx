@@ -33,7 +33,7 @@ export function HarvestTable({ harvests, onDelete, busyId }: { harvests: readonl
               <td className="py-2 pr-3">{h.unitName ?? h.stand ?? '—'}</td>
               {onDelete ? (
                 <td className="py-2 text-right">
-                  <Button variant="ghost" size="sm" busy={busyId === h.id} onClick={() => onDelete(h)} aria-label={`Delete the harvest of ${h.date}`}>
+                  <Button variant="ghost" size="sm" busy={busyId === h.id} onClick={() => onDelete(h)} aria-label={`Delete the harvest of ${formatDate(h.date)}`}>
                     Delete
                   </Button>
                 </td>

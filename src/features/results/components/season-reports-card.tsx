@@ -7,10 +7,12 @@ import { TextAreaField } from '../../../components/ui/text-area-field';
 import { useToast } from '../../../components/ui/toast';
 import { formatDate } from '../../../lib/format';
 import { useCreateSeasonReport, useSendSeasonReport } from '../api/season-reports';
+import { firmToday } from '../../../lib/firm-clock';
 
 /** The hunting season (July–June) of today, named by the year it starts. */
-export function currentSeason(today = new Date()): number {
-  return today.getMonth() >= 6 ? today.getFullYear() : today.getFullYear() - 1;
+export function currentSeason(today: string = firmToday()): number {
+  const year = Number(today.slice(0, 4));
+  return Number(today.slice(5, 7)) >= 7 ? year : year - 1;
 }
 
 function ReportList({ reports, onSend, sendingId }: { reports: readonly SeasonReportDto[]; onSend?: (r: SeasonReportDto) => void; sendingId?: number | null }) {

@@ -3,6 +3,7 @@ import { TASK_STATUSES, weekStart, type TaskStatus } from '../../../../shared/do
 import { addDays, parseIsoDate, type IsoDate } from '../../../../shared/domain/planting-windows';
 import type { TaskListQuery } from '../../../../shared/schemas/task';
 import { defaultTimelineDates, type GroupBy } from './timeline';
+import { firmToday } from '../../../lib/firm-clock';
 
 export type ScheduleView = 'week' | 'timeline';
 
@@ -75,5 +76,5 @@ export function taskQueryFor(params: ScheduleParams): TaskListQuery {
   };
 }
 
-/** Today's date as the server counts it (UTC). */
-export const todayUtc = (): IsoDate => new Date().toISOString().slice(0, 10);
+/** Today's date in the firm's time zone (the server counts it the same way). */
+export const todayUtc = (): IsoDate => firmToday();
