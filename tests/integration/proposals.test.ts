@@ -138,7 +138,10 @@ describe('sending, approval and versions', () => {
       depositPct: data.depositPct.toFixed(4),
       terms: data.terms,
       currency: data.currency,
+      // The plan's geometry as sent is part of what the client approves.
+      plan: (await Proposal.findByPk(p.id))!.planSnapshot,
     });
+    expect(JSON.parse(content).plan.units).toHaveLength(2);
     expect(data.approval.contentHash).toBe(crypto.createHash('sha256').update(content).digest('hex'));
 
     expect((await send(client, 'post', `/api/proposals/${p.id}/approve`, { signedName: 'Pat Landowner' })).status).toBe(409);

@@ -63,7 +63,7 @@ describe('schedule warnings', () => {
       [2, 'window-closing'],
       [3, 'outside-window'],
     ]);
-    expect(w[0].message).toMatch(/closed on 2026-07-31/);
+    expect(w[0].message).toMatch(/closed on Jul 31, 2026/);
   });
 
   it('flags a step set before the step it depends on, or while that step has no date', () => {

@@ -11,6 +11,7 @@ import {
   parseIsoDate,
   practiceWindow,
   schedulePrescription,
+  defaultTargetDate,
   windowDates,
 } from '../../../shared/domain/planting-windows';
 import { starterPractice } from '../../../shared/domain/starter-library';
@@ -67,7 +68,7 @@ describe('ISO date helpers', () => {
 
   it('rejects dates that do not exist', () => {
     expect(validationErrorOf(() => parseIsoDate('2026-02-30', 'today')).field).toBe('today');
-    expect(validationErrorOf(() => parseIsoDate('08/15/2026')).message).toMatch(/YYYY-MM-DD/);
+    expect(validationErrorOf(() => parseIsoDate('08/15/2026')).message).toMatch(/month, day and year/);
   });
 });
 
@@ -149,5 +150,44 @@ describe('schedulePrescription', () => {
     expect(validationErrorOf(() => schedulePrescription({ ...base, scheduledDates: { seed: '2026-13-01' } })).field).toBe('scheduledDates.seed');
     expect(validationErrorOf(() => schedulePrescription({ ...base, today: 'tomorrow' })).field).toBe('today');
     expect(validationErrorOf(() => schedulePrescription({ ...base, firstFrost: { month: 2, day: 30 } })).field).toBe('firstFrost');
+  });
+});
+
+describe('a new prescription’s default dates', () => {
+  // Alabama DCNR (Cook & Gray 2003) south rape/brassica window: Aug 15 – Nov 1.
+  const base = { practice: brassica, region: 'south' as const, year: 2026 };
+
+  it('targets today when today is inside the window that is still open, not the window’s passed first day', () => {
+    const s = schedulePrescription({ ...base, today: '2026-09-10' });
+    expect(s.anchorWindow).toMatchObject({ earliest: '2026-08-15', latest: '2026-11-01' });
+    expect(s.targetDate).toBe('2026-09-10');
+    // Every step is timed from today, so nothing lands before today because of the default.
+    const topdress = s.steps.find((x) => x.stepKey === 'topdress')!;
+    expect(topdress.earliest >= '2026-09-10').toBe(true);
+    expect(s.warnings.some((w) => w.code === 'target-outside-window')).toBe(false);
+  });
+
+  it('targets the window’s first day when the window has not opened yet, and on its last day keeps today', () => {
+    expect(schedulePrescription({ ...base, today: '2026-03-01' }).targetDate).toBe('2026-08-15');
+    expect(schedulePrescription({ ...base, today: '2026-08-15' }).targetDate).toBe('2026-08-15');
+    expect(schedulePrescription({ ...base, today: '2026-11-01' }).targetDate).toBe('2026-11-01');
+  });
+
+  it('keeps a chosen target date as it is', () => {
+    expect(schedulePrescription({ ...base, today: '2026-09-10', targetDate: '2026-08-20' }).targetDate).toBe('2026-08-20');
+  });
+
+  it('picks inside the window in the pure helper too', () => {
+    const w = { earliest: '2026-08-15', latest: '2026-11-01' };
+    expect(defaultTargetDate(w, '2026-08-14')).toBe('2026-08-15');
+    expect(defaultTargetDate(w, '2026-10-31')).toBe('2026-10-31');
+    expect(defaultTargetDate(w, '2026-11-02')).toBe('2026-08-15'); // closed: the caller plans next season's window
+  });
+
+  it('writes the dates of its warnings as people write them', () => {
+    const s = schedulePrescription({ ...base, targetDate: '2026-08-20', today: '2026-05-01' });
+    const passed = s.warnings.find((w) => w.code === 'window-passed')!;
+    expect(passed.message).toContain('closed on Apr 22, 2026');
+    expect(passed.message).not.toMatch(/\d{4}-\d{2}-\d{2}/);
   });
 });

@@ -7,6 +7,7 @@ import {
   invoiceTotals,
   proposalTotals,
   type OrderDiscount,
+  type PlanSnapshot,
   type ProposalContentInput,
   type ProposalLineInput,
   type ProposalPricingInput,
@@ -427,5 +428,46 @@ describe('canonicalProposalContent', () => {
     expectField(() => canonicalProposalContent({ ...base, terms: undefined as unknown as string }), 'terms');
     expectField(() => canonicalProposalContent({ ...base, currency: 'usd' }), 'currency');
     expectField(() => canonicalProposalContent({ ...base, taxRatePct: 'seven' }), 'taxRatePct');
+  });
+});
+
+describe('the plan in the approval fingerprint', () => {
+  const content: ProposalContentInput = {
+    lines: [{ id: 'a', quantity: 1.5, unitPriceCents: 101, taxable: true, optional: false, category: 'seed' }],
+    taxRatePct: 7.25,
+    terms: 'Net 30',
+  };
+  const square = (lon: number, lat: number, d: number) => ({ type: 'Polygon', coordinates: [[[lon, lat], [lon + d, lat], [lon + d, lat + d], [lon, lat + d], [lon, lat]]] });
+  const plan: PlanSnapshot = {
+    property: { name: 'Coulee Bend', acres: 120, boundary: square(-90.94, 43.26, 0.01) },
+    units: [
+      { id: 7, name: 'North plot', kind: 'food-plot', geometry: square(-90.938, 43.2655, 0.001), acres: 2.4, lengthFt: null },
+      { id: 9, name: 'Oak slope', kind: 'timber', geometry: square(-90.936, 43.2655, 0.002), acres: 9.1, lengthFt: null },
+    ],
+  };
+
+  it('covers the boundary and every unit’s shape, as version 2 with coordinates to seven decimals', () => {
+    const text = canonicalProposalContent({ ...content, plan });
+    const parsed = JSON.parse(text);
+    expect(parsed.version).toBe(2);
+    expect(parsed.plan.units.map((u: { id: number }) => u.id)).toEqual([7, 9]);
+    expect(parsed.plan.units[0].geometry.coordinates[0][0]).toEqual(['-90.9380000', '43.2655000']);
+    // Without a plan the content stays the version-1 text, so approvals made before plans were frozen still verify.
+    expect(JSON.parse(canonicalProposalContent(content)).version).toBe(1);
+  });
+
+  it('changes when a unit is added or a corner moves by a few centimetres, not when units are listed in another order', () => {
+    const hash = sha256(canonicalProposalContent({ ...content, plan }));
+    const added: PlanSnapshot = { ...plan, units: [...plan.units, { id: 12, name: 'Stand 4', kind: 'stand-site', geometry: { type: 'Point', coordinates: [-90.935, 43.266] }, acres: null, lengthFt: null }] };
+    expect(sha256(canonicalProposalContent({ ...content, plan: added }))).not.toBe(hash);
+    // 1e-6° of longitude at 43°N is about 8 cm (111.32 km × cos 43° per degree; from memory).
+    const moved: PlanSnapshot = { ...plan, units: [{ ...plan.units[0], geometry: square(-90.938001, 43.2655, 0.001) }, plan.units[1]] };
+    expect(sha256(canonicalProposalContent({ ...content, plan: moved }))).not.toBe(hash);
+    expect(sha256(canonicalProposalContent({ ...content, plan: { ...plan, units: [...plan.units].reverse() } }))).toBe(hash);
+  });
+
+  it('refuses a plan coordinate that is not a number', () => {
+    const bad: PlanSnapshot = { ...plan, units: [{ ...plan.units[0], geometry: { type: 'Point', coordinates: ['x', 1] } }] };
+    expect(() => canonicalProposalContent({ ...content, plan: bad })).toThrow(DomainValidationError);
   });
 });

@@ -248,14 +248,14 @@ function rowOfOrNull(page: string, description: string): string | null {
 
 describe('proposal PDF by status', () => {
   it('prints the approval record: signed name, time and the SHA-256 content hash', async () => {
-    const input = couleeBendProposal({ approved: { signedName: 'Marta Lindqvist', signedAt: '2027-04-27T15:42:00Z' } });
+    // The firm works on Central time: in April that is CDT, UTC−5 (15 U.S.C. § 260a), so 15:42 UTC is 10:42 AM CDT.
+    const input = { ...couleeBendProposal({ approved: { signedName: 'Marta Lindqvist', signedAt: '2027-04-27T15:42:00Z' } }), timeZone: 'America/Chicago' };
     const hash = input.approval!.contentHash;
     // SHA-256 is 256 bits, 64 hexadecimal digits (FIPS 180-4); the fixture hashes canonicalProposalContent.
     expect(hash).toMatch(/^[0-9a-f]{64}$/);
     const pdf = await renderProposalPdf(input);
     const text = pdfText(pdf, 'approved');
-    // 15:42 UTC is 3:42 PM UTC (ISO 8601 time of day).
-    expect(text).toContain('Approved by Marta Lindqvist on April 27, 2027 at 3:42 PM UTC');
+    expect(text).toContain('Approved by Marta Lindqvist on April 27, 2027, 10:42 AM CDT');
     expect(text).toContain(hash);
     expect(pdfText(pdf, 'approved-p1', { first: 1, last: 1 })).toContain('APPROVED — by Marta Lindqvist');
     expect(text).not.toMatch(/type your name to approve/);
