@@ -1,0 +1,200 @@
+import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
+import { execFileSync } from 'node:child_process';
+import { signedInAgent, type Agent } from '../support/test-app';
+import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
+import { rectangle } from '../support/geodesy';
+import { Firm, Practice } from '../../server/models';
+
+// The firm's clock. US Central time is UTC−6 in winter (CST) and UTC−5 in summer (CDT); daylight
+// time ends on the first Sunday of November (15 U.S.C. § 260a), so November 30 is on CST.
+// 11:30 PM CST on Monday, November 30, 2026 is 05:30 UTC on December 1: the UTC date is a day ahead.
+const LAST_DAY_2330_CST = new Date('2026-12-01T05:30:00Z');
+
+const send = (agent: Agent, method: 'post' | 'patch' | 'delete', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
+
+afterEach(() => {
+  vi.useRealTimers();
+});
+
+describe('the firm’s time zone', () => {
+  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let owner: Agent;
+  let consultant: Agent;
+  beforeAll(async () => {
+    ctx = await makeFirm();
+    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
+    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+  });
+
+  it('starts on Central time and travels with the signed-in user', async () => {
+    expect((await owner.get('/api/firm').expect(200)).body.data.timezone).toBe('America/Chicago');
+    expect((await consultant.get('/api/auth/me').expect(200)).body.user.firmTimezone).toBe('America/Chicago');
+  });
+
+  it('lets the owner change it to a zone Intl knows, and refuses others with a sentence', async () => {
+    const bad = await send(owner, 'patch', '/api/firm/settings', { timezone: 'America/Springfield' });
+    expect(bad.status).toBe(422);
+    expect(JSON.stringify(bad.body)).toMatch(/choose a time zone from the list/);
+    expect((await Firm.findByPk(ctx.firm.id))!.timezone).toBe('America/Chicago');
+
+    expect((await send(consultant, 'patch', '/api/firm/settings', { timezone: 'America/Denver' })).status).toBe(403);
+
+    const ok = await send(owner, 'patch', '/api/firm/settings', { timezone: 'America/Denver' });
+    expect(ok.status).toBe(200);
+    expect(ok.body.data.timezone).toBe('America/Denver');
+    // Other settings stay as they were; the zone is a column, not a settings key.
+    expect(ok.body.data.settings).not.toHaveProperty('timezone');
+    expect((await consultant.get('/api/auth/me').expect(200)).body.user.firmTimezone).toBe('America/Denver');
+    await send(owner, 'patch', '/api/firm/settings', { timezone: 'America/Chicago' }).expect(200);
+  });
+});
+
+describe('today at 11:30 PM on the last day of a month, in Chicago', () => {
+  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let consultant: Agent;
+  let client: Agent;
+  let propertyId: number;
+  beforeAll(async () => {
+    ctx = await makeFirm();
+    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+    client = await signedInAgent(ctx.users.client.email, PASSWORD);
+    propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
+    const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
+    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
+    expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+  });
+
+  it('a proposal valid until November 30 is still open and can be approved; the invoice is dated November 30', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(LAST_DAY_2330_CST);
+    const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 30, expiresOn: '2026-11-30' });
+    expect(draft.status).toBe(201);
+    expect((await send(consultant, 'post', `/api/proposals/${draft.body.data.id}/send`)).status).toBe(200);
+
+    const seen = await client.get(`/api/proposals/${draft.body.data.id}`).expect(200);
+    expect(seen.body.data.status).toBe('sent'); // the UTC clock said December 1: "expired"
+    const sentList = await consultant.get('/api/proposals?status=sent').expect(200);
+    expect(sentList.body.data.map((p: { id: number }) => p.id)).toContain(draft.body.data.id);
+
+    const approved = await send(client, 'post', `/api/proposals/${draft.body.data.id}/approve`, { signedName: 'Pat Landowner' });
+    expect(approved.status).toBe(200);
+
+    const invoices = await consultant.get(`/api/invoices?proposalId=${draft.body.data.id}`).expect(200);
+    const deposit = invoices.body.data[0];
+    const issued = await send(consultant, 'post', `/api/invoices/${deposit.id}/send`);
+    expect(issued.status).toBe(200);
+    expect(issued.body.data.issuedOn).toBe('2026-11-30');
+  });
+
+  it('a harvest dated December 1 is still in the future at 11:30 PM on November 30, and the message writes the date as people do', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(LAST_DAY_2330_CST);
+    const res = await send(consultant, 'post', `/api/properties/${propertyId}/harvests`, { date: '2026-12-01', sex: 'male', ageClass: '2.5' });
+    expect(res.status).toBe(422);
+    expect(res.body.error).toContain('Dec 1, 2026 is in the future');
+    expect((await send(consultant, 'post', `/api/properties/${propertyId}/harvests`, { date: '2026-11-30', sex: 'male', ageClass: '2.5' })).status).toBe(201);
+  });
+
+  it('the approval e-mail to the consultant gives the time in the firm’s zone with its abbreviation', async () => {
+    const { OutboxMessage } = await import('../../server/models');
+    const rows = await OutboxMessage.findAll({ where: { firmId: ctx.firm.id, kind: 'proposal-approved' } });
+    expect(rows.length).toBeGreaterThan(0);
+    expect(JSON.stringify(rows.map((r) => r.get({ plain: true })))).toContain('Nov 30, 2026, 11:30 PM CST');
+  });
+});
+
+async function pdfText(agent: Agent, url: string): Promise<string> {
+  const res = await agent.get(url).buffer(true).parse((r, cb) => {
+    const chunks: Buffer[] = [];
+    r.on('data', (c: Buffer) => chunks.push(c));
+    r.on('end', () => cb(null, Buffer.concat(chunks)));
+  });
+  expect(res.status).toBe(200);
+  return execFileSync('pdftotext', ['-layout', '-', '-'], { input: res.body as Buffer }).toString();
+}
+
+describe('documents that never change', () => {
+  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let consultant: Agent;
+  let owner: Agent;
+  let client: Agent;
+  let propertyId: number;
+  beforeAll(async () => {
+    ctx = await makeFirm();
+    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
+    client = await signedInAgent(ctx.users.client.email, PASSWORD);
+    propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
+    const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
+    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
+    expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+  });
+
+  it('a sent and then approved proposal’s PDF keeps its plan when units are drawn later; a new draft shows them', async () => {
+    const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 30 });
+    const id = draft.body.data.id;
+    expect((await send(consultant, 'post', `/api/proposals/${id}/send`)).status).toBe(200);
+    const sentText = await pdfText(consultant, `/api/proposals/${id}/pdf`);
+    expect(sentText).not.toContain('Sanctuary');
+
+    // A large sanctuary drawn after sending: its legend entry ("Sanctuary") would show on a live map.
+    const late = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'sanctuary', name: 'Late hollow', geometry: rectangle(-90.9335, 43.2668, 300, 200) });
+    expect(late.status).toBe(201);
+    expect(await pdfText(consultant, `/api/proposals/${id}/pdf`)).toBe(sentText);
+    expect(await pdfText(client, `/api/proposals/${id}/pdf`)).toBe(sentText);
+
+    const approved = await send(client, 'post', `/api/proposals/${id}/approve`, { signedName: 'Pat Landowner' });
+    expect(approved.status).toBe(200);
+    const approvedText = await pdfText(consultant, `/api/proposals/${id}/pdf`);
+    expect(approvedText).not.toContain('Sanctuary');
+    await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'sanctuary', name: 'Later still', geometry: rectangle(-90.9365, 43.2662, 150, 100) });
+    expect(await pdfText(consultant, `/api/proposals/${id}/pdf`)).toBe(approvedText);
+
+    // The fingerprint covers the geometry as sent: one unit, not three.
+    const { ProposalApproval } = await import('../../server/models');
+    const record = await ProposalApproval.findOne({ where: { proposalId: id } });
+    const content = JSON.parse(record!.content);
+    expect(content.version).toBe(2);
+    expect(content.plan.units.map((u: { name: string }) => u.name)).toEqual(['North plot']);
+
+    // The check above can see a sanctuary: a fresh draft's live map shows it.
+    const fresh = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, {});
+    expect(await pdfText(consultant, `/api/proposals/${fresh.body.data.id}/pdf`)).toContain('Sanctuary');
+  });
+
+  it('a sent invoice’s PDF keeps the names it was issued with', async () => {
+    const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 25 });
+    // Only one draft at a time per series is fine; this is a new series.
+    expect((await send(consultant, 'post', `/api/proposals/${draft.body.data.id}/send`)).status).toBe(200);
+    expect((await send(client, 'post', `/api/proposals/${draft.body.data.id}/approve`, { signedName: 'Pat Landowner' })).status).toBe(200);
+    const [deposit] = (await consultant.get(`/api/invoices?proposalId=${draft.body.data.id}`).expect(200)).body.data;
+    expect((await send(consultant, 'post', `/api/invoices/${deposit.id}/send`)).status).toBe(200);
+    const issuedText = await pdfText(consultant, `/api/invoices/${deposit.id}/pdf`);
+    const oldName = ctx.firm.name;
+    expect(issuedText).toContain(oldName);
+
+    await ctx.firm.reload();
+    await ctx.firm.update({ name: 'Renamed Habitat Partners' });
+    await ctx.client.update({ name: 'Renamed Family Trust' });
+    const later = await pdfText(client, `/api/invoices/${deposit.id}/pdf`);
+    expect(later).toBe(issuedText);
+    expect(later).not.toContain('Renamed');
+    await ctx.firm.update({ name: oldName });
+  });
+
+  it('a sent season report cannot be deleted, nor its PDF file', async () => {
+    const made = await send(consultant, 'post', `/api/properties/${propertyId}/season-reports`, { season: 2026 });
+    expect(made.status).toBe(201);
+    const id = made.body.data.id;
+    expect((await send(consultant, 'post', `/api/season-reports/${id}/send`)).status).toBe(200);
+    const del = await send(owner, 'delete', `/api/season-reports/${id}`);
+    expect(del.status).toBe(409);
+    expect(del.body.error).toMatch(/stays as sent/);
+    const { SeasonReport } = await import('../../server/models');
+    const report = await SeasonReport.findByPk(id);
+    expect(report).not.toBeNull();
+    const fileDel = await send(owner, 'delete', `/api/files/${report!.sharedFileId}`);
+    expect(fileDel.status).toBe(409);
+    expect((await consultant.get(`/api/season-reports/${id}/pdf`)).status).toBe(200);
+  });
+});
