@@ -112,7 +112,7 @@ describe('camera surveys', () => {
       [{ buckPhotos: -1 }, /Buck photos cannot be negative/],
       [{ uniqueBucks: 1_066 }, /cannot be more than buck photos/],
       [{ fawnPhotos: 2.5 }, /Fawn photos: enter a whole number/],
-      [{ endDate: '2024-07-30' }, /ends \(2024-07-30\) before it starts/],
+      [{ endDate: '2024-07-30' }, /ends \(Jul 30, 2024\) before it starts/],
       [{ bucks: [{ label: 'Split G2', ageClass: '3.5' }] }, /one entry per unique buck/],
       [{ cameraCount: undefined }, /pick the camera sites used, or enter how many cameras ran/],
     ];

@@ -49,6 +49,8 @@ describe('the field sheet’s words for a task', () => {
   it('writes the planned dates and today on the phone', () => {
     expect(plannedDates({ startDate: '2026-06-14', endDate: '2026-06-16' })).toBe('Set for Jun 14 – Jun 16, 2026');
     expect(plannedDates({ startDate: null, endDate: null })).toBeNull();
-    expect(localToday(new Date(2026, 0, 5, 23, 30))).toBe('2026-01-05'); // local calendar day, not UTC
+    // The firm's calendar day (Central time until the firm says otherwise), not UTC nor the phone's zone:
+    // 05:30 UTC on Feb 1, 2026 is 11:30 PM CST on Jan 31 (UTC−6, 15 U.S.C. § 260a).
+    expect(localToday(new Date('2026-02-01T05:30:00Z'))).toBe('2026-01-31');
   });
 });
