@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { request, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
+import { todayIn } from '../../shared/domain/clock';
 
 const baseUrl = inject('baseUrl');
 const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
@@ -45,7 +46,8 @@ const taskById = async (id: number): Promise<ApiTask> => {
   expect(res.status()).toBe(200);
   return ((await res.json()) as { data: { tasks: ApiTask[] } }).data.tasks.find((t) => t.id === id)!;
 };
-const today = () => new Date().toISOString().slice(0, 10);
+/** Today for the demo firm, which works on Central time (the server's "today" is the firm's). */
+const today = () => todayIn('America/Chicago', new Date());
 
 beforeAll(async () => {
   browser = await launchBrowser();

@@ -5,6 +5,7 @@ import crypto from 'node:crypto';
 import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core';
 import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
+import { todayIn } from '../../shared/domain/clock';
 
 const baseUrl = inject('baseUrl');
 const WAIT = { timeout: 15_000 };
@@ -147,7 +148,7 @@ describe('the consultant’s schedule', () => {
   it('shows a crew completion with its photo, and the plan map in work-status colours', async () => {
     // The crew member marks the task done from the field (multipart, with an idempotency key).
     const crew = await apiSession('crew@browseline.test');
-    const doneOn = new Date().toISOString().slice(0, 10);
+    const doneOn = todayIn('America/Chicago', new Date()); // the demo firm's today
     const photo = withGpsExif(JPEG, 43.5494, -90.8785); // inside Club plot (demo seed geometry)
     const res = await crew.request.post(`${baseUrl}/api/tasks/${task.id}/complete`, {
       headers: { 'X-CSRF-Token': crew.csrf, 'Idempotency-Key': `e2e-${crypto.randomUUID()}` },
