@@ -137,15 +137,3 @@ export function formatMoment(instant: Date | string, zone: string, options: { lo
   const hour12 = r.hour % 12 === 0 ? 12 : r.hour % 12;
   return `${formatDate(r.date, options)}, ${hour12}:${String(r.minute).padStart(2, '0')} ${r.hour < 12 ? 'AM' : 'PM'} ${r.abbreviation}`;
 }
-
-/**
- * Replaces every "YYYY-MM-DD" in a sentence by the date as people write it. For messages composed
- * from stored dates (warnings, errors), so nobody reads 2026-12-05.
- */
-export function humanizeDates(text: string): string {
-  return text.replace(/\b(\d{4})-(\d{2})-(\d{2})\b/g, (whole, y: string, m: string, d: string) => {
-    const month = Number(m);
-    const day = Number(d);
-    return month >= 1 && month <= 12 && day >= 1 && day <= 31 ? formatDate(`${y}-${m}-${d}`) : whole;
-  });
-}
