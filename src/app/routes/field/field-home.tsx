@@ -70,12 +70,12 @@ export function FieldHomePage() {
   if (home.isPending || !me.data) return <Loading />;
   if (home.isError) return <ErrorPanel error={home.error} />;
   // Today in the firm's time zone, whatever zone the phone is set to.
-  const today = formatDateWithWeekday(todayIn(me.data.firmTimezone, new Date()));
+  const todayIso = todayIn(me.data.firmTimezone, new Date());
   return (
     <div className="flex flex-col gap-4">
       <div>
-        <p className="text-sm text-slate" data-firm-today={todayIn(me.data.firmTimezone, new Date())}>
-          {today}
+        <p className="text-sm text-slate" data-firm-today={todayIso}>
+          {formatDateWithWeekday(todayIso)}
         </p>
         <h1 className="text-2xl font-bold">Field sheet</h1>
         <p className="text-slate">{me.data.name} · {home.data.firm.name}</p>
