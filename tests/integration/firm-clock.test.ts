@@ -95,6 +95,23 @@ describe('today at 11:30 PM on the last day of a month, in Chicago', () => {
     expect((await send(consultant, 'post', `/api/properties/${propertyId}/harvests`, { date: '2026-11-30', sex: 'male', ageClass: '2.5' })).status).toBe(201);
   });
 
+  it('an overdue reminder goes for an invoice due November 29, not yet for one due November 30', async () => {
+    const { Invoice } = await import('../../server/models');
+    const { sendOverdueReminders } = await import('../../server/commands/reminder-sender');
+    const open = (number: string, dueOn: string) =>
+      Invoice.create({ firmId: ctx.firm.id, clientId: ctx.client.id, propertyId, proposalId: null, kind: 'final', number, status: 'open', totalCents: 10_000, billedCents: 10_000, subtotalCents: 10_000, issuedOn: '2026-10-30', dueOn, createdById: null });
+    const due29 = await open(`INV-CLOCK-${ctx.firm.id}-1`, '2026-11-29');
+    const due30 = await open(`INV-CLOCK-${ctx.firm.id}-2`, '2026-11-30');
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(LAST_DAY_2330_CST);
+    await sendOverdueReminders();
+    expect((await due29.reload()).lastReminderOn).toBe('2026-11-30');
+    expect((await due30.reload()).lastReminderOn).toBeNull(); // the UTC clock (Dec 1) called it a day overdue
+    const list = await consultant.get(`/api/invoices?propertyId=${propertyId}`).expect(200);
+    const row = list.body.data.find((i: { id: number }) => i.id === due30.id);
+    expect(row.daysOverdue ?? 0).toBe(0);
+  });
+
   it('the approval e-mail to the consultant gives the time in the firm’s zone with its abbreviation', async () => {
     const { OutboxMessage } = await import('../../server/models');
     const rows = await OutboxMessage.findAll({ where: { firmId: ctx.firm.id, kind: 'proposal-approved' } });
