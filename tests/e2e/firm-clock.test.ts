@@ -126,6 +126,19 @@ describe('a sent proposal reads the same forever', () => {
     expect(live.text).toContain('Sanctuary');
     expect(live.page1.equals(before.page1)).toBe(false);
 
+    // Dates on the consultant's pages are written as people write them, never 2026-12-05.
+    for (const [url, ready] of [
+      [`${baseUrl}/invoices`, 'Bluestem Ridge Hunting Club'],
+      [`${baseUrl}/desk`, 'Acres under plan'],
+      [`${baseUrl}/proposals/${draft.id}`, 'Clockwork Forty'],
+    ] as const) {
+      await page.goto(url);
+      await page.getByText(ready).first().waitFor(WAIT);
+      const text = await page.locator('main').innerText();
+      expect(text, url).not.toMatch(/\b\d{4}-\d{2}-\d{2}\b/);
+    }
+    await screenshot(page, 'firm-clock-proposal-page');
+
     watch.assertClean();
     await context.close();
     await consultant.request.dispose();
