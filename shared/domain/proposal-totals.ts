@@ -256,6 +256,12 @@ export interface PlanGeometry {
 export interface PlanSnapshot {
   property: { name: string; acres: number | null; boundary: PlanGeometry | null; locality?: string | null };
   units: { id: number; name: string; kind: string; geometry: PlanGeometry; acres: number | null; lengthFt: number | null }[];
+  /** What the document showed beside the plan when sent: names, unit groups with their summaries, cautions. Not hashed (the lines and plan are). */
+  context?: {
+    clientName: string;
+    groups: { unitId: number | null; label: string; kind: string | null; acres: number | null; lengthFt: number | null; summaries: string[] }[];
+    cautions: { id: string; title: string; text: string }[];
+  };
 }
 
 /** The proposal fields the approval record covers. */

@@ -164,6 +164,10 @@ describe('documents that never change', () => {
     expect(approved.status).toBe(200);
     const approvedText = await pdfText(consultant, `/api/proposals/${id}/pdf`);
     expect(approvedText).not.toContain('Sanctuary');
+    // The approved plot is redrawn twice as large: the document keeps the size it was approved with.
+    const units = (await consultant.get(`/api/properties/${propertyId}/units`).expect(200)).body.data as { id: number; name: string }[];
+    const north = units.find((u) => u.name === 'North plot')!;
+    expect((await send(consultant, 'patch', `/api/units/${north.id}`, { geometry: rectangle(-90.938, 43.2655, 240, 160) })).status).toBe(200);
     await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'sanctuary', name: 'Later still', geometry: rectangle(-90.9365, 43.2662, 150, 100) });
     expect(await pdfText(consultant, `/api/proposals/${id}/pdf`)).toBe(approvedText);
 

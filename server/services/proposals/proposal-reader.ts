@@ -6,6 +6,9 @@ import { firmToday } from '../clock';
 
 /** The context of a proposal: names, unit groups with prescription summaries, cautions. */
 export async function proposalContext(p: Proposal, lines: ProposalLine[], transaction?: Transaction): Promise<ProposalContext> {
+  // A sent version reads as it was sent: names, unit sizes, summaries and cautions from its snapshot.
+  const frozen = p.planSnapshot?.context;
+  if (frozen) return { propertyName: p.planSnapshot!.property.name, clientName: frozen.clientName, groups: frozen.groups, cautions: frozen.cautions, today: await firmToday(p.firmId, transaction) };
   const prescriptionIds = [...new Set(lines.map((l) => l.prescriptionId).filter((x): x is number => !!x))];
   const unitIds = [...new Set(lines.map((l) => l.unitId).filter((x): x is number => !!x))];
   const [property, client, prescriptions, units, today] = await Promise.all([
