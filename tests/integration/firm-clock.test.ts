@@ -112,6 +112,20 @@ describe('today at 11:30 PM on the last day of a month, in Chicago', () => {
     expect(row.daysOverdue ?? 0).toBe(0);
   });
 
+  it('a new prescription made mid-window, without dates, targets today in the firm’s zone, not the window’s passed first day', async () => {
+    // Midwest fall brassica window: Jul 20 – Aug 31 (from memory / common practice, per Missouri Extension G4652's direction).
+    const seedBed = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'Mid-window plot', geometry: rectangle(-90.9365, 43.2668, 90, 60) });
+    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
+    vi.useFakeTimers({ toFake: ['Date'] });
+    // 11:30 PM CDT on Monday, August 31 — the window's last day — is 04:30 UTC on September 1.
+    vi.setSystemTime(new Date('2026-09-01T04:30:00Z'));
+    const res = await send(consultant, 'post', `/api/units/${seedBed.body.data.id}/prescriptions`, { practiceId: brassica });
+    expect(res.status).toBe(201);
+    expect(res.body.data.year).toBe(2026);
+    expect(res.body.data.schedule.anchorWindow).toMatchObject({ earliest: '2026-07-20', latest: '2026-08-31' });
+    expect(res.body.data.schedule.targetDate).toBe('2026-08-31');
+  });
+
   it('the approval e-mail to the consultant gives the time in the firm’s zone with its abbreviation', async () => {
     const { OutboxMessage } = await import('../../server/models');
     const rows = await OutboxMessage.findAll({ where: { firmId: ctx.firm.id, kind: 'proposal-approved' } });
