@@ -1,9 +1,9 @@
 /**
  * The client's side of the firm's clock (shared/domain/clock.ts). The firm's zone comes with the
  * signed-in user (`/api/auth/me`, `firmTimezone`); "today" and every time on screen are read in it,
- * whatever zone the browser is in.
+ * whatever zone the browser is in. The signed-in user is read before any page renders, so the zone
+ * is known by the time a page asks for today.
  */
-import { useMe } from '../features/auth/api/get-me';
 import { DEFAULT_TIME_ZONE, formatDate, formatDayOf, formatMoment, isTimeZone, todayIn, type IsoDate } from '../../shared/domain/clock';
 
 let currentZone = DEFAULT_TIME_ZONE;
@@ -34,13 +34,3 @@ export function formatTime(value: string | Date): string {
   return formatMoment(value, currentZone);
 }
 
-/** The firm's zone for a component (re-renders when the signed-in user is read again). */
-export function useFirmZone(): string {
-  const me = useMe();
-  return me.data?.firmTimezone && isTimeZone(me.data.firmTimezone) ? me.data.firmTimezone : DEFAULT_TIME_ZONE;
-}
-
-/** Today's date in the firm's time zone, for a component. */
-export function useFirmToday(): IsoDate {
-  return todayIn(useFirmZone(), new Date());
-}
