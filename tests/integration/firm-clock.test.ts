@@ -197,6 +197,17 @@ describe('documents that never change', () => {
     expect(await pdfText(consultant, `/api/proposals/${fresh.body.data.id}/pdf`)).toContain('Sanctuary');
   });
 
+  it('a version sent before plans were frozen is frozen the first time its PDF is made', async () => {
+    const { Proposal } = await import('../../server/models');
+    const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, {});
+    expect((await send(consultant, 'post', `/api/proposals/${draft.body.data.id}/send`)).status).toBe(200);
+    await Proposal.update({ planSnapshot: null }, { where: { id: draft.body.data.id } }); // as a row from before migration 0012
+    const first = await pdfText(consultant, `/api/proposals/${draft.body.data.id}/pdf`);
+    expect((await Proposal.findByPk(draft.body.data.id))!.planSnapshot).not.toBeNull();
+    await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'water', name: 'New pond', geometry: rectangle(-90.9395, 43.2690, 120, 90) });
+    expect(await pdfText(consultant, `/api/proposals/${draft.body.data.id}/pdf`)).toBe(first);
+  });
+
   it('a sent invoice’s PDF keeps the names it was issued with', async () => {
     const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 25 });
     // Only one draft at a time per series is fine; this is a new series.

@@ -42,6 +42,8 @@ export async function invoiceDocumentSnapshot(invoice: Invoice, transaction?: Tr
  * changes to the firm, client or property never alter it; status, payments and balance are live.
  */
 export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transaction): Promise<Buffer> {
+  // An invoice issued before snapshots were kept is frozen the first time its PDF is made.
+  if (invoice.status !== 'draft' && !invoice.documentSnapshot) await invoice.update({ documentSnapshot: await invoiceDocumentSnapshot(invoice, transaction) }, { transaction });
   const [issued, payments, firm] = await Promise.all([
     invoice.documentSnapshot ? Promise.resolve(invoice.documentSnapshot) : invoiceDocumentSnapshot(invoice, transaction),
     InvoicePayment.findAll({ where: { invoiceId: invoice.id }, order: [['receivedAt', 'ASC']], transaction }),

@@ -8,6 +8,8 @@ import { stripCrs } from '../../presenters/geojson';
 import { loadPlan } from '../plan/plan-reader';
 import { presentUnit } from '../../presenters/unit';
 import { unprocessable } from '../../errors';
+import { sequelize } from '../../db/sequelize';
+import { takePlanSnapshot } from './plan-snapshot';
 import { usableZone } from '../clock';
 import { todayIn } from '../../../shared/domain/clock';
 import type { PlanSnapshot } from '../../../shared/domain/proposal-totals';
@@ -33,6 +35,11 @@ async function livePlan(proposal: Proposal, transaction?: Transaction): Promise<
  * version was sent (a draft shows the live plan), so a sent or approved proposal reads the same forever.
  */
 export async function renderProposalPdfFor(proposal: Proposal, transaction?: Transaction): Promise<Buffer> {
+  // A version sent before plans were frozen is frozen the first time its PDF is made.
+  if (proposal.status !== 'draft' && !proposal.planSnapshot) {
+    const freeze = async (t: Transaction) => proposal.update({ planSnapshot: await takePlanSnapshot(proposal, t) }, { transaction: t });
+    await (transaction ? freeze(transaction) : sequelize.transaction(freeze));
+  }
   const dto = await readProposal(proposal, transaction);
   const [firm, plan] = await Promise.all([Firm.findByPk(proposal.firmId, { transaction }), proposal.planSnapshot ? Promise.resolve(proposal.planSnapshot) : livePlan(proposal, transaction)]);
   const { property } = plan;
