@@ -10,7 +10,7 @@ import { unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { todayIso } from './prescription-writer';
 import { enqueueEmail } from '../services/mail/outbox';
-import { deleteFile, readFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, readFile, saveFile } from '../services/storage/storage';
 import { readSeasonSummary } from '../services/results/results-reader';
 import { renderSeasonReportPdf, type SeasonReportDocumentInput } from '../../templates/documents/season-report';
 import { seasonReportSentEmail } from '../../templates/email/season-report-sent';

@@ -19,7 +19,7 @@ import { createHarvest, createSurvey, deleteHarvest, deleteSurvey, updateHarvest
 import { deleteSeasonReport, makeSeasonReport, sendSeasonReport } from '../commands/season-report-maker';
 import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
 import { presentHarvest, presentSeasonReport } from '../presenters/results';
-import { readFile } from '../services/storage/disk-storage';
+import { sendStoredFile } from '../services/storage/storage';
 
 const perProperty = defineRoutes('/properties');
 const surveys = defineRoutes('/surveys');
@@ -128,10 +128,9 @@ reports.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), 
   if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null)) throw notFound('That season report');
   const file = await SharedFile.findByPk(report.sharedFileId);
   if (!file) throw notFound('That season report’s PDF');
-  const pdf = await readFile(file.storageKey);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="season-report-${report.season}.pdf"`);
-  res.send(pdf);
+  await sendStoredFile(res, file.storageKey);
 });
 
 reports.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
