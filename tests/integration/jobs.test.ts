@@ -7,7 +7,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, type Agent } from '../support/test-app';
 import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
-import { BackgroundJob, OutboxMessage, Practice } from '../../server/models';
+import { OutboxMessage, Practice } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
 import { config } from '../../server/config';
 import { deliverJob, enqueueJob, waitForJob } from '../../server/services/jobs/job-queue';
