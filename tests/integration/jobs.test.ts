@@ -10,7 +10,7 @@ import { rectangle } from '../support/geodesy';
 import { OutboxMessage, Practice } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
 import { config } from '../../server/config';
-import { deliverJob, enqueueJob, waitForJob } from '../../server/services/jobs/job-queue';
+import { deliverJob, enqueueJob, startJobQueue, waitForJob } from '../../server/services/jobs/job-queue';
 import { JobDtoSchema } from '../../shared/schemas/job';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
@@ -81,6 +81,14 @@ describe('a job that fails', () => {
     expect(retried.body.data).toMatchObject({ status: 'queued', lastError: null });
     const again = await waitForJob(job.id, 15_000);
     expect(again).toMatchObject({ status: 'failed', attempts: 2 });
+  });
+});
+
+describe('the queue', () => {
+  it('survives an error from its database connection (logged, never thrown)', async () => {
+    const queue = await startJobQueue();
+    // An EventEmitter 'error' without a listener throws and, in a server, ends the process.
+    expect(() => queue.emit('error', new Error('Connection terminated unexpectedly'))).not.toThrow();
   });
 });
 

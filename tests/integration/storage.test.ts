@@ -10,7 +10,7 @@ import { signedInAgent, type Agent } from '../support/test-app';
 import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { startS3Fake, type S3Fake } from '../support/s3-fake';
-import { SharedFile, Task, TaskPhoto } from '../../server/models';
+import { OutboxMessage, SharedFile, Task, TaskPhoto } from '../../server/models';
 import { createS3Storage } from '../../server/services/storage/s3-storage';
 import { saveFile, storage, useStorage, type Storage } from '../../server/services/storage/storage';
 import { sweepOrphanFiles } from '../../server/services/storage/orphan-sweeper';
@@ -101,6 +101,12 @@ describe('STORAGE=s3', () => {
     expect(images.split('\n').filter((l) => /^\s+\d+\s+\d+\s+image/.test(l)).length).toBe(1); // the photo from the bucket
     const reportFile = await SharedFile.findOne({ where: { propertyId, category: 'season-report' } });
     expect((await elsewhere.get(reportFile!.storageKey)).equals(pdf.body as Buffer)).toBe(true);
+
+    // Sending reads the PDF back from the bucket and attaches it.
+    const sent = await send(consultant, 'post', `/api/season-reports/${made.body.data.id}/send`);
+    expect(sent.status).toBe(200);
+    const mail = await OutboxMessage.findOne({ where: { kind: 'season-report-sent', toAddress: ctx.users.client.email } });
+    expect(Buffer.from(mail!.attachments[0].contentBase64, 'base64').equals(pdf.body as Buffer)).toBe(true);
   });
 
   it('sweeps files no row points to once they are older than the grace period, and keeps the rest', async () => {
