@@ -2,7 +2,7 @@
  * Two app processes on one test database, each with its own upload folder, files in the S3 fake,
  * and one browser's cookie jar alternating between them: sign-in, CSRF, the sign-in limit, uploads
  * and downloads, plan edits and reads, a payment webhook to the other instance, e-mails exactly
- * once, and SIGTERM with uploads in flight.
+ * once (the PDF made by a separate `npm run worker` process), and SIGTERM with uploads in flight.
  */
 import fs from 'node:fs';
 import http from 'node:http';
@@ -13,7 +13,7 @@ import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { capturedMailTo } from '../support/test-app';
 import { startS3Fake, type S3Fake } from '../support/s3-fake';
-import { CookieJar, freePort, startAppProcess, startUpload, stopAppProcess, type AppProcess } from '../support/app-process';
+import { CookieJar, freePort, startAppProcess, startUpload, startWorkerProcess, stopAppProcess, type AppProcess } from '../support/app-process';
 import { createPaymentsFake, type PaymentsFake } from '../../server/scripts/payments-fake/app';
 import { config } from '../../server/config';
 import { Invoice, OutboxMessage, Practice, SharedFile } from '../../server/models';
@@ -27,6 +27,8 @@ let payments: PaymentsFake;
 let paymentsServer: http.Server;
 let a: AppProcess;
 let b: AppProcess;
+/** `npm run worker`: the only process that takes jobs here (both app instances run with JOB_WORKERS_IN_APP=false). */
+let worker: AppProcess;
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
 let propertyId: number;
 const folders: string[] = [];
@@ -55,10 +57,15 @@ beforeAll(async () => {
     LOGIN_RATE_MAX: '3',
     PAYMENTS_API_BASE: paymentsUrl,
     SHUTDOWN_GRACE_MS: '20000',
-    LOG_LEVEL: 'info',
+    LOG_LEVEL: 'warn',
+    JOB_WORKERS_IN_APP: 'false',
   };
   for (const name of ['a', 'b']) folders.push(fs.mkdtempSync(path.join(os.tmpdir(), `browseline-uploads-${name}-`)));
-  [a, b] = await Promise.all([startAppProcess('instance A', { ...shared, UPLOADS_DIR: folders[0] }), startAppProcess('instance B', { ...shared, UPLOADS_DIR: folders[1] })]);
+  [a, b, worker] = await Promise.all([
+    startAppProcess('instance A', { ...shared, UPLOADS_DIR: folders[0] }),
+    startAppProcess('instance B', { ...shared, UPLOADS_DIR: folders[1] }),
+    startWorkerProcess('job worker', { ...shared, UPLOADS_DIR: folders[1] }),
+  ]);
   payments = createPaymentsFake({ webhookUrl: `${b.url}/api/webhooks/payments`, webhookSecret: config.payments.webhookSecret, webhookRetryDelaysMs: [5, 10, 20], log: () => undefined });
   paymentsServer = http.createServer(payments.app);
   await new Promise<void>((resolve) => paymentsServer.listen(paymentsPort, '127.0.0.1', resolve));
@@ -68,7 +75,7 @@ beforeAll(async () => {
 }, 120_000);
 
 afterAll(async () => {
-  await Promise.all([stopAppProcess(a), stopAppProcess(b)]);
+  await Promise.all([stopAppProcess(a), stopAppProcess(b), stopAppProcess(worker)]);
   await payments?.state.idle();
   payments?.state.close();
   await new Promise((resolve) => paymentsServer?.close(resolve));
@@ -129,6 +136,7 @@ describe('two instances, one cookie jar', () => {
     expect(drafted.status).toBe(201);
     const sent = await json(await staff.fetch(b.url, `/api/proposals/${drafted.body.data.id}/send`, { method: 'POST', body: '{}' }));
     expect(sent.status).toBe(200);
+    expect(sent.body.job?.status).toBe('done'); // rendered and queued by the separate worker process
 
     // Both instances poll the outbox; wait until the message is marked sent, then count deliveries.
     for (let round = 0; ; round++) {

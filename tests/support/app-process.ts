@@ -33,6 +33,15 @@ export interface AppProcess {
 
 /** Starts `node --import tsx server/index.ts` with the given environment and waits until its health answers 200. */
 export async function startAppProcess(name: string, env: Record<string, string>): Promise<AppProcess> {
+  return startProcess(name, 'server/index.ts', env);
+}
+
+/** Starts the job worker alone (`server/worker.ts`, what `npm run worker` runs) and waits until it takes jobs. */
+export async function startWorkerProcess(name: string, env: Record<string, string>): Promise<AppProcess> {
+  return startProcess(name, 'server/worker.ts', { ...env, LOG_LEVEL: 'info' });
+}
+
+async function startProcess(name: string, script: string, env: Record<string, string>): Promise<AppProcess> {
   const port = await freePort();
   const output: string[] = [];
   const childEnv: NodeJS.ProcessEnv = { ...process.env, ...env, PORT: String(port), HOST: '127.0.0.1' };
@@ -40,7 +49,7 @@ export async function startAppProcess(name: string, env: Record<string, string>)
   delete childEnv.VITEST_POOL_ID;
   delete childEnv.VITEST_WORKER_ID;
   // node itself with tsx's loader (not the tsx wrapper), so signals reach the server and nothing outlives a kill.
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server/index.ts')], { cwd: root, env: childEnv, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, script)], { cwd: root, env: childEnv, stdio: ['ignore', 'pipe', 'pipe'] });
   child.stdout!.on('data', (d: Buffer) => output.push(d.toString()));
   child.stderr!.on('data', (d: Buffer) => output.push(d.toString()));
   const exited = new Promise<number | null>((resolve) => child.once('exit', (code) => resolve(code)));
@@ -49,7 +58,7 @@ export async function startAppProcess(name: string, env: Record<string, string>)
   void exited.then(() => (ended = true));
   for (;;) {
     if (ended) throw new Error(`${name} exited before it was ready:\n${output.join('')}`);
-    const ok = await fetch(`${url}/api/health`).then((r) => r.status === 200, () => false);
+    const ok = script.endsWith('worker.ts') ? output.join('').includes('job worker is running') : await fetch(`${url}/api/health`).then((r) => r.status === 200, () => false);
     if (ok) break;
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
