@@ -105,11 +105,15 @@ export async function startJobQueue(options: { workers?: boolean; install?: bool
       for (const kind of KINDS) {
         workerIds.set(kind, await b.work<Record<string, unknown>>(kind, { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: config.jobs.pollSeconds }, ([job]) => deliverJob(kind, job)));
       }
-      const { sweepOrphanFiles } = await import('../storage/orphan-sweeper');
-      await b.schedule(SWEEP_QUEUE, '17 * * * *');
-      await b.work(SWEEP_QUEUE, { pollingIntervalSeconds: 30 }, async () => {
-        await sweepOrphanFiles();
-      });
+      // The hourly sweep of orphaned files; never in tests, whose database does not know the files
+      // a development server keeps in the same default folder.
+      if (!config.isTest) {
+        const { sweepOrphanFiles } = await import('../storage/orphan-sweeper');
+        await b.schedule(SWEEP_QUEUE, '17 * * * *');
+        await b.work(SWEEP_QUEUE, { pollingIntervalSeconds: 30 }, async () => {
+          await sweepOrphanFiles();
+        });
+      }
     }
     boss = b;
     return b;
