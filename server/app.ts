@@ -16,6 +16,7 @@ import { notFound } from './errors';
 import { LIMITS } from '../shared/limits';
 import { apiRouters } from './routes';
 import { allowedTileOrigins } from './services/imagery/tile-origins';
+import { closeConnectionsWhileDraining } from './lifecycle';
 import './models';
 
 let sessionPool: pg.Pool | null = null;
@@ -36,6 +37,8 @@ export function createApp(): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
+  // Shutting down: answers ask keep-alive clients to reconnect (to another instance).
+  app.use(closeConnectionsWhileDraining);
 
   app.use(
     helmet({

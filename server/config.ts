@@ -37,6 +37,33 @@ export const config = {
   reminderPollMs: int(env.REMINDER_POLL_MS, 60 * 60 * 1000),
   loginRateLimit: { windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000), max: int(env.LOGIN_RATE_MAX, 10) },
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
+  /** Where files live: 'disk' (UPLOADS_DIR, one machine) or 's3' (object storage shared by every instance). */
+  storage: {
+    kind: (env.STORAGE === 's3' ? 's3' : 'disk') as 'disk' | 's3',
+    s3: {
+      bucket: env.S3_BUCKET ?? 'browseline',
+      region: env.S3_REGION ?? 'us-east-1',
+      endpoint: env.S3_ENDPOINT ?? '',
+      accessKeyId: env.S3_ACCESS_KEY_ID ?? env.AWS_ACCESS_KEY_ID ?? '',
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? env.AWS_SECRET_ACCESS_KEY ?? '',
+      forcePathStyle: env.S3_FORCE_PATH_STYLE ? env.S3_FORCE_PATH_STYLE === 'true' : undefined,
+      prefix: env.S3_PREFIX ?? '',
+    },
+  },
+  /** Migrations at start-up (one machine); production runs `npm run db:migrate` as its own step and sets false. */
+  migrateOnStart: env.MIGRATE_ON_START !== 'false',
+  /** A direct connection (not through PgBouncer) for migrations and their advisory lock. */
+  migrationDatabaseUrl: env.MIGRATION_DATABASE_URL || env.DATABASE_URL || 'postgres://postgres@127.0.0.1:54329/browseline',
+  /** How long a SIGTERM waits for requests in flight (and running jobs) before closing anyway. */
+  shutdownGraceMs: int(env.SHUTDOWN_GRACE_MS, 25_000),
+  /** Background jobs (pg-boss): run the workers in this process ('true') or only in `npm run worker`. */
+  jobs: {
+    workersInApp: env.JOB_WORKERS_IN_APP !== 'false',
+    schema: env.JOB_SCHEMA ?? 'pgboss',
+    pollSeconds: Math.max(0.5, Number(env.JOB_POLL_SECONDS ?? 2) || 2),
+    /** How long a request that started a job waits for it before answering 202 with the job to poll. */
+    waitMs: int(env.JOB_WAIT_MS, 20_000),
+  },
   clientDist: path.join(projectRoot, 'dist'),
   payments: {
     secretKey: env.PAYMENTS_SECRET_KEY ?? 'sk_test_browseline_local',

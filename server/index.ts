@@ -1,4 +1,4 @@
-/** Starts the HTTP server and the outbox worker. */
+/** Starts the HTTP server, the outbox and reminder pollers and (by default) the job workers. */
 import { createApp, closeSessionPool } from './app';
 import { config } from './config';
 import { logger } from './logger';
@@ -6,8 +6,10 @@ import { migrateUp } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { startOutboxWorker } from './services/mail/outbox';
 import { startReminderJob } from './commands/reminder-sender';
+import { startJobQueue, stopJobQueue } from './services/jobs/job-queue';
+import { beginDraining, closeServerGracefully } from './lifecycle';
 
-if (process.env.MIGRATE_ON_START !== 'false') {
+if (config.migrateOnStart) {
   const applied = await migrateUp();
   if (applied.length) logger.info({ applied }, 'migrations applied');
 }
@@ -18,14 +20,27 @@ const server = app.listen(config.port, config.host, () => {
 });
 const stopOutbox = startOutboxWorker();
 const stopReminders = startReminderJob();
+// The queue starts in the background: a database outage at boot is logged, never a crash.
+startJobQueue().catch((err) => logger.error({ err }, 'job queue did not start; jobs wait until it does'));
 
+let stopping = false;
+/**
+ * SIGTERM: health answers 503 at once, requests in flight finish (up to SHUTDOWN_GRACE_MS), jobs
+ * under way finish or go back to the queue, and only then do the pools close.
+ */
 async function shutdown(signal: string) {
-  logger.info({ signal }, 'shutting down');
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, 'shutting down: draining requests in flight');
+  beginDraining();
   stopOutbox();
   stopReminders();
-  server.close();
+  const { timedOut } = await closeServerGracefully(server, config.shutdownGraceMs);
+  if (timedOut) logger.warn({ graceMs: config.shutdownGraceMs }, 'requests still in flight were cut at the shutdown limit');
+  await stopJobQueue(config.shutdownGraceMs);
   await closeSessionPool().catch(() => undefined);
   await sequelize.close().catch(() => undefined);
+  logger.info('stopped');
   process.exit(0);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));

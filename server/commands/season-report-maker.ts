@@ -2,7 +2,7 @@
  * Season reports: makes the PDF for a property's season (kept as a shared file of category
  * 'season-report', private to the firm until sent) and sends it to the landowner through the outbox.
  */
-import { Client, Firm, Property, SeasonReport, SharedFile, type TaskPhoto } from '../models';
+import { Client, Firm, Property, SeasonReport, SharedFile, type BackgroundJob, type TaskPhoto } from '../models';
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
@@ -10,7 +10,7 @@ import { conflict, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { firmToday } from '../services/clock';
 import { enqueueEmail } from '../services/mail/outbox';
-import { deleteFile, readFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, readFile, saveFile } from '../services/storage/storage';
 import { readSeasonSummary } from '../services/results/results-reader';
 import { renderSeasonReportPdf, type SeasonReportDocumentInput } from '../../templates/documents/season-report';
 import { seasonReportSentEmail } from '../../templates/email/season-report-sent';
@@ -20,6 +20,7 @@ import type { SessionUser } from '../../shared/schemas/auth';
 import { config } from '../config';
 import { logger } from '../logger';
 import { clientRecipients } from '../services/mail/client-recipients';
+import { enqueueJob, type JobContext } from '../services/jobs/job-queue';
 
 /** Photos larger than this are left out of the PDF (a report should stay small enough to e-mail). */
 const MAX_PHOTO_BYTES = 4 * 1024 * 1024;
@@ -66,14 +67,46 @@ export async function seasonReportInput(property: Property, season: number, reco
   };
 }
 
-/** Makes the season report PDF and keeps it (private to the firm until sent). */
-export async function makeSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null): Promise<SeasonReport> {
+export interface SeasonReportJobData {
+  actor: SessionUser;
+  propertyId: number;
+  season: number;
+  recommendations: string | null;
+  ip: string | null;
+}
+
+/** Hands the making of a season report to a background job (checked first: the property is the firm's). */
+export async function requestSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null): Promise<BackgroundJob> {
+  return sequelize.transaction(async (transaction) => {
+    const property = await findInFirm(Property, propertyId, actor.firmId, 'That property', { transaction });
+    const data: SeasonReportJobData = { actor, propertyId: property.id, season: input.season, recommendations: input.recommendations ?? null, ip };
+    return enqueueJob(
+      { kind: 'season-report', firmId: actor.firmId, createdById: actor.id, title: `Season report ${seasonRange(input.season).label} — ${property.name}`, subject: { type: 'Property', id: property.id }, data: data as unknown as Record<string, unknown> },
+      transaction,
+    );
+  });
+}
+
+/** The 'season-report' job: makes the report once, however often the job is delivered. */
+export async function makeSeasonReportJob(data: SeasonReportJobData, job: JobContext): Promise<void> {
+  await makeSeasonReport(data.actor, data.propertyId, { season: data.season, recommendations: data.recommendations }, data.ip, job);
+}
+
+/**
+ * Makes the season report PDF and keeps it (private to the firm until sent). In a job, progress is
+ * reported and the rows are written by the job's finish (nothing twice; answers null if done before).
+ */
+export async function makeSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null, job?: JobContext): Promise<SeasonReport | null> {
   const property = await findInFirm(Property, propertyId, actor.firmId, 'That property');
   const recommendations = input.recommendations ?? null;
-  const pdf = await renderSeasonReportPdf(await seasonReportInput(property, input.season, recommendations));
+  await job?.progress(10, 'Reading the season');
+  const documentInput = await seasonReportInput(property, input.season, recommendations);
+  await job?.progress(40, 'Drawing the PDF');
+  const pdf = await renderSeasonReportPdf(documentInput);
+  await job?.progress(80, 'Storing the PDF');
   const storageKey = await saveFile('files', pdf, 'pdf');
   try {
-    return await sequelize.transaction(async (transaction) => {
+    const write = async (transaction: Transaction) => {
       const label = seasonRange(input.season).label;
       const file = await SharedFile.create(
         {
@@ -98,7 +131,11 @@ export async function makeSeasonReport(actor: SessionUser, propertyId: number, i
       );
       await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.created', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId, season: input.season }, ip }, transaction);
       return report;
-    });
+    };
+    const report = job ? await job.finish(write, (r) => ({ seasonReportId: r.id })) : await sequelize.transaction(write);
+    // Another delivery of the same job made the report already: this PDF is not needed.
+    if (!report) await deleteFile(storageKey);
+    return report;
   } catch (err) {
     await deleteFile(storageKey);
     throw err;

@@ -11,7 +11,7 @@ import { plannedOrScheduled, progressOf } from '../../shared/domain/tasks';
 import { addDays } from '../../shared/domain/planting-windows';
 import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { deleteFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, saveFile } from '../services/storage/storage';
 import type { InspectedPhoto } from '../services/tasks/photo-intake';
 import { enqueueEmail } from '../services/mail/outbox';
 import { unitDoneEmail } from '../../templates/email/unit-done';

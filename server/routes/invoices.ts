@@ -3,6 +3,8 @@ import type { Request } from 'express';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { waitForJob } from '../services/jobs/job-queue';
+import { presentJob } from '../presenters/job';
 import { Invoice, Task } from '../models';
 import { sequelize } from '../db/sequelize';
 import { IdParamsSchema } from '../../shared/schemas/common';
@@ -100,7 +102,10 @@ r.delete('/:id/lines/:lineId', STAFF, validate({ params: LineParamsSchema }), as
 });
 
 r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  res.json({ data: await readInvoice(await sendInvoice(actor(req), Number(req.params.id), req.ip ?? null)) });
+  const { invoice, job } = await sendInvoice(actor(req), Number(req.params.id), req.ip ?? null);
+  // The PDF and e-mail are a job; a quick one is finished before the answer, which names it either way.
+  const settled = await waitForJob(job.id);
+  res.json({ data: await readInvoice(invoice), job: presentJob(settled ?? job) });
 });
 
 r.post('/:id/void', STAFF, validate({ params: IdParamsSchema, body: VoidSchema }), async (req, res) => {

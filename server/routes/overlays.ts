@@ -10,7 +10,7 @@ import { GEOMETRY_LIMITS } from '../../shared/limits';
 import { presentOverlay } from '../presenters/firm';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { prepareOverlay } from '../services/imagery/overlay-image';
-import { deleteFile, readFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, saveFile, sendStoredFile } from '../services/storage/storage';
 import { sequelize } from '../db/sequelize';
 import { badRequest, unprocessable } from '../errors';
 import { recordAudit } from '../commands/audit-recorder';
@@ -81,7 +81,7 @@ r.get('/:id/image', STAFF, validate({ params: IdParamsSchema }), async (req, res
   res.setHeader('Content-Type', overlay.contentType);
   res.setHeader('Cache-Control', 'private, max-age=86400');
   res.setHeader('X-Content-Type-Options', 'nosniff');
-  res.send(await readFile(overlay.storageKey));
+  await sendStoredFile(res, overlay.storageKey);
 });
 
 export const propertyOverlaysRouter = perProperty.router;

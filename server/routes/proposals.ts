@@ -4,6 +4,8 @@ import { Op, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { waitForJob } from '../services/jobs/job-queue';
+import { presentJob } from '../presenters/job';
 import { Client, Property, Proposal } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { ApproveSchema, DeclineSchema, ProposalCreateSchema, ProposalListQuerySchema, ProposalUpdateSchema } from '../../shared/schemas/proposal';
@@ -114,8 +116,10 @@ r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ProposalUpdateSc
 });
 
 r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const proposal = await sendProposal(actor(req), Number(req.params.id), req.ip ?? null);
-  res.json({ data: await readProposal(proposal) });
+  const { proposal, job } = await sendProposal(actor(req), Number(req.params.id), req.ip ?? null);
+  // The PDF and e-mail are a job; a quick one is finished before the answer, which names it either way.
+  const settled = await waitForJob(job.id);
+  res.json({ data: await readProposal(proposal), job: presentJob(settled ?? job) });
 });
 
 r.post('/:id/revise', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {

@@ -13,7 +13,7 @@ import { completeTask, reopenTask, skipTask, taskForActor, updateTask } from '..
 import { listTasks, readTask } from '../services/tasks/task-reader';
 import { inspectPhoto } from '../services/tasks/photo-intake';
 import { propertyProgress } from '../services/tasks/progress';
-import { readFile } from '../services/storage/disk-storage';
+import { sendStoredFile } from '../services/storage/storage';
 import { badRequest, notFound, unprocessable } from '../errors';
 
 const r = defineRoutes('/tasks');
@@ -91,7 +91,7 @@ photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], validate({ p
   res.setHeader('Content-Type', photo.contentType);
   res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
   res.setHeader('Content-Disposition', 'inline');
-  res.send(await readFile(photo.storageKey));
+  await sendStoredFile(res, photo.storageKey);
 });
 
 perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {

@@ -6,7 +6,7 @@ import { deliverAllMail } from '../support/test-app';
 import { makeClient, makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { OutboxMessage, Property, SharedFile, Task, TaskPhoto } from '../../server/models';
-import { saveFile } from '../../server/services/storage/disk-storage';
+import { saveFile } from '../../server/services/storage/storage';
 import { SurveyCreateSchema } from '../../shared/schemas/results';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;

@@ -8,6 +8,7 @@ import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
 import { Property } from '../../models';
 import { notFound } from '../../errors';
+import { buildId } from '../../build-id';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
 import { planWarnings, shareByKind } from '../../../shared/domain/plan-checks';
 import type { PlanSummary } from '../../../shared/schemas/unit';
@@ -56,8 +57,8 @@ export async function loadPlan(propertyId: number, firmId: number, options: { le
   };
 }
 
-/** A weak ETag that changes with every write to the plan. */
-export const planEtag = (plan: LoadedPlan): string => `W/"plan-${plan.property.id}-r${plan.revision}"`;
+/** A weak ETag that changes with every write to the plan and with every build (a new answer format is never a 304). */
+export const planEtag = (plan: LoadedPlan): string => `W/"plan-${plan.property.id}-r${plan.revision}-${buildId}"`;
 
 /** The serialised `{ data: UnitDto[] }` answer of the plan's units, as bytes ready to send. */
 export function unitsJson(plan: LoadedPlan): Promise<Buffer> {

@@ -12,6 +12,7 @@ import { Button } from '../../../components/ui/button';
 import { useToast } from '../../../components/ui/toast';
 import { formatRelative } from '../../../lib/format';
 import { paths } from '../../../config/paths';
+import { JobsCard } from '../../../features/jobs/components/jobs-card';
 import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Client contact' };
@@ -132,6 +133,7 @@ export function TeamPage() {
           </table>
         )}
       </Card>
+      <JobsCard />
     </div>
   );
 }

@@ -8,6 +8,7 @@ import { useToast } from '../../../components/ui/toast';
 import { formatDate } from '../../../lib/format';
 import { useCreateSeasonReport, useSendSeasonReport } from '../api/season-reports';
 import { firmToday } from '../../../lib/firm-clock';
+import type { JobDto } from '../../../../shared/schemas/job';
 
 /** The hunting season (July–June) of today, named by the year it starts. */
 export function currentSeason(today: string = firmToday()): number {
@@ -48,11 +49,13 @@ export function SeasonReportsCard({ propertyId, reports, seasons }: { propertyId
   const choices = [...new Set([currentSeason(), ...seasons])].sort((a, b) => b - a);
   const [season, setSeason] = useState(choices[0]);
   const [recommendations, setRecommendations] = useState('');
+  const [progress, setProgress] = useState<JobDto | null>(null);
   const label = (s: number) => `${s}–${String((s + 1) % 100).padStart(2, '0')}`;
   const makeReport = () =>
     make.mutate(
-      { propertyId, season, recommendations: recommendations.trim() || null },
+      { propertyId, season, recommendations: recommendations.trim() || null, onProgress: setProgress },
       {
+        onSettled: () => setProgress(null),
         onSuccess: (r) => toast('success', `Season report ${r.seasonLabel} made. Preview it, then send it to the client.`),
         onError: (e) => toast('error', `The report was not made: ${e.message}`),
       },
@@ -83,6 +86,11 @@ export function SeasonReportsCard({ propertyId, reports, seasons }: { propertyId
       <Button className="mt-3" busy={make.isPending} onClick={makeReport}>
         Make season report
       </Button>
+      {make.isPending && progress ? (
+        <p className="mt-2 text-sm text-slate" role="status">
+          Making the report… {progress.progress} %{progress.step ? ` · ${progress.step}` : ''}
+        </p>
+      ) : null}
       <div className="mt-4">
         {reports.length === 0 ? (
           <EmptyState title="No season report yet">Make one when the season closes: work done, surveys, harvest and your recommendations, as a PDF.</EmptyState>
