@@ -92,7 +92,7 @@ async function phone(): Promise<{ context: BrowserContext; page: Page; assertCle
 
 async function openTask(page: Page, task: ApiTask): Promise<void> {
   await page.goto(`${baseUrl}/field`);
-  await page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} — ${task.unitName}`) }).click();
+  await page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}.*${task.unitName}`) }).click();
   await page.waitForURL(new RegExp(`/field/tasks/${task.id}$`));
   await poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(task.name);
 }
@@ -206,7 +206,7 @@ describe('the crew’s field sheet on a phone', () => {
     // The field sheet (reached inside the app, no reload) shows the pending count and the card as waiting.
     await page.getByRole('link', { name: '← Field sheet' }).click();
     await poll(() => page.getByTestId('pending-count').textContent()).toBe('1');
-    const card = page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} — `) });
+    const card = page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) });
     await poll(() => card.getByText('Done (waiting to send)').count()).toBe(1);
     expect(await fitsWidth(page)).toBe(true);
     await screenshot(page, 'field-offline-home-360');

@@ -46,6 +46,7 @@ let propertyId = 0;
 let propertyName = '';
 let crewId = 0;
 let task: Task;
+let second: Task;
 let consultantApi: Awaited<ReturnType<typeof apiSession>>;
 
 beforeAll(async () => {
@@ -75,6 +76,7 @@ beforeAll(async () => {
   const open = tasks.filter((t) => t.status === 'planned' && t.assigneeId === null && t.unitName === 'Club plot').sort((a, b) => a.earliest.localeCompare(b.earliest));
   expect(open.length).toBeGreaterThan(1);
   task = open[0];
+  second = open[1];
 });
 
 afterAll(async () => {
@@ -140,6 +142,39 @@ describe('the consultant’s schedule', () => {
     await daySection.locator(`[data-task-id="${task.id}"]`).waitFor(WAIT);
     expect(await daySection.locator(`[data-task-id="${task.id}"]`).textContent()).toContain('Rosa Quintero');
     await screenshot(page, 'schedule-week-list');
+    watch.assertClean();
+    await context.close();
+  });
+
+  it('saves a crew member and a note on the first Save; after a reload the panel shows both', async () => {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.goto(`${baseUrl}/schedule?property=${propertyId}&view=timeline&from=${second.earliest}&to=${addDays(second.earliest, 77)}`);
+    await page.locator(`[data-task-id="${second.id}"]`).click(WAIT);
+    const panel = page.getByRole('dialog', { name: second.name });
+    await panel.getByLabel('Crew member', { exact: true }).selectOption({ label: 'Rosa Quintero' });
+    const note = 'The gate is chained; the key hangs in the shed.';
+    await panel.getByLabel('Notes for the crew', { exact: true }).fill(note);
+    await panel.getByRole('button', { name: 'Save' }).click();
+    // One press: saved, no "Nothing changed".
+    await expect.poll(async () => (await json<Task & { notes: string | null }>(await consultantApi.request.get(`${baseUrl}/api/tasks/${second.id}`))).notes, WAIT).toBe(note);
+    expect(await panel.getByText(/Nothing changed/).count()).toBe(0);
+    expect((await json<Task>(await consultantApi.request.get(`${baseUrl}/api/tasks/${second.id}`))).assigneeId).toBe(crewId);
+
+    // A reload opens the same panel (the task is in the address); the picker and the note show what was saved.
+    await page.reload();
+    const again = page.getByRole('dialog', { name: second.name });
+    await again.getByLabel('Notes for the crew', { exact: true }).waitFor(WAIT);
+    await expect.poll(() => again.getByLabel('Crew member', { exact: true }).evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]?.textContent), WAIT).toBe('Rosa Quintero');
+    expect(await again.getByLabel('Notes for the crew', { exact: true }).inputValue()).toBe(note);
+    await screenshot(page, 'schedule-panel-after-reload');
+    // Unassign it again so the later steps find the task as the seed left it.
+    await again.getByLabel('Crew member', { exact: true }).selectOption({ label: 'Unassigned' });
+    await again.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(async () => (await json<Task>(await consultantApi.request.get(`${baseUrl}/api/tasks/${second.id}`))).assigneeId, WAIT).toBe(null);
     watch.assertClean();
     await context.close();
   });
