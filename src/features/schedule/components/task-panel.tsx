@@ -2,7 +2,7 @@ import { useEffect, useId, useRef, useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { TaskUpdateSchema, type TaskDto, type TaskUpdateInput } from '../../../../shared/schemas/task';
+import { TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatMonthDay } from '../../../../shared/domain/planting-windows';
 import { Button } from '../../../components/ui/button';
@@ -69,7 +69,7 @@ function ScheduleForm({ task, people }: { task: TaskDto; people: readonly Assign
         control={form.control}
         name="assigneeId"
         render={({ field }) => (
-          <SelectField label="Crew member" error={errors.assigneeId?.message} name={field.name} ref={field.ref} onBlur={field.onBlur} value={field.value ?? ''} onChange={(e) => field.onChange(idOrNull(e.target.value))}>
+          <SelectField label="Crew member" error={errors.assigneeId?.message} name={field.name} ref={field.ref} onBlur={field.onBlur} value={field.value === null || field.value === undefined ? '' : String(field.value)} onChange={(e) => field.onChange(idOrNull(e.target.value))}>
             <option value="">Unassigned</option>
             {task.assigneeId !== null && !people.some((p) => p.id === task.assigneeId) ? <option value={task.assigneeId}>{task.assigneeName ?? 'The crew member now assigned'}</option> : null}
             {crew.length > 0 ? (
