@@ -10,6 +10,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { request, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
+import { expectNoAxeViolations } from '../support/axe';
 
 const baseUrl = inject('baseUrl');
 const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
@@ -83,7 +84,8 @@ afterAll(async () => {
 
 /** A phone: 360 × 740, touch, in the demo firm's time zone (behind UTC, like the server's calendar or earlier). */
 async function phone(): Promise<{ context: BrowserContext; page: Page; assertClean: () => void }> {
-  const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, timezoneId: 'America/Chicago' });
+  // bypassCSP only lets the journey inject axe-core; the app's own CSP is unchanged.
+  const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, timezoneId: 'America/Chicago', bypassCSP: true });
   const page = await context.newPage();
   const { errors } = watchPage(page);
   // Requests that fail while the phone is offline are the point of the second journey, not errors.
@@ -109,6 +111,7 @@ describe('the crew’s field sheet on a phone', () => {
     expect(await page.getByText('$').count()).toBe(0); // crew never see prices
     expect(await fitsWidth(page)).toBe(true);
     await screenshot(page, 'field-home-360');
+    await expectNoAxeViolations(page, 'the field sheet');
 
     const task = tasks[0];
     await openTask(page, task);
@@ -118,6 +121,7 @@ describe('the crew’s field sheet on a phone', () => {
     await expect.poll(() => page.getByRole('img', { name: /Map of Club plot/ }).count()).toBe(1);
     expect(await page.getByText('$').count()).toBe(0);
     await screenshot(page, 'field-task-360');
+    await expectNoAxeViolations(page, 'a field sheet task');
 
     await page.getByRole('button', { name: 'Mark done' }).click();
     const form = page.getByRole('form', { name: 'Mark done' });

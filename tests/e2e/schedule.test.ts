@@ -5,6 +5,7 @@ import crypto from 'node:crypto';
 import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core';
 import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
+import { expectNoAxeViolations } from '../support/axe';
 
 const baseUrl = inject('baseUrl');
 const WAIT = { timeout: 15_000 };
@@ -268,7 +269,8 @@ describe('the consultant’s schedule', () => {
     const start = addDays(roomy!.earliest, 2);
     await json(await request.patch(`${baseUrl}/api/tasks/${roomy!.id}`, { headers: { 'X-CSRF-Token': csrf }, data: { startDate: start } }));
 
-    const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+    // bypassCSP only lets the journey inject axe-core; the app's own CSP is unchanged.
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 }, bypassCSP: true });
     const page = await context.newPage();
     const watch = watchPage(page);
     await signIn(page, baseUrl, 'consultant@browseline.test');
@@ -290,6 +292,7 @@ describe('the consultant’s schedule', () => {
     const insideCut = await page.locator('[data-task-id]').evaluateAll((els) => els.filter((el) => el.scrollWidth > el.clientWidth + 1).map((el) => el.getAttribute('aria-label')));
     expect(insideCut).toEqual([]);
     await screenshot(page, 'schedule-timeline-two-years');
+    await expectNoAxeViolations(page, 'the schedule timeline over two years');
 
     // Drag the bar three days to the right: it snaps to days and saves through the same route as the panel.
     await page.goto(`${baseUrl}/schedule?property=${propertyId}&view=timeline&from=${roomy!.earliest}&to=${addDays(roomy!.earliest, 7 * 7)}`);
@@ -328,6 +331,7 @@ describe('the consultant’s schedule', () => {
     await selection.getByText('2 tasks selected').waitFor();
     await selection.getByLabel('Assign to').selectOption({ label: 'Rosa Quintero' });
     await screenshot(page, 'schedule-timeline-selection');
+    await expectNoAxeViolations(page, 'the timeline by crew member with two tasks selected');
     await selection.getByRole('button', { name: 'Assign selected' }).click();
     const rosa = page.getByRole('group', { name: 'Rosa Quintero' });
     await rosa.locator(`[data-task-id="${pickA.id}"]`).waitFor(WAIT);
@@ -335,6 +339,10 @@ describe('the consultant’s schedule', () => {
     for (const t of [pickA, pickB]) expect((await json<Task>(await request.get(`${baseUrl}/api/tasks/${t.id}`))).assigneeId).toBe(crewId);
     expect(await page.getByRole('region', { name: 'Selected tasks' }).count()).toBe(0);
     await screenshot(page, 'schedule-timeline-assigned');
+    // The week list's rows, too (their names are their visible text).
+    await page.goto(`${baseUrl}/schedule`);
+    await page.locator('[data-task-id]').first().waitFor(WAIT);
+    await expectNoAxeViolations(page, 'the schedule week list');
     watch.assertClean();
     await context.close();
   });
