@@ -8,7 +8,7 @@ import { config } from '../../config';
 export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transaction): Promise<Buffer> {
   const [firm, client, property, proposal, lines, payments] = await Promise.all([
     Firm.findByPk(invoice.firmId, { transaction }),
-    Client.findByPk(invoice.clientId, { attributes: ['name'], transaction }),
+    Client.findByPk(invoice.clientId, { attributes: ['name', 'address'], transaction }),
     invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null,
     invoice.proposalId ? Proposal.findByPk(invoice.proposalId, { attributes: ['number'], transaction }) : null,
     InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
@@ -16,7 +16,7 @@ export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transa
   ]);
   return renderInvoicePdf({
     firm: { name: firm!.name, phone: firm!.phone, email: firm!.email, address: firm!.address },
-    client: { name: client?.name ?? '' },
+    client: { name: client?.name ?? '', address: client?.address ?? null },
     property: property ? { name: property.name } : null,
     invoice: {
       number: invoice.number,

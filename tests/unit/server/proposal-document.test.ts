@@ -257,6 +257,9 @@ describe('proposal PDF by status', () => {
     // 15:42 UTC is 3:42 PM UTC (ISO 8601 time of day).
     expect(text).toContain('Approved by Marta Lindqvist on April 27, 2027 at 3:42 PM UTC');
     expect(text).toContain(hash);
+    // Labelled plainly for the landowner, not as a hash algorithm.
+    expect(text).toMatch(/Approval fingerprint/);
+    expect(text).not.toMatch(/SHA-256/);
     expect(pdfText(pdf, 'approved-p1', { first: 1, last: 1 })).toContain('APPROVED — by Marta Lindqvist');
     expect(text).not.toMatch(/type your name to approve/);
   }, 30_000);
