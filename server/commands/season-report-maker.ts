@@ -2,11 +2,12 @@
  * Season reports: makes the PDF for a property's season (kept as a shared file of category
  * 'season-report', private to the firm until sent) and sends it to the landowner through the outbox.
  */
+import { Op } from 'sequelize';
 import { Client, Firm, Property, SeasonReport, SharedFile, type TaskPhoto } from '../models';
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
-import { unprocessable } from '../errors';
+import { conflict, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { todayIso } from './prescription-writer';
 import { enqueueEmail } from '../services/mail/outbox';
@@ -15,7 +16,7 @@ import { readSeasonSummary } from '../services/results/results-reader';
 import { renderSeasonReportPdf, type SeasonReportDocumentInput } from '../../templates/documents/season-report';
 import { seasonReportSentEmail } from '../../templates/email/season-report-sent';
 import { CAUTIONS } from '../../shared/domain/cautions';
-import { seasonRange } from '../../shared/domain/season-results';
+import { emptySeasonReason, seasonRange } from '../../shared/domain/season-results';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { config } from '../config';
 import { logger } from '../logger';
@@ -66,15 +67,33 @@ export async function seasonReportInput(property: Property, season: number, reco
   };
 }
 
-/** Makes the season report PDF and keeps it (private to the firm until sent). */
+/**
+ * Makes the season report PDF and keeps it (private to the firm until sent). A season with no
+ * finished work, survey or harvest is refused (422). Remaking a season whose report is not sent yet
+ * replaces that report (and its PDF) in the same transaction; sent reports are never changed.
+ */
 export async function makeSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null): Promise<SeasonReport> {
   const property = await findInFirm(Property, propertyId, actor.firmId, 'That property');
   const recommendations = input.recommendations ?? null;
-  const pdf = await renderSeasonReportPdf(await seasonReportInput(property, input.season, recommendations));
+  const document = await seasonReportInput(property, input.season, recommendations);
+  const empty = emptySeasonReason({ work: document.work.length, surveys: document.surveys.length, harvests: document.harvest.total }, document.season.label);
+  if (empty) throw unprocessable(empty);
+  const pdf = await renderSeasonReportPdf(document);
   const storageKey = await saveFile('files', pdf, 'pdf');
   try {
-    return await sequelize.transaction(async (transaction) => {
+    const { report, replacedKeys } = await sequelize.transaction(async (transaction) => {
       const label = seasonRange(input.season).label;
+      // The unsent report(s) of this season are replaced, not joined by a second of the same title.
+      const unsent = await SeasonReport.findAll({ where: { firmId: actor.firmId, propertyId: property.id, season: input.season, sentAt: { [Op.is]: null } }, transaction, lock: transaction.LOCK.UPDATE });
+      const replacedKeys: string[] = [];
+      for (const old of unsent) {
+        const oldFile = await SharedFile.findByPk(old.sharedFileId, { transaction });
+        await old.destroy({ transaction });
+        if (oldFile) {
+          replacedKeys.push(oldFile.storageKey);
+          await oldFile.destroy({ transaction });
+        }
+      }
       const file = await SharedFile.create(
         {
           firmId: actor.firmId,
@@ -96,13 +115,32 @@ export async function makeSeasonReport(actor: SessionUser, propertyId: number, i
         { firmId: actor.firmId, propertyId: property.id, clientId: property.clientId, season: input.season, recommendations, sharedFileId: file.id, createdById: actor.id },
         { transaction },
       );
-      await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.created', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId, season: input.season }, ip }, transaction);
-      return report;
+      await recordAudit(
+        { firmId: actor.firmId, userId: actor.id, action: 'season-report.created', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId, season: input.season, replaced: unsent.map((r) => r.id) }, ip },
+        transaction,
+      );
+      return { report, replacedKeys };
     });
+    for (const key of replacedKeys) await deleteFile(key);
+    return report;
   } catch (err) {
     await deleteFile(storageKey);
     throw err;
   }
+}
+
+/** Takes a sent season report back out of the landowner's portal; the firm keeps it on file. */
+export async function withdrawSeasonReport(actor: SessionUser, id: number, ip: string | null): Promise<SeasonReport> {
+  return sequelize.transaction(async (transaction) => {
+    const report = await findInFirm(SeasonReport, id, actor.firmId, 'That season report', { transaction, lock: true });
+    if (report.sentAt === null) throw conflict('This report was never sent, so the client cannot see it; delete it or make it again instead.');
+    if (report.withdrawnAt !== null) throw conflict('This report is already withdrawn from the portal.');
+    const file = await SharedFile.findByPk(report.sharedFileId, { transaction });
+    await file?.update({ visibleToClient: false }, { transaction });
+    await report.update({ withdrawnAt: new Date() }, { transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.withdrawn', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId: report.propertyId, season: report.season }, ip }, transaction);
+    return report;
+  });
 }
 
 /** Sends a season report to the landowner (PDF attached) and shows it in their portal's files. */
@@ -132,7 +170,7 @@ export async function sendSeasonReport(actor: SessionUser, id: number, ip: strin
       );
     }
     await file.update({ visibleToClient: true }, { transaction });
-    await report.update({ sentAt: new Date(), sentTo: recipients }, { transaction });
+    await report.update({ sentAt: new Date(), sentTo: recipients, withdrawnAt: null }, { transaction });
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.sent', subjectType: 'SeasonReport', subjectId: report.id, data: { to: recipients }, ip }, transaction);
     return report;
   });
