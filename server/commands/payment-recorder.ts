@@ -7,7 +7,8 @@
 import type Stripe from 'stripe';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Client, Firm, Invoice, InvoicePayment, InvoiceRefund, Property } from '../models';
+import { Op } from 'sequelize';
+import { Client, Firm, Invoice, InvoicePayment, InvoiceRefund, Property, User } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { CheckoutInput, RefundInput } from '../../shared/schemas/invoice';
 import { conflict, notFound, unprocessable } from '../errors';
@@ -17,7 +18,7 @@ import { lockInvoice } from './invoice-writer';
 import { callPayments, payments } from '../services/payments/payments-client';
 import { checkoutAmountCents, paymentStanding } from '../../shared/domain/invoicing';
 import { enqueueEmail } from '../services/mail/outbox';
-import { paymentReceiptEmail, refundEmail } from '../../templates/email/invoice';
+import { paymentReceiptEmail, paymentReceivedStaffEmail, refundEmail } from '../../templates/email/invoice';
 import { config } from '../config';
 import { logger } from '../logger';
 import { usableZone } from '../services/clock';
@@ -130,6 +131,22 @@ async function recordPayment(facts: PaymentFacts, transaction: Transaction): Pro
         kind: 'payment-receipt',
         to,
         email: paymentReceiptEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: todayIn(usableZone(firm?.timezone), payment.receivedAt), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+      },
+      transaction,
+    );
+  }
+  // The consultant who made the invoice (and the firm's owners) hear of it in the same transaction.
+  const [client, staff] = await Promise.all([
+    Client.findByPk(invoice.clientId, { attributes: ['name'], transaction }),
+    User.findAll({ where: { firmId, active: true, role: ['owner', 'consultant'], [Op.or]: [{ id: invoice.createdById ?? 0 }, { role: 'owner' }] }, attributes: ['email'], transaction }),
+  ]);
+  for (const user of staff) {
+    await enqueueEmail(
+      {
+        firmId,
+        kind: 'payment-received',
+        to: user.email,
+        email: paymentReceivedStaffEmail({ firmName: firm?.name ?? '', clientName: client?.name ?? 'A client', propertyName: property?.name ?? 'no property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: payment.receivedAt.toISOString().slice(0, 10), url: `${config.publicUrl}/invoices/${invoice.id}` }),
       },
       transaction,
     );

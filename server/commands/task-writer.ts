@@ -6,7 +6,7 @@ import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { Firm, Property, Task, TaskPhoto, User } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
-import type { TaskCompleteInput, TaskUpdateInput } from '../../shared/schemas/task';
+import type { TaskAssignInput, TaskCompleteInput, TaskUpdateInput } from '../../shared/schemas/task';
 import { plannedOrScheduled, progressOf } from '../../shared/domain/tasks';
 import { addDays } from '../../shared/domain/planting-windows';
 import { conflict, forbidden, notFound, unprocessable } from '../errors';
@@ -60,6 +60,31 @@ export async function updateTask(actor: SessionUser, id: number, input: TaskUpda
     await task.update({ ...next, ...(input.notes !== undefined ? { notes: input.notes } : {}), ...(finished ? {} : { status: plannedOrScheduled(next.assigneeId, next.startDate) }) }, { transaction });
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'task.updated', subjectType: 'Task', subjectId: task.id, data: { ...input }, ip }, transaction);
     return task;
+  });
+}
+
+/**
+ * Gives several tasks to one person (or to nobody) in one transaction: every task must be of the
+ * actor's firm and still open, or nothing changes. Dates stay as they are; the status follows.
+ */
+export async function assignTasks(actor: SessionUser, input: TaskAssignInput, ip: string | null): Promise<Task[]> {
+  if (!isStaff(actor)) throw forbidden('Only the firm’s consultants schedule and assign tasks.');
+  return sequelize.transaction(async (transaction) => {
+    const tasks = await Task.findAll({ where: { id: { [Op.in]: input.taskIds }, firmId: actor.firmId }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+    if (tasks.length !== input.taskIds.length) throw notFound(input.taskIds.length === 1 ? 'That task' : 'One of the selected tasks');
+    const finished = tasks.filter((t) => t.status === 'done' || t.status === 'skipped');
+    if (finished.length > 0) {
+      throw conflict(`${finished.map((t) => t.name).join(', ')} ${finished.length === 1 ? 'is' : 'are'} finished already; reopen ${finished.length === 1 ? 'it' : 'them'} or leave ${finished.length === 1 ? 'it' : 'them'} out of the selection.`);
+    }
+    if (input.assigneeId !== null) {
+      const assignee = await User.findOne({ where: { id: input.assigneeId, firmId: actor.firmId, active: true, role: { [Op.in]: ['crew', 'owner', 'consultant'] } }, transaction });
+      if (!assignee) throw unprocessable('assigneeId: pick an active crew member or consultant of your firm.');
+    }
+    for (const task of tasks) {
+      await task.update({ assigneeId: input.assigneeId, status: plannedOrScheduled(input.assigneeId, task.startDate) }, { transaction });
+    }
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'tasks.assigned', subjectType: 'Task', subjectId: tasks[0].id, data: { taskIds: input.taskIds, assigneeId: input.assigneeId }, ip }, transaction);
+    return tasks;
   });
 }
 

@@ -18,7 +18,7 @@ import {
 import { actor, findInFirm } from '../policies/firm-scope';
 import { notFound } from '../errors';
 import { createHarvest, createSurvey, deleteHarvest, deleteSurvey, updateHarvest, updateSurvey } from '../commands/results-writer';
-import { deleteSeasonReport, requestSeasonReport, sendSeasonReport } from '../commands/season-report-maker';
+import { deleteSeasonReport, requestSeasonReport, sendSeasonReport, withdrawSeasonReport } from '../commands/season-report-maker';
 import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
 import { presentHarvest, presentSeasonReport } from '../presenters/results';
 import { sendStoredFile } from '../services/storage/storage';
@@ -134,7 +134,7 @@ harvests.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req,
 reports.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
   const me = actor(req);
   const report = await findInFirm(SeasonReport, Number(req.params.id), me.firmId, 'That season report');
-  if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null)) throw notFound('That season report');
+  if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null || report.withdrawnAt !== null)) throw notFound('That season report');
   const file = await SharedFile.findByPk(report.sharedFileId);
   if (!file) throw notFound('That season report’s PDF');
   res.setHeader('Content-Type', 'application/pdf');
@@ -144,6 +144,12 @@ reports.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), 
 
 reports.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
   const report = await sendSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+  const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
+  res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
+});
+
+reports.post('/:id/withdraw', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const report = await withdrawSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
   const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
   res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
 });

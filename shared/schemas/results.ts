@@ -224,6 +224,8 @@ export interface SeasonReportDto {
   recommendations: string | null;
   sentAt: string | null;
   sentTo: string[];
+  /** Set when a sent report was withdrawn from the landowner's portal. */
+  withdrawnAt: string | null;
   byteSize: number;
   pdfUrl: string;
   createdAt: string;

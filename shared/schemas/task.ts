@@ -29,6 +29,22 @@ export const TaskUpdateSchema = z
   .refine((b) => !b.startDate || !b.endDate || b.startDate <= b.endDate, { message: 'the end date must not come before the start date', path: ['endDate'] });
 export type TaskUpdateInput = z.infer<typeof TaskUpdateSchema>;
 
+/** The most tasks one "assign selected" may change at once (a season's work on a large property). */
+export const TASK_ASSIGN_MAX = 200;
+
+/** Several tasks given to one person (or back to nobody) at once, from the timeline's selection. */
+export const TaskAssignSchema = z
+  .object({
+    taskIds: z
+      .array(IdSchema, { error: 'taskIds: list the tasks to assign' })
+      .min(1, { message: 'taskIds: select at least one task' })
+      .max(TASK_ASSIGN_MAX, { message: `taskIds: assign at most ${TASK_ASSIGN_MAX} tasks at once` })
+      .refine((ids) => new Set(ids).size === ids.length, { message: 'taskIds: list each task once' }),
+    assigneeId: IdSchema.nullable(),
+  })
+  .strict();
+export type TaskAssignInput = z.infer<typeof TaskAssignSchema>;
+
 export const QuantityUsedSchema = z.object({
   key: z.string().trim().min(1).max(120),
   label: z.string().trim().min(1).max(200),

@@ -16,7 +16,8 @@ const MOSS_TINT = '#EEF3EA';
 
 export interface InvoiceDocumentInput {
   firm: { name: string; phone?: string | null; email?: string | null; address?: string | null };
-  client: { name: string };
+  /** The client billed, with their postal address as written on their record (lines kept). */
+  client: { name: string; address?: string | null };
   property: { name: string } | null;
   invoice: {
     number: string;
@@ -95,7 +96,7 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
 
   const facts = keyValueTable(
     [
-      { label: 'Billed to', value: input.client.name },
+      { label: 'Billed to', value: input.client.address?.trim() ? `${input.client.name}\n${input.client.address.trim()}` : input.client.name },
       ...(input.property ? [{ label: 'Property', value: input.property.name }] : []),
       ...(invoice.proposalNumber ? [{ label: 'For proposal', value: invoice.proposalNumber }] : []),
       { label: 'Terms', value: invoice.termsDays === 0 ? 'Due on receipt' : `Net ${invoice.termsDays} days` },
@@ -160,7 +161,7 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
 
   const howToPay: Content[] =
     invoice.status === 'open'
-      ? [{ unbreakable: true, stack: [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any cheque.', style: 'small', margin: [0, 3, 0, 0] }] }]
+      ? [{ unbreakable: true, stack: [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any check.', style: 'small', margin: [0, 3, 0, 0] }] }]
       : [];
 
   const frame = pageFrame({ title: `Invoice ${invoice.number}`, firmName: firm.name, firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined, preparedOn: issued ?? undefined });

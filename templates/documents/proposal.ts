@@ -738,7 +738,7 @@ function approvalSection(data: DocData, money: (c: number) => string): Content {
       { text: 'Approved', font: FONT_HEADING, bold: true, fontSize: 11, color: DOC_COLORS.mossDeep, margin: [0, 0, 0, 4] },
       { text: [{ text: 'Approved by ' }, { text: approval.signedName, bold: true }, { text: ` on ${formatSignedAt(approval.signedAt, data.timeZone)}.` }] },
       {
-        text: `The approval covers version ${proposal.version} exactly as printed: its lines, prices, options, discount, sales tax, deposit and terms. The SHA-256 hash of that content:`,
+        text: `The approval covers version ${proposal.version} exactly as printed: its lines, prices, options, discount, sales tax, deposit and terms. Approval fingerprint (a code computed from all of that; any change would change it):`,
         style: 'small',
         margin: [0, 4, 0, 2],
       },

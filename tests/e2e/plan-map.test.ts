@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { expectNoAxeViolations } from '../support/axe';
 import { ellipsoidalAreaSqM, rectangle } from '../support/geodesy';
 import { SQ_M_PER_ACRE } from '../../shared/units';
 
@@ -87,12 +88,15 @@ describe('plan map', () => {
   });
 
   it('imports a KML boundary, lists the placemark it had to skip, and shows the new boundary acres', async () => {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    // bypassCSP only lets the journey inject axe-core; the app's own CSP is unchanged.
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 }, bypassCSP: true });
     const page = await context.newPage();
     const watch = watchPage(page);
     page.on('dialog', (d) => void d.accept());
     // North 40 is used by no other journey, so replacing its boundary disturbs none of them.
     await openPlanMap(page, 'Kettle Hollow — North 40');
+    // The toolbar's file input and every other control: WCAG 2.1 A/AA, experimental rules included.
+    await expectNoAxeViolations(page, 'the plan map');
 
     // A 600 m × 540 m rectangle: 324,000 m², about 80 acres.
     const outline = rectangle(-90.9412, 43.2732, 600, 540);

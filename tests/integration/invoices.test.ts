@@ -13,6 +13,7 @@ import { rectangle } from '../support/geodesy';
 import { Invoice, InvoicePayment, OutboxMessage, Practice, Proposal, Task } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
 import { config } from '../../server/config';
+import { DeskSummarySchema } from '../../shared/schemas/desk';
 import { createPaymentsFake, type LogLine, type PaymentsFake } from '../../server/scripts/payments-fake/app';
 import { sendOverdueReminders } from '../../server/commands/reminder-sender';
 import { addDays } from '../../shared/domain/planting-windows';
@@ -124,6 +125,13 @@ afterAll(async () => {
 describe('deposit invoice', () => {
   let depositId: number;
 
+  it('is on the Desk after the approval: the draft deposit invoice, waiting to be sent', async () => {
+    const desk = DeskSummarySchema.parse((await consultant.get('/api/desk').expect(200)).body.data);
+    const draft = desk.depositDrafts.find((d) => d.proposalId === proposal.id);
+    expect(draft).toMatchObject({ proposalNumber: proposal.number, totalCents: proposal.depositCents });
+    expect(draft!.approvedAt).not.toBeNull();
+  });
+
   it('is drafted in the approval’s transaction, numbered per firm, for the proposal’s deposit to the cent', async () => {
     const res = await send(consultant, 'post', '/api/invoices', { proposalId: proposal.id, kind: 'deposit' });
     expect(res.status).toBe(200); // the draft made at approval, not a new one
@@ -182,6 +190,14 @@ describe('deposit invoice', () => {
     expect(await InvoicePayment.count({ where: { invoiceId: depositId } })).toBe(1);
     expect((await getInvoice(consultant, depositId)).amountPaidCents).toBe(after.totalCents);
     expect(await OutboxMessage.count({ where: { kind: 'payment-receipt', toAddress: ctx.users.client.email } })).toBe(1);
+    // The consultant who made the invoice and the owner hear of it once, through the outbox; the Desk shows it.
+    const staffMail = await OutboxMessage.findAll({ where: { kind: 'payment-received' } });
+    const invoiceMail = staffMail.filter((m) => m.subject.includes(after.number));
+    expect(invoiceMail.map((m) => m.toAddress).sort()).toEqual([ctx.users.consultant.email, ctx.users.owner.email].sort());
+    expect(invoiceMail[0].subject).toMatch(/paid \$[\d,]+\.\d{2} on invoice INV-/);
+    const desk = DeskSummarySchema.parse((await consultant.get('/api/desk').expect(200)).body.data);
+    expect(desk.moneyIn.find((m) => m.invoiceId === depositId)).toMatchObject({ amountCents: after.totalCents, paidInFull: true });
+    expect(desk.depositDrafts.find((d) => d.id === depositId)).toBeUndefined();
   });
 
   it('refuses to pay or void a paid invoice', async () => {

@@ -10,14 +10,14 @@ import { todayIn } from '../../../shared/domain/clock';
 export async function invoiceDocumentSnapshot(invoice: Invoice, transaction?: Transaction): Promise<InvoiceDocumentSnapshot> {
   const [firm, client, property, proposal, lines] = await Promise.all([
     Firm.findByPk(invoice.firmId, { transaction }),
-    Client.findByPk(invoice.clientId, { attributes: ['name'], transaction }),
+    Client.findByPk(invoice.clientId, { attributes: ['name', 'address'], transaction }),
     invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null,
     invoice.proposalId ? Proposal.findByPk(invoice.proposalId, { attributes: ['number'], transaction }) : null,
     InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
   ]);
   return {
     firm: { name: firm!.name, phone: firm!.phone, email: firm!.email, address: firm!.address },
-    client: { name: client?.name ?? '' },
+    client: { name: client?.name ?? '', address: client?.address ?? null },
     property: property ? { name: property.name } : null,
     invoice: {
       number: invoice.number,

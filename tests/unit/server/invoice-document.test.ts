@@ -19,6 +19,17 @@ const input = (): InvoiceDocumentInput => ({
 });
 
 describe('the invoice PDF', () => {
+  it('writes the client’s postal address under "Billed to" and US spelling for how to pay', async () => {
+    const doc = input();
+    doc.client.address = '4410 Kettle Hollow Road\nRidgeway, WI 53582'; // invented demo address
+    const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: await renderInvoicePdf(doc) }).toString();
+    expect(text).toMatch(/Billed to\s+Okonkwo-Larsen Family/);
+    expect(text).toContain('4410 Kettle Hollow Road');
+    expect(text).toContain('Ridgeway, WI 53582');
+    expect(text).toContain('on any check');
+    expect(text).not.toMatch(/cheque/i);
+  });
+
   it('prints the lines, the credit, the totals and the balance exactly as given', async () => {
     const pdf = await renderInvoicePdf(input());
     const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString();

@@ -449,7 +449,8 @@ export function PlanMapPage() {
           <input
             ref={fileInput}
             type="file"
-            className="sr-only"
+            // Out of the accessibility tree: the "Import file" button is the one control people use.
+            hidden
             id="plan-import-file"
             accept=".geojson,.json,.kml,.kmz,.gpx,.zip"
             onChange={(e) => {

@@ -34,3 +34,12 @@ export function useSendSeasonReport(propertyId: number) {
   const qc = useQueryClient();
   return useMutation({ mutationFn: sendSeasonReport, onSuccess: () => qc.invalidateQueries({ queryKey: resultsKeys.property(propertyId) }) });
 }
+
+/** Takes a sent season report back out of the landowner's portal (the firm keeps it). */
+export const withdrawSeasonReport = async (id: number) => (await api.post<{ data: SeasonReportDto }>(`/api/season-reports/${id}/withdraw`)).data;
+
+/** Withdraws a sent season report from the portal; the property's results refetch. */
+export function useWithdrawSeasonReport(propertyId: number) {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: withdrawSeasonReport, onSuccess: () => qc.invalidateQueries({ queryKey: resultsKeys.property(propertyId) }) });
+}
