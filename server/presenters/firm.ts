@@ -1,5 +1,6 @@
 import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
+import { largeAreaThreshold } from '../../shared/domain/large-area';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
@@ -10,7 +11,7 @@ export function presentFirm(firm: Firm): FirmDto {
     email: firm.email,
     phone: firm.phone,
     region: firm.region,
-    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0 },
+    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings) },
   };
 }
 

@@ -12,6 +12,8 @@ export const FirmSettingsUpdateSchema = z.object({
   tileUrlTemplate: z.union([TileUrlTemplateSchema, z.literal('').transform(() => null), z.null()]).optional(),
   tileAttribution: z.string().trim().max(200).nullish(),
   taxRatePct: z.number().min(0).max(30).optional(),
+  /** Property size, acres, above which saving a boundary asks for a confirmation (default 20,000). */
+  largeAreaAcres: z.number({ message: 'enter the acreage above which a boundary needs confirming' }).min(1).max(10_000_000).optional(),
 });
 export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
 
@@ -21,7 +23,7 @@ export const FirmSchema = z.object({
   email: z.string().nullable(),
   phone: z.string().nullable(),
   region: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number(), largeAreaAcres: z.number() }),
 });
 export type FirmDto = z.infer<typeof FirmSchema>;
 
