@@ -1,6 +1,7 @@
 import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
 import { usableZone } from '../services/clock';
+import { largeAreaThreshold } from '../../shared/domain/large-area';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
@@ -12,7 +13,7 @@ export function presentFirm(firm: Firm): FirmDto {
     phone: firm.phone,
     region: firm.region,
     timezone: usableZone(firm.timezone),
-    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0 },
+    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings) },
   };
 }
 

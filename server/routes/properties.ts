@@ -100,7 +100,7 @@ r.post('/:id/units', STAFF, validate({ params: IdParamsSchema, body: UnitCreateS
 
 r.post('/:id/units/bulk', STAFF, validate({ params: IdParamsSchema, body: UnitBulkCreateSchema }), async (req, res) => {
   const me = actor(req);
-  const units = await createUnits(me, Number(req.params.id), req.body.units, req.ip ?? null);
+  const units = await createUnits(me, Number(req.params.id), req.body.units, req.ip ?? null, { confirmLargeArea: req.body.confirmLargeArea });
   res.status(201).json({ data: units.map(presentUnit) });
 });
 

@@ -14,6 +14,8 @@ export const FirmSettingsUpdateSchema = z.object({
   tileAttribution: z.string().trim().max(200).nullish(),
   taxRatePct: z.number().min(0).max(30).optional(),
   timezone: z.string().trim().refine(isTimeZone, { message: 'choose a time zone from the list, such as America/Chicago' }).optional(),
+  /** Property size, acres, above which saving a boundary asks for a confirmation (default 20,000). */
+  largeAreaAcres: z.number({ message: 'enter the acreage above which a boundary needs confirming' }).min(1).max(10_000_000).optional(),
 });
 export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
 
@@ -25,7 +27,7 @@ export const FirmSchema = z.object({
   region: z.string(),
   /** IANA time zone: the firm's "today" and the times on its documents. */
   timezone: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number(), largeAreaAcres: z.number() }),
 });
 export type FirmDto = z.infer<typeof FirmSchema>;
 

@@ -18,6 +18,8 @@ export const PropertyCreateSchema = z.object({
   objectives: optionalText(LIMITS.textMax),
   notes: optionalText(LIMITS.textMax),
   boundary: BoundarySchema.nullish(),
+  /** Keeps a boundary larger than the firm's large-area threshold (otherwise 422). */
+  confirmLargeArea: z.boolean().optional(),
 });
 export type PropertyCreateInput = z.infer<typeof PropertyCreateSchema>;
 

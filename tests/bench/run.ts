@@ -4,6 +4,8 @@
  */
 import { execFileSync, spawn } from 'node:child_process';
 import path from 'node:path';
+import { performance } from 'node:perf_hooks';
+import { area as turfArea } from '@turf/turf';
 import { measureArea } from '../../shared/domain/geometry';
 import { readGeoFile } from '../../server/services/geo-files';
 import { generateLargeKml } from '../support/geo-fixtures-large';
@@ -28,10 +30,36 @@ function bigBoundary(n: number, lon = -90.93, lat = 43.27, radiusM = 800): Polyg
   return { type: 'Polygon', coordinates: [ring] };
 }
 
+/**
+ * Area + perimeter on the ellipsoid against turf's spherical `area` alone, on the same 50,000-vertex
+ * boundary, interleaved run by run so both see the same machine load. Goal (issue "exact land
+ * measure", item 1): ratio ≤ 3.
+ */
+function measureVersusTurf(boundary: Polygon, runs = 61) {
+  const ours: number[] = [];
+  const turf: number[] = [];
+  for (let i = 0; i < 5; i++) {
+    measureArea(boundary);
+    turfArea(boundary);
+  }
+  for (let i = 0; i < runs; i++) {
+    let t0 = performance.now();
+    measureArea(boundary);
+    ours.push(performance.now() - t0);
+    t0 = performance.now();
+    turfArea(boundary);
+    turf.push(performance.now() - t0);
+  }
+  return { ours: median(ours), turf: median(turf) };
+}
+
 async function computations() {
   const boundary = bigBoundary(50_000);
   const t = await timeRuns(() => measureArea(boundary), 15, 3);
   results['acreage of a 50,000-vertex boundary (median)'] = `${median(t).toFixed(1)} ms`;
+  const m = measureVersusTurf(boundary);
+  results['ellipsoid area + perimeter vs turf spherical area, 50,000 vertices (medians, interleaved)'] = `${m.ours.toFixed(2)} ms vs ${m.turf.toFixed(2)} ms`;
+  results['measure ratio ellipsoid ÷ turf area (aim ≤ 3)'] = (m.ours / m.turf).toFixed(2);
   const kml = generateLargeKml({ targetBytes: 10 * 1024 * 1024 });
   const k = await timeRuns(() => readGeoFile({ filename: 'big.kml', buffer: kml.buffer }), 3, 1);
   results[`import of a ${(kml.buffer.length / 1048576).toFixed(1)} MB KML, ${kml.placemarkCount} placemarks (median)`] = `${(median(k) / 1000).toFixed(2)} s`;

@@ -6,6 +6,7 @@ import * as m0004 from './0004-proposals';
 import * as m0005 from './0005-tasks';
 import * as m0006 from './0006-invoices';
 import * as m0008 from './0008-results';
+import * as m0010 from './0010-ellipsoid-measures';
 import * as m0012 from './0012-frozen-documents';
 import * as m0014 from './0014-season-report-withdrawal';
 import * as m0016 from './0016-background-jobs';
@@ -18,6 +19,7 @@ export const migrations = [
   { name: '0005-tasks', ...m0005 },
   { name: '0006-invoices', ...m0006 },
   { name: '0008-results', ...m0008 },
+  { name: '0010-ellipsoid-measures', ...m0010 },
   { name: '0012-frozen-documents', ...m0012 },
   { name: '0014-season-report-withdrawal', ...m0014 },
   { name: '0016-background-jobs', ...m0016 },
