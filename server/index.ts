@@ -6,6 +6,7 @@ import { migrateUp } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { startOutboxWorker } from './services/mail/outbox';
 import { startReminderJob } from './commands/reminder-sender';
+import { warmGeoWorkers } from './services/geo-work/geo-pool';
 
 if (process.env.MIGRATE_ON_START !== 'false') {
   const applied = await migrateUp();
@@ -13,6 +14,7 @@ if (process.env.MIGRATE_ON_START !== 'false') {
 }
 
 const app = createApp();
+warmGeoWorkers(); // the first upload does not wait for a worker thread to start
 const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
 });

@@ -6,6 +6,7 @@ import * as m0004 from './0004-proposals';
 import * as m0005 from './0005-tasks';
 import * as m0006 from './0006-invoices';
 import * as m0008 from './0008-results';
+import * as m0024 from './0024-geo-imports';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -15,4 +16,5 @@ export const migrations = [
   { name: '0005-tasks', ...m0005 },
   { name: '0006-invoices', ...m0006 },
   { name: '0008-results', ...m0008 },
+  { name: '0024-geo-imports', ...m0024 },
 ];
