@@ -9,7 +9,7 @@ import { GEOMETRY_LIMITS } from '../../../shared/limits';
 import type { GeoFileReadResult, ImportedFeature, PlanGeometry } from './types';
 
 /** Most vertices all the preview's outlines may hold together; longer lines and rings are thinned to fit. */
-export const PREVIEW_VERTEX_BUDGET = 60_000;
+export const PREVIEW_VERTEX_BUDGET = 20_000;
 /** Most features the preview lists (a property holds at most this many units); the counts cover all. */
 export const PREVIEW_MAX_FEATURES = GEOMETRY_LIMITS.unitsPerProperty;
 

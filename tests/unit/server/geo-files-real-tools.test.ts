@@ -80,9 +80,9 @@ describe('a shapefile without a .cpg honours the .dbf language-driver byte', () 
   }
 
   it.each([
-    [0x57, 'LDID 87, GDAL’s default'],
-    [0x03, 'LDID 3, Windows ANSI'],
-  ])('reads "Cañon Creek" from a .dbf marked 0x%s (%s)', async (ldid) => {
+    ['0x57', 0x57, 'LDID 87, GDAL’s default'],
+    ['0x03', 0x03, 'LDID 3, Windows ANSI'],
+  ])('reads "Cañon Creek" from a .dbf marked %s (%s)', async (_hex, ldid) => {
     const result = await readGeoFile({ filename: 'parcels.zip', buffer: await zipped(ldid, 'Cañon Creek') });
     expect(result.features[0].name).toBe('Cañon Creek');
   });
