@@ -8,7 +8,7 @@
  *    declaring 8192 × 8192 pixels, a 1,000,000-vertex GeoJSON): time to the answer, its status,
  *    and the server's resident memory before and at its peak during each one (/proc/PID/status).
  *
- * Run: `npx tsx tests/bench/geo-import.ts [rounds]` (uses the test PostgreSQL cluster on TEST_DB_PORT).
+ * Run: `npx tsx tests/bench/geo-import.ts [rounds] [--no-attacks]` (uses the test PostgreSQL cluster on TEST_DB_PORT).
  */
 import { execFileSync, spawn } from 'node:child_process';
 import { readFileSync, writeFileSync } from 'node:fs';
@@ -23,7 +23,9 @@ import { median, percentile } from './support';
 
 const root = path.resolve(import.meta.dirname, '../..');
 const tsx = path.join(root, 'node_modules/.bin/tsx');
-const rounds = Number(process.argv[2] ?? 5);
+const rounds = Number(process.argv.find((a) => /^\d+$/.test(a)) ?? 5);
+/** `--no-attacks` skips the upload attacks (e.g. against older code, which they would exhaust). */
+const attacksToo = !process.argv.includes('--no-attacks');
 
 /** Resident memory of a process now and its peak since the last reset, MB (Linux /proc). */
 function memoryMb(pid: number): { rss: number; peak: number } {
@@ -67,7 +69,7 @@ async function main() {
   execFileSync(tsx, [path.join(root, 'server/scripts/migrate.ts')], { env, stdio: 'ignore' });
   execFileSync(tsx, [path.join(root, 'tests/bench/seed-plan.ts')], { env, stdio: 'inherit' });
   // node itself (not the tsx wrapper), so that /proc/PID is the server's own memory.
-  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server/index.ts')], { env, stdio: 'ignore', cwd: root });
+  const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server/index.ts')], { env, stdio: process.env.BENCH_SERVER_LOG ? 'inherit' : 'ignore', cwd: root });
   const results: Record<string, string> = {};
   try {
     for (let i = 0; i < 150; i++) {
@@ -85,7 +87,7 @@ async function main() {
     const importUrl = `${base}/api/properties/${props.data[0].id}/imports`;
     const send = async (bytes: Buffer, name: string) => {
       const form = new FormData();
-      form.append('file', new Blob([bytes]), name);
+      form.append('file', new Blob([new Uint8Array(bytes)]), name);
       const t0 = performance.now();
       const res = await fetch(importUrl, { method: 'POST', headers: { cookie, 'x-csrf-token': csrf }, body: form });
       const text = await res.text();
@@ -94,6 +96,7 @@ async function main() {
 
     const kml = generateLargeKml({ targetBytes: 10 * 1024 * 1024 });
     const health = `${base}/api/health`;
+    results['server RSS after start'] = `${memoryMb(server.pid!).rss.toFixed(0)} MB`;
     await send(kml.buffer, 'warm-up.kml'); // starts the worker's modules
     await probe(health, 4, ((t) => () => performance.now() > t)(performance.now() + 1000));
 
@@ -121,6 +124,8 @@ async function main() {
     results['GET /api/health alone (baseline), 4 connections'] = `p50 ${percentile(baseline, 50).toFixed(1)} ms, p99 ${percentile(baseline, 99).toFixed(1)} ms, max ${Math.max(...baseline).toFixed(0)} ms (${baseline.length} requests)`;
     results['GET /api/health during the imports'] = `p50 ${percentile(during, 50).toFixed(1)} ms, p99 ${percentile(during, 99).toFixed(1)} ms, max ${Math.max(...during).toFixed(0)} ms (${during.length} requests)`;
     results['health p99 ratio during ÷ baseline'] = (percentile(during, 99) / percentile(baseline, 99)).toFixed(2);
+    await sleep(2000);
+    results['server RSS 2 s after the KML imports'] = `${memoryMb(server.pid!).rss.toFixed(0)} MB`;
 
     // Attacks: time to the answer, and the server's memory before and at its peak during each.
     const ring: string[] = [];
@@ -131,7 +136,7 @@ async function main() {
         'GeoTIFF declaring 8192 × 8192 pixels',
         async () => {
           const form = new FormData();
-          form.append('file', new Blob([tiffHeaderOnly(8192, 8192)]), 'ortho.tif');
+          form.append('file', new Blob([new Uint8Array(tiffHeaderOnly(8192, 8192))]), 'ortho.tif');
           const t0 = performance.now();
           const res = await fetch(`${base}/api/properties/${props.data[0].id}/overlays`, { method: 'POST', headers: { cookie, 'x-csrf-token': csrf }, body: form });
           const text = await res.text();
@@ -140,7 +145,7 @@ async function main() {
       ],
       ['GeoJSON of 1,000,000 vertices', async () => send(Buffer.from(`{"type":"FeatureCollection","features":[{"type":"Feature","properties":{},"geometry":{"type":"LineString","coordinates":[${ring.join(',')}]}}]}`), 'huge.geojson')],
     ];
-    for (const [name, attack] of attacks) {
+    for (const [name, attack] of attacksToo ? attacks : []) {
       await sleep(500);
       const before = memoryMb(server.pid!);
       resetPeak(server.pid!);

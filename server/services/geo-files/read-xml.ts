@@ -128,7 +128,7 @@ export function parseKmlCoordinates(text: string): Position[] | null {
     const space = c === 32 || c === 10 || c === 13 || c === 9;
     if (c === 44 /* , */ || space) {
       if (start !== -1) {
-        const value = Number(text.slice(start, i));
+        const value = parseDecimal(text, start, i);
         if (!Number.isFinite(value)) return null;
         tuple.push(value);
         start = -1;
@@ -151,6 +151,42 @@ export function parseKmlCoordinates(text: string): Position[] | null {
   if (tuple.length > 0) return null;
   return out;
 }
+
+/**
+ * The number written in text[from, to): plain decimals ("-93.4500001") are read digit by digit
+ * without making a substring (integer ÷ power of ten is correctly rounded while both are exact,
+ * i.e. up to 15 digits), anything else through Number().
+ */
+function parseDecimal(text: string, from: number, to: number): number {
+  let i = from;
+  let negative = false;
+  const first = text.charCodeAt(i);
+  if (first === 45 /* - */ || first === 43 /* + */) {
+    negative = first === 45;
+    i += 1;
+  }
+  let mantissa = 0;
+  let digits = 0;
+  let scale = 0;
+  let seenDot = false;
+  for (; i < to; i += 1) {
+    const c = text.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      mantissa = mantissa * 10 + (c - 48);
+      digits += 1;
+      if (seenDot) scale += 1;
+    } else if (c === 46 /* . */ && !seenDot) {
+      seenDot = true;
+    } else {
+      return Number(text.slice(from, to)); // an exponent, or not a number at all
+    }
+  }
+  if (digits === 0 || digits > 15) return Number(text.slice(from, to));
+  const value = scale === 0 ? mantissa : mantissa / POWERS_OF_TEN[scale];
+  return negative ? -value : value;
+}
+
+const POWERS_OF_TEN = Array.from({ length: 16 }, (_, k) => 10 ** k);
 
 interface GeometryBuilder {
   kind: string;
@@ -183,6 +219,9 @@ function finishGeometry(b: GeometryBuilder): unknown {
   }
 }
 
+/** Elements whose text the KML reader keeps (everything else, e.g. whitespace between tags, is dropped at once). */
+const KML_TEXT_ELEMENTS = new Set(['name', 'description', 'styleUrl', 'visibility', 'coordinates', 'coord', 'value', 'SimpleData', 'href']);
+
 const GEOMETRY_ELEMENTS = new Set(['Point', 'LineString', 'LinearRing', 'Polygon', 'MultiGeometry', 'Track', 'MultiTrack']);
 
 /**
@@ -199,6 +238,7 @@ export function readKmlText(text: string, limits: XmlReadLimits, vertices = new 
   let dataName: string | null = null;
   let inNetworkLink = 0;
   let sawRoot = false;
+  let capture = false;
 
   runParser(text, label, (parser) => {
     parser.on('opentag', (tag: SaxesTagPlain) => {
@@ -209,6 +249,7 @@ export function readKmlText(text: string, limits: XmlReadLimits, vertices = new 
       }
       stack.push(name);
       textBuffer = '';
+      capture = KML_TEXT_ELEMENTS.has(name);
       if (name === 'NetworkLink') inNetworkLink += 1;
       if (name === 'Placemark') {
         if (sources.length >= limits.maxFeatures) throw tooManyFeatures(`more than ${limits.maxFeatures.toLocaleString('en-US')}`, limits.maxFeatures);
@@ -226,12 +267,13 @@ export function readKmlText(text: string, limits: XmlReadLimits, vertices = new 
       }
     });
     parser.on('text', (t: string) => {
-      textBuffer += t;
+      if (capture) textBuffer += t;
     });
     parser.on('cdata', (t: string) => {
-      textBuffer += t;
+      if (capture) textBuffer += t;
     });
     parser.on('closetag', (tag: SaxesTagPlain) => {
+      capture = false;
       const name = localName(tag.name);
       const parent = stack[stack.length - 2];
       const value = textBuffer;

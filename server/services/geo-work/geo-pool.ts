@@ -2,8 +2,8 @@
  * The geo worker pool (piscina): geometry-file imports and GeoTIFF overlays are parsed in worker
  * threads, so a 10 MB KML or a large image never holds up other requests. `GEO_WORKERS` threads
  * (default: cores less one, between 1 and 2); each thread's heap is capped (`GEO_WORKER_HEAP_MB`,
- * default 512) so one upload cannot exhaust the machine, and idle threads stop after a minute,
- * which hands their memory back.
+ * default 512) so one upload cannot exhaust the machine; threads run at a lower scheduling priority
+ * than the request thread, collect their garbage after each task, and stop when idle.
  */
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
@@ -33,6 +33,8 @@ function thePool(): Piscina {
       minThreads: 1,
       maxThreads: threads,
       idleTimeout: 60_000,
+      // Below the request thread in the scheduler: on a busy machine, answering requests comes first.
+      niceIncrement: 10,
       // Uploads wait their turn rather than piling up work: a queue of a few per thread.
       maxQueue: threads * 8,
       // geotiff's web-worker shim reads workerData when it loads inside a thread: give it an object.

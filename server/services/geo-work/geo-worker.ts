@@ -4,12 +4,21 @@
  * answer plain data (errors too), because an Error loses its status crossing threads.
  */
 import { randomUUID } from 'node:crypto';
+import { setFlagsFromString } from 'node:v8';
+import { runInNewContext } from 'node:vm';
 import { readGeoFile, isGeoFileError } from '../geo-files';
 import { buildImportPreview } from '../geo-files/import-preview';
 import { prepareOverlay } from '../imagery/overlay-image';
 import { AppError } from '../../errors';
 import type { Corners } from '../../models/overlay';
 import type { ReadGeoFileOptions } from '../geo-files/types';
+
+// A full collection after each task hands a large file's memory back at once, instead of whenever
+// V8 next feels pressure (the thread lives on between uploads). It runs in this thread, after the
+// answer has been posted.
+setFlagsFromString('--expose-gc');
+const collectGarbage = runInNewContext('gc') as (() => void) | undefined;
+const collectSoon = () => setTimeout(() => collectGarbage?.(), 50).unref();
 
 /** A failure a person can act on, carried across threads as data. */
 export interface TaskFailure {
@@ -39,6 +48,7 @@ function failure(error: unknown): TaskFailure {
 /** Read the file; answer the preview and the full geometries (one JSON array, in the preview's order) as text. */
 export async function importGeoFile(task: ImportTask): Promise<ImportAnswer> {
   try {
+    collectSoon();
     const result = await readGeoFile({ filename: task.filename, buffer: task.bytes }, task.options);
     const importId = randomUUID();
     const preview = buildImportPreview(result, importId);
@@ -67,6 +77,7 @@ export type OverlayAnswer =
 /** Check and convert an overlay image (GeoTIFF → PNG with its corners; PNG/JPEG checked and kept). */
 export async function prepareOverlayImage(task: OverlayTask): Promise<OverlayAnswer> {
   try {
+    collectSoon();
     const prepared = await prepareOverlay(Buffer.from(task.bytes.buffer, task.bytes.byteOffset, task.bytes.byteLength), task.corners);
     return { ok: true, bytes: new Uint8Array(prepared.bytes), contentType: prepared.contentType, extension: prepared.extension, corners: prepared.corners };
   } catch (error) {
