@@ -11,7 +11,7 @@ import { rectangle } from '../support/geodesy';
 import { generateLargeKml } from '../support/geo-fixtures-large';
 import { shapefileBomb } from '../support/zip-bytes';
 import { tiffHeaderOnly } from '../support/tiff-bytes';
-import { closeGeoWorkers } from '../../server/services/geo-work/geo-pool';
+import { closeGeoWorkers, runGeoImport } from '../../server/services/geo-work/geo-pool';
 import type { ImportPreviewDto } from '../../shared/schemas/geo-import';
 
 let consultant: Agent;
@@ -45,6 +45,14 @@ const kml = `<?xml version="1.0" encoding="UTF-8"?><kml xmlns="http://www.opengi
 </Document></kml>`;
 
 describe('the import preview and the full geometries', () => {
+  it('reads the file in a worker thread, not on the request thread, and answers JSON text', async () => {
+    const big = generateLargeKml({ targetBytes: 512 * 1024 });
+    const answer = await runGeoImport({ filename: 'plan.kml', bytes: big.buffer });
+    expect(answer.threadId).toBeGreaterThan(0); // the main thread's id is 0 (node:worker_threads)
+    expect(typeof answer.previewJson).toBe('string');
+    expect((JSON.parse(answer.previewJson) as ImportPreviewDto).counts.features).toBe(big.placemarkCount);
+  });
+
   it('answers counts, names, measures and outlines, and the full geometry of the features asked for', async () => {
     const propertyId = await newProperty();
     const res = await upload(propertyId, Buffer.from(kml), 'plan.kml');

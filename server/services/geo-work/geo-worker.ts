@@ -6,6 +6,7 @@
 import { randomUUID } from 'node:crypto';
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
+import { threadId } from 'node:worker_threads';
 import { readGeoFile, isGeoFileError } from '../geo-files';
 import { buildImportPreview } from '../geo-files/import-preview';
 import { prepareOverlay } from '../imagery/overlay-image';
@@ -36,7 +37,7 @@ export interface ImportTask {
 }
 
 export type ImportAnswer =
-  | { ok: true; importId: string; format: string; featureCount: number; previewJson: string; geometriesJson: string }
+  | { ok: true; importId: string; format: string; featureCount: number; previewJson: string; geometriesJson: string; /** The thread that read the file (0 would be the main thread). */ threadId: number }
   | TaskFailure;
 
 function failure(error: unknown): TaskFailure {
@@ -59,6 +60,7 @@ export async function importGeoFile(task: ImportTask): Promise<ImportAnswer> {
       featureCount: preview.features.length,
       previewJson: JSON.stringify(preview),
       geometriesJson: JSON.stringify(result.features.slice(0, preview.features.length).map((f) => f.geometry)),
+      threadId,
     };
   } catch (error) {
     return failure(error);
