@@ -189,7 +189,8 @@ export async function readKmz(opened: OpenedZip, limits: XmlReadLimits): Promise
   const visit = async (entry: ZipEntry, depth: number, via: string | null): Promise<void> => {
     visited.add(entry.path.toLowerCase());
     const text = decodeText(await readEntry(opened, entry));
-    const read = readKmlText(text, { ...limits, maxFeatures: limits.maxFeatures - sources.length }, vertices, `KMZ (its ${entry.path})`);
+    const read = readKmlText(text, limits, vertices, `KMZ (its ${entry.path})`);
+    if (sources.length + read.sources.length > limits.maxFeatures) throw tooManyFeatures(sources.length + read.sources.length, limits.maxFeatures);
     const note = via ? [`from "${entry.path}" (linked from ${via})`] : [];
     for (const source of read.sources) sources.push({ ...source, index: sources.length, notes: [...(source.notes ?? []), ...note] });
     for (const href of read.links) {
