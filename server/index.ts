@@ -8,6 +8,7 @@ import { startOutboxWorker } from './services/mail/outbox';
 import { startReminderJob } from './commands/reminder-sender';
 import { startJobQueue, stopJobQueue } from './services/jobs/job-queue';
 import { beginDraining, closeServerGracefully } from './lifecycle';
+import { warmGeoWorkers } from './services/geo-work/geo-pool';
 
 if (config.migrateOnStart) {
   const applied = await migrateUp();
@@ -15,6 +16,7 @@ if (config.migrateOnStart) {
 }
 
 const app = createApp();
+warmGeoWorkers(); // the first upload does not wait for a worker thread to start
 const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
 });

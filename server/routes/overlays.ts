@@ -9,7 +9,7 @@ import { OverlayCornersSchema, OverlayUpdateSchema } from '../../shared/schemas/
 import { GEOMETRY_LIMITS } from '../../shared/limits';
 import { presentOverlay } from '../presenters/firm';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { prepareOverlay } from '../services/imagery/overlay-image';
+import { runOverlayPrep } from '../services/geo-work/geo-pool';
 import { deleteFile, saveFile, sendStoredFile } from '../services/storage/storage';
 import { sequelize } from '../db/sequelize';
 import { badRequest, unprocessable } from '../errors';
@@ -28,7 +28,7 @@ perProperty.get('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), as
 
 const UploadFieldsSchema = z.object({ name: z.string().trim().max(120).optional(), corners: z.string().optional() });
 
-perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.overlayMaxBytes), async (req, res) => {
+perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.overlayMaxBytes, 'image'), async (req, res) => {
   const me = actor(req);
   const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
   if (!req.file) throw badRequest('Attach the image in the form field “file” (GeoTIFF, or PNG/JPEG with its corners).');
@@ -45,7 +45,9 @@ perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), s
     if (!parsed.success) throw unprocessable(describeZodError(parsed.error).message);
     corners = parsed.data as Corners;
   }
-  const prepared = await prepareOverlay(req.file.buffer, corners);
+  // Checked and converted in a worker thread: a large GeoTIFF never holds up other requests.
+  const answer = await runOverlayPrep({ bytes: req.file.buffer, corners });
+  const prepared = { ...answer, bytes: Buffer.from(answer.bytes.buffer, answer.bytes.byteOffset, answer.bytes.byteLength) };
   const key = await saveFile('overlays', prepared.bytes, prepared.extension);
   try {
     const overlay = await sequelize.transaction(async (transaction) => {

@@ -16,8 +16,11 @@ import { createProperty, updateProperty } from '../commands/property-writer';
 import { createUnits } from '../commands/unit-writer';
 import { recordAudit } from '../commands/audit-recorder';
 import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
-import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
-import { AppError, badRequest, conflict, unprocessable } from '../errors';
+import { writeGeoFile, isExportFormat, EXPORT_FORMATS } from '../services/geo-files';
+import { runGeoImport } from '../services/geo-work/geo-pool';
+import { loadImportGeometries, storeImport } from '../services/geo-files/import-store';
+import { ImportFeaturesQuerySchema, ImportParamsSchema } from '../../shared/schemas/geo-import';
+import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
 import { Firm, Proposal } from '../models';
@@ -110,17 +113,24 @@ r.get('/:id/plan', STAFF, validate({ params: IdParamsSchema }), async (req, res)
   res.json({ data: await planSummary(plan) });
 });
 
-r.post('/:id/imports', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.importMaxBytes), async (req, res) => {
-  const { firmId } = actor(req);
-  await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+r.post('/:id/imports', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.importMaxBytes, 'file'), async (req, res) => {
+  const me = actor(req);
+  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
   if (!req.file) throw badRequest('Attach the file in the form field “file” (a .geojson, .kml, .kmz, .gpx or zipped shapefile).');
-  try {
-    const result = await readGeoFile({ filename: req.file.originalname, buffer: req.file.buffer });
-    res.json({ data: result });
-  } catch (err) {
-    if (isGeoFileError(err)) throw new AppError(err.status, err.code, err.message, err.details);
-    throw err;
-  }
+  // Read in a worker thread; the answer comes back as JSON text, so nothing large is rebuilt here.
+  const answer = await runGeoImport({ filename: req.file.originalname, bytes: req.file.buffer });
+  await storeImport({ id: answer.importId, firmId: me.firmId, propertyId: property.id, userId: me.id, format: answer.format, featureCount: answer.featureCount, geometriesJson: answer.geometriesJson });
+  res.type('application/json').send(`{"data":${answer.previewJson}}`);
+});
+
+r.get('/:id/imports/:importId/features', STAFF, validate({ params: ImportParamsSchema, query: ImportFeaturesQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { id, importId } = req.params as unknown as z.infer<typeof ImportParamsSchema>;
+  const { items } = req.validQuery as z.output<typeof ImportFeaturesQuerySchema>;
+  await findInFirm(Property, id, firmId, 'That property');
+  const features = await loadImportGeometries(firmId, id, importId, items);
+  if (!features) throw notFound('That import (imports are kept for a day; upload the file again)');
+  res.json({ data: features });
 });
 
 const ExportQuerySchema = z.object({

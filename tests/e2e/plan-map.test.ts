@@ -185,4 +185,28 @@ describe('plan map', () => {
     expect((await api.request.delete(`/api/properties/${propertyId}`, { headers: { 'X-CSRF-Token': api.csrf } })).status()).toBeLessThan(300);
     await api.request.dispose();
   });
+
+  it('turns a walked GPS track whose ends nearly meet into a food plot', async () => {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await openPlanMap(page, 'Kettle Hollow — North 40');
+    // An open walk around a 150 m square inside the boundary above (south-west, south-east,
+    // north-east, north-west corners), coming back down the west side to about 9 m short of its start.
+    const square = rectangle(-90.9412, 43.2732, 150, 150).coordinates[0].slice(0, 4);
+    const end = [square[0][0], square[0][1] + 0.00008];
+    const points = [...square, end].map(([lon, lat]) => `<trkpt lat="${lat.toFixed(7)}" lon="${lon.toFixed(7)}"/>`).join('');
+    const gpx = `<?xml version="1.0"?><gpx version="1.1" creator="handheld" xmlns="http://www.topografix.com/GPX/1/1"><trk><name>Clover walk</name><trkseg>${points}</trkseg></trk></gpx>`;
+    await page.locator('#plan-import-file').setInputFiles({ name: 'walk.gpx', mimeType: 'application/gpx+xml', buffer: Buffer.from(gpx) });
+    const preview = page.getByRole('region', { name: 'Import preview' });
+    await preview.waitFor();
+    await expect.poll(() => preview.textContent(), WAIT).toMatch(/ends are 9 m apart/);
+    await preview.getByRole('combobox', { name: 'Clover walk' }).selectOption('food-plot');
+    await screenshot(page, 'plan-map-import-walked-track');
+    await preview.getByRole('button', { name: 'Save 1 feature' }).click();
+    await preview.waitFor({ state: 'detached' });
+    await expect.poll(() => page.getByText('Clover walk').first().isVisible(), WAIT).toBe(true);
+    watch.assertClean();
+    await context.close();
+  });
 });

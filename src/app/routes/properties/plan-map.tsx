@@ -21,7 +21,7 @@ import { useCreateUnitsBulk } from '../../../features/plan-map/api/create-units-
 import { useUpdateUnit } from '../../../features/plan-map/api/update-unit';
 import { useDeleteUnit } from '../../../features/plan-map/api/delete-unit';
 import { useUpdatePropertyBoundary } from '../../../features/plan-map/api/update-property-boundary';
-import { useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
+import { fetchImportGeometries, useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
 import { usePlanUndo } from '../../../features/plan-map/hooks/use-plan-undo';
 import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
 import { DrawChips } from '../../../features/plan-map/components/draw-chips';
@@ -429,18 +429,24 @@ export function PlanMapPage() {
     if (importPlan.boundary && boundary && !window.confirm('Replace the property boundary with the imported one? You can undo it.')) return;
     setSavingImport(true);
     try {
+      // The preview drew outlines; save the full geometries of the chosen features.
+      const { preview, choices } = importState;
+      const chosen = preview.features.filter((_, i) => choices[i] !== 'skip').map((f) => f.item);
+      const full = new Map((await fetchImportGeometries(propertyId, preview.importId, chosen)).map((g) => [g.item, g.geometry]));
+      if (chosen.some((item) => !full.has(item))) throw new Error('The uploaded file is no longer on the server; upload it again.');
+      const toSave = planImportSave(preview.features.map((f) => ({ ...f, geometry: full.get(f.item) ?? f.geometry })), choices);
       const parts: string[] = [];
-      if (importPlan.boundary) {
+      if (toSave.boundary) {
         const before = boundary;
-        const importedBoundary = importPlan.boundary;
+        const importedBoundary = toSave.boundary;
         const saved = await withLargeAreaCheck((confirmLargeArea) => updateBoundary.mutateAsync({ boundary: importedBoundary, confirmLargeArea }));
         if (!saved) return;
         undo.record({ type: 'boundary', before });
-        controller?.fitTo(bboxOf([importPlan.boundary]), true);
+        controller?.fitTo(bboxOf([toSave.boundary]), true);
         parts.push(`boundary (${formatAcresShort(saved.acres ?? 0)})`);
       }
-      if (importPlan.units.length > 0) {
-        const importedUnits = importPlan.units;
+      if (toSave.units.length > 0) {
+        const importedUnits = toSave.units;
         const created = await withLargeAreaCheck((confirmLargeArea) => createBulk.mutateAsync({ units: importedUnits, confirmLargeArea }));
         if (!created) return;
         undo.record({ type: 'create-many', unitIds: created.map((u) => u.id) });
