@@ -6,6 +6,7 @@ import { migrateUp } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { startOutboxWorker } from './services/mail/outbox';
 import { startReminderJob } from './commands/reminder-sender';
+import { closePdfWorkers, warmPdfWorkers } from './services/documents/pdf-pool';
 
 if (process.env.MIGRATE_ON_START !== 'false') {
   const applied = await migrateUp();
@@ -16,6 +17,7 @@ const app = createApp();
 const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
 });
+warmPdfWorkers();
 const stopOutbox = startOutboxWorker();
 const stopReminders = startReminderJob();
 
@@ -24,6 +26,7 @@ async function shutdown(signal: string) {
   stopOutbox();
   stopReminders();
   server.close();
+  await closePdfWorkers().catch(() => undefined);
   await closeSessionPool().catch(() => undefined);
   await sequelize.close().catch(() => undefined);
   process.exit(0);

@@ -35,6 +35,12 @@ export function warmPdfWorkers(): void {
   if (pdfWorkerCount() > 0) thePool();
 }
 
+/** Resolves when a worker has started and rendered a one-line document (tests' set-up, readiness). */
+export async function pdfWorkersReady(): Promise<void> {
+  const { renderPdf } = await import('./pdf');
+  await renderPdf({ content: ['ready'] });
+}
+
 /** Renders a packed definition (pdf-functions.ts) in a worker thread. */
 export async function renderPacked(packed: unknown): Promise<Buffer> {
   if (pdfWorkerCount() === 0) {
@@ -53,6 +59,11 @@ export async function renderPacked(packed: unknown): Promise<Buffer> {
   }
   if (!(answer instanceof Uint8Array)) throw renderFailure(answer.message);
   return Buffer.from(answer.buffer, answer.byteOffset, answer.byteLength);
+}
+
+/** Threads running and documents rendered by the pool so far (tests, diagnostics). */
+export function pdfWorkerStats(): { threads: number; completed: number } {
+  return { threads: pool?.threads.length ?? 0, completed: pool?.completed ?? 0 };
 }
 
 /** Stops the worker threads (shutdown and tests). */
