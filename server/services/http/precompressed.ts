@@ -31,7 +31,8 @@ export async function precompress(identity: Buffer): Promise<Precompressed> {
 
 /** Sends a precompressed JSON answer in the best encoding the request accepts (br, gzip, or none). */
 export function sendPrecompressed(req: Request, res: Response, body: Precompressed): void {
-  const encoding = req.acceptsEncodings('br', 'gzip', 'identity');
+  // Brotli when acceptable at all (smaller), then gzip; browsers list gzip first with equal weight.
+  const encoding = req.acceptsEncodings('br') === 'br' ? 'br' : req.acceptsEncodings('gzip') === 'gzip' ? 'gzip' : 'identity';
   const bytes = encoding === 'br' ? body.br : encoding === 'gzip' ? body.gzip : body.identity;
   res.vary('Accept-Encoding');
   res.type('application/json');
