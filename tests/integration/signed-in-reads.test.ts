@@ -17,10 +17,11 @@ let propertyId: number;
 
 /** The bytes of an answer as a Buffer (after supertest's inflating). */
 const raw = (res: request.Response) => res.body as Buffer;
-const rawParser = (res: NodeJS.ReadableStream & { setEncoding?: unknown }, cb: (err: Error | null, body: Buffer) => void) => {
+const rawParser = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
 };
 
 beforeAll(async () => {
