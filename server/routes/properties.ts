@@ -5,7 +5,7 @@ import { validate } from '../middlewares/validate';
 import { singleUpload } from '../middlewares/upload';
 import { Client, Property } from '../models';
 import { sequelize } from '../db/sequelize';
-import { IdParamsSchema } from '../../shared/schemas/common';
+import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { PropertyCreateSchema, PropertyListQuerySchema, PropertyUpdateSchema } from '../../shared/schemas/property';
 import { UnitBulkCreateSchema, UnitCreateSchema } from '../../shared/schemas/unit';
 import { GEOMETRY_LIMITS } from '../../shared/limits';
@@ -43,11 +43,15 @@ async function present(firmId: number, property: Property) {
 
 r.get('/', STAFF, validate({ query: PropertyListQuerySchema }), async (req, res) => {
   const { firmId } = actor(req);
-  const { clientId, q } = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const query = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const { clientId, q } = query;
   const where: WhereOptions = { firmId, ...(clientId ? { clientId } : {}), ...(q ? { name: { [Op.iLike]: `%${q}%` } } : {}) };
-  const properties = await Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC']] });
+  const [total, properties] = await Promise.all([
+    Property.count({ where }),
+    Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC'], ['id', 'ASC']], limit: query.limit, offset: query.offset }),
+  ]);
   const counts = await unitCounts(firmId, properties.map((p) => p.id));
-  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)) });
+  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)), page: pageOf(query, total) });
 });
 
 r.post('/', STAFF, validate({ body: PropertyCreateSchema }), async (req, res) => {

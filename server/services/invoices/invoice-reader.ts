@@ -30,8 +30,8 @@ export async function readInvoice(invoice: Invoice, transaction?: Transaction): 
 }
 
 /** List rows, newest first. */
-export async function listInvoiceRows(where: WhereOptions): Promise<InvoiceRowDto[]> {
-  const rows = await Invoice.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+export async function listInvoiceRows(where: WhereOptions, page?: { limit: number; offset: number }): Promise<InvoiceRowDto[]> {
+  const rows = await Invoice.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: page?.limit, offset: page?.offset });
   const names = await namesFor(rows);
   const today = todayIso();
   return rows.map((i) => presentInvoiceRow(i, names(i), today));
