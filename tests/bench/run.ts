@@ -99,6 +99,7 @@ async function http() {
   const env = { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), LOG_LEVEL: 'warn', NODE_ENV: 'production', OUTBOX_POLL_MS: '60000', SESSION_SECRET: 'bench' };
   execFileSync(tsx, [path.join(root, 'server/scripts/migrate.ts')], { env, stdio: 'ignore' });
   execFileSync(tsx, [path.join(root, 'tests/bench/seed-plan.ts')], { env, stdio: 'inherit' });
+  if (withGrowth) execFileSync(tsx, [path.join(root, 'tests/bench/seed-scale.ts')], { env, stdio: 'inherit' });
   const server = spawn(tsx, [path.join(root, 'server/index.ts')], { env, stdio: 'ignore' });
   try {
     for (let i = 0; i < 150; i++) {
