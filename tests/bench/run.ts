@@ -60,8 +60,8 @@ async function growth(base: string) {
     [1, 10].map(async (factor) => {
       const staff = await signIn(base, `scale${factor}@browseline.test`);
       const client = await signIn(base, `scale${factor}-client@browseline.test`);
-      const portal = (await (await fetch(`${base}/api/portal/properties`, { headers: { cookie: client } })).json()) as { data: { id: number }[] };
-      return { staff, client, portalPropertyId: portal.data[0].id };
+      const portal = (await (await fetch(`${base}/api/portal/properties`, { headers: { cookie: client } })).json()) as { data: { properties: { id: number }[] } };
+      return { staff, client, portalPropertyId: portal.data.properties[0].id };
     }),
   );
   const reads: { label: string; url: (side: (typeof sides)[number]) => string; who: 'staff' | 'client' }[] = [
