@@ -7,6 +7,7 @@
  * asserts nothing.
  */
 import { writeFileSync } from 'node:fs';
+import { monitorEventLoopDelay } from 'node:perf_hooks';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pdfmake from 'pdfmake';
@@ -65,11 +66,15 @@ const proposalMs: number[] = [];
 const bareMs: number[] = [];
 let last: Buffer = sample;
 let bare: Buffer = Buffer.alloc(0);
+const loopDelay = monitorEventLoopDelay({ resolution: 5 });
 for (let i = 0; i < WARM_UP + RUNS; i++) {
   const input = couleeBendProposal({ lines: fortyLines(), introduction: null });
+  // The longest the event loop waited while proposals rendered (goal: never more than 100 ms).
+  if (i >= WARM_UP) loopDelay.enable();
   let t0 = performance.now();
   last = await renderProposalPdf(input);
   const p = performance.now() - t0;
+  loopDelay.disable();
   t0 = performance.now();
   bare = await renderBare(paragraphs);
   const b = performance.now() - t0;
@@ -84,5 +89,6 @@ console.log(`proposal: ${pageCount(last)} pages, 40 lines, plan map, ${(last.len
 console.log(`bare pdfmake baseline: ${pageCount(bare)} pages, ${paragraphs} paragraphs, same fonts`);
 console.log(`proposal warm runs (ms): ${proposalMs.map((r) => r.toFixed(0)).join(', ')}`);
 console.log(`bare warm runs (ms): ${bareMs.map((r) => r.toFixed(0)).join(', ')}`);
+console.log(`longest event-loop wait while proposals rendered: ${(loopDelay.max / 1e6).toFixed(0)} ms (goal ≤ 100; the layout runs in a worker thread)`);
 console.log(`median proposal ${median(proposalMs).toFixed(0)} ms, bare ${median(bareMs).toFixed(0)} ms, ratio proposal ÷ bare ${(median(proposalMs) / median(bareMs)).toFixed(2)} (aim ≤ 2)`);
 process.exit(0);
