@@ -9,6 +9,7 @@ import { startReminderJob } from './commands/reminder-sender';
 import { startJobQueue, stopJobQueue } from './services/jobs/job-queue';
 import { beginDraining, closeServerGracefully } from './lifecycle';
 import { warmGeoWorkers } from './services/geo-work/geo-pool';
+import { closePdfWorkers, warmPdfWorkers } from './services/documents/pdf-pool';
 
 if (config.migrateOnStart) {
   const applied = await migrateUp();
@@ -20,6 +21,7 @@ warmGeoWorkers(); // the first upload does not wait for a worker thread to start
 const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
 });
+warmPdfWorkers();
 const stopOutbox = startOutboxWorker();
 const stopReminders = startReminderJob();
 // The queue starts in the background: a database outage at boot is logged, never a crash.
@@ -40,6 +42,7 @@ async function shutdown(signal: string) {
   const { timedOut } = await closeServerGracefully(server, config.shutdownGraceMs);
   if (timedOut) logger.warn({ graceMs: config.shutdownGraceMs }, 'requests still in flight were cut at the shutdown limit');
   await stopJobQueue(config.shutdownGraceMs);
+  await closePdfWorkers().catch(() => undefined);
   await closeSessionPool().catch(() => undefined);
   await sequelize.close().catch(() => undefined);
   logger.info('stopped');

@@ -5,7 +5,7 @@ import { validate } from '../middlewares/validate';
 import { singleUpload } from '../middlewares/upload';
 import { Client, Property } from '../models';
 import { sequelize } from '../db/sequelize';
-import { IdParamsSchema } from '../../shared/schemas/common';
+import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { PropertyCreateSchema, PropertyListQuerySchema, PropertyUpdateSchema } from '../../shared/schemas/property';
 import { UnitBulkCreateSchema, UnitCreateSchema } from '../../shared/schemas/unit';
 import { GEOMETRY_LIMITS } from '../../shared/limits';
@@ -15,7 +15,8 @@ import { actor, findInFirm } from '../policies/firm-scope';
 import { createProperty, updateProperty } from '../commands/property-writer';
 import { createUnits } from '../commands/unit-writer';
 import { recordAudit } from '../commands/audit-recorder';
-import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
+import { loadPlan, planEtagAt, planRevision, planSummary, unitsAnswer } from '../services/plan/plan-reader';
+import { etagMatches, sendPrecompressed } from '../services/http/precompressed';
 import { writeGeoFile, isExportFormat, EXPORT_FORMATS } from '../services/geo-files';
 import { runGeoImport } from '../services/geo-work/geo-pool';
 import { loadImportGeometries, storeImport } from '../services/geo-files/import-store';
@@ -46,11 +47,15 @@ async function present(firmId: number, property: Property) {
 
 r.get('/', STAFF, validate({ query: PropertyListQuerySchema }), async (req, res) => {
   const { firmId } = actor(req);
-  const { clientId, q } = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const query = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const { clientId, q } = query;
   const where: WhereOptions = { firmId, ...(clientId ? { clientId } : {}), ...(q ? { name: { [Op.iLike]: `%${q}%` } } : {}) };
-  const properties = await Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC']] });
+  const [total, properties] = await Promise.all([
+    Property.count({ where }),
+    Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC'], ['id', 'ASC']], limit: query.limit, offset: query.offset }),
+  ]);
   const counts = await unitCounts(firmId, properties.map((p) => p.id));
-  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)) });
+  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)), page: pageOf(query, total) });
 });
 
 r.post('/', STAFF, validate({ body: PropertyCreateSchema }), async (req, res) => {
@@ -84,15 +89,15 @@ r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) =
 });
 
 r.get('/:id/units', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const { firmId } = actor(req);
-  const plan = await loadPlan(Number(req.params.id), firmId, { lean: true });
-  const etag = planEtag(plan);
+  // The revision first, alone: a 304 costs the session read and this one small query.
+  const propertyId = Number(req.params.id);
+  const revision = await planRevision(propertyId, actor(req).firmId);
+  const etag = planEtagAt(propertyId, revision);
   res.setHeader('ETag', etag);
   res.setHeader('Cache-Control', 'private, no-cache');
-  if (req.headers['if-none-match'] === etag) return res.status(304).end();
-  const body = await unitsJson(plan);
-  res.type('application/json').setHeader('Content-Length', body.length);
-  res.end(body);
+  res.vary('Accept-Encoding');
+  if (etagMatches(req.headers['if-none-match'], etag)) return res.status(304).end();
+  sendPrecompressed(req, res, await unitsAnswer(propertyId, revision));
 });
 
 r.post('/:id/units', STAFF, validate({ params: IdParamsSchema, body: UnitCreateSchema }), async (req, res) => {

@@ -29,3 +29,28 @@ export const optionalText = (max: number) =>
     .max(max, { message: `must be at most ${max} characters` })
     .transform((v) => (v === '' ? null : v))
     .nullish();
+
+/** Rows a list answers when the address does not say, and the most it answers at once. */
+export const LIST_PAGE = { defaultLimit: 500, maxLimit: 2000 } as const;
+
+/** Paging of a list: `limit` rows from `offset` (query strings, so numbers are coerced). */
+export const PageQuerySchema = z.object({
+  limit: z.coerce
+    .number()
+    .int({ message: 'limit must be a whole number' })
+    .min(1, { message: 'limit must be at least 1' })
+    .max(LIST_PAGE.maxLimit, { message: `limit must be at most ${LIST_PAGE.maxLimit}` })
+    .default(LIST_PAGE.defaultLimit),
+  offset: z.coerce.number().int({ message: 'offset must be a whole number' }).min(0, { message: 'offset must be zero or more' }).max(1_000_000).default(0),
+});
+export type PageQuery = z.infer<typeof PageQuerySchema>;
+
+/** Where a list answer sits in the whole: `total` rows match; this answer holds `limit` from `offset`. */
+export interface PageDto {
+  total: number;
+  limit: number;
+  offset: number;
+}
+
+/** The paging record of an answer. */
+export const pageOf = (query: PageQuery, total: number): PageDto => ({ total, limit: query.limit, offset: query.offset });

@@ -1,6 +1,7 @@
 /** Invoices: what the API takes (zod) and answers (types shared by the server's presenter and the client). */
 import { z } from 'zod';
 import { parseDollarsToCents } from '../domain/money';
+import { PageQuerySchema } from './common';
 import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceKind, type InvoiceLineSource, type InvoiceStatus } from '../domain/invoicing';
 
 const id = z.number({ message: 'must be a record id' }).int().positive({ message: 'must be a positive whole number' });
@@ -19,7 +20,7 @@ export const InvoiceListQuerySchema = z.object({
   propertyId: z.coerce.number().int().positive().optional(),
   proposalId: z.coerce.number().int().positive().optional(),
   status: z.enum(INVOICE_STATUSES, { message: 'status must be draft, open, paid or void' }).optional(),
-});
+}).extend(PageQuerySchema.shape);
 export type InvoiceListQuery = z.infer<typeof InvoiceListQuerySchema>;
 
 export const InvoiceUpdateSchema = z.object({

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { MultiPolygon } from 'geojson';
 import { LIMITS } from '../limits';
-import { optionalText } from './common';
+import { optionalText, PageQuerySchema } from './common';
 import { BoundarySchema } from './geometry';
 
 import { REGIONS } from '../domain/planting-windows';
@@ -28,10 +28,12 @@ export const PropertyUpdateSchema = PropertyCreateSchema.omit({ clientId: true }
 });
 export type PropertyUpdateInput = z.infer<typeof PropertyUpdateSchema>;
 
-export const PropertyListQuerySchema = z.object({
-  clientId: z.coerce.number().int().positive().optional(),
-  q: z.string().trim().max(100).optional(),
-});
+export const PropertyListQuerySchema = z
+  .object({
+    clientId: z.coerce.number().int().positive().optional(),
+    q: z.string().trim().max(100).optional(),
+  })
+  .extend(PageQuerySchema.shape);
 
 /** A property as the API answers it; acres and perimeter are computed on the server. */
 export const PropertySchema = z.object({

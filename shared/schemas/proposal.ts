@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
-import { DATE_FIELD_MESSAGE } from './common';
+import { DATE_FIELD_MESSAGE, PageQuerySchema } from './common';
 
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: DATE_FIELD_MESSAGE });
 const pct = (label: string, max: number) =>
@@ -62,7 +62,9 @@ export const DeclineSchema = z.object({
 export const PROPOSAL_STATES = ['draft', 'sent', 'approved', 'declined', 'withdrawn', 'expired'] as const;
 export type ProposalDisplayStatus = (typeof PROPOSAL_STATES)[number];
 
-export const ProposalListQuerySchema = z.object({
-  status: z.enum(PROPOSAL_STATES).optional(),
-  propertyId: z.coerce.number().int().positive().optional(),
-});
+export const ProposalListQuerySchema = z
+  .object({
+    status: z.enum(PROPOSAL_STATES).optional(),
+    propertyId: z.coerce.number().int().positive().optional(),
+  })
+  .extend(PageQuerySchema.shape);

@@ -1,6 +1,6 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
-import { IdSchema, IsoDateSchema } from './common';
+import { IdSchema, IsoDateSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskStatus, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
 
@@ -13,9 +13,13 @@ export const TaskListQuerySchema = z
     /** Tasks whose dates (or, unscheduled, whose window) touch [from, to]. */
     from: IsoDateSchema.optional(),
     to: IsoDateSchema.optional(),
+    /** `true` adds each task's unit outline (the field sheet's sketches); lists carry none otherwise. */
+    geometry: z.enum(['true', 'false'], { message: 'geometry must be true or false' }).optional(),
   })
+  .extend(PageQuerySchema.shape)
   .refine((q) => !q.from || !q.to || q.from <= q.to, { message: '"from" must not come after "to"', path: ['to'] });
-export type TaskListQuery = z.infer<typeof TaskListQuerySchema>;
+/** A task list filter; the page members may be left out (the server's defaults apply). */
+export type TaskListQuery = Omit<z.infer<typeof TaskListQuerySchema>, 'limit' | 'offset'> & Partial<PageQuery>;
 
 export const TaskUpdateSchema = z
   .object({
@@ -133,6 +137,8 @@ export interface TaskDto {
 export interface TaskListDto {
   tasks: TaskDto[];
   warnings: TaskWarning[];
+  /** The tasks matching the filter in all (`tasks` holds `limit` of them from `offset`). */
+  page?: PageDto;
 }
 
 export interface UnitProgressDto extends Progress {

@@ -8,7 +8,7 @@
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatCents } from '../../shared/domain/money';
-import { DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
+import { DOC_COLORS, FONT_HEADING, keyValueTable, neverBreakBefore, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
 const OCHRE = '#C99A2E';
@@ -164,12 +164,12 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
       ? [{ unbreakable: true, stack: [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any check.', style: 'small', margin: [0, 3, 0, 0] }] }]
       : [];
 
-  const frame = pageFrame({ title: `Invoice ${invoice.number}`, firmName: firm.name, firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined, preparedOn: issued ?? undefined });
+  const frame = pageFrame({ title: `Invoice ${invoice.number}`, firmName: firm.name, firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined, preparedOn: issued ?? undefined, headerFromPage: 2 });
   return {
     ...frame,
-    header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : frame.header(currentPage, pageCount, pageSize)),
+    // Page 1 carries its own letterhead; the running header starts on page 2 (pageFrame's headerFromPage).
     // Short sections are unbreakable stacks, so a heading never sits alone at a page's foot.
-    pageBreakBefore: () => false,
+    pageBreakBefore: neverBreakBefore(),
     watermark: invoice.status === 'draft' || invoice.status === 'void' ? { text: invoice.status.toUpperCase(), color: invoice.status === 'void' ? DOC_COLORS.clay : OCHRE, opacity: 0.09, bold: true, font: FONT_HEADING, fontSize: 110 } : undefined,
     info: { title: `Invoice ${invoice.number}`, author: firm.name, subject: `${KIND_TITLE[invoice.kind]} for ${input.client.name}` },
     content: [

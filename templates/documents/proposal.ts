@@ -12,7 +12,7 @@
  * input that does not, so a PDF can never show figures that contradict each other.
  */
 import type { Geometry, MultiPolygon, Polygon } from 'geojson';
-import type { Column, Content, CustomTableLayout, Node, NodeQueries, TableCell, TDocumentDefinitions, Watermark } from 'pdfmake/interfaces';
+import type { Column, Content, CustomTableLayout, TableCell, TDocumentDefinitions, Watermark } from 'pdfmake/interfaces';
 import { z } from 'zod';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatLatLon } from '../../shared/domain/geometry';
@@ -24,7 +24,7 @@ import { kindSwatchSvg, renderPlanMap } from '../../server/services/documents/ma
 import {
   DOC_COLORS,
   FONT_HEADING,
-  keepHeadingsWithNext,
+  keepWithNextRule,
   keyValueTable,
   pageFrame,
   renderPdf,
@@ -793,12 +793,7 @@ function approvalSection(data: DocData, money: (c: number) => string): Content {
  * Page-break rule of the proposal: headings stay with what follows (the shared rule), and a unit's
  * header row in the price table moves to the next page unless one line row fits below it.
  */
-export function proposalPageBreakBefore(node: Node, queries: NodeQueries): boolean {
-  if (keepHeadingsWithNext(node, queries)) return true;
-  if (typeof node.id !== 'string' || !node.id.startsWith(GROUP_ROW_ID)) return false;
-  const { verticalRatio, pageInnerHeight } = node.startPosition;
-  return (1 - verticalRatio) * pageInnerHeight < GROUP_ROW_KEEP_PT && queries.getNodesOnNextPage().length > 0;
-}
+export const proposalPageBreakBefore = keepWithNextRule({ idPrefix: GROUP_ROW_ID, keepPt: GROUP_ROW_KEEP_PT });
 
 /** The pdfmake document definition of a proposal (build a fresh one for every render). */
 export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinitions {
@@ -856,11 +851,11 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
     firmName: firm.name,
     firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined,
     preparedOn,
+    // Page 1 carries its own letterhead; the running header starts on page 2.
+    headerFromPage: 2,
   });
   return {
     ...frame,
-    // Page 1 carries its own letterhead; the running header starts on page 2.
-    header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : frame.header(currentPage, pageCount, pageSize)),
     watermark: watermarkFor(look),
     pageBreakBefore: proposalPageBreakBefore,
     info: {

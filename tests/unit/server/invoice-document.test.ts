@@ -1,7 +1,11 @@
 import { execFileSync } from 'node:child_process';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DomainValidationError } from '../../../shared/domain/errors';
 import { renderInvoicePdf, type InvoiceDocumentInput } from '../../../templates/documents/invoice';
+import { pdfWorkersReady } from '../../../server/services/documents/pdf-pool';
+
+// PDFs render in a worker thread; its first start (fonts, modules) is not part of a test.
+beforeAll(pdfWorkersReady, 60_000);
 
 /** Invented demo figures; each total is arithmetic on the lines (no source). */
 const input = (): InvoiceDocumentInput => ({

@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { addDays, formatMonthDay } from '../../../../shared/domain/planting-windows';
 import { TASK_STATUSES, weekStart } from '../../../../shared/domain/tasks';
@@ -9,6 +9,7 @@ import { datesText } from '../../../features/schedule/components/task-text';
 import type { DraggedDates } from '../../../features/schedule/lib/timeline';
 import { useToast } from '../../../components/ui/toast';
 import { ApiError } from '../../../lib/api-client';
+import { LIST_PAGE } from '../../../../shared/schemas/common';
 import { useTasks } from '../../../features/schedule/api/get-tasks';
 import { useProperties } from '../../../features/properties/api/get-properties';
 import { useTeam } from '../../../features/team/api/team';
@@ -88,7 +89,12 @@ export function SchedulePage() {
   const today = todayUtc();
   const params = readScheduleParams(search, today);
   // Query keys compare by value, so a fresh object each render asks for nothing new.
-  const query = taskQueryFor(params);
+  const filter = taskQueryFor(params);
+  // The list is paged: "Show more" asks for a longer page; a new filter starts again at one page.
+  const filterKey = JSON.stringify(filter);
+  const [more, setMore] = useState<{ key: string; pages: number }>({ key: filterKey, pages: 1 });
+  const pages = more.key === filterKey ? more.pages : 1;
+  const query = pages > 1 ? { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * LIST_PAGE.defaultLimit) } : filter;
   const tasks = useTasks(query);
   const team = useTeam();
   const properties = useProperties();
@@ -181,6 +187,20 @@ export function SchedulePage() {
       <Filters params={params} onChange={change} people={people} properties={properties.data ?? []} />
       <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="min-w-0" aria-busy={tasks.isFetching || undefined}>
+          {tasks.data?.page && tasks.data.page.total > list.length ? (
+            <p className="mb-2 flex flex-wrap items-center gap-3 text-sm text-slate" role="status">
+              <span className="tabular-nums">
+                Showing {list.length.toLocaleString('en-US')} of {tasks.data.page.total.toLocaleString('en-US')} tasks
+              </span>
+              {query.limit === undefined || query.limit < LIST_PAGE.maxLimit ? (
+                <Button variant="secondary" size="sm" onClick={() => setMore({ key: filterKey, pages: pages + 1 })}>
+                  Show more
+                </Button>
+              ) : (
+                <span>Narrow the dates or filters to see the rest.</span>
+              )}
+            </p>
+          ) : null}
           {tasks.isPending ? (
             <Loading label="Loading the schedule…" />
           ) : tasks.isError ? (

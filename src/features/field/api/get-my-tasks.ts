@@ -9,10 +9,11 @@ export type FieldTask = TaskDto & { unitGeometry?: Geometry | null };
 
 /**
  * The signed-in worker's tasks: a crew member gets only their own (the server sees to it, without
- * prices); staff opening the field sheet ask for the tasks assigned to themselves.
+ * prices); staff opening the field sheet ask for the tasks assigned to themselves. The units'
+ * outlines come only when asked (`geometry=true`), for the sketches.
  */
 export const getMyTasks = (me: { id: number; role: string }, signal?: AbortSignal) =>
-  getData<TaskListDto & { tasks: FieldTask[] }>(me.role === 'crew' ? '/api/tasks' : `/api/tasks?assigneeId=${me.id}`, signal);
+  getData<TaskListDto & { tasks: FieldTask[] }>(me.role === 'crew' ? '/api/tasks?geometry=true' : `/api/tasks?assigneeId=${me.id}&geometry=true`, signal);
 
 export const getMyTasksQueryOptions = (me: { id: number; role: string }) => queryOptions({ queryKey: fieldKeys.mine, queryFn: ({ signal }) => getMyTasks(me, signal) });
 
