@@ -21,7 +21,11 @@ import './models';
 let sessionPool: pg.Pool | null = null;
 /** The pg pool the session store uses (one per process). */
 function sessionStorePool(): pg.Pool {
-  if (!sessionPool) sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
+  if (!sessionPool) {
+    sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 5000 });
+    // An idle client whose server went away emits 'error'; without a listener Node would exit.
+    sessionPool.on('error', (err) => logger.warn({ err: err.message }, 'session store: an idle database connection was lost'));
+  }
   return sessionPool;
 }
 
@@ -83,7 +87,7 @@ export function createApp(): Express {
     session({
       name: 'browseline.sid',
       // No touch on every request: a session lasts 14 days from sign-in, and reads stay reads.
-      store: new PgStore({ pool: sessionStorePool(), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
+      store: new PgStore({ pool: sessionStorePool(), errorLog: (...args: unknown[]) => logger.warn({ args: args.map(String) }, 'session store error'), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
       secret: config.sessionSecret,
       resave: false,
       saveUninitialized: false,
