@@ -65,6 +65,9 @@ function toAnswer(err: unknown): Answer {
     return { status: 422, body: { error: err.errors.map((e) => e.message).join('; '), code: 'validation' } };
   }
   const e = err as { type?: string; status?: number; statusCode?: number; expose?: boolean; message?: string };
+  if (err instanceof URIError) {
+    return { status: 400, body: { error: 'The address holds characters that are not valid (a broken %-escape). Check the link.', code: 'bad_request' } };
+  }
   if (e && e.type === 'entity.parse.failed') {
     return { status: 400, body: { error: 'The request body is not valid JSON. Check for a missing quote, comma or brace.', code: 'malformed_json' } };
   }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RecordIdSchema } from './common';
 import { LIMITS } from '../limits';
 
 export const ROLES = ['owner', 'consultant', 'crew', 'client'] as const;
@@ -34,7 +35,7 @@ export const InviteCreateSchema = z
     email,
     name: z.string().trim().min(1, { message: 'enter the person’s name' }).max(LIMITS.nameMax),
     role: z.enum(['consultant', 'crew', 'client']),
-    clientId: z.number().int().positive().optional(),
+    clientId: RecordIdSchema.optional(),
   })
   .refine((v) => v.role !== 'client' || v.clientId !== undefined, {
     message: 'choose the client this contact belongs to',

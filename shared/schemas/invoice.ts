@@ -1,9 +1,10 @@
 /** Invoices: what the API takes (zod) and answers (types shared by the server's presenter and the client). */
 import { z } from 'zod';
+import { IdSchema, RecordIdSchema } from './common';
 import { parseDollarsToCents } from '../domain/money';
 import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceKind, type InvoiceLineSource, type InvoiceStatus } from '../domain/invoicing';
 
-const id = z.number({ message: 'must be a record id' }).int().positive({ message: 'must be a positive whole number' });
+const id = RecordIdSchema;
 
 export const InvoiceCreateSchema = z
   .object({
@@ -15,9 +16,9 @@ export const InvoiceCreateSchema = z
 export type InvoiceCreateInput = z.infer<typeof InvoiceCreateSchema>;
 
 export const InvoiceListQuerySchema = z.object({
-  clientId: z.coerce.number().int().positive().optional(),
-  propertyId: z.coerce.number().int().positive().optional(),
-  proposalId: z.coerce.number().int().positive().optional(),
+  clientId: IdSchema.optional(),
+  propertyId: IdSchema.optional(),
+  proposalId: IdSchema.optional(),
   status: z.enum(INVOICE_STATUSES, { message: 'status must be draft, open, paid or void' }).optional(),
 });
 export type InvoiceListQuery = z.infer<typeof InvoiceListQuerySchema>;
@@ -40,7 +41,7 @@ export const ManualLineSchema = z.object({
 });
 export type ManualLineInput = z.infer<typeof ManualLineSchema>;
 
-export const LineParamsSchema = z.object({ id: z.coerce.number().int().positive(), lineId: z.coerce.number().int().positive() });
+export const LineParamsSchema = z.object({ id: IdSchema, lineId: IdSchema });
 
 export const CheckoutSchema = z.object({
   amountCents: z.number({ message: 'the amount must be a number of cents' }).int({ message: 'the amount is whole cents' }).positive({ message: 'the amount must be more than zero' }).optional(),
@@ -143,7 +144,7 @@ export const ManualLineFormSchema = ManualLineSchema.omit({ unitPriceCents: true
 });
 export type ManualLineFormInput = z.input<typeof ManualLineFormSchema>;
 
-export const BillableTasksQuerySchema = z.object({ proposalId: z.coerce.number().int().positive() });
+export const BillableTasksQuerySchema = z.object({ proposalId: IdSchema });
 
 /** A done task not billed yet, offered for a progress invoice. */
 export interface BillableTaskDto {

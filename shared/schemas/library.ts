@@ -3,6 +3,7 @@
  * and prescriptions. Materials convert to the domain's MaterialDefinition (shared/domain/practice.ts).
  */
 import { z } from 'zod';
+import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
 import { UNIT_KINDS } from '../domain/unit-kinds';
 import { WINDOW_KEYS } from '../domain/planting-windows';
@@ -149,7 +150,7 @@ const StepParametersSchema = z.object({
 
 export const PrescriptionParametersSchema = z.object({ steps: z.record(z.string(), StepParametersSchema).optional() });
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'write dates as YYYY-MM-DD' });
+const isoDate = IsoDateSchema;
 
 export const PrescriptionCreateSchema = z.object({
   practiceId: z.number().int().positive({ message: 'choose a practice from the library' }),
