@@ -15,7 +15,8 @@ import { errorHandler } from './middlewares/error-handler';
 import { notFound } from './errors';
 import { LIMITS } from '../shared/limits';
 import { apiRouters } from './routes';
-import { allowedTileOrigins } from './services/imagery/tile-origins';
+import { contentSecurityPolicy, firmContentSecurityPolicy, PERMISSIONS_POLICY } from './middlewares/content-security-policy';
+import { idleTimeout } from './middlewares/idle-timeout';
 import './models';
 
 let sessionPool: pg.Pool | null = null;
@@ -43,27 +44,16 @@ export function createApp(): Express {
 
   app.use(
     helmet({
-      contentSecurityPolicy: {
-        useDefaults: false,
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          styleSrc: ["'self'", "'unsafe-inline'"],
-          imgSrc: ["'self'", 'data:', 'blob:', () => allowedTileOrigins().join(' ')],
-          fontSrc: ["'self'", 'data:'],
-          // Firms may set an imagery tile service; its origin is allowed, nothing else.
-          connectSrc: ["'self'", () => allowedTileOrigins().join(' ')],
-          workerSrc: ["'self'", 'blob:'],
-          childSrc: ["'self'", 'blob:'],
-          objectSrc: ["'none'"],
-          baseUri: ["'self'"],
-          formAction: ["'self'"],
-          frameAncestors: ["'none'"],
-        },
-      },
+      // The strict policy by default; firmContentSecurityPolicy widens it per request for the firm's own tile service.
+      contentSecurityPolicy: false,
       crossOriginEmbedderPolicy: false,
       strictTransportSecurity: config.cookieSecure,
     }),
+    (_req, res, next) => {
+      res.setHeader('Content-Security-Policy', contentSecurityPolicy());
+      res.setHeader('Permissions-Policy', PERMISSIONS_POLICY);
+      next();
+    },
   );
 
   app.use(
@@ -81,9 +71,12 @@ export function createApp(): Express {
   const PgStore = connectPgSimple(session);
   // Signed webhooks are verified on the exact bytes sent, so this path takes its body raw, before the JSON parser.
   app.use('/api/webhooks/payments', express.raw({ type: 'application/json', limit: LIMITS.jsonBodyBytes }));
-  app.use(
-    '/api',
-    express.json({ limit: LIMITS.jsonBodyBytes }),
+  // API answers are about one person's data at one moment: no browser or proxy keeps them (a route may say otherwise).
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  const sessions = [
     session({
       name: 'browseline.sid',
       // No touch on every request: a session lasts 14 days from sign-in, and reads stay reads.
@@ -95,16 +88,18 @@ export function createApp(): Express {
       cookie: { httpOnly: true, sameSite: 'lax', secure: config.cookieSecure, maxAge: 14 * 24 * 3600 * 1000 },
     }),
     passport.session(),
-    csrfProtection,
-  );
+    idleTimeout,
+    firmContentSecurityPolicy,
+  ];
+  app.use('/api', express.json({ limit: LIMITS.jsonBodyBytes }), ...sessions, csrfProtection);
 
   for (const { path: mount, router } of apiRouters) app.use(`/api${mount}`, router);
   app.use('/api', (req, _res, next) => next(notFound(`The API path ${req.method} ${req.originalUrl.split('?')[0]}`)));
 
   if (fs.existsSync(path.join(config.clientDist, 'index.html'))) {
     app.use(express.static(config.clientDist, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
-    app.use((req, res, next) => {
-      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+    // The page itself carries the firm's policy (the map's tiles load under it), so it reads the session too.
+    app.use((req, _res, next) => (req.method === 'GET' || req.method === 'HEAD' ? next() : next('router')), ...sessions, (_req: express.Request, res: express.Response) => {
       res.sendFile(path.join(config.clientDist, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } });
     });
   }

@@ -35,7 +35,13 @@ export const config = {
   outboxPollMs: int(env.OUTBOX_POLL_MS, 2000),
   /** How often the server looks for overdue invoices to remind (default hourly). */
   reminderPollMs: int(env.REMINDER_POLL_MS, 60 * 60 * 1000),
-  loginRateLimit: { windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000), max: int(env.LOGIN_RATE_MAX, 10) },
+  loginRateLimit: {
+    windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000),
+    /** Failed sign-ins per address and account in the window. */
+    max: int(env.LOGIN_RATE_MAX, 10),
+    /** Failed sign-ins per account, from all addresses together, in the window. */
+    accountMax: int(env.LOGIN_ACCOUNT_RATE_MAX, 30),
+  },
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
   clientDist: path.join(projectRoot, 'dist'),
   payments: {

@@ -110,13 +110,15 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
     return { task: replay, replayed: true };
   }
   const probe = await taskForActor(actor, id);
+  // The same key finished it between the two reads (a concurrent copy of this request): its answer.
+  if (probe.status === 'done' && probe.completionKey === key) return { task: probe, replayed: true };
   if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn}` : 'skipped'} already; nothing was changed.`);
   // A day of slack: the phone sends its own calendar day, which runs ahead of UTC east of Greenwich.
   if (input.doneOn > addDays(todayIso(), 1)) throw unprocessable('doneOn: the date the work was done cannot be in the future.');
   const saved: string[] = [];
   try {
     for (const photo of photos) saved.push(await saveFile('photos', photo.bytes, photo.extension));
-    return await sequelize.transaction(async (transaction) => {
+    const result = await sequelize.transaction(async (transaction): Promise<CompletionResult> => {
       const task = await taskForActor(actor, id, transaction);
       if (task.status === 'done' || task.status === 'skipped') {
         if (task.completionKey === key) return { task, replayed: true };
@@ -134,6 +136,9 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
       await notifyUnitDone(task, transaction);
       return { task, replayed: false };
     });
+    // A concurrent copy with the same key won the row lock: its photos are the stored ones, not ours.
+    if (result.replayed) await Promise.all(saved.map((k) => deleteFile(k)));
+    return result;
   } catch (error) {
     await Promise.all(saved.map((k) => deleteFile(k)));
     // A concurrent request with the same key won the unique index: answer its completion.

@@ -1,16 +1,16 @@
 import type { Firm, Overlay } from '../models';
-import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
+import { DEFAULT_IDLE_TIMEOUT_HOURS, type FirmDto, type OverlayDto } from '../../shared/schemas/firm';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
-  const s = firm.settings as { tileUrlTemplate?: string | null; tileAttribution?: string | null; taxRatePct?: number };
+  const s = firm.settings as { tileUrlTemplate?: string | null; tileAttribution?: string | null; taxRatePct?: number; idleTimeoutHours?: number };
   return {
     id: firm.id,
     name: firm.name,
     email: firm.email,
     phone: firm.phone,
     region: firm.region,
-    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0 },
+    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0, idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS },
   };
 }
 

@@ -52,6 +52,17 @@ export const TokenPasswordSchema = z
   .refine((v) => v.password === v.confirmPassword, { message: 'the two passwords differ', path: ['confirmPassword'] });
 export type TokenPasswordInput = z.infer<typeof TokenPasswordSchema>;
 
+/** The signed-in "change password" form. */
+export const PasswordChangeSchema = z
+  .object({
+    currentPassword: z.string().min(1, { message: 'enter your current password' }).max(LIMITS.passwordMax),
+    password,
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.password === v.confirmPassword, { message: 'the two passwords differ', path: ['confirmPassword'] })
+  .refine((v) => v.password !== v.currentPassword, { message: 'choose a password different from the current one', path: ['password'] });
+export type PasswordChangeInput = z.infer<typeof PasswordChangeSchema>;
+
 export const PasswordResetRequestSchema = z.object({ email });
 export type PasswordResetRequestInput = z.infer<typeof PasswordResetRequestSchema>;
 

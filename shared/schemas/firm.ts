@@ -1,18 +1,23 @@
 import { z } from 'zod';
 
-/** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png */
+/** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png (https only). */
 export const TileUrlTemplateSchema = z
   .string()
   .trim()
   .max(500)
-  .refine((v) => /^https?:\/\/[^\s/]+\//.test(v), { message: 'start the address with https:// and the server name' })
+  .refine((v) => /^https:\/\/[^\s/]+\//.test(v), { message: 'start the address with https:// and the server name (plain http is not allowed)' })
   .refine((v) => v.includes('{z}') && v.includes('{x}') && v.includes('{y}'), { message: 'the address must contain {z}, {x} and {y}' });
 
 export const FirmSettingsUpdateSchema = z.object({
   tileUrlTemplate: z.union([TileUrlTemplateSchema, z.literal('').transform(() => null), z.null()]).optional(),
   tileAttribution: z.string().trim().max(200).nullish(),
   taxRatePct: z.number().min(0).max(30).optional(),
+  /** Hours without any request after which a session ends (besides the 14-day limit from sign-in). */
+  idleTimeoutHours: z.number({ message: 'give the idle time in hours' }).min(0.25, { message: 'must be at least a quarter of an hour' }).max(168, { message: 'must be at most 168 hours (a week)' }).optional(),
 });
+
+/** The idle timeout of a firm that has not chosen one. */
+export const DEFAULT_IDLE_TIMEOUT_HOURS = 8;
 export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
 
 export const FirmSchema = z.object({
@@ -21,7 +26,7 @@ export const FirmSchema = z.object({
   email: z.string().nullable(),
   phone: z.string().nullable(),
   region: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number(), idleTimeoutHours: z.number() }),
 });
 export type FirmDto = z.infer<typeof FirmSchema>;
 
