@@ -53,6 +53,11 @@ export const VoidSchema = z.object({
 });
 
 export const RefundSchema = z.object({
+  /**
+   * One key per refund the owner means to make, made when the form is filled and sent again with
+   * every retry of that same refund: the payments service then refunds once, whatever is lost.
+   */
+  requestKey: z.string({ message: 'the refund request needs its key; reload the page and try again' }).trim().min(8, { message: 'must be at least 8 characters' }).max(200).regex(/^[A-Za-z0-9_.:-]+$/, { message: 'may hold letters, digits and - _ . : only' }),
   paymentId: id,
   amountCents: z.number({ message: 'the amount must be a number of cents' }).int({ message: 'the amount is whole cents' }).positive({ message: 'the amount must be more than zero' }),
   reason: z.string().trim().max(500).optional(),

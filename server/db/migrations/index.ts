@@ -6,6 +6,8 @@ import * as m0004 from './0004-proposals';
 import * as m0005 from './0005-tasks';
 import * as m0006 from './0006-invoices';
 import * as m0008 from './0008-results';
+import * as m0018 from './0018-refund-request-keys';
+import * as m0019 from './0019-outbox-retry-window';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -15,4 +17,6 @@ export const migrations = [
   { name: '0005-tasks', ...m0005 },
   { name: '0006-invoices', ...m0006 },
   { name: '0008-results', ...m0008 },
+  { name: '0018-refund-request-keys', ...m0018 },
+  { name: '0019-outbox-retry-window', ...m0019 },
 ];
