@@ -21,6 +21,7 @@ import { invoicesRouter } from './invoices';
 import { webhooksRouter } from './webhooks';
 import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRouter } from './results';
 import { filesRouter } from './files';
+import { outboxRouter } from './outbox';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -56,4 +57,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/harvests', router: harvestsRouter },
   { path: '/season-reports', router: seasonReportsRouter },
   { path: '/files', router: filesRouter },
+  { path: '/outbox', router: outboxRouter },
 ];
