@@ -30,6 +30,11 @@ export const config = {
     pass: env.SMTP_PASS ?? '',
     from: env.MAIL_FROM ?? 'Browseline <no-reply@browseline.test>',
   },
+  /**
+   * The owner's reader of captured mail (/api/dev/mail): off unless DEV_MAIL_READER=true, and the
+   * server refuses to start with it in production (see configurationProblems).
+   */
+  devMailReader: env.DEV_MAIL_READER === 'true',
   /** The local SMTP capture server's HTTP reader (development only). */
   mailCaptureUrl: env.MAIL_CAPTURE_URL ?? `http://127.0.0.1:${int(env.MAIL_CAPTURE_HTTP_PORT, 1081)}`,
   outboxPollMs: int(env.OUTBOX_POLL_MS, 2000),
@@ -53,3 +58,10 @@ export const config = {
 } as const;
 
 export type AppConfig = typeof config;
+
+/** Settings the server refuses to start with: each a sentence saying what to change. */
+export function configurationProblems(c: Pick<AppConfig, 'isProduction' | 'devMailReader'>): string[] {
+  const problems: string[] = [];
+  if (c.isProduction && c.devMailReader) problems.push('DEV_MAIL_READER=true is refused with NODE_ENV=production: the captured-mail reader shows sign-in links. Unset it.');
+  return problems;
+}

@@ -1,11 +1,17 @@
 /** Starts the HTTP server and the outbox worker. */
 import { createApp, closeSessionPool } from './app';
-import { config } from './config';
+import { config, configurationProblems } from './config';
 import { logger } from './logger';
 import { migrateUp } from './db/migrator';
 import { sequelize } from './db/sequelize';
 import { startOutboxWorker } from './services/mail/outbox';
 import { startReminderJob } from './commands/reminder-sender';
+
+const problems = configurationProblems(config);
+if (problems.length) {
+  for (const problem of problems) logger.fatal(problem);
+  process.exit(1);
+}
 
 if (process.env.MIGRATE_ON_START !== 'false') {
   const applied = await migrateUp();
