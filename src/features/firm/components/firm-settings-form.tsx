@@ -12,15 +12,16 @@ const FormSchema = z.object({
   tileUrlTemplate: z.union([z.literal(''), TileUrlTemplateSchema]),
   tileAttribution: z.string().trim().max(200),
   taxRatePct: z.coerce.number({ message: 'enter the rate as a number' }).min(0, { message: 'cannot be negative' }).max(30, { message: 'above 30 % looks like a typing slip' }),
+  idleTimeoutHours: z.coerce.number({ message: 'enter the hours as a number' }).min(0.25, { message: 'at least a quarter of an hour' }).max(168, { message: 'at most 168 hours (a week)' }),
 });
 
-/** The owner's firm settings: imagery tile service and the default sales-tax rate. */
+/** The owner's firm settings: imagery tile service, the default sales-tax rate and the idle sign-out time. */
 export function FirmSettingsForm() {
   const firm = useFirm();
   if (firm.isPending) return <Loading />;
   if (firm.isError) return <ErrorPanel error={firm.error} />;
   const s = firm.data.settings;
-  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct }} />;
+  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct, idleTimeoutHours: s.idleTimeoutHours }} />;
 }
 
 function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema> }) {
@@ -29,7 +30,7 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
   const form = useForm<z.input<typeof FormSchema>, unknown, z.output<typeof FormSchema>>({ resolver: zodResolver(FormSchema), defaultValues: defaults });
   const submit = form.handleSubmit((v) =>
     update.mutate(
-      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct },
+      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct, idleTimeoutHours: v.idleTimeoutHours },
       { onSuccess: () => toast('success', 'Firm settings saved.'), onError: (e) => toast('error', e.message) },
     ),
   );
@@ -39,12 +40,13 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
         className="md:col-span-2"
         label="Imagery tile service (XYZ address)"
         placeholder="https://tiles.example.com/{z}/{x}/{y}.jpg"
-        hint="Optional. When set, plan maps show this imagery under the plan. Leave empty for the plain offline background."
+        hint="Optional, https only. When set, plan maps show this imagery under the plan. Leave empty for the plain offline background."
         error={form.formState.errors.tileUrlTemplate?.message}
         {...form.register('tileUrlTemplate')}
       />
       <TextField label="Imagery credit line" placeholder="Imagery © your provider" error={form.formState.errors.tileAttribution?.message} {...form.register('tileAttribution')} />
       <TextField label="Sales tax rate (%)" inputMode="decimal" hint="The default on new proposals; each proposal can change it." error={form.formState.errors.taxRatePct?.message} {...form.register('taxRatePct')} />
+      <TextField label="Sign out after idle time (hours)" inputMode="decimal" hint="Everyone in the firm is signed out after this long without using Browseline (default 8). Sessions end 14 days after sign-in in any case." error={form.formState.errors.idleTimeoutHours?.message} {...form.register('idleTimeoutHours')} />
       <div className="md:col-span-2">
         <Button type="submit" busy={update.isPending}>Save firm settings</Button>
       </div>
