@@ -21,12 +21,12 @@ export const IdSchema = z
   .pipe(RecordIdSchema);
 export const IdParamsSchema = z.object({ id: IdSchema });
 
-/** True when `v` (YYYY-MM-DD) is a day that exists on the calendar, in years 1900–2199. */
+/** True when `v` (YYYY-MM-DD) is a day that exists on the calendar, in years 1–9999 (PostgreSQL has no year 0). */
 export function isRealCalendarDate(v: string): boolean {
   const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(v);
   if (!m) return false;
   const [year, month, day] = [Number(m[1]), Number(m[2]), Number(m[3])];
-  if (year < 1900 || year > 2199 || month < 1 || month > 12 || day < 1) return false;
+  if (year < 1 || month < 1 || month > 12 || day < 1) return false;
   return day <= new Date(Date.UTC(year, month, 0)).getUTCDate();
 }
 
