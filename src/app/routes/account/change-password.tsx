@@ -39,7 +39,7 @@ export function ChangePasswordPage() {
             error={form.formState.errors.password?.message}
             {...form.register('password')}
           />
-          <TextField label="The new password again" type="password" autoComplete="new-password" error={form.formState.errors.confirmPassword?.message} {...form.register('confirmPassword')} />
+          <TextField label="The same password again" type="password" autoComplete="new-password" error={form.formState.errors.confirmPassword?.message} {...form.register('confirmPassword')} />
           <p className="text-xs text-slate">You stay signed in here; every other device you use is signed out.</p>
           {change.error ? <p role="alert" className="text-sm text-clay">{change.error.message}</p> : null}
           <div className="flex items-center gap-3">
