@@ -8,13 +8,14 @@ import { defineRoutes, OWNER } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { config } from '../config';
-import { notFound, serviceUnavailable } from '../errors';
+import { AppError, notFound, serviceUnavailable } from '../errors';
 import { OutboxMessage } from '../models';
 import { actor } from '../policies/firm-scope';
 
 const r = defineRoutes('/dev/mail');
 
-const readerOn = (_req: Request, _res: Response, next: NextFunction) => next(config.devMailReader && !config.isProduction ? undefined : notFound('That page'));
+const readerOff = () => new AppError(404, 'not_found', 'The captured-mail reader is off. It works only in development, started with DEV_MAIL_READER=true.');
+const readerOn = (_req: Request, _res: Response, next: NextFunction) => next(config.devMailReader && !config.isProduction ? undefined : readerOff());
 
 interface CapturedSummary {
   id: number;
