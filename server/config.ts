@@ -30,12 +30,23 @@ export const config = {
     pass: env.SMTP_PASS ?? '',
     from: env.MAIL_FROM ?? 'Browseline <no-reply@browseline.test>',
   },
+  /**
+   * The owner's reader of captured mail (/api/dev/mail): off unless DEV_MAIL_READER=true, and the
+   * server refuses to start with it in production (see configurationProblems).
+   */
+  devMailReader: env.DEV_MAIL_READER === 'true',
   /** The local SMTP capture server's HTTP reader (development only). */
   mailCaptureUrl: env.MAIL_CAPTURE_URL ?? `http://127.0.0.1:${int(env.MAIL_CAPTURE_HTTP_PORT, 1081)}`,
   outboxPollMs: int(env.OUTBOX_POLL_MS, 2000),
   /** How often the server looks for overdue invoices to remind (default hourly). */
   reminderPollMs: int(env.REMINDER_POLL_MS, 60 * 60 * 1000),
-  loginRateLimit: { windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000), max: int(env.LOGIN_RATE_MAX, 10) },
+  loginRateLimit: {
+    windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000),
+    /** Failed sign-ins per address and account in the window. */
+    max: int(env.LOGIN_RATE_MAX, 10),
+    /** Failed sign-ins per account, from all addresses together, in the window. */
+    accountMax: int(env.LOGIN_ACCOUNT_RATE_MAX, 30),
+  },
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
   /** Where files live: 'disk' (UPLOADS_DIR, one machine) or 's3' (object storage shared by every instance). */
   storage: {
@@ -74,3 +85,10 @@ export const config = {
 } as const;
 
 export type AppConfig = typeof config;
+
+/** Settings the server refuses to start with: each a sentence saying what to change. */
+export function configurationProblems(c: Pick<AppConfig, 'isProduction' | 'devMailReader'>): string[] {
+  const problems: string[] = [];
+  if (c.isProduction && c.devMailReader) problems.push('DEV_MAIL_READER=true is refused with NODE_ENV=production: the captured-mail reader shows sign-in links. Unset it.');
+  return problems;
+}

@@ -1,6 +1,6 @@
 /** Starts the HTTP server, the outbox and reminder pollers and (by default) the job workers. */
 import { createApp, closeSessionPool } from './app';
-import { config } from './config';
+import { config, configurationProblems } from './config';
 import { logger } from './logger';
 import { migrateUp } from './db/migrator';
 import { sequelize } from './db/sequelize';
@@ -10,6 +10,12 @@ import { startJobQueue, stopJobQueue } from './services/jobs/job-queue';
 import { beginDraining, closeServerGracefully } from './lifecycle';
 import { warmGeoWorkers } from './services/geo-work/geo-pool';
 import { closePdfWorkers, warmPdfWorkers } from './services/documents/pdf-pool';
+
+const problems = configurationProblems(config);
+if (problems.length) {
+  for (const problem of problems) logger.fatal(problem);
+  process.exit(1);
+}
 
 if (config.migrateOnStart) {
   const applied = await migrateUp();

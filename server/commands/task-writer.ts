@@ -136,13 +136,15 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
     return { task: replay, replayed: true };
   }
   const probe = await taskForActor(actor, id);
+  // The same key finished it between the two reads (a concurrent copy of this request): its answer.
+  if (probe.status === 'done' && probe.completionKey === key) return { task: probe, replayed: true };
   if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn ? formatDate(probe.doneOn) : 'an earlier day'}` : 'skipped'} already; nothing was changed.`);
   // The firm's today, with a day of slack for a crew phone set to a zone east of the firm's.
   if (input.doneOn > addDays(await firmToday(actor.firmId), 1)) throw unprocessable('doneOn: the day the work was done cannot be after today. Pick today or an earlier day.');
   const saved: string[] = [];
   try {
     for (const photo of photos) saved.push(await saveFile('photos', photo.bytes, photo.extension));
-    return await sequelize.transaction(async (transaction) => {
+    const result = await sequelize.transaction(async (transaction): Promise<CompletionResult> => {
       const task = await taskForActor(actor, id, transaction);
       if (task.status === 'done' || task.status === 'skipped') {
         if (task.completionKey === key) return { task, replayed: true };
@@ -160,6 +162,9 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
       await notifyUnitDone(task, transaction);
       return { task, replayed: false };
     });
+    // A concurrent copy with the same key won the row lock: its photos are the stored ones, not ours.
+    if (result.replayed) await Promise.all(saved.map((k) => deleteFile(k)));
+    return result;
   } catch (error) {
     await Promise.all(saved.map((k) => deleteFile(k)));
     // A concurrent request with the same key won the unique index: answer its completion.

@@ -5,7 +5,6 @@ import { Firm } from '../models';
 import { FirmSettingsUpdateSchema } from '../../shared/schemas/firm';
 import { presentFirm } from '../presenters/firm';
 import { actor } from '../policies/firm-scope';
-import { refreshTileOrigins } from '../services/imagery/tile-origins';
 import { recordAudit } from '../commands/audit-recorder';
 import { sequelize } from '../db/sequelize';
 import { notFound } from '../errors';
@@ -30,7 +29,6 @@ r.patch('/settings', OWNER, validate({ body: FirmSettingsUpdateSchema }), async 
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.settings-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(req.body) }, ip: req.ip ?? null }, transaction);
     return row;
   });
-  await refreshTileOrigins();
   res.json({ data: presentFirm(firm) });
 });
 

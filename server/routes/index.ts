@@ -22,6 +22,7 @@ import { webhooksRouter } from './webhooks';
 import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRouter } from './results';
 import { filesRouter } from './files';
 import { jobsRouter } from './jobs';
+import { outboxRouter } from './outbox';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -58,4 +59,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/season-reports', router: seasonReportsRouter },
   { path: '/files', router: filesRouter },
   { path: '/jobs', router: jobsRouter },
+  { path: '/outbox', router: outboxRouter },
 ];

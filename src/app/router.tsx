@@ -10,6 +10,7 @@ import { LoginPage } from './routes/auth/login';
 import { ForgotPasswordPage } from './routes/auth/forgot-password';
 import { ResetPasswordPage } from './routes/auth/reset-password';
 import { AcceptInvitePage } from './routes/auth/accept-invite';
+import { ChangePasswordPage } from './routes/account/change-password';
 import { DeskPage } from './routes/desk/desk';
 import { ClientsPage } from './routes/clients/clients';
 import { ClientPage } from './routes/clients/client';
@@ -55,6 +56,15 @@ const router = createBrowserRouter([
   { path: paths.forgotPassword, element: <ForgotPasswordPage />, errorElement: <RouteErrorPage /> },
   { path: paths.resetPassword(), element: <ResetPasswordPage />, errorElement: <RouteErrorPage /> },
   { path: paths.acceptInvite(), element: <AcceptInvitePage />, errorElement: <RouteErrorPage /> },
+  {
+    path: paths.changePassword,
+    element: (
+      <RequireRole roles={['owner', 'consultant', 'crew', 'client']}>
+        <ChangePasswordPage />
+      </RequireRole>
+    ),
+    errorElement: <RouteErrorPage />,
+  },
   {
     element: (
       <RequireRole roles={STAFF}>

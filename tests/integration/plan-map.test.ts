@@ -283,8 +283,10 @@ describe('imagery', () => {
     const ok = await owner.patch('/api/firm/settings').set('X-CSRF-Token', owner.csrf).send({ tileUrlTemplate: 'https://imagery.fernhill.test/{z}/{x}/{y}.jpg' });
     expect(ok.status).toBe(200);
     expect(ok.body.data.settings.tileUrlTemplate).toBe('https://imagery.fernhill.test/{z}/{x}/{y}.jpg');
-    const csp = (await request(testApp()).get('/api/health')).headers['content-security-policy'];
+    // The firm's own requests allow its tile service; nobody else's policy is widened by it.
+    const csp = (await owner.get('/api/firm')).headers['content-security-policy'];
     expect(csp).toMatch(/connect-src 'self' https:\/\/imagery\.fernhill\.test/);
+    expect((await request(testApp()).get('/api/health')).headers['content-security-policy']).not.toMatch(/imagery\.fernhill\.test/);
   });
 });
 

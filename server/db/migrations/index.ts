@@ -10,6 +10,8 @@ import * as m0010 from './0010-ellipsoid-measures';
 import * as m0012 from './0012-frozen-documents';
 import * as m0014 from './0014-season-report-withdrawal';
 import * as m0016 from './0016-background-jobs';
+import * as m0018 from './0018-refund-request-keys';
+import * as m0019 from './0019-outbox-retry-window';
 import * as m0024 from './0024-geo-imports';
 
 export const migrations = [
@@ -24,5 +26,7 @@ export const migrations = [
   { name: '0012-frozen-documents', ...m0012 },
   { name: '0014-season-report-withdrawal', ...m0014 },
   { name: '0016-background-jobs', ...m0016 },
+  { name: '0018-refund-request-keys', ...m0018 },
+  { name: '0019-outbox-retry-window', ...m0019 },
   { name: '0024-geo-imports', ...m0024 },
 ];

@@ -1,11 +1,11 @@
-import { useNavigate } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { useLogout } from '../../features/auth/api/login';
 import { useMe } from '../../features/auth/api/get-me';
 import { paths } from '../../config/paths';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Landowner' };
 
-/** The signed-in person and a sign-out button. */
+/** The signed-in person, a link to change the password, and a sign-out button. */
 export function UserMenu({ compact = false }: { compact?: boolean }) {
   const me = useMe();
   const logout = useLogout();
@@ -19,6 +19,9 @@ export function UserMenu({ compact = false }: { compact?: boolean }) {
           <span className="block text-xs text-slate">{ROLE_LABEL[me.data.role]}</span>
         </span>
       ) : null}
+      <Link to={paths.changePassword} className="text-slate underline-offset-2 hover:text-moss-deep hover:underline">
+        Password
+      </Link>
       <button
         className="rounded border border-rule px-3 py-1.5 text-slate hover:border-moss hover:text-moss-deep"
         onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}

@@ -52,6 +52,8 @@ function RefundControl({ invoiceId, payment }: { invoiceId: number; payment: Inv
   const [open, setOpen] = useState(false);
   const [amount, setAmount] = useState('');
   const [error, setError] = useState<string | undefined>();
+  // One key per refund the owner means to make: kept through retries of it, new once it is done or the amount changes.
+  const [requestKey, setRequestKey] = useState(() => `refund-${crypto.randomUUID()}`);
   const left = payment.amountCents - payment.refundedCents;
   if (left <= 0) return <span className="text-xs text-slate">Refunded in full</span>;
   if (!open) return <TextButton onClick={() => setOpen(true)}>Refund…</TextButton>;
@@ -67,10 +69,10 @@ function RefundControl({ invoiceId, payment }: { invoiceId: number; payment: Inv
           return setError((err as Error).message);
         }
         if (cents <= 0 || cents > left) return setError(`between $0.01 and ${formatCents(left)}`);
-        refund.mutate({ id: invoiceId, paymentId: payment.id, amountCents: cents }, { onSuccess: () => { toast('success', `${formatCents(cents)} refunded.`); setOpen(false); }, onError: (err) => toast('error', `Not refunded: ${err.message}`) });
+        refund.mutate({ id: invoiceId, paymentId: payment.id, amountCents: cents, requestKey }, { onSuccess: () => { toast('success', `${formatCents(cents)} refunded.`); setOpen(false); setRequestKey(`refund-${crypto.randomUUID()}`); }, onError: (err) => toast('error', err.message) });
       }}
     >
-      <TextField label={`Refund amount ($, at most ${formatCents(left)})`} inputMode="decimal" value={amount} onChange={(e) => { setAmount(e.target.value); setError(undefined); }} error={error} className="w-56" />
+      <TextField label={`Refund amount ($, at most ${formatCents(left)})`} inputMode="decimal" value={amount} onChange={(e) => { setAmount(e.target.value); setError(undefined); setRequestKey(`refund-${crypto.randomUUID()}`); }} error={error} className="w-56" />
       <Button type="submit" variant="danger" size="sm" busy={refund.isPending}>Refund</Button>
       <Button type="button" variant="ghost" size="sm" onClick={() => setOpen(false)}>Cancel</Button>
     </form>

@@ -14,6 +14,7 @@ import { formatRelative } from '../../../lib/format';
 import { paths } from '../../../config/paths';
 import { JobsCard } from '../../../features/jobs/components/jobs-card';
 import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
+import { UndeliveredMailCard } from '../../../features/outbox/components/undelivered-mail-card';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Client contact' };
 const STATUS_STYLE: Record<string, string> = { active: 'bg-moss/10 text-moss-deep', invited: 'bg-ochre/20 text-ink', disabled: 'bg-rule text-slate' };
@@ -86,6 +87,7 @@ export function TeamPage() {
           <FirmSettingsForm />
         </Card>
       ) : null}
+      {isOwner ? <UndeliveredMailCard /> : null}
       <Card title="Invite someone">
         <InviteForm isOwner={isOwner} />
       </Card>
