@@ -16,6 +16,7 @@ import { notFound } from './errors';
 import { LIMITS } from '../shared/limits';
 import { apiRouters } from './routes';
 import { allowedTileOrigins } from './services/imagery/tile-origins';
+import { clientAssets, compressAnswers } from './middlewares/static-assets';
 import './models';
 
 let sessionPool: pg.Pool | null = null;
@@ -62,6 +63,8 @@ export function createApp(): Express {
     }),
   );
 
+  app.use(compressAnswers());
+
   app.use(
     pinoHttp({
       logger,
@@ -97,18 +100,8 @@ export function createApp(): Express {
   for (const { path: mount, router } of apiRouters) app.use(`/api${mount}`, router);
   app.use('/api', (req, _res, next) => next(notFound(`The API path ${req.method} ${req.originalUrl.split('?')[0]}`)));
 
-  if (fs.existsSync(path.join(config.clientDist, 'index.html'))) {
-    app.use(express.static(config.clientDist, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
-    app.use((req, res, next) => {
-      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
-      res.sendFile(path.join(config.clientDist, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } });
-    });
-  }
+  if (fs.existsSync(path.join(config.clientDist, 'index.html'))) app.use(clientAssets(config.clientDist, { production: config.isProduction }));
 
   app.use(errorHandler);
   return app;
-}
-
-function immutableAssets(res: express.Response, filePath: string) {
-  if (filePath.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
 }

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { parseId } from '../../../lib/route-params';
@@ -11,12 +11,16 @@ import type { FieldTask } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { UnitMap } from '../../../features/field/components/unit-map';
 import { KindChip, TaskStatusChip } from '../../../features/field/components/task-card';
-import { CompleteForm } from '../../../features/field/components/complete-form';
-import { SkipForm } from '../../../features/field/components/skip-form';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
 import { geoUri } from '../../../features/field/lib/unit-sketch';
 import { plannedDates, windowText } from '../../../features/field/lib/task-text';
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
+
+// The forms (and the shared zod schemas they check with) load after the page shows; the page asks for them at once.
+const loadCompleteForm = () => import('../../../features/field/components/complete-form');
+const loadSkipForm = () => import('../../../features/field/components/skip-form');
+const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
+const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
 
 function BackLink() {
   return (
@@ -96,6 +100,10 @@ export function FieldTaskPage() {
   const task = useTask(id);
   const queue = useCompletionQueue();
   const [mode, setMode] = useState<'view' | 'done' | 'skip'>('view');
+  useEffect(() => {
+    void loadCompleteForm().catch(() => undefined);
+    void loadSkipForm().catch(() => undefined);
+  }, []);
   if (!id || (task.isError && task.error instanceof ApiError && task.error.status === 404)) {
     return (
       <div className="flex flex-col gap-3">
@@ -174,12 +182,16 @@ export function FieldTaskPage() {
       ) : null}
       {open && mode === 'done' ? (
         <Card title="Mark done">
-          <CompleteForm task={t} onCancel={() => setMode('view')} />
+          <Suspense fallback={<Loading />}>
+            <CompleteForm task={t} onCancel={() => setMode('view')} />
+          </Suspense>
         </Card>
       ) : null}
       {open && mode === 'skip' ? (
         <Card title="Skip this task">
-          <SkipForm task={t} onCancel={() => setMode('view')} />
+          <Suspense fallback={<Loading />}>
+            <SkipForm task={t} onCancel={() => setMode('view')} />
+          </Suspense>
         </Card>
       ) : null}
     </div>

@@ -1,18 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '../../../lib/api-client';
-import type { LoginInput, SessionUser } from '../../../../shared/schemas/auth';
+import { clearPersistedCache } from '../../../lib/persisted-cache';
+import { login } from './session-requests';
 
-interface SignInAnswer {
-  user: SessionUser;
-  csrfToken: string;
-}
-
-/** Signs in; the session is new, so its CSRF token replaces the old one. */
-export async function login(input: LoginInput): Promise<SessionUser> {
-  const body = await api.post<SignInAnswer>('/api/auth/login', input);
-  setCsrfToken(body.csrfToken);
-  return body.user;
-}
+export { login };
 
 export function useLogin() {
   const qc = useQueryClient();
@@ -29,9 +20,11 @@ export function useLogout() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<void>('/api/auth/logout'),
-    onSettled: () => {
+    onSettled: async () => {
       setCsrfToken(null);
       qc.clear();
+      // Nothing this person saw stays on the phone for the next one.
+      await clearPersistedCache();
       qc.setQueryData(['auth', 'me'], null);
     },
   });
