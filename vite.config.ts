@@ -94,6 +94,15 @@ export default defineConfig({
     chunkSizeWarningLimit: 1500,
     rolldownOptions: {
       input: { index: path.join(root, 'index.html'), app: path.join(root, 'app.html') },
+      output: {
+        // Fewer, steadier chunks: React (sign-in and app), the app's libraries (router, query cache), maps apart.
+        advancedChunks: {
+          groups: [
+            { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler)[\\/]/ },
+            { name: 'app-libs', test: /node_modules[\\/](react-router|@tanstack[\\/](query-core|react-query|query-persist-client-core|react-query-persist-client|query-async-storage-persister))[\\/]/ },
+          ],
+        },
+      },
     },
   },
 });

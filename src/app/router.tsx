@@ -1,3 +1,4 @@
+import { useEffect } from 'react';
 import { createBrowserRouter, Navigate, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
 import { useMe } from '../features/auth/api/get-me';
 import { homeFor, paths } from '../config/paths';
@@ -12,6 +13,14 @@ function RootRedirect() {
   const me = useMe();
   if (me.isPending) return <Loading />;
   return <Navigate to={me.data ? homeFor(me.data.role) : paths.login} replace />;
+}
+
+/** The sign-in page is its own page (index.html): leave the app for it, keeping ?next=. */
+function LeaveForSignIn() {
+  useEffect(() => {
+    window.location.replace(`${paths.login}${window.location.search}`);
+  }, []);
+  return <Loading />;
 }
 
 const STAFF = ['owner', 'consultant'] as const;
@@ -37,7 +46,7 @@ const portalPages: RouteObject[] = [
 
 const routes: RouteObject[] = [
   { path: '/', element: <RootRedirect />, errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
-  { path: paths.login, ...page(() => import('./routes/auth/login'), (m) => m.LoginPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.login, element: <LeaveForSignIn />, errorElement: <RouteErrorPage /> },
   { path: paths.forgotPassword, ...page(() => import('./routes/auth/forgot-password'), (m) => m.ForgotPasswordPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
   { path: paths.resetPassword(), ...page(() => import('./routes/auth/reset-password'), (m) => m.ResetPasswordPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
   { path: paths.acceptInvite(), ...page(() => import('./routes/auth/accept-invite'), (m) => m.AcceptInvitePage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
@@ -111,8 +120,10 @@ const routes: RouteObject[] = [
   { path: '*', element: <NotFoundPage /> },
 ];
 
-const router = createBrowserRouter(routes);
+let router: ReturnType<typeof createBrowserRouter> | null = null;
 
+/** The app's routes; the router starts on first render, after the kept query cache is restored (main.tsx). */
 export function AppRouter() {
+  router ??= createBrowserRouter(routes);
   return <RouterProvider router={router} />;
 }

@@ -4,6 +4,7 @@ import { paths } from '../../../config/paths';
 import { parseId } from '../../../lib/route-params';
 import { ApiError } from '../../../lib/api-client';
 import { formatDateRange, formatQuantity } from '../../../lib/quantity-format';
+import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, ErrorPanel, Loading } from '../../../components/ui/card';
 import { Button } from '../../../components/ui/button';
 import { useTask } from '../../../features/field/api/get-task';
@@ -12,7 +13,7 @@ import { useCompletionQueue } from '../../../features/field/hooks/use-completion
 import { UnitMap } from '../../../features/field/components/unit-map';
 import { KindChip, TaskStatusChip } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
-import { geoUri } from '../../../features/field/lib/unit-sketch';
+import { Directions } from '../../../features/field/components/directions';
 import { plannedDates, windowText } from '../../../features/field/lib/task-text';
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
 
@@ -116,15 +117,15 @@ export function FieldTaskPage() {
     );
   }
   if (task.isPending) return <Loading />;
-  if (task.isError) return <ErrorPanel error={task.error} onRetry={() => task.refetch()} />;
+  if (task.isError && !task.data) return <ErrorPanel error={task.error} onRetry={() => task.refetch()} />;
   const t = task.data;
   const waiting = queue.waitingFor(t.id);
   const open = (t.status === 'planned' || t.status === 'scheduled') && !waiting;
-  const maps = geoUri(t.location, t.unitName);
   const dates = plannedDates(t);
   return (
     <div className="flex flex-col gap-4">
       <BackLink />
+      <OfflineNotice updatedAt={task.dataUpdatedAt} refreshFailed={task.isRefetchError} />
       <QueueNotice showWaiting={false} />
       <div>
         <TaskStatusChip task={t} waitingToSend={Boolean(waiting)} />
@@ -155,14 +156,7 @@ export function FieldTaskPage() {
         </ul>
       ) : null}
       <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
-      {maps ? (
-        <a href={maps} className="inline-flex min-h-12 items-center justify-center gap-2 rounded border border-moss bg-card px-4 py-2 text-base font-semibold text-moss-deep">
-          Open in maps
-          <span className="text-xs font-normal text-slate">
-            ({t.location![1].toFixed(5)}, {t.location![0].toFixed(5)})
-          </span>
-        </a>
-      ) : null}
+      <Directions location={t.location} label={t.unitName} />
       <QuantitiesCard task={t} />
       {t.cautions.map((c) => (
         <CautionBox key={c.id} title={c.title}>
