@@ -9,6 +9,7 @@ import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
 import { queryClient } from './lib/query-client';
 import { startQueryPersistence } from './lib/query-persistence';
+import { registerServiceWorkerAfterLoad } from './lib/register-service-worker';
 
 // The last data this person saw comes back from IndexedDB before the first render (no signal, no blank page).
 await startQueryPersistence(queryClient);
@@ -22,8 +23,4 @@ createRoot(document.getElementById('root')!).render(
 );
 
 // The service worker (offline app shell, update prompt) registers once the page has loaded.
-if (import.meta.env.PROD) {
-  const register = () => void import('./lib/service-worker').then((m) => m.registerServiceWorker());
-  if (document.readyState === 'complete') register();
-  else window.addEventListener('load', register, { once: true });
-}
+registerServiceWorkerAfterLoad();

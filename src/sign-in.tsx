@@ -7,9 +7,13 @@ import '@fontsource/source-sans-3/400.css';
 import '@fontsource/source-sans-3/600.css';
 import './styles.css';
 import { LoginPage } from './app/routes/auth/login';
+import { registerServiceWorkerAfterLoad } from './lib/register-service-worker';
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>
     <LoginPage />
   </StrictMode>,
 );
+
+// While the person types, the service worker fetches the app shell (field sheet, portal) for after sign-in.
+registerServiceWorkerAfterLoad();

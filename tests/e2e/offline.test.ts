@@ -152,8 +152,27 @@ describe('the app on a phone with no signal', () => {
     // Signing out forgets what this person saw.
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/login/);
+    await page.getByRole('button', { name: 'Sign in' }).waitFor();
+    await page.waitForLoadState('load');
     expect(await persistedCache(page)).toBeNull();
     expect(errors.filter((e) => !/net::ERR_INTERNET_DISCONNECTED|ERR_CONNECTION_RESET|ERR_FAILED|Failed to fetch/.test(e))).toEqual([]);
+    await context.close();
+  });
+
+  it('gives an iPhone directions that open Apple Maps, and the coordinates to copy', async () => {
+    const iphone = 'Mozilla/5.0 (iPhone; CPU iPhone OS 17_5 like Mac OS X) AppleWebKit/605.1.15 (KHTML, like Gecko) Version/17.5 Mobile/15E148 Safari/604.1';
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, userAgent: iphone, permissions: ['clipboard-read', 'clipboard-write'] });
+    const page = await context.newPage();
+    await signIn(page, baseUrl, 'crew@browseline.test');
+    await page.waitForURL(`${baseUrl}/field`);
+    await page.goto(`${baseUrl}/field/tasks/${task.id}`);
+    const maps = page.getByRole('link', { name: /Open in maps/ });
+    // Apple's Map Links: daddr is the destination; Bluestem Ridge lies near 43.55° N, 90.88° W (demo data).
+    await poll(() => maps.getAttribute('href')).toMatch(/^https:\/\/maps\.apple\.com\/\?daddr=43\.5\d*,-90\.8\d*&dirflg=d/);
+    await page.getByRole('button', { name: 'Copy coordinates' }).click();
+    await poll(() => page.getByText(/^Copied 43\.5\d{4}, -90\.8\d{4}$/).count()).toBe(1);
+    expect(await page.evaluate(() => navigator.clipboard.readText())).toMatch(/^43\.5\d{4}, -90\.8\d{4}$/);
+    await screenshot(page, 'field-task-iphone-directions');
     await context.close();
   });
 });
