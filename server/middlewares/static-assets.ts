@@ -61,10 +61,12 @@ export function clientAssets(dist: string, options: { production: boolean }): Ro
     next();
   });
 
-  router.get('/assets/*file', (req: Request, res: Response, next: NextFunction) => {
+  // A middleware, not a route: the route registry (defineRoutes) holds the API's routes only.
+  router.use('/assets', (req: Request, res: Response, next: NextFunction) => {
+    if (req.method !== 'GET' && req.method !== 'HEAD') return next();
     let relative: string;
     try {
-      relative = decodeURIComponent(req.path.slice('/assets/'.length));
+      relative = decodeURIComponent(req.path.slice(1));
     } catch {
       return notFoundText(res, 'This file');
     }
