@@ -19,6 +19,7 @@ function appPagesInDev(): Plugin {
         const url = req.url ?? '/';
         const isPage = req.method === 'GET' && (req.headers.accept ?? '').includes('text/html') && !/^\/(@|src\/|node_modules\/|api\/|login(\?|$)|index\.html)/.test(url);
         if (isPage) req.url = '/app.html';
+        else if (req.method === 'GET' && /^\/login(\?|$)/.test(url)) req.url = `/index.html${url.slice('/login'.length)}`;
         next();
       });
     },
