@@ -18,6 +18,7 @@ import { apiRouters } from './routes';
 import { closeConnectionsWhileDraining } from './lifecycle';
 import { contentSecurityPolicy, firmContentSecurityPolicy, PERMISSIONS_POLICY } from './middlewares/content-security-policy';
 import { idleTimeout } from './middlewares/idle-timeout';
+import { clientAssets, compressAnswers } from './middlewares/static-assets';
 import './models';
 
 let sessionPool: pg.Pool | null = null;
@@ -59,6 +60,8 @@ export function createApp(): Express {
     },
   );
 
+  app.use(compressAnswers());
+
   app.use(
     pinoHttp({
       logger,
@@ -99,18 +102,9 @@ export function createApp(): Express {
   for (const { path: mount, router } of apiRouters) app.use(`/api${mount}`, router);
   app.use('/api', (req, _res, next) => next(notFound(`The API path ${req.method} ${req.originalUrl.split('?')[0]}`)));
 
-  if (fs.existsSync(path.join(config.clientDist, 'index.html'))) {
-    app.use(express.static(config.clientDist, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
-    // The page itself carries the firm's policy (the map's tiles load under it), so it reads the session too.
-    app.use((req, _res, next) => (req.method === 'GET' || req.method === 'HEAD' ? next() : next('router')), ...sessions, (_req: express.Request, res: express.Response) => {
-      res.sendFile(path.join(config.clientDist, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } });
-    });
-  }
+  // The page itself carries the firm's policy (the map's tiles load under it), so it reads the session too.
+  if (fs.existsSync(path.join(config.clientDist, 'index.html'))) app.use(clientAssets(config.clientDist, { production: config.isProduction, beforePage: sessions }));
 
   app.use(errorHandler);
   return app;
-}
-
-function immutableAssets(res: express.Response, filePath: string) {
-  if (filePath.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
 }

@@ -82,7 +82,7 @@ export type TaskCompleteInput = z.output<typeof TaskCompleteSchema>;
 export const TaskSkipSchema = z.object({ reason: z.string().trim().min(3, { message: 'say why in a few words' }).max(1000) });
 
 /** The idempotency key header of a completion: made once per completion on the phone. */
-export const IDEMPOTENCY_HEADER = 'Idempotency-Key';
+export { IDEMPOTENCY_HEADER } from '../domain/tasks';
 export const IdempotencyKeySchema = z.string().trim().min(8, { message: 'must be at least 8 characters' }).max(200).regex(/^[A-Za-z0-9_.:-]+$/, { message: 'may hold letters, digits and - _ . : only' });
 
 export interface TaskPhotoDto {

@@ -1,7 +1,7 @@
-import { Link, useNavigate } from 'react-router-dom';
+import { Link } from 'react-router-dom';
+import { paths } from '../../config/paths';
 import { useLogout } from '../../features/auth/api/login';
 import { useMe } from '../../features/auth/api/get-me';
-import { paths } from '../../config/paths';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Landowner' };
 
@@ -9,7 +9,6 @@ const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consul
 export function UserMenu({ compact = false }: { compact?: boolean }) {
   const me = useMe();
   const logout = useLogout();
-  const navigate = useNavigate();
   if (!me.data) return null;
   return (
     <div className="flex items-center gap-3 text-sm">
@@ -24,7 +23,7 @@ export function UserMenu({ compact = false }: { compact?: boolean }) {
       </Link>
       <button
         className="rounded border border-rule px-3 py-1.5 text-slate hover:border-moss hover:text-moss-deep"
-        onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.login) })}
+        onClick={() => logout.mutate()}
       >
         Sign out
       </button>

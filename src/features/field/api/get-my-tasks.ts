@@ -18,4 +18,4 @@ export const getMyTasks = (me: { id: number; role: string }, signal?: AbortSigna
 export const getMyTasksQueryOptions = (me: { id: number; role: string }) => queryOptions({ queryKey: fieldKeys.mine, queryFn: ({ signal }) => getMyTasks(me, signal) });
 
 /** The worker's tasks, refreshed every few minutes while the sheet is open. */
-export const useMyTasks = (me: { id: number; role: string }) => useQuery({ ...getMyTasksQueryOptions(me), refetchInterval: 5 * 60_000 });
+export const useMyTasks = (me: { id: number; role: string }, enabled = true) => useQuery({ ...getMyTasksQueryOptions(me), refetchInterval: 5 * 60_000, enabled });
