@@ -3,13 +3,13 @@ import { defineConfig, type Plugin } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { VitePWA } from 'vite-plugin-pwa';
-import { precompressAssets } from './scripts/vite-precompress';
-import { shellFiles } from './scripts/bundle-budgets';
+import { precompressAssets } from './server/scripts/build/vite-precompress';
+import { shellFiles } from './server/scripts/build/bundle-budgets';
 
 const root = import.meta.dirname;
 const outDir = 'dist';
 
-/** In development, every page but sign-in is the app (app.html), as the server does in production. */
+/** In development, every page but sign-in is the app (src/app.html), as the server does in production. */
 function appPagesInDev(): Plugin {
   return {
     name: 'browseline-app-pages',
@@ -18,7 +18,7 @@ function appPagesInDev(): Plugin {
       server.middlewares.use((req, _res, next) => {
         const url = req.url ?? '/';
         const isPage = req.method === 'GET' && (req.headers.accept ?? '').includes('text/html') && !/^\/(@|src\/|node_modules\/|api\/|login(\?|$)|index\.html)/.test(url);
-        if (isPage) req.url = '/app.html';
+        if (isPage) req.url = '/src/app.html';
         else if (req.method === 'GET' && /^\/login(\?|$)/.test(url)) req.url = `/index.html${url.slice('/login'.length)}`;
         next();
       });
@@ -27,7 +27,7 @@ function appPagesInDev(): Plugin {
 }
 
 // The client: two pages built to dist/ and served by Express — index.html is the small sign-in page,
-// app.html the app (every other address). In development `vite` proxies /api to the server.
+// src/app.html the app (every other address). In development `vite` proxies /api to the server.
 export default defineConfig({
   appType: 'mpa',
   plugins: [
@@ -56,16 +56,16 @@ export default defineConfig({
         ],
       },
       workbox: {
-        // The app shell: app.html and the code of the field sheet and the portal (see shellFiles);
+        // The app shell: src/app.html and the code of the field sheet and the portal (see shellFiles);
         // other pages' code is kept once seen. No /api answer is ever cached by the service worker.
-        globPatterns: ['app.html', 'assets/*.{js,css}'],
+        globPatterns: ['src/app.html', 'assets/*.{js,css}'],
         manifestTransforms: [
           (entries) => {
             const keep = shellFiles(path.join(root, outDir));
             return { manifest: entries.filter((e) => !e.url.startsWith('assets/') || keep.has(e.url)), warnings: [] };
           },
         ],
-        navigateFallback: '/app.html',
+        navigateFallback: '/src/app.html',
         navigateFallbackDenylist: [/^\/api\//, /^\/login/, /^\/index\.html/],
         runtimeCaching: [
           {
@@ -94,7 +94,7 @@ export default defineConfig({
     sourcemap: 'hidden',
     chunkSizeWarningLimit: 1500,
     rolldownOptions: {
-      input: { index: path.join(root, 'index.html'), app: path.join(root, 'app.html') },
+      input: { index: path.join(root, 'index.html'), app: path.join(root, 'src/app.html') },
       output: {
         // Fewer, steadier chunks: React (sign-in and app), the app's libraries (router, query cache), maps apart.
         codeSplitting: {

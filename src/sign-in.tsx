@@ -1,4 +1,4 @@
-/** The sign-in page's entry (index.html): React and the form only; the app (app.html) loads after sign-in. */
+/** The sign-in page's entry (index.html): React and the form only; the app (src/app.html) loads after sign-in. */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import '@fontsource/merriweather/400.css';

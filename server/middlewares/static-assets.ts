@@ -6,7 +6,7 @@
  * - `clientAssets(dist)`: hashed files under /assets are served from the build's `.br`/`.gz` twins
  *   with immutable caching; a missing asset is a 404, never the HTML page; source maps are not
  *   served in production; the service worker and manifest are always revalidated; `/login` answers
- *   index.html (the sign-in page) and every other GET app.html (the app), both revalidated on each
+ *   index.html (the sign-in page) and every other GET src/app.html (the app), both revalidated on each
  *   load (no-cache + ETag).
  */
 import fs from 'node:fs';
@@ -27,7 +27,7 @@ const PRECOMPRESSED = [
 
 const IMMUTABLE = 'public, max-age=31536000, immutable';
 /** Files whose name never changes between versions: the browser must ask every time. */
-const ALWAYS_REVALIDATE = new Set(['/sw.js', '/registerSW.js', '/manifest.webmanifest', '/index.html', '/app.html']);
+const ALWAYS_REVALIDATE = new Set(['/sw.js', '/registerSW.js', '/manifest.webmanifest', '/index.html', '/src/app.html']);
 
 /** Picks the pre-compressed twin of an asset the browser accepts, or none. */
 export function pickEncoding(acceptEncoding: string | undefined, available: (suffix: string) => boolean): { encoding: string; suffix: string } | null {
@@ -93,8 +93,8 @@ export function clientAssets(dist: string, options: { production: boolean; befor
     }),
   );
 
-  // index.html is the small sign-in page; app.html is the app, for every other address.
-  const appPage = exists(path.join(dist, 'app.html')) ? 'app.html' : 'index.html';
+  // index.html is the small sign-in page; src/app.html is the app, for every other address.
+  const appPage = exists(path.join(dist, 'src/app.html')) ? 'src/app.html' : 'index.html';
   router.use((req: Request, _res: Response, next: NextFunction) => (req.method === 'GET' || req.method === 'HEAD' ? next() : next('router')), ...(options.beforePage ?? []), (req: Request, res: Response) => {
     const page = req.path === '/login' ? 'index.html' : appPage;
     res.sendFile(path.join(dist, page), { headers: { 'Cache-Control': 'no-cache' } });

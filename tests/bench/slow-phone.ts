@@ -132,7 +132,7 @@ async function round(browser: Browser, t: Target): Promise<Figures> {
 
 async function main() {
   const ref = process.env.BENCH_BASELINE_REF ?? git('merge-base', 'HEAD', 'main');
-  if (!fs.existsSync(path.join(root, 'dist/app.html'))) execFileSync(vite, ['build', '--logLevel', 'warn'], { cwd: root, stdio: 'inherit' });
+  if (!fs.existsSync(path.join(root, 'dist/src/app.html'))) execFileSync(vite, ['build', '--logLevel', 'warn'], { cwd: root, stdio: 'inherit' });
   const baselineDir = prepareBaseline(ref);
 
   startTestCluster();

@@ -3,11 +3,11 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { checkBudgets, firstLoadFiles, indexHtmlFiles, isMapChunk, type Manifest, type RouteBudget } from '../../../scripts/bundle-budgets';
+import { checkBudgets, firstLoadFiles, indexHtmlFiles, isMapChunk, type Manifest, type RouteBudget } from '../../../server/scripts/build/bundle-budgets';
 
 const manifest: Manifest = {
   'index.html': { file: 'assets/index-a.js', isEntry: true, imports: ['_react-b.js'], css: ['assets/styles-c.css'], dynamicImports: ['shared/schemas/auth.ts'] },
-  'app.html': { file: 'assets/app-d.js', isEntry: true, imports: ['_react-b.js', '_libs-e.js'], css: ['assets/styles-c.css'] },
+  'src/app.html': { file: 'assets/app-d.js', isEntry: true, imports: ['_react-b.js', '_libs-e.js'], css: ['assets/styles-c.css'] },
   '_react-b.js': { file: 'assets/react-b.js' },
   '_libs-e.js': { file: 'assets/libs-e.js' },
   'shared/schemas/auth.ts': { file: 'assets/auth-f.js', isDynamicEntry: true },
@@ -19,7 +19,7 @@ const manifest: Manifest = {
 describe('first-load closure over the build manifest', () => {
   it('follows static imports and CSS, never dynamic imports', () => {
     expect(firstLoadFiles(manifest, ['index.html']).files.sort()).toEqual(['assets/index-a.js', 'assets/react-b.js', 'assets/styles-c.css']);
-    expect(firstLoadFiles(manifest, ['app.html', 'src/app/routes/field/field-home.tsx']).files).toHaveLength(5);
+    expect(firstLoadFiles(manifest, ['src/app.html', 'src/app/routes/field/field-home.tsx']).files).toHaveLength(5);
   });
 
   it('recognises map code by chunk name or file', () => {
@@ -51,8 +51,8 @@ describe('budgets against a built folder', () => {
   it('passes a page under its budget and fails one over it, or one that loads map code', () => {
     const budgets: RouteBudget[] = [
       { label: 'small', entry: 'index.html', modules: [], maxGzipBytes: 100_000, mapAllowed: false },
-      { label: 'tight', entry: 'app.html', modules: ['src/app/routes/field/field-home.tsx'], maxGzipBytes: 30_000, mapAllowed: false },
-      { label: 'map on a field page', entry: 'app.html', modules: ['src/app/routes/properties/plan-map.tsx'], maxGzipBytes: 1_000_000, mapAllowed: false },
+      { label: 'tight', entry: 'src/app.html', modules: ['src/app/routes/field/field-home.tsx'], maxGzipBytes: 30_000, mapAllowed: false },
+      { label: 'map on a field page', entry: 'src/app.html', modules: ['src/app/routes/properties/plan-map.tsx'], maxGzipBytes: 1_000_000, mapAllowed: false },
     ];
     const [html, small, tight, map] = checkBudgets(dist, budgets);
     expect(html.problems).toEqual([]);

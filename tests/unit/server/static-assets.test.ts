@@ -8,7 +8,7 @@ import express from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { clientAssets, compressAnswers, pickEncoding } from '../../../server/middlewares/static-assets';
-import { precompressFolder } from '../../../scripts/vite-precompress';
+import { precompressFolder } from '../../../server/scripts/build/vite-precompress';
 
 let dist: string;
 const JS = `export const plan = ${JSON.stringify(Array.from({ length: 400 }, (_, i) => ({ unit: `Unit ${i}`, acres: i * 1.5 })))};\n`;
@@ -50,7 +50,8 @@ beforeAll(() => {
   dist = fs.mkdtempSync(path.join(os.tmpdir(), 'browseline-dist-'));
   fs.mkdirSync(path.join(dist, 'assets'));
   fs.writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Sign in</title>');
-  fs.writeFileSync(path.join(dist, 'app.html'), '<!doctype html><title>App</title>');
+  fs.mkdirSync(path.join(dist, 'src'));
+  fs.writeFileSync(path.join(dist, 'src/app.html'), '<!doctype html><title>App</title>');
   fs.writeFileSync(path.join(dist, 'sw.js'), 'self.addEventListener("fetch", () => {});');
   fs.writeFileSync(path.join(dist, 'assets/app-abc123.js'), JS);
   fs.writeFileSync(path.join(dist, 'assets/app-abc123.js.map'), '{"version":3}');

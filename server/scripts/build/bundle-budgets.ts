@@ -23,8 +23,8 @@ export type Manifest = Record<string, ManifestChunk>;
 export interface RouteBudget {
   /** What a person opens, as the note calls it. */
   label: string;
-  /** The HTML page it opens (a manifest entry): index.html is the sign-in page, app.html the app. */
-  entry: 'index.html' | 'app.html';
+  /** The HTML page it opens (a manifest entry): index.html is the sign-in page, src/app.html the app. */
+  entry: 'index.html' | 'src/app.html';
   /** The route's modules (manifest keys) that load on its first visit, besides the entry. */
   modules: string[];
   /** The most JS + CSS (gzip, bytes) its first load may download. */
@@ -40,20 +40,20 @@ export const ROUTE_BUDGETS: RouteBudget[] = [
   { label: 'sign-in', entry: 'index.html', modules: [], maxGzipBytes: 100 * KB, mapAllowed: false },
   {
     label: 'field sheet',
-    entry: 'app.html',
+    entry: 'src/app.html',
     modules: ['src/components/layouts/field-layout.tsx', 'src/app/routes/field/field-shell.tsx', 'src/app/routes/field/field-home.tsx'],
     maxGzipBytes: 150 * KB,
     mapAllowed: false,
   },
   {
     label: 'field task',
-    entry: 'app.html',
+    entry: 'src/app.html',
     modules: ['src/components/layouts/field-layout.tsx', 'src/app/routes/field/field-shell.tsx', 'src/app/routes/field/field-task.tsx'],
     maxGzipBytes: 150 * KB,
     mapAllowed: false,
   },
-  { label: 'portal home', entry: 'app.html', modules: ['src/components/layouts/portal-layout.tsx', 'src/app/routes/portal/portal-home.tsx'], maxGzipBytes: 150 * KB, mapAllowed: false },
-  { label: 'Desk', entry: 'app.html', modules: ['src/components/layouts/consultant-layout.tsx', 'src/app/routes/desk/desk.tsx'], maxGzipBytes: 250 * KB, mapAllowed: false },
+  { label: 'portal home', entry: 'src/app.html', modules: ['src/components/layouts/portal-layout.tsx', 'src/app/routes/portal/portal-home.tsx'], maxGzipBytes: 150 * KB, mapAllowed: false },
+  { label: 'Desk', entry: 'src/app.html', modules: ['src/components/layouts/consultant-layout.tsx', 'src/app/routes/desk/desk.tsx'], maxGzipBytes: 250 * KB, mapAllowed: false },
 ];
 
 /** Map libraries: their code belongs to the map pages only. */
@@ -66,7 +66,7 @@ export function firstLoadFiles(manifest: Manifest, keys: string[]): { files: str
   const visit = (key: string) => {
     if (seen.has(key)) return;
     const chunk = manifest[key];
-    if (!chunk) throw new Error(`The build manifest has no chunk ${key}: update ROUTE_BUDGETS in scripts/bundle-budgets.ts.`);
+    if (!chunk) throw new Error(`The build manifest has no chunk ${key}: update ROUTE_BUDGETS in server/scripts/build/bundle-budgets.ts.`);
     seen.add(key);
     files.add(chunk.file);
     for (const css of chunk.css ?? []) files.add(css);
@@ -109,10 +109,10 @@ export const OFFLINE_PAGES = [
   'src/app/routes/portal/portal-results.tsx',
 ];
 
-/** The files (relative to dist, e.g. `assets/x.js`) of the app shell: app.html's code and the offline pages' first loads. */
+/** The files (relative to dist, e.g. `assets/x.js`) of the app shell: src/app.html's code and the offline pages' first loads. */
 export function shellFiles(dist: string): Set<string> {
   const manifest = JSON.parse(fs.readFileSync(path.join(dist, '.vite/manifest.json'), 'utf8')) as Manifest;
-  const keys = ['app.html', ...OFFLINE_PAGES.filter((k) => manifest[k])];
+  const keys = ['src/app.html', ...OFFLINE_PAGES.filter((k) => manifest[k])];
   return new Set(firstLoadFiles(manifest, keys).files);
 }
 
@@ -150,7 +150,7 @@ export function checkBudgets(dist: string, budgets = ROUTE_BUDGETS): BudgetResul
 }
 
 /** Prints the table; answers the process exit code. */
-export function main(dist = path.resolve(import.meta.dirname, '../dist')): number {
+export function main(dist = path.resolve(import.meta.dirname, '../../../dist')): number {
   const results = checkBudgets(dist);
   console.log('Bundle budgets (first load, JS + CSS, gzip):');
   for (const r of results) console.log(`  ${r.problems.length ? '✗' : '✓'} ${r.label.padEnd(46)} ${(r.gzipBytes / KB).toFixed(1).padStart(7)} KB of ${r.maxGzipBytes / KB} KB (${r.files} files)`);
