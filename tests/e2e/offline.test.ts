@@ -110,7 +110,7 @@ describe('the app on a phone with no signal', () => {
 
     await signIn(page, baseUrl, 'crew@browseline.test');
     await page.waitForURL(`${baseUrl}/field`);
-    const card = page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} — ${task.unitName}`) });
+    const card = page.getByRole('link', { name: new RegExp(`^${task.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}.*${task.unitName}`) });
     await poll(() => card.count()).toBe(1);
     // The service worker has installed the app shell, and the tasks are kept on the phone.
     await poll(() => page.evaluate(async () => Boolean((await navigator.serviceWorker.ready).active))).toBe(true);

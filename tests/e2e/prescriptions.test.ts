@@ -55,8 +55,8 @@ describe('the consultant writes prescriptions and keeps the practice library', (
     await panel.getByLabel('Season year').fill(String(year));
     await panel.getByLabel('Target date').fill(`${year}-08-05`);
     const preview = panel.getByRole('region', { name: 'Preview' });
-    // Starter library: 2 t/acre of lime on the plot's 6.9407 acres = 13.88 tons.
-    await expect.poll(() => preview.textContent()).toContain('13.88 tons');
+    // Starter library: 2 t/acre of lime on the plot's 6.9525 acres (measured on the WGS84 ellipsoid) = 13.91 tons.
+    await expect.poll(() => preview.textContent()).toContain('13.91 tons');
     // An unreadable tank size is marked at its box and the preview waits for a number.
     await panel.getByLabel('Tank, gal').fill('big');
     await expect.poll(() => panel.getByText('“big” is not a number.').count()).toBe(1);
@@ -69,19 +69,19 @@ describe('the consultant writes prescriptions and keeps the practice library', (
     const saved = panel.getByRole('article', { name: /Fall brassica plot/ });
     await expect.poll(() => saved.getByRole('region', { name: 'Quantities' }).count()).toBe(1);
     const quantities = (await saved.getByRole('region', { name: 'Quantities' }).textContent()) ?? '';
-    // Worked from the starter library on 6.9407 acres: seed (2.7 + 1.65 + 4) lb/acre = 57.96 lb bulk;
-    // lime 2 t/acre = 13.88 tons; fertilizer 40 lb N as 13-13-13 (307.7 lb/acre) + 40 lb N as 46-0-0
-    // (86.96 lb/acre) = 2,739 lb in 43 + 13 = 56 bags of 50 lb; glyphosate 2 qt/acre = 3.47 gal, and
-    // 104.1 gal of spray at 15 GPA fill a 25-gal tank 5 times.
-    expect(quantities).toContain('58 lb');
-    expect(quantities).toContain('13.88 tons');
-    expect(quantities).toContain('2,739 lb');
+    // Worked from the starter library on 6.9525 acres (the plot on the WGS84 ellipsoid): seed
+    // (2.7 + 1.65 + 4) lb/acre = 58.05 lb bulk; lime 2 t/acre = 13.91 tons; fertilizer 40 lb N as
+    // 13-13-13 (307.7 lb/acre) + 40 lb N as 46-0-0 (86.96 lb/acre) = 2,744 lb in 43 + 13 = 56 bags of
+    // 50 lb; glyphosate 2 qt/acre = 3.48 gal, and 104.3 gal of spray at 15 GPA fill a 25-gal tank 5 times.
+    expect(quantities).toMatch(/58(\.1)? lb/);
+    expect(quantities).toContain('13.91 tons');
+    expect(quantities).toContain('2,744 lb');
     expect(quantities).toContain('56 bags');
-    expect(quantities).toContain('3.47 gal');
+    expect(quantities).toContain('3.48 gal');
     expect(quantities).toContain('5 tank loads');
     const toBuy = (await saved.getByRole('region', { name: 'To buy' }).textContent()) ?? '';
-    expect(toBuy).toContain('Dwarf Essex rape seed'); // 4 lb/acre × 6.9407 = 27.76 lb → 3 bags of 10 lb
-    expect(toBuy).toContain('27.76 lb → 3 × 10-lb bag, 2.24 lb left over');
+    expect(toBuy).toContain('Dwarf Essex rape seed'); // 4 lb/acre × 6.9525 = 27.81 lb → 3 bags of 10 lb
+    expect(toBuy).toContain('27.81 lb → 3 × 10-lb bag, 2.19 lb left over');
     const schedule = (await saved.getByRole('region', { name: 'Schedule' }).textContent()) ?? '';
     for (const step of ['Soil test', 'Burn-down spray', 'Broadcast brassica seed', 'Nitrogen topdress']) expect(schedule).toContain(step);
     // Burn-down 7–14 days before seeding on Aug 5 (starter library): Jul 22 – Jul 29.
