@@ -2,6 +2,7 @@
  * Drafts, edits, sends and voids invoices. Numbers come from the firm's counter inside the same
  * transaction (no gaps, no duplicates); every computation is in shared/domain/invoicing.ts.
  */
+import { emailFirmContact } from '../services/firm-profile';
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { Firm, Invoice, InvoiceLine, Property, Proposal, Task } from '../models';
@@ -234,7 +235,7 @@ export async function sendInvoice(actor: SessionUser, id: number, ip: string | n
           firmId: invoice.firmId,
           kind: 'invoice-sent',
           to,
-          email: invoiceSentEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, kind: invoice.kind, totalCents: invoice.totalCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), dueOn: invoice.dueOn, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+          email: invoiceSentEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? 'your property', number: invoice.number, kind: invoice.kind, totalCents: invoice.totalCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), dueOn: invoice.dueOn, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
           attachments: [{ filename: `${invoice.number}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
         },
         transaction,

@@ -4,6 +4,7 @@
  * order), and refunds by the owner. Every create call carries an idempotency key derived from the
  * invoice's state, so a retry after an outage replays the first call instead of charging twice.
  */
+import { emailFirmContact } from '../services/firm-profile';
 import type Stripe from 'stripe';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
@@ -129,7 +130,7 @@ async function recordPayment(facts: PaymentFacts, transaction: Transaction): Pro
         firmId,
         kind: 'payment-receipt',
         to,
-        email: paymentReceiptEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: todayIn(usableZone(firm?.timezone), payment.receivedAt), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+        email: paymentReceiptEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: todayIn(usableZone(firm?.timezone), payment.receivedAt), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
       },
       transaction,
     );
@@ -229,7 +230,7 @@ export async function refundPayment(actor: SessionUser, invoiceId: number, input
     const locked = await lockInvoice(invoice.id, actor.firmId, transaction);
     const [firm, property, client] = await Promise.all([Firm.findByPk(locked.firmId, { transaction }), locked.propertyId ? Property.findByPk(locked.propertyId, { attributes: ['name'], transaction }) : null, Client.findByPk(locked.clientId, { transaction })]);
     for (const to of await clientRecipients(locked.clientId, transaction)) {
-      await enqueueEmail({ firmId: locked.firmId, kind: 'invoice-refund', to, email: refundEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? client?.name ?? '', number: locked.number, amountCents: refund.amount, url: `${config.publicUrl}/portal/invoices/${locked.id}` }) }, transaction);
+      await enqueueEmail({ firmId: locked.firmId, kind: 'invoice-refund', to, email: refundEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? client?.name ?? '', number: locked.number, amountCents: refund.amount, url: `${config.publicUrl}/portal/invoices/${locked.id}` }) }, transaction);
     }
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'invoice.refund-requested', subjectType: 'Invoice', subjectId: locked.id, data: { refundId: refund.id, amountCents: refund.amount }, ip }, transaction);
     return locked;

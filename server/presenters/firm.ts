@@ -1,6 +1,7 @@
 import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
 import { usableZone } from '../services/clock';
+import { firmDefaults } from '../services/firm-profile';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
@@ -13,6 +14,12 @@ export function presentFirm(firm: Firm): FirmDto {
     region: firm.region,
     timezone: usableZone(firm.timezone),
     settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0 },
+    address: firm.address,
+    website: firm.website ?? null,
+    licenceNumbers: firm.licenceNumbers ?? null,
+    // The key changes with every new logo, so the address does too and caches never show an old one.
+    logoUrl: firm.logoKey ? `/api/firm/logo?v=${(firm.logoKey.split('/')[1] ?? '').slice(0, 12)}` : null,
+    ...firmDefaults(firm),
   };
 }
 

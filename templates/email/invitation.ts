@@ -7,10 +7,11 @@ const ROLE_WORDS: Record<string, string> = {
 };
 
 /** The invitation to join a firm's Browseline workspace. */
-export function invitationEmail(input: { firmName: string; inviterName: string; name: string; role: string; url: string; ttlHours: number }): RenderedEmail {
+export function invitationEmail(input: { firmName: string; firmContact?: string[]; inviterName: string; name: string; role: string; url: string; ttlHours: number }): RenderedEmail {
   return renderEmail({
     subject: `${input.inviterName} invited you to ${input.firmName} on Browseline`,
     firmName: input.firmName,
+    firmContact: input.firmContact,
     greeting: `Hello ${input.name},`,
     paragraphs: [
       `${input.inviterName} of ${input.firmName} has invited you to Browseline, where you can ${ROLE_WORDS[input.role] ?? 'work together'}.`,
