@@ -36,6 +36,8 @@ export const config = {
   /** How often the server looks for overdue invoices to remind (default hourly). */
   reminderPollMs: int(env.REMINDER_POLL_MS, 60 * 60 * 1000),
   loginRateLimit: { windowMs: int(env.LOGIN_RATE_WINDOW_MS, 15 * 60 * 1000), max: int(env.LOGIN_RATE_MAX, 10) },
+  /** Sign-ups per IP address per window. */
+  signupRateLimit: { windowMs: int(env.SIGNUP_RATE_WINDOW_MS, 60 * 60 * 1000), max: int(env.SIGNUP_RATE_MAX, 5) },
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
   clientDist: path.join(projectRoot, 'dist'),
   payments: {

@@ -7,6 +7,7 @@ export const LIMITS = {
   textMax: 4000,
   jsonBodyBytes: 2 * 1024 * 1024,
   inviteTtlHours: 72,
+  verifyTtlHours: 48,
   resetTtlMinutes: 60,
 } as const;
 

@@ -7,7 +7,8 @@ import { validate } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
 import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
 import { passport } from '../services/auth/passport';
-import { LoginSchema, PasswordResetRequestSchema, TokenPasswordSchema, type SessionUser } from '../../shared/schemas/auth';
+import { LoginSchema, PasswordResetRequestSchema, TokenPasswordSchema, VerifyEmailSchema, type SessionUser } from '../../shared/schemas/auth';
+import { verifySignupEmail } from '../commands/firm-signup';
 import { tooManyRequests, unauthorized } from '../errors';
 import { config } from '../config';
 import { findLiveToken, requestPasswordReset, setPasswordFromToken } from '../commands/password-setter';
@@ -106,6 +107,11 @@ r.get('/password-reset/:token', 'public', validate({ params: TokenParams }), asy
 r.post('/password-reset/complete', 'public', resetLimiter, validate({ body: TokenPasswordSchema }), async (req, res) => {
   await setPasswordFromToken(req.body.token, 'reset', req.body.password, req.ip ?? null);
   res.json({ data: { message: 'Your password is changed. Sign in with the new one.' } });
+});
+
+r.post('/verify-email', 'public', resetLimiter, validate({ body: VerifyEmailSchema }), async (req, res) => {
+  const { email } = await verifySignupEmail(req.body.token, req.ip ?? null);
+  res.json({ data: { email, message: 'Your e-mail is confirmed. Sign in with the password you chose.' } });
 });
 
 export const authRouter = r.router;

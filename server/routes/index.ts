@@ -11,6 +11,7 @@ import { devMailRouter } from './dev-mail';
 import { propertiesRouter } from './properties';
 import { unitsRouter } from './units';
 import { firmRouter } from './firm';
+import { signupRouter } from './signup';
 import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
 import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
@@ -35,6 +36,7 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertyOverlaysRouter },
   { path: '/units', router: unitsRouter },
   { path: '/firm', router: firmRouter },
+  { path: '/signup', router: signupRouter },
   { path: '/overlays', router: overlaysRouter },
   { path: '/materials', router: materialsRouter },
   { path: '/rates', router: ratesRouter },

@@ -8,6 +8,7 @@ import * as m0006 from './0006-invoices';
 import * as m0008 from './0008-results';
 import * as m0012 from './0012-frozen-documents';
 import * as m0026 from './0026-firm-profile';
+import * as m0027 from './0027-signup';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -19,4 +20,5 @@ export const migrations = [
   { name: '0008-results', ...m0008 },
   { name: '0012-frozen-documents', ...m0012 },
   { name: '0026-firm-profile', ...m0026 },
+  { name: '0027-signup', ...m0027 },
 ];
