@@ -8,6 +8,8 @@ import { PortalLayout } from '../components/layouts/portal-layout';
 import { Loading } from '../components/ui/card';
 import { LoginPage } from './routes/auth/login';
 import { ForgotPasswordPage } from './routes/auth/forgot-password';
+import { SignupPage } from './routes/auth/signup';
+import { VerifyEmailPage } from './routes/auth/verify-email';
 import { ResetPasswordPage } from './routes/auth/reset-password';
 import { AcceptInvitePage } from './routes/auth/accept-invite';
 import { DeskPage } from './routes/desk/desk';
@@ -53,6 +55,8 @@ const router = createBrowserRouter([
   { path: '/', element: <RootRedirect />, errorElement: <RouteErrorPage /> },
   { path: paths.login, element: <LoginPage />, errorElement: <RouteErrorPage /> },
   { path: paths.forgotPassword, element: <ForgotPasswordPage />, errorElement: <RouteErrorPage /> },
+  { path: paths.signup, element: <SignupPage />, errorElement: <RouteErrorPage /> },
+  { path: paths.verifyEmail(), element: <VerifyEmailPage />, errorElement: <RouteErrorPage /> },
   { path: paths.resetPassword(), element: <ResetPasswordPage />, errorElement: <RouteErrorPage /> },
   { path: paths.acceptInvite(), element: <AcceptInvitePage />, errorElement: <RouteErrorPage /> },
   {

@@ -18,7 +18,7 @@ export function LoginPage() {
   const navigate = useNavigate();
   const me = useMe();
   const login = useLogin();
-  const form = useForm<z.input<typeof LoginSchema>, unknown, z.output<typeof LoginSchema>>({ resolver: zodResolver(LoginSchema), defaultValues: { email: '', password: '' } });
+  const form = useForm<z.input<typeof LoginSchema>, unknown, z.output<typeof LoginSchema>>({ resolver: zodResolver(LoginSchema), defaultValues: { email: params.get('email') ?? '', password: '' } });
 
   if (me.data) return <Navigate to={safeNext(params.get('next')) ?? homeFor(me.data.role)} replace />;
 
@@ -41,6 +41,9 @@ export function LoginPage() {
         </Button>
         <Link to={paths.forgotPassword} className="text-center text-sm text-moss-deep underline-offset-2 hover:underline">
           Forgot password
+        </Link>
+        <Link to={paths.signup} className="text-center text-sm text-moss-deep underline-offset-2 hover:underline">
+          New here? Set up your firm
         </Link>
       </form>
     </AuthCard>
