@@ -24,6 +24,10 @@ const ACTION_WORDS: Record<string, string> = {
   'user.password-reset': 'reset a password',
   'user.disabled': 'disabled an account',
   'user.enabled': 'enabled an account',
+  'firm.signed-up': 'set up the firm on Browseline',
+  'user.email-confirmed': 'confirmed their e-mail address',
+  'firm.profile-changed': 'updated the firm profile',
+  'firm.logo-changed': 'changed the firm logo',
 };
 export const describeAction = (action: string): string => ACTION_WORDS[action] ?? action.replace(/[.-]/g, ' ');
 
