@@ -18,7 +18,7 @@ function degrees(sign: string | undefined, deg: string, min: string | undefined,
   const s = sec === undefined ? 0 : Number(sec);
   if (m >= 60 || s >= 60) return null;
   if ((min !== undefined || sec !== undefined) && !Number.isInteger(d)) return null;
-  if (sign && after && sign.toUpperCase() !== after.toUpperCase()) return null;
+  if (sign && after) return null; // one hemisphere letter per part
   const hemi = (sign ?? after ?? '').toUpperCase() || null;
   const magnitude = Math.abs(d) + m / 60 + s / 3600;
   const negative = d < 0 || Object.is(d, -0) || hemi === 'S' || hemi === 'W';
