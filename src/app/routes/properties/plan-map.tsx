@@ -23,6 +23,7 @@ import { useUpdatePropertyBoundary } from '../../../features/plan-map/api/update
 import { useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
 import { usePlanUndo } from '../../../features/plan-map/hooks/use-plan-undo';
 import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
+import { PlaceSearch } from '../../../features/plan-map/components/place-search';
 import { DrawChips } from '../../../features/plan-map/components/draw-chips';
 import { PlanLedger } from '../../../features/plan-map/components/plan-ledger';
 import { UnitDetail } from '../../../features/plan-map/components/unit-detail';
@@ -466,6 +467,9 @@ export function PlanMapPage() {
       <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
         <div className="relative min-h-[22rem] min-w-0 flex-1">
           <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
+          <div className="absolute right-2 top-2 z-20">
+            <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
+          </div>
           <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
             <div ref={chipsRef} className="pointer-events-auto max-w-full">
               <DrawChips active={drawTarget} onChoose={chooseTool} />
