@@ -156,13 +156,13 @@ export function PlanMapPage() {
   const gridBox = useMemo(() => JSON.parse(gridKey) as ReturnType<typeof bboxOf>, [gridKey]);
   useEffect(() => controller?.setBoundary(boundary, gridBox), [controller, boundary, gridBox]);
 
-  // Keep the chips' height clear when fitting the view.
+  // Keep the search box and the chips clear when fitting the view.
   useEffect(() => {
     const el = chipsRef.current;
     if (!controller || !el) return;
-    const observer = new ResizeObserver(() => controller.setInsetTop(el.offsetHeight + 8));
+    const observer = new ResizeObserver(() => controller.setInsetTop(el.offsetTop + el.offsetHeight + 8));
     observer.observe(el);
-    controller.setInsetTop(el.offsetHeight + 8);
+    controller.setInsetTop(el.offsetTop + el.offsetHeight + 8);
     return () => observer.disconnect();
   }, [controller]);
 
@@ -467,10 +467,10 @@ export function PlanMapPage() {
       <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
         <div className="relative min-h-[22rem] min-w-0 flex-1">
           <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
-          <div className="absolute right-2 top-2 z-20">
-            <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
-          </div>
           <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
+            <div className="pointer-events-auto relative z-20 max-w-full">
+              <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
+            </div>
             <div ref={chipsRef} className="pointer-events-auto max-w-full">
               <DrawChips active={drawTarget} onChoose={chooseTool} />
             </div>
