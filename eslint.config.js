@@ -4,7 +4,7 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'node_modules/**', 'coverage/**', 'tests/.artifacts/**', '.data/**'] },
+  { ignores: ['dist/**', 'node_modules/**', 'coverage/**', 'tests/.artifacts/**', '.data/**', 'bench-baseline/**', '.tmp/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

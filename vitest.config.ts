@@ -18,6 +18,7 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           environment: 'node',
           globalSetup: ['tests/support/global-setup.ts'],
+          setupFiles: ['tests/support/integration-setup.ts'],
           fileParallelism: false,
           testTimeout: 30000,
           hookTimeout: 60000,

@@ -15,13 +15,20 @@ import { errorHandler } from './middlewares/error-handler';
 import { notFound } from './errors';
 import { LIMITS } from '../shared/limits';
 import { apiRouters } from './routes';
-import { allowedTileOrigins } from './services/imagery/tile-origins';
+import { closeConnectionsWhileDraining } from './lifecycle';
+import { contentSecurityPolicy, firmContentSecurityPolicy, PERMISSIONS_POLICY } from './middlewares/content-security-policy';
+import { idleTimeout } from './middlewares/idle-timeout';
+import { clientAssets, compressAnswers } from './middlewares/static-assets';
 import './models';
 
 let sessionPool: pg.Pool | null = null;
 /** The pg pool the session store uses (one per process). */
 function sessionStorePool(): pg.Pool {
-  if (!sessionPool) sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
+  if (!sessionPool) {
+    sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 5000 });
+    // An idle client whose server went away emits 'error'; without a listener Node would exit.
+    sessionPool.on('error', (err) => logger.warn({ err: err.message }, 'session store: an idle database connection was lost'));
+  }
   return sessionPool;
 }
 
@@ -36,31 +43,24 @@ export function createApp(): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
+  // Shutting down: answers ask keep-alive clients to reconnect (to another instance).
+  app.use(closeConnectionsWhileDraining);
 
   app.use(
     helmet({
-      contentSecurityPolicy: {
-        useDefaults: false,
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          styleSrc: ["'self'", "'unsafe-inline'"],
-          imgSrc: ["'self'", 'data:', 'blob:', () => allowedTileOrigins().join(' ')],
-          fontSrc: ["'self'", 'data:'],
-          // Firms may set an imagery tile service; its origin is allowed, nothing else.
-          connectSrc: ["'self'", () => allowedTileOrigins().join(' ')],
-          workerSrc: ["'self'", 'blob:'],
-          childSrc: ["'self'", 'blob:'],
-          objectSrc: ["'none'"],
-          baseUri: ["'self'"],
-          formAction: ["'self'"],
-          frameAncestors: ["'none'"],
-        },
-      },
+      // The strict policy by default; firmContentSecurityPolicy widens it per request for the firm's own tile service.
+      contentSecurityPolicy: false,
       crossOriginEmbedderPolicy: false,
       strictTransportSecurity: config.cookieSecure,
     }),
+    (_req, res, next) => {
+      res.setHeader('Content-Security-Policy', contentSecurityPolicy());
+      res.setHeader('Permissions-Policy', PERMISSIONS_POLICY);
+      next();
+    },
   );
+
+  app.use(compressAnswers());
 
   app.use(
     pinoHttp({
@@ -77,13 +77,16 @@ export function createApp(): Express {
   const PgStore = connectPgSimple(session);
   // Signed webhooks are verified on the exact bytes sent, so this path takes its body raw, before the JSON parser.
   app.use('/api/webhooks/payments', express.raw({ type: 'application/json', limit: LIMITS.jsonBodyBytes }));
-  app.use(
-    '/api',
-    express.json({ limit: LIMITS.jsonBodyBytes }),
+  // API answers are about one person's data at one moment: no browser or proxy keeps them (a route may say otherwise).
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  const sessions = [
     session({
       name: 'browseline.sid',
       // No touch on every request: a session lasts 14 days from sign-in, and reads stay reads.
-      store: new PgStore({ pool: sessionStorePool(), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
+      store: new PgStore({ pool: sessionStorePool(), errorLog: (...args: unknown[]) => logger.warn({ args: args.map(String) }, 'session store error'), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
       secret: config.sessionSecret,
       resave: false,
       saveUninitialized: false,
@@ -91,24 +94,17 @@ export function createApp(): Express {
       cookie: { httpOnly: true, sameSite: 'lax', secure: config.cookieSecure, maxAge: 14 * 24 * 3600 * 1000 },
     }),
     passport.session(),
-    csrfProtection,
-  );
+    idleTimeout,
+    firmContentSecurityPolicy,
+  ];
+  app.use('/api', express.json({ limit: LIMITS.jsonBodyBytes }), ...sessions, csrfProtection);
 
   for (const { path: mount, router } of apiRouters) app.use(`/api${mount}`, router);
   app.use('/api', (req, _res, next) => next(notFound(`The API path ${req.method} ${req.originalUrl.split('?')[0]}`)));
 
-  if (fs.existsSync(path.join(config.clientDist, 'index.html'))) {
-    app.use(express.static(config.clientDist, { index: false, maxAge: '1h', setHeaders: immutableAssets }));
-    app.use((req, res, next) => {
-      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
-      res.sendFile(path.join(config.clientDist, 'index.html'), { headers: { 'Cache-Control': 'no-cache' } });
-    });
-  }
+  // The page itself carries the firm's policy (the map's tiles load under it), so it reads the session too.
+  if (fs.existsSync(path.join(config.clientDist, 'index.html'))) app.use(clientAssets(config.clientDist, { production: config.isProduction, beforePage: sessions }));
 
   app.use(errorHandler);
   return app;
-}
-
-function immutableAssets(res: express.Response, filePath: string) {
-  if (filePath.includes(`${path.sep}assets${path.sep}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
 }

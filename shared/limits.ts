@@ -24,6 +24,18 @@ export const GEOMETRY_LIMITS = {
   /** Upload sizes. */
   importMaxBytes: 25 * 1024 * 1024,
   overlayMaxBytes: 40 * 1024 * 1024,
+  /** Coordinate positions one imported file may hold (a plan has thousands; a county layer about a million). */
+  importMaxVertices: 500_000,
+  /** Bytes the entries of an uploaded zip (KMZ, zipped shapefile) may expand to, all together. */
+  importMaxUnzippedBytes: 100 * 1024 * 1024,
+  /** Files and folders an uploaded zip may list. */
+  importMaxZipEntries: 1_000,
+  /** An open GPS track whose ends lie at most this far apart (metres) may be closed into an area. */
+  trackCloseMaxGapM: 30,
+  /** Pixels of a GeoTIFF overlay (width × height), checked from its header before decoding. */
+  overlayMaxPixels: 40_000_000,
+  /** Bytes a GeoTIFF overlay's pixels may take once decoded (width × height × samples × bytes per sample). */
+  overlayMaxDecodedBytes: 256 * 1024 * 1024,
 } as const;
 
 /** Completion photos from the field. */

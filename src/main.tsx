@@ -7,6 +7,12 @@ import '@fontsource/source-sans-3/600.css';
 import './styles.css';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
+import { queryClient } from './lib/query-client';
+import { startQueryPersistence } from './lib/query-persistence';
+import { registerServiceWorkerAfterLoad } from './lib/register-service-worker';
+
+// The last data this person saw comes back from IndexedDB before the first render (no signal, no blank page).
+await startQueryPersistence(queryClient);
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>
@@ -15,3 +21,6 @@ createRoot(document.getElementById('root')!).render(
     </AppProvider>
   </StrictMode>,
 );
+
+// The service worker (offline app shell, update prompt) registers once the page has loaded.
+registerServiceWorkerAfterLoad();

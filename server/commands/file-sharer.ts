@@ -11,7 +11,7 @@ import { sequelize } from '../db/sequelize';
 import { recordAudit } from './audit-recorder';
 import { badRequest, conflict, forbidden, notFound, unsupportedMedia } from '../errors';
 import { findInFirm } from '../policies/firm-scope';
-import { deleteFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, saveFile } from '../services/storage/storage';
 import { decideFileKind } from '../../shared/domain/file-kinds';
 import type { ClientFileUploadInput, FileUpdateInput, SharedFileCategory, StaffFileUploadInput } from '../../shared/schemas/file';
 

@@ -4,6 +4,7 @@ import { Op, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { AuthToken, Firm, User } from '../models';
 import { hashPassword, hashToken, newToken } from '../services/auth/passwords';
+import { assertStrongPassword } from '../services/auth/password-strength';
 import { enqueueEmail } from '../services/mail/outbox';
 import { signupExistingEmail, signupVerifyEmail } from '../../templates/email/signup';
 import { installStarterLibrary } from './library-installer';
@@ -32,6 +33,7 @@ export function firmSlug(name: string): string {
  * registered. The password is hashed in both cases so the time taken does not tell either.
  */
 export async function signUpFirm(input: SignupInput, ip: string | null): Promise<void> {
+  assertStrongPassword(input.password, [input.email, input.name, input.firmName]);
   const passwordHash = await hashPassword(input.password);
   try {
     await sequelize.transaction(async (transaction) => {

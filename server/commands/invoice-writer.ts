@@ -2,10 +2,9 @@
  * Drafts, edits, sends and voids invoices. Numbers come from the firm's counter inside the same
  * transaction (no gaps, no duplicates); every computation is in shared/domain/invoicing.ts.
  */
-import { emailFirmContact } from '../services/firm-profile';
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Firm, Invoice, InvoiceLine, Property, Proposal, Task } from '../models';
+import { Firm, Invoice, InvoiceLine, Proposal, Task, type BackgroundJob } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { InvoiceCreateInput, InvoiceUpdateInput, ManualLineInput } from '../../shared/schemas/invoice';
 import { conflict, notFound, unprocessable } from '../errors';
@@ -13,11 +12,9 @@ import { recordAudit } from './audit-recorder';
 import { nextFirmNumber } from './proposal-writer';
 import { clientRecipients } from '../services/mail/client-recipients';
 import { firmToday } from '../services/clock';
-import { enqueueEmail } from '../services/mail/outbox';
-import { invoiceSentEmail } from '../../templates/email/invoice';
-import { config } from '../config';
 import { DEFAULT_TERMS_DAYS, dueDate, finalInvoiceCents, invoiceAmounts, progressInvoicePlan, remainingToBillCents, type InvoiceKind, type InvoiceLineSource } from '../../shared/domain/invoicing';
-import { invoiceDocumentSnapshot, renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
+import { invoiceDocumentSnapshot } from '../services/invoices/invoice-pdf';
+import { enqueueJob } from '../services/jobs/job-queue';
 
 /** Locks an invoice of the firm for update, or 404. */
 export async function lockInvoice(id: number, firmId: number, transaction: Transaction): Promise<Invoice> {
@@ -213,8 +210,11 @@ export async function removeManualLine(actor: SessionUser, id: number, lineId: n
   });
 }
 
-/** Issues a draft (draft → open, dated, due by its terms) or re-sends an open invoice: e-mail with the PDF through the outbox. */
-export async function sendInvoice(actor: SessionUser, id: number, ip: string | null): Promise<Invoice> {
+/**
+ * Issues a draft (draft → open, dated, due by its terms) or re-sends an open invoice; the PDF and
+ * its e-mail are a background job handed over in the same transaction. Answers the invoice and the job.
+ */
+export async function sendInvoice(actor: SessionUser, id: number, ip: string | null): Promise<{ invoice: Invoice; job: BackgroundJob }> {
   return sequelize.transaction(async (transaction) => {
     const invoice = await lockInvoice(id, actor.firmId, transaction);
     if (invoice.status !== 'draft' && invoice.status !== 'open') throw conflict(`Invoice ${invoice.number} is ${invoice.status} and cannot be sent.`);
@@ -227,22 +227,19 @@ export async function sendInvoice(actor: SessionUser, id: number, ip: string | n
       // Issued: what the PDF shows is kept, so the sent invoice reads the same forever.
       await invoice.update({ documentSnapshot: await invoiceDocumentSnapshot(invoice, transaction) }, { transaction });
     }
-    const pdf = await renderInvoicePdfFor(invoice, transaction);
-    const [firm, property] = await Promise.all([Firm.findByPk(invoice.firmId, { transaction }), invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null]);
-    for (const to of recipients) {
-      await enqueueEmail(
-        {
-          firmId: invoice.firmId,
-          kind: 'invoice-sent',
-          to,
-          email: invoiceSentEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? 'your property', number: invoice.number, kind: invoice.kind, totalCents: invoice.totalCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), dueOn: invoice.dueOn, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
-          attachments: [{ filename: `${invoice.number}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
-        },
-        transaction,
-      );
-    }
+    const job = await enqueueJob(
+      {
+        kind: 'document-email',
+        firmId: invoice.firmId,
+        createdById: actor.id,
+        title: `E-mail invoice ${invoice.number} with its PDF`,
+        subject: { type: 'Invoice', id: invoice.id },
+        data: { document: 'invoice', id: invoice.id, firmId: invoice.firmId, recipients, consultantName: actor.name },
+      },
+      transaction,
+    );
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'invoice.sent', subjectType: 'Invoice', subjectId: invoice.id, data: { to: recipients, totalCents: invoice.totalCents }, ip }, transaction);
-    return invoice;
+    return { invoice, job };
   });
 }
 

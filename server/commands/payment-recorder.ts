@@ -8,7 +8,8 @@ import { emailFirmContact } from '../services/firm-profile';
 import type Stripe from 'stripe';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Client, Firm, Invoice, InvoicePayment, InvoiceRefund, Property } from '../models';
+import { Op } from 'sequelize';
+import { Client, Firm, Invoice, InvoicePayment, InvoiceRefund, Property, User } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { CheckoutInput, RefundInput } from '../../shared/schemas/invoice';
 import { conflict, notFound, unprocessable } from '../errors';
@@ -18,15 +19,19 @@ import { lockInvoice } from './invoice-writer';
 import { callPayments, payments } from '../services/payments/payments-client';
 import { checkoutAmountCents, paymentStanding } from '../../shared/domain/invoicing';
 import { enqueueEmail } from '../services/mail/outbox';
-import { paymentReceiptEmail, refundEmail } from '../../templates/email/invoice';
+import { paymentReceiptEmail, paymentReceivedStaffEmail, refundEmail } from '../../templates/email/invoice';
 import { config } from '../config';
 import { logger } from '../logger';
 import { usableZone } from '../services/clock';
 import { todayIn } from '../../shared/domain/clock';
 
-/** The idempotency key of a checkout: the same invoice, paid-so-far and amount always gives the same key. */
-export function checkoutIdempotencyKey(invoice: Pick<Invoice, 'id' | 'firmId' | 'amountPaidCents'>, amountCents: number): string {
-  return `browseline-checkout-f${invoice.firmId}-i${invoice.id}-paid${invoice.amountPaidCents}-amt${amountCents}`;
+/**
+ * The idempotency key of a checkout: the same payer, invoice, paid-so-far and amount always gives the
+ * same key. The payer is part of it: the service refuses a key reused with other parameters (another
+ * contact's e-mail) for 24 hours, which would lock a second contact of the client out of paying.
+ */
+export function checkoutIdempotencyKey(invoice: Pick<Invoice, 'id' | 'firmId' | 'amountPaidCents'>, amountCents: number, payerUserId: number): string {
+  return `browseline-checkout-f${invoice.firmId}-i${invoice.id}-u${payerUserId}-paid${invoice.amountPaidCents}-amt${amountCents}`;
 }
 
 /** The client's hosted payment page for their own open invoice (the balance, or a part of it). */
@@ -61,7 +66,7 @@ export async function startCheckout(actor: SessionUser, id: number, input: Check
         success_url: `${portalUrl}?paid=1&session={CHECKOUT_SESSION_ID}`,
         cancel_url: portalUrl,
       },
-      { idempotencyKey: checkoutIdempotencyKey(invoice, amountCents) },
+      { idempotencyKey: checkoutIdempotencyKey(invoice, amountCents, actor.id) },
     ),
   );
   if (session.amount_total !== amountCents) {
@@ -135,6 +140,22 @@ async function recordPayment(facts: PaymentFacts, transaction: Transaction): Pro
       transaction,
     );
   }
+  // The consultant who made the invoice (and the firm's owners) hear of it in the same transaction.
+  const [client, staff] = await Promise.all([
+    Client.findByPk(invoice.clientId, { attributes: ['name'], transaction }),
+    User.findAll({ where: { firmId, active: true, role: ['owner', 'consultant'], [Op.or]: [{ id: invoice.createdById ?? 0 }, { role: 'owner' }] }, attributes: ['email'], transaction }),
+  ]);
+  for (const user of staff) {
+    await enqueueEmail(
+      {
+        firmId,
+        kind: 'payment-received',
+        to: user.email,
+        email: paymentReceivedStaffEmail({ firmName: firm?.name ?? '', clientName: client?.name ?? 'A client', propertyName: property?.name ?? 'no property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: payment.receivedAt.toISOString().slice(0, 10), url: `${config.publicUrl}/invoices/${invoice.id}` }),
+      },
+      transaction,
+    );
+  }
   await recordAudit({ firmId, userId: null, action: 'invoice.payment-received', subjectType: 'Invoice', subjectId: invoice.id, data: { paymentIntentId: facts.paymentIntentId, amountCents: facts.amountCents } }, transaction);
   return true;
 }
@@ -144,7 +165,7 @@ function factsFromIntent(pi: Stripe.PaymentIntent, sessionId: string | null): Pa
 }
 
 /** Records a refund (once per refund id) against its payment; fetches the payment first when its event has not arrived yet. */
-async function recordRefund(refund: { id: string; amount: number; paymentIntentId: string; reason: string | null; createdById: number | null }, transaction: Transaction): Promise<boolean> {
+async function recordRefund(refund: { id: string; amount: number; paymentIntentId: string; reason: string | null; createdById: number | null; requestKey: string | null }, transaction: Transaction): Promise<boolean> {
   if (await InvoiceRefund.findOne({ where: { processorRefundId: refund.id }, transaction })) return false;
   let payment = await InvoicePayment.findOne({ where: { processorPaymentId: refund.paymentIntentId }, transaction });
   if (!payment) {
@@ -158,9 +179,15 @@ async function recordRefund(refund: { id: string; amount: number; paymentIntentI
   const invoice = await Invoice.findOne({ where: { id: payment.invoiceId }, lock: transaction.LOCK.UPDATE, transaction });
   await payment.reload({ transaction });
   if (await InvoiceRefund.findOne({ where: { processorRefundId: refund.id }, transaction })) return false;
-  await InvoiceRefund.create({ firmId: payment.firmId, invoiceId: payment.invoiceId, paymentId: payment.id, amountCents: refund.amount, reason: refund.reason, processorRefundId: refund.id, createdById: refund.createdById }, { transaction });
+  await InvoiceRefund.create({ firmId: payment.firmId, invoiceId: payment.invoiceId, paymentId: payment.id, amountCents: refund.amount, reason: refund.reason, processorRefundId: refund.id, requestKey: refund.requestKey, createdById: refund.createdById }, { transaction });
   await payment.update({ refundedCents: payment.refundedCents + refund.amount }, { transaction });
-  if (invoice) await settle(invoice, transaction);
+  if (invoice) {
+    await settle(invoice, transaction);
+    const [firm, property, client] = await Promise.all([Firm.findByPk(invoice.firmId, { transaction }), invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null, Client.findByPk(invoice.clientId, { transaction })]);
+    for (const to of await clientRecipients(invoice.clientId, transaction)) {
+      await enqueueEmail({ firmId: invoice.firmId, kind: 'invoice-refund', to, email: refundEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? client?.name ?? '', number: invoice.number, amountCents: refund.amount, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }) }, transaction);
+    }
+  }
   await recordAudit({ firmId: payment.firmId, userId: refund.createdById, action: 'invoice.refunded', subjectType: 'Invoice', subjectId: payment.invoiceId, data: { refundId: refund.id, amountCents: refund.amount } }, transaction);
   return true;
 }
@@ -195,7 +222,8 @@ export async function processPaymentEvent(event: Stripe.Event): Promise<{ duplic
         const r = event.data.object as Stripe.Refund;
         if (r.status === 'failed' || r.status === 'canceled' || !r.payment_intent) break;
         const piId = typeof r.payment_intent === 'string' ? r.payment_intent : r.payment_intent.id;
-        recorded = await recordRefund({ id: r.id, amount: r.amount, paymentIntentId: piId, reason: (r.metadata?.reason as string | undefined) ?? null, createdById: null }, transaction);
+        const requestKey = typeof r.metadata?.requestKey === 'string' ? r.metadata.requestKey : null;
+        recorded = await recordRefund({ id: r.id, amount: r.amount, paymentIntentId: piId, reason: (r.metadata?.reason as string | undefined) ?? null, createdById: null, requestKey }, transaction);
         break;
       }
       default:
@@ -206,9 +234,13 @@ export async function processPaymentEvent(event: Stripe.Event): Promise<{ duplic
   });
 }
 
-/** The idempotency key of a refund: the same payment, refunded-so-far and amount always gives the same key. */
-export function refundIdempotencyKey(payment: Pick<InvoicePayment, 'id' | 'refundedCents'>, amountCents: number): string {
-  return `browseline-refund-p${payment.id}-done${payment.refundedCents}-amt${amountCents}`;
+/**
+ * The idempotency key of a refund: fixed by the owner's request (its key), not by the payment's
+ * state. A retry after a lost answer sends the same key and gets the same refund back, even after
+ * the webhook has changed what is refunded so far.
+ */
+export function refundIdempotencyKey(payment: Pick<InvoicePayment, 'id' | 'firmId'>, requestKey: string): string {
+  return `browseline-refund-f${payment.firmId}-p${payment.id}-r${requestKey}`;
 }
 
 /** Refunds part or all of a payment (owner only); recorded at once and again, harmlessly, by the webhook. */
@@ -217,21 +249,27 @@ export async function refundPayment(actor: SessionUser, invoiceId: number, input
   if (!invoice) throw notFound('That invoice');
   const payment = await InvoicePayment.findOne({ where: { id: input.paymentId, invoiceId: invoice.id } });
   if (!payment) throw notFound('That payment');
+  // The same request again (its answer was lost, or the webhook came first): it is done, say so.
+  const done = await InvoiceRefund.findOne({ where: { firmId: actor.firmId, requestKey: input.requestKey } });
+  if (done) {
+    if (done.paymentId !== payment.id || done.amountCents !== input.amountCents) throw conflict('This refund request was already used for another refund. Reload the invoice and start a new refund.');
+    return invoice;
+  }
   const refundable = payment.amountCents - payment.refundedCents;
   if (input.amountCents > refundable) throw unprocessable(`amountCents: at most ${refundable} cents of this payment can still be refunded.`);
-  const refund = await callPayments('refund the payment', () =>
-    payments().refunds.create(
-      { payment_intent: payment.processorPaymentId, amount: input.amountCents, metadata: { invoiceId: String(invoice.id), firmId: String(invoice.firmId), ...(input.reason ? { reason: input.reason } : {}) } },
-      { idempotencyKey: refundIdempotencyKey(payment, input.amountCents) },
-    ),
+  const refund = await callPayments(
+    'refund the payment',
+    () =>
+      payments().refunds.create(
+        { payment_intent: payment.processorPaymentId, amount: input.amountCents, metadata: { invoiceId: String(invoice.id), firmId: String(invoice.firmId), requestKey: input.requestKey, ...(input.reason ? { reason: input.reason } : {}) } },
+        { idempotencyKey: refundIdempotencyKey(payment, input.requestKey) },
+      ),
+    'unknown',
   );
   return sequelize.transaction(async (transaction) => {
-    await recordRefund({ id: refund.id, amount: refund.amount, paymentIntentId: payment.processorPaymentId, reason: input.reason ?? null, createdById: actor.id }, transaction);
+    // The client's e-mail is queued by recordRefund, once per refund, whichever of this and the webhook records it first.
+    await recordRefund({ id: refund.id, amount: refund.amount, paymentIntentId: payment.processorPaymentId, reason: input.reason ?? null, createdById: actor.id, requestKey: input.requestKey }, transaction);
     const locked = await lockInvoice(invoice.id, actor.firmId, transaction);
-    const [firm, property, client] = await Promise.all([Firm.findByPk(locked.firmId, { transaction }), locked.propertyId ? Property.findByPk(locked.propertyId, { attributes: ['name'], transaction }) : null, Client.findByPk(locked.clientId, { transaction })]);
-    for (const to of await clientRecipients(locked.clientId, transaction)) {
-      await enqueueEmail({ firmId: locked.firmId, kind: 'invoice-refund', to, email: refundEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? client?.name ?? '', number: locked.number, amountCents: refund.amount, url: `${config.publicUrl}/portal/invoices/${locked.id}` }) }, transaction);
-    }
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'invoice.refund-requested', subjectType: 'Invoice', subjectId: locked.id, data: { refundId: refund.id, amountCents: refund.amount }, ip }, transaction);
     return locked;
   });

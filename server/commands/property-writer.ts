@@ -7,6 +7,8 @@ import { measureArea, toMultiPolygon } from '../../shared/domain/geometry';
 import type { PropertyCreateInput, PropertyUpdateInput } from '../../shared/schemas/property';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { notFound, unprocessable } from '../errors';
+import { CONFIRM_LARGE_AREA_FIELD, largeBoundaryMessage } from '../../shared/domain/large-area';
+import { firmLargeAreaAcres } from './unit-writer';
 import { assertValidInDatabase } from './geometry-validator';
 import { recordAudit } from './audit-recorder';
 
@@ -15,6 +17,16 @@ export function boundaryColumns(geom: Polygon | MultiPolygon | null) {
   if (!geom) return { boundary: null, acres: null, perimeterFt: null };
   const m = measureArea(geom);
   return { boundary: toMultiPolygon(geom), acres: Math.round(m.acres * 1000) / 1000, perimeterFt: Math.round(m.perimeterFt * 10) / 10 };
+}
+
+/**
+ * 422 naming `confirmLargeArea` when the boundary is larger than the firm's threshold and the request
+ * did not confirm it (a boundary drawn at the map's opening zoom is millions of acres).
+ */
+async function assertBoundarySizeConfirmed(acres: number | null, firmId: number, confirmed: boolean | undefined, transaction: Transaction): Promise<void> {
+  if (confirmed || acres === null) return;
+  const message = largeBoundaryMessage(acres, await firmLargeAreaAcres(firmId, transaction));
+  if (message) throw unprocessable(message, [{ path: CONFIRM_LARGE_AREA_FIELD, message }]);
 }
 
 async function assertClientInFirm(clientId: number, firmId: number, transaction: Transaction): Promise<void> {
@@ -26,6 +38,8 @@ async function assertClientInFirm(clientId: number, firmId: number, transaction:
 export async function createProperty(actor: SessionUser, input: PropertyCreateInput, ip: string | null): Promise<Property> {
   return sequelize.transaction(async (transaction) => {
     await assertClientInFirm(input.clientId, actor.firmId, transaction);
+    const measured = boundaryColumns(input.boundary ?? null);
+    await assertBoundarySizeConfirmed(measured.acres, actor.firmId, input.confirmLargeArea, transaction);
     if (input.boundary) await assertValidInDatabase(input.boundary, 'boundary', transaction);
     const property = await Property.create(
       {
@@ -37,7 +51,7 @@ export async function createProperty(actor: SessionUser, input: PropertyCreateIn
         region: input.region ?? null,
         objectives: input.objectives ?? null,
         notes: input.notes ?? null,
-        ...boundaryColumns(input.boundary ?? null),
+        ...measured,
       },
       { transaction },
     );
@@ -52,11 +66,13 @@ export async function updateProperty(actor: SessionUser, propertyId: number, inp
     const property = await Property.findOne({ where: { id: propertyId, firmId: actor.firmId }, lock: transaction.LOCK.UPDATE, transaction });
     if (!property) throw notFound('That property');
     if (input.clientId !== undefined) await assertClientInFirm(input.clientId, actor.firmId, transaction);
-    const { boundary, ...rest } = input;
+    const { boundary, confirmLargeArea, ...rest } = input;
     const changes: Record<string, unknown> = { ...rest };
     if (boundary !== undefined) {
+      const measured = boundaryColumns(boundary ?? null);
+      await assertBoundarySizeConfirmed(measured.acres, actor.firmId, confirmLargeArea, transaction);
       if (boundary) await assertValidInDatabase(boundary, 'boundary', transaction);
-      Object.assign(changes, boundaryColumns(boundary ?? null), { revision: property.revision + 1 });
+      Object.assign(changes, measured, { revision: property.revision + 1 });
     }
     await property.update(changes, { transaction });
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: boundary !== undefined ? 'property.boundary-changed' : 'property.updated', subjectType: 'Property', subjectId: property.id, ip }, transaction);

@@ -1,21 +1,18 @@
 /** Drafts, edits, revises, sends and withdraws proposals. Approved and sent versions are immutable. */
-import { emailFirmContact, firmDefaults } from '../services/firm-profile';
+import { firmDefaults } from '../services/firm-profile';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { clientRecipients } from '../services/mail/client-recipients';
-import { Firm, Prescription, Property, Proposal, ProposalLine, Unit } from '../models';
+import { Firm, Prescription, Property, Proposal, ProposalLine, Unit, type BackgroundJob } from '../models';
 import type { ProposalCreateInput, ProposalUpdateInput } from '../../shared/schemas/proposal';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { conflict, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { priceProposal, totalsColumns } from '../services/proposals/pricing';
-import { enqueueEmail } from '../services/mail/outbox';
-import { proposalSentEmail } from '../../templates/email/proposal-sent';
-import { config } from '../config';
-import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
 import { firmToday } from '../services/clock';
 import { takePlanSnapshot } from '../services/proposals/plan-snapshot';
 import { formatDate } from '../../shared/domain/clock';
+import { enqueueJob } from '../services/jobs/job-queue';
 import { addDays } from '../../shared/domain/planting-windows';
 
 export const DEFAULT_TERMS = [
@@ -196,8 +193,11 @@ export async function reviseProposal(actor: SessionUser, id: number, ip: string 
   });
 }
 
-/** Sends a draft: marks it sent and queues the e-mail with the PDF attached and the portal link. */
-export async function sendProposal(actor: SessionUser, id: number, ip: string | null): Promise<Proposal> {
+/**
+ * Sends a draft: marks it sent and, in the same transaction, hands the PDF and its e-mail (with the
+ * portal link) to a background job; answers the proposal and that job.
+ */
+export async function sendProposal(actor: SessionUser, id: number, ip: string | null): Promise<{ proposal: Proposal; job: BackgroundJob }> {
   return sequelize.transaction(async (transaction) => {
     const proposal = await lockProposal(id, actor.firmId, transaction);
     if (proposal.status !== 'draft') throw conflict(`This proposal is ${proposal.status}; only a draft can be sent. Revise it to send a new version.`);
@@ -208,23 +208,19 @@ export async function sendProposal(actor: SessionUser, id: number, ip: string | 
     if (recipients.length === 0) throw unprocessable('The client has no e-mail address or portal contact. Add one on the client’s page, then send.');
     // The plan is frozen with the version: its PDF and its approval cover this geometry, whatever is drawn later.
     await proposal.update({ status: 'sent', sentAt: new Date(), planSnapshot: await takePlanSnapshot(proposal, transaction) }, { transaction });
-    const pdf = await renderProposalPdfFor(proposal, transaction);
-    const firm = await Firm.findByPk(actor.firmId, { transaction });
-    const property = await Property.findByPk(proposal.propertyId, { attributes: ['name'], transaction });
-    for (const to of recipients) {
-      await enqueueEmail(
-        {
-          firmId: actor.firmId,
-          kind: 'proposal-sent',
-          to,
-          email: proposalSentEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), consultantName: actor.name, propertyName: property?.name ?? '', number: proposal.number, version: proposal.version, totalCents: proposal.totalCents, expiresOn: proposal.expiresOn, url: `${config.publicUrl}/portal/proposals/${proposal.id}` }),
-          attachments: [{ filename: `${proposal.number}-v${proposal.version}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
-        },
-        transaction,
-      );
-    }
+    const job = await enqueueJob(
+      {
+        kind: 'document-email',
+        firmId: actor.firmId,
+        createdById: actor.id,
+        title: `E-mail proposal ${proposal.number} v${proposal.version} with its PDF`,
+        subject: { type: 'Proposal', id: proposal.id },
+        data: { document: 'proposal', id: proposal.id, firmId: actor.firmId, recipients, consultantName: actor.name },
+      },
+      transaction,
+    );
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.sent', subjectType: 'Proposal', subjectId: proposal.id, data: { to: recipients }, ip }, transaction);
-    return proposal;
+    return { proposal, job };
   });
 }
 

@@ -3,7 +3,8 @@
  * 'season-report', private to the firm until sent) and sends it to the landowner through the outbox.
  */
 import { emailFirmContact } from '../services/firm-profile';
-import { Client, Firm, Property, SeasonReport, SharedFile, type TaskPhoto } from '../models';
+import { Op } from 'sequelize';
+import { Client, Firm, Property, SeasonReport, SharedFile, type BackgroundJob, type TaskPhoto } from '../models';
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
@@ -11,16 +12,17 @@ import { conflict, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { firmToday } from '../services/clock';
 import { enqueueEmail } from '../services/mail/outbox';
-import { deleteFile, readFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, readFile, saveFile } from '../services/storage/storage';
 import { readSeasonSummary } from '../services/results/results-reader';
 import { renderSeasonReportPdf, type SeasonReportDocumentInput } from '../../templates/documents/season-report';
 import { seasonReportSentEmail } from '../../templates/email/season-report-sent';
 import { CAUTIONS } from '../../shared/domain/cautions';
-import { seasonRange } from '../../shared/domain/season-results';
+import { emptySeasonReason, seasonRange } from '../../shared/domain/season-results';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { config } from '../config';
 import { logger } from '../logger';
 import { clientRecipients } from '../services/mail/client-recipients';
+import { enqueueJob, type JobContext } from '../services/jobs/job-queue';
 
 /** Photos larger than this are left out of the PDF (a report should stay small enough to e-mail). */
 const MAX_PHOTO_BYTES = 4 * 1024 * 1024;
@@ -67,15 +69,69 @@ export async function seasonReportInput(property: Property, season: number, reco
   };
 }
 
-/** Makes the season report PDF and keeps it (private to the firm until sent). */
-export async function makeSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null): Promise<SeasonReport> {
+/** A season with no finished work, survey or harvest makes no report (422 with what to do). */
+async function refuseEmptySeason(property: Property, season: number): Promise<void> {
+  const document = await seasonReportInput(property, season, null);
+  const empty = emptySeasonReason({ work: document.work.length, surveys: document.surveys.length, harvests: document.harvest.total }, document.season.label);
+  if (empty) throw unprocessable(empty);
+}
+
+export interface SeasonReportJobData {
+  actor: SessionUser;
+  propertyId: number;
+  season: number;
+  recommendations: string | null;
+  ip: string | null;
+}
+
+/** Hands the making of a season report to a background job (checked first: the property is the firm's). */
+export async function requestSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null): Promise<BackgroundJob> {
+  return sequelize.transaction(async (transaction) => {
+    const property = await findInFirm(Property, propertyId, actor.firmId, 'That property', { transaction });
+    await refuseEmptySeason(property, input.season);
+    const data: SeasonReportJobData = { actor, propertyId: property.id, season: input.season, recommendations: input.recommendations ?? null, ip };
+    return enqueueJob(
+      { kind: 'season-report', firmId: actor.firmId, createdById: actor.id, title: `Season report ${seasonRange(input.season).label} — ${property.name}`, subject: { type: 'Property', id: property.id }, data: data as unknown as Record<string, unknown> },
+      transaction,
+    );
+  });
+}
+
+/** The 'season-report' job: makes the report once, however often the job is delivered. */
+export async function makeSeasonReportJob(data: SeasonReportJobData, job: JobContext): Promise<void> {
+  await makeSeasonReport(data.actor, data.propertyId, { season: data.season, recommendations: data.recommendations }, data.ip, job);
+}
+
+/**
+ * Makes the season report PDF and keeps it (private to the firm until sent); an empty season is
+ * refused (422) and remaking a season replaces its unsent report. In a job, progress is
+ * reported and the rows are written by the job's finish (nothing twice; answers null if done before).
+ */
+export async function makeSeasonReport(actor: SessionUser, propertyId: number, input: { season: number; recommendations?: string | null }, ip: string | null, job?: JobContext): Promise<SeasonReport | null> {
   const property = await findInFirm(Property, propertyId, actor.firmId, 'That property');
   const recommendations = input.recommendations ?? null;
-  const pdf = await renderSeasonReportPdf(await seasonReportInput(property, input.season, recommendations));
+  await job?.progress(10, 'Reading the season');
+  const documentInput = await seasonReportInput(property, input.season, recommendations);
+  const empty = emptySeasonReason({ work: documentInput.work.length, surveys: documentInput.surveys.length, harvests: documentInput.harvest.total }, documentInput.season.label);
+  if (empty) throw unprocessable(empty);
+  await job?.progress(40, 'Drawing the PDF');
+  const pdf = await renderSeasonReportPdf(documentInput);
+  await job?.progress(80, 'Storing the PDF');
   const storageKey = await saveFile('files', pdf, 'pdf');
   try {
-    return await sequelize.transaction(async (transaction) => {
+    const write = async (transaction: Transaction) => {
       const label = seasonRange(input.season).label;
+      // The unsent report(s) of this season are replaced, not joined by a second of the same title.
+      const unsent = await SeasonReport.findAll({ where: { firmId: actor.firmId, propertyId: property.id, season: input.season, sentAt: { [Op.is]: null } }, transaction, lock: transaction.LOCK.UPDATE });
+      const replacedKeys: string[] = [];
+      for (const old of unsent) {
+        const oldFile = await SharedFile.findByPk(old.sharedFileId, { transaction });
+        await old.destroy({ transaction });
+        if (oldFile) {
+          replacedKeys.push(oldFile.storageKey);
+          await oldFile.destroy({ transaction });
+        }
+      }
       const file = await SharedFile.create(
         {
           firmId: actor.firmId,
@@ -97,13 +153,33 @@ export async function makeSeasonReport(actor: SessionUser, propertyId: number, i
         { firmId: actor.firmId, propertyId: property.id, clientId: property.clientId, season: input.season, recommendations, sharedFileId: file.id, createdById: actor.id },
         { transaction },
       );
-      await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.created', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId, season: input.season }, ip }, transaction);
-      return report;
-    });
+      await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.created', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId, season: input.season, replaced: unsent.map((r) => r.id) }, ip }, transaction);
+      return { report, replacedKeys };
+    };
+    const made = job ? await job.finish(write, (r) => ({ seasonReportId: r.report.id })) : await sequelize.transaction(write);
+    // Another delivery of the same job made the report already: this PDF is not needed.
+    if (!made) await deleteFile(storageKey);
+    for (const key of made?.replacedKeys ?? []) await deleteFile(key);
+    const report = made?.report ?? null;
+    return report;
   } catch (err) {
     await deleteFile(storageKey);
     throw err;
   }
+}
+
+/** Takes a sent season report back out of the landowner's portal; the firm keeps it on file. */
+export async function withdrawSeasonReport(actor: SessionUser, id: number, ip: string | null): Promise<SeasonReport> {
+  return sequelize.transaction(async (transaction) => {
+    const report = await findInFirm(SeasonReport, id, actor.firmId, 'That season report', { transaction, lock: true });
+    if (report.sentAt === null) throw conflict('This report was never sent, so the client cannot see it; delete it or make it again instead.');
+    if (report.withdrawnAt !== null) throw conflict('This report is already withdrawn from the portal.');
+    const file = await SharedFile.findByPk(report.sharedFileId, { transaction });
+    await file?.update({ visibleToClient: false }, { transaction });
+    await report.update({ withdrawnAt: new Date() }, { transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.withdrawn', subjectType: 'SeasonReport', subjectId: report.id, data: { propertyId: report.propertyId, season: report.season }, ip }, transaction);
+    return report;
+  });
 }
 
 /** Sends a season report to the landowner (PDF attached) and shows it in their portal's files. */
@@ -133,7 +209,7 @@ export async function sendSeasonReport(actor: SessionUser, id: number, ip: strin
       );
     }
     await file.update({ visibleToClient: true }, { transaction });
-    await report.update({ sentAt: new Date(), sentTo: recipients }, { transaction });
+    await report.update({ sentAt: new Date(), sentTo: recipients, withdrawnAt: null }, { transaction });
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'season-report.sent', subjectType: 'SeasonReport', subjectId: report.id, data: { to: recipients }, ip }, transaction);
     return report;
   });

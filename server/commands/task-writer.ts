@@ -7,12 +7,12 @@ import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { Firm, Property, Task, TaskPhoto, User } from '../models';
 import type { SessionUser } from '../../shared/schemas/auth';
-import type { TaskCompleteInput, TaskUpdateInput } from '../../shared/schemas/task';
+import type { TaskAssignInput, TaskCompleteInput, TaskUpdateInput } from '../../shared/schemas/task';
 import { plannedOrScheduled, progressOf } from '../../shared/domain/tasks';
 import { addDays } from '../../shared/domain/planting-windows';
 import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { deleteFile, saveFile } from '../services/storage/disk-storage';
+import { deleteFile, saveFile } from '../services/storage/storage';
 import type { InspectedPhoto } from '../services/tasks/photo-intake';
 import { enqueueEmail } from '../services/mail/outbox';
 import { unitDoneEmail } from '../../templates/email/unit-done';
@@ -64,6 +64,31 @@ export async function updateTask(actor: SessionUser, id: number, input: TaskUpda
   });
 }
 
+/**
+ * Gives several tasks to one person (or to nobody) in one transaction: every task must be of the
+ * actor's firm and still open, or nothing changes. Dates stay as they are; the status follows.
+ */
+export async function assignTasks(actor: SessionUser, input: TaskAssignInput, ip: string | null): Promise<Task[]> {
+  if (!isStaff(actor)) throw forbidden('Only the firm’s consultants schedule and assign tasks.');
+  return sequelize.transaction(async (transaction) => {
+    const tasks = await Task.findAll({ where: { id: { [Op.in]: input.taskIds }, firmId: actor.firmId }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+    if (tasks.length !== input.taskIds.length) throw notFound(input.taskIds.length === 1 ? 'That task' : 'One of the selected tasks');
+    const finished = tasks.filter((t) => t.status === 'done' || t.status === 'skipped');
+    if (finished.length > 0) {
+      throw conflict(`${finished.map((t) => t.name).join(', ')} ${finished.length === 1 ? 'is' : 'are'} finished already; reopen ${finished.length === 1 ? 'it' : 'them'} or leave ${finished.length === 1 ? 'it' : 'them'} out of the selection.`);
+    }
+    if (input.assigneeId !== null) {
+      const assignee = await User.findOne({ where: { id: input.assigneeId, firmId: actor.firmId, active: true, role: { [Op.in]: ['crew', 'owner', 'consultant'] } }, transaction });
+      if (!assignee) throw unprocessable('assigneeId: pick an active crew member or consultant of your firm.');
+    }
+    for (const task of tasks) {
+      await task.update({ assigneeId: input.assigneeId, status: plannedOrScheduled(input.assigneeId, task.startDate) }, { transaction });
+    }
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'tasks.assigned', subjectType: 'Task', subjectId: tasks[0].id, data: { taskIds: input.taskIds, assigneeId: input.assigneeId }, ip }, transaction);
+    return tasks;
+  });
+}
+
 export interface CompletionResult {
   task: Task;
   /** True when this idempotency key had completed the task already: nothing new was stored. */
@@ -112,13 +137,15 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
     return { task: replay, replayed: true };
   }
   const probe = await taskForActor(actor, id);
+  // The same key finished it between the two reads (a concurrent copy of this request): its answer.
+  if (probe.status === 'done' && probe.completionKey === key) return { task: probe, replayed: true };
   if (probe.status === 'done' || probe.status === 'skipped') throw conflict(`This task was ${probe.status === 'done' ? `marked done on ${probe.doneOn ? formatDate(probe.doneOn) : 'an earlier day'}` : 'skipped'} already; nothing was changed.`);
   // The firm's today, with a day of slack for a crew phone set to a zone east of the firm's.
   if (input.doneOn > addDays(await firmToday(actor.firmId), 1)) throw unprocessable('doneOn: the day the work was done cannot be after today. Pick today or an earlier day.');
   const saved: string[] = [];
   try {
     for (const photo of photos) saved.push(await saveFile('photos', photo.bytes, photo.extension));
-    return await sequelize.transaction(async (transaction) => {
+    const result = await sequelize.transaction(async (transaction): Promise<CompletionResult> => {
       const task = await taskForActor(actor, id, transaction);
       if (task.status === 'done' || task.status === 'skipped') {
         if (task.completionKey === key) return { task, replayed: true };
@@ -136,6 +163,9 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
       await notifyUnitDone(task, transaction);
       return { task, replayed: false };
     });
+    // A concurrent copy with the same key won the row lock: its photos are the stored ones, not ours.
+    if (result.replayed) await Promise.all(saved.map((k) => deleteFile(k)));
+    return result;
   } catch (error) {
     await Promise.all(saved.map((k) => deleteFile(k)));
     // A concurrent request with the same key won the unique index: answer its completion.

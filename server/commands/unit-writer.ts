@@ -1,7 +1,7 @@
 /** Creates, edits and deletes plan units; every write re-measures on the server and bumps the plan revision. */
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Property, Unit } from '../models';
+import { Firm, Property, Unit } from '../models';
 import { GeometryKindMismatchError, measureUnit } from '../../shared/domain/geometry';
 import type { UnitCreateInput, UnitUpdateInput } from '../../shared/schemas/unit';
 import type { SessionUser } from '../../shared/schemas/auth';
@@ -12,6 +12,7 @@ import { conflict, notFound, unprocessable } from '../errors';
 import { assertValidInDatabase } from './geometry-validator';
 import { recordAudit } from './audit-recorder';
 import { stripCrs } from '../presenters/geojson';
+import { CONFIRM_LARGE_AREA_FIELD, largeAreaThreshold, largeUnitMessage } from '../../shared/domain/large-area';
 
 /** The stored measure columns of a unit; 422 when the geometry does not fit the kind. */
 function measureColumns(kind: UnitKind, geometry: Geometry, field = 'geometry') {
@@ -32,14 +33,31 @@ async function lockProperty(propertyId: number, firmId: number, transaction: Tra
   return property;
 }
 
+/** The firm's large-area threshold, acres. */
+export async function firmLargeAreaAcres(firmId: number, transaction: Transaction): Promise<number> {
+  const firm = await Firm.findByPk(firmId, { attributes: ['id', 'settings'], transaction });
+  return largeAreaThreshold(firm?.settings);
+}
+
+/**
+ * 422 naming `confirmLargeArea` when a unit is larger than its property (or, with no boundary, than
+ * the firm's threshold) and the request did not confirm it. Checked before anything is written.
+ */
+function assertSizeConfirmed(unitAcres: number | null, property: Property, thresholdAcres: number, name: string, confirmed: boolean | undefined, prefix: string): void {
+  if (confirmed) return;
+  const message = largeUnitMessage(unitAcres, property.acres, thresholdAcres, name);
+  if (message) throw unprocessable(message, [{ path: `${prefix}${CONFIRM_LARGE_AREA_FIELD}`, message }]);
+}
+
 async function bump(property: Property, transaction: Transaction): Promise<void> {
   await property.update({ revision: property.revision + 1 }, { transaction });
 }
 
 /** Adds units to a property in one transaction (one for a drawing, many for an import). */
-export async function createUnits(actor: SessionUser, propertyId: number, inputs: UnitCreateInput[], ip: string | null): Promise<Unit[]> {
+export async function createUnits(actor: SessionUser, propertyId: number, inputs: UnitCreateInput[], ip: string | null, options: { confirmLargeArea?: boolean } = {}): Promise<Unit[]> {
   return sequelize.transaction(async (transaction) => {
     const property = await lockProperty(propertyId, actor.firmId, transaction);
+    const threshold = await firmLargeAreaAcres(actor.firmId, transaction);
     const existing = await Unit.count({ where: { propertyId }, transaction });
     if (existing + inputs.length > GEOMETRY_LIMITS.unitsPerProperty) {
       throw conflict(`A property holds at most ${GEOMETRY_LIMITS.unitsPerProperty} units; this one has ${existing}. Merge or delete some first.`);
@@ -48,6 +66,7 @@ export async function createUnits(actor: SessionUser, propertyId: number, inputs
     for (const [i, input] of inputs.entries()) {
       const field = inputs.length > 1 ? `units.${i}.geometry` : 'geometry';
       const measures = measureColumns(input.kind, input.geometry, field);
+      assertSizeConfirmed(measures.acres, property, threshold, input.name, options.confirmLargeArea || input.confirmLargeArea, inputs.length > 1 ? `units.${i}.` : '');
       await assertValidInDatabase(input.geometry, field, transaction);
       units.push(
         await Unit.create({ firmId: actor.firmId, propertyId, kind: input.kind, name: input.name, notes: input.notes ?? null, geometry: input.geometry, ...measures }, { transaction }),
@@ -72,8 +91,12 @@ export async function updateUnit(actor: SessionUser, unitId: number, input: Unit
     if (input.notes !== undefined) changes.notes = input.notes ?? null;
     if (input.kind !== undefined || input.geometry !== undefined) {
       const geometry = input.geometry ?? unit.geometry;
-      if (input.geometry) await assertValidInDatabase(input.geometry, 'geometry', transaction);
-      Object.assign(changes, { kind, geometry: stripCrs(geometry) }, measureColumns(kind, geometry, input.geometry ? 'geometry' : 'kind'));
+      const measures = measureColumns(kind, geometry, input.geometry ? 'geometry' : 'kind');
+      if (input.geometry) {
+        assertSizeConfirmed(measures.acres, property, await firmLargeAreaAcres(actor.firmId, transaction), input.name ?? unit.name, input.confirmLargeArea, '');
+        await assertValidInDatabase(input.geometry, 'geometry', transaction);
+      }
+      Object.assign(changes, { kind, geometry: stripCrs(geometry) }, measures);
     }
     await unit.update(changes, { transaction });
     await bump(property, transaction);

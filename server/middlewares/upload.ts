@@ -3,9 +3,17 @@ import multer from 'multer';
 import type { RequestHandler } from 'express';
 import { badRequest, payloadTooLarge } from '../errors';
 
-/** A single-file upload in field `field`, at most `maxBytes`. */
-export function singleUpload(field: string, maxBytes: number) {
-  return multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single(field);
+/** A single-file upload in field `field`, at most `maxBytes`; with `what`, a file over the size answers 413 naming the limit. */
+export function singleUpload(field: string, maxBytes: number, what?: string): RequestHandler {
+  const inner = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1, fields: 20 } }).single(field);
+  if (!what) return inner;
+  return (req, res, next) =>
+    inner(req, res, (err?: unknown) => {
+      if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
+        return next(payloadTooLarge(`The ${what} is larger than ${Math.round(maxBytes / 1024 / 1024)} MB, the most one upload may be. Split it or export a smaller one.`));
+      }
+      next(err);
+    });
 }
 
 /** Up to `maxCount` files in field `field`, each at most `maxBytes`; limit breaches answer with the limit in words. */

@@ -1,6 +1,7 @@
 /** Validates body, query and params with the shared zod schemas; the parsed values replace the raw ones. */
 import type { NextFunction, Request, Response } from 'express';
-import type { ZodType } from 'zod';
+import { ZodError, type ZodType } from 'zod';
+import { findUnstorableValue } from '../../shared/schemas/common';
 
 interface Schemas {
   body?: ZodType;
@@ -15,9 +16,21 @@ declare module 'express-serve-static-core' {
   }
 }
 
+/**
+ * Refuses, before any schema, a value no column can store (NUL, lone surrogates, denormal numbers),
+ * as a zod error naming its place, so every route answers 422 instead of reaching the database.
+ */
+export function refuseUnstorable(part: 'body' | 'query' | 'params', value: unknown): void {
+  const found = findUnstorableValue(value);
+  if (found) throw new ZodError([{ code: 'custom', path: part === 'body' ? found.path : [...found.path], message: found.message, input: undefined }]);
+}
+
 /** Middleware: parse each part with its schema, or pass the zod error to the error handler (422). */
 export function validate(schemas: Schemas) {
   return (req: Request, _res: Response, next: NextFunction) => {
+    if (schemas.params) refuseUnstorable('params', req.params);
+    if (schemas.query) refuseUnstorable('query', req.query);
+    if (schemas.body) refuseUnstorable('body', req.body);
     if (schemas.params) req.params = schemas.params.parse(req.params) as Request['params'];
     if (schemas.query) req.validQuery = schemas.query.parse(req.query);
     if (schemas.body) req.body = schemas.body.parse(req.body ?? {});

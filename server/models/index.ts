@@ -5,6 +5,7 @@ import { User } from './user';
 import { Property } from './property';
 import { AuthToken } from './auth-token';
 import { OutboxMessage } from './outbox-message';
+import { BackgroundJob } from './background-job';
 import { AuditEvent } from './audit-event';
 import { Unit } from './unit';
 import { Overlay } from './overlay';
@@ -40,7 +41,7 @@ Invoice.hasMany(InvoicePayment, { foreignKey: 'invoiceId', as: 'payments' });
 
 SeasonReport.belongsTo(SharedFile, { foreignKey: 'sharedFileId', as: 'file' });
 
-export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport };
+export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport, BackgroundJob };
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

@@ -161,6 +161,8 @@ export class InvoiceRefund extends Model<InferAttributes<InvoiceRefund>, InferCr
   declare amountCents: number;
   declare reason: string | null;
   declare processorRefundId: string;
+  /** The key of the owner's refund request that made it (null for refunds made elsewhere). */
+  declare requestKey: CreationOptional<string | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
 }
@@ -174,6 +176,7 @@ InvoiceRefund.init(
     amountCents: { type: DataTypes.INTEGER, allowNull: false },
     reason: DataTypes.TEXT,
     processorRefundId: { type: DataTypes.TEXT, allowNull: false },
+    requestKey: DataTypes.TEXT,
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
   },

@@ -21,6 +21,8 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare status: CreationOptional<'pending' | 'sent' | 'failed'>;
   declare attempts: CreationOptional<number>;
   declare nextAttemptAt: CreationOptional<Date>;
+  /** Until when delivery is retried (3 days from queueing or from the owner's resend). */
+  declare retryUntil: CreationOptional<Date>;
   declare lastError: string | null;
   declare sentAt: Date | null;
   declare createdAt: CreationOptional<Date>;
@@ -40,6 +42,7 @@ OutboxMessage.init(
     status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'pending' },
     attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+    retryUntil: { type: DataTypes.DATE, allowNull: false, defaultValue: () => new Date(Date.now() + 3 * 24 * 3_600_000) },
     lastError: DataTypes.TEXT,
     sentAt: DataTypes.DATE,
     createdAt: DataTypes.DATE,

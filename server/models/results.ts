@@ -109,6 +109,8 @@ export class SeasonReport extends Model<InferAttributes<SeasonReport>, InferCrea
   declare sharedFileId: number;
   declare sentAt: CreationOptional<Date | null>;
   declare sentTo: CreationOptional<string[]>;
+  /** When a sent report was taken back out of the landowner's portal. */
+  declare withdrawnAt: CreationOptional<Date | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -125,6 +127,7 @@ SeasonReport.init(
     sharedFileId: { type: DataTypes.INTEGER, allowNull: false },
     sentAt: DataTypes.DATE,
     sentTo: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+    withdrawnAt: DataTypes.DATE,
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

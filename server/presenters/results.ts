@@ -81,6 +81,7 @@ export function presentSeasonReport(report: SeasonReport, byteSize: number): Sea
     recommendations: report.recommendations,
     sentAt: report.sentAt?.toISOString() ?? null,
     sentTo: report.sentTo,
+    withdrawnAt: report.withdrawnAt?.toISOString() ?? null,
     byteSize,
     pdfUrl: `/api/season-reports/${report.id}/pdf`,
     createdAt: report.createdAt.toISOString(),

@@ -7,11 +7,11 @@ import { validate } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
 import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
 import { passport } from '../services/auth/passport';
-import { LoginSchema, PasswordResetRequestSchema, TokenPasswordSchema, VerifyEmailSchema, type SessionUser } from '../../shared/schemas/auth';
+import { LoginSchema, PasswordChangeSchema, PasswordResetRequestSchema, TokenPasswordSchema, VerifyEmailSchema, type SessionUser } from '../../shared/schemas/auth';
 import { verifySignupEmail } from '../commands/firm-signup';
 import { tooManyRequests, unauthorized } from '../errors';
 import { config } from '../config';
-import { findLiveToken, requestPasswordReset, setPasswordFromToken } from '../commands/password-setter';
+import { changePassword, findLiveToken, requestPasswordReset, setPasswordFromToken } from '../commands/password-setter';
 import { toSessionUser } from '../services/auth/passport';
 import { Firm } from '../models';
 import { recordAudit } from '../commands/audit-recorder';
@@ -44,20 +44,45 @@ const loginLimiter = rateLimit({
   handler: (_req, _res, next) => next(tooManyRequests('Too many sign-in attempts. Wait a few minutes, then try again or reset your password.')),
 });
 
-const resetLimiter = rateLimit({
-  windowMs: 15 * 60 * 1000,
-  limit: 20,
+/** The e-mail a sign-in names, as the account key of the per-account limit. */
+const accountOf = (req: Request) => String(req.body?.email ?? '').trim().toLowerCase();
+
+// However many addresses the attempts come from, one account takes only so many failed sign-ins.
+const accountLoginLimiter = rateLimit({
+  windowMs: config.loginRateLimit.windowMs,
+  limit: config.loginRateLimit.accountMax,
   standardHeaders: 'draft-8',
   legacyHeaders: false,
-  store: new PostgresRateLimitStore('reset:'),
-  handler: (_req, _res, next) => next(tooManyRequests('Too many requests. Wait a few minutes and try again.')),
+  skipSuccessfulRequests: true,
+  store: new PostgresRateLimitStore('login-account:'),
+  keyGenerator: accountOf,
+  handler: (_req, _res, next) => next(tooManyRequests('Too many sign-in attempts on this account. Wait a few minutes, then try again or reset your password.')),
 });
+
+/** A per-address limit with its own bucket, so asking for a reset cannot use up, say, invitation acceptance. */
+function bucketLimiter(prefix: string, limit: number, message: string, keyGenerator?: (req: Request) => string) {
+  return rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    store: new PostgresRateLimitStore(prefix),
+    ...(keyGenerator ? { keyGenerator } : {}),
+    handler: (_req, _res, next) => next(tooManyRequests(message)),
+  });
+}
+const resetRequestLimiter = bucketLimiter('reset:', 20, 'Too many reset requests. Wait a few minutes and try again.');
+const resetCompleteLimiter = bucketLimiter('reset-complete:', 20, 'Too many attempts to set a new password. Wait a few minutes and try again.');
+const verifyEmailLimiter = bucketLimiter('verify-email:', 20, 'Too many attempts to confirm an e-mail address. Wait a few minutes and try again.');
+const invitationAcceptLimiter = bucketLimiter('invite-accept:', 20, 'Too many attempts to accept an invitation. Wait a few minutes and try again.');
+// Guessing the current password through the change form is limited per account.
+const passwordChangeLimiter = bucketLimiter('password-change:', 10, 'Too many attempts to change the password. Wait a few minutes and try again.', (req) => `user-${req.user?.id ?? 0}`);
 
 r.get('/csrf', 'public', (req, res) => {
   res.json({ csrfToken: csrfToken(req), data: { csrfToken: csrfToken(req) } });
 });
 
-r.post('/login', 'public', validate({ body: LoginSchema }), loginLimiter, (req, res, next) => {
+r.post('/login', 'public', validate({ body: LoginSchema }), loginLimiter, accountLoginLimiter, (req, res, next) => {
   passport.authenticate('local', (err: unknown, user: SessionUser | false) => {
     if (err) return next(err);
     if (!user) return next(unauthorized('That e-mail and password do not match an account. Check both, or reset your password.'));
@@ -89,12 +114,12 @@ r.get('/invitations/:token', 'public', validate({ params: TokenParams }), async 
   res.json({ data: { name: user.name, email: user.email, role: user.role, firmName: firm?.name ?? '' } });
 });
 
-r.post('/invitations/accept', 'public', resetLimiter, validate({ body: TokenPasswordSchema }), async (req, res, next) => {
+r.post('/invitations/accept', 'public', invitationAcceptLimiter, validate({ body: TokenPasswordSchema }), async (req, res, next) => {
   const user = await setPasswordFromToken(req.body.token, 'invite', req.body.password, req.ip ?? null);
   signIn(req, res, next, await toSessionUser(user), 201);
 });
 
-r.post('/password-reset', 'public', resetLimiter, validate({ body: PasswordResetRequestSchema }), async (req, res) => {
+r.post('/password-reset', 'public', resetRequestLimiter, validate({ body: PasswordResetRequestSchema }), async (req, res) => {
   await requestPasswordReset(req.body.email);
   res.status(202).json({ data: { message: 'If that address belongs to an account, a reset link is on its way. It expires in an hour.' } });
 });
@@ -104,14 +129,19 @@ r.get('/password-reset/:token', 'public', validate({ params: TokenParams }), asy
   res.json({ data: { email: user.email } });
 });
 
-r.post('/password-reset/complete', 'public', resetLimiter, validate({ body: TokenPasswordSchema }), async (req, res) => {
+r.post('/password-reset/complete', 'public', resetCompleteLimiter, validate({ body: TokenPasswordSchema }), async (req, res) => {
   await setPasswordFromToken(req.body.token, 'reset', req.body.password, req.ip ?? null);
   res.json({ data: { message: 'Your password is changed. Sign in with the new one.' } });
 });
 
-r.post('/verify-email', 'public', resetLimiter, validate({ body: VerifyEmailSchema }), async (req, res) => {
+r.post('/verify-email', 'public', verifyEmailLimiter, validate({ body: VerifyEmailSchema }), async (req, res) => {
   const { email } = await verifySignupEmail(req.body.token, req.ip ?? null);
   res.json({ data: { email, message: 'Your e-mail is confirmed. Sign in with the password you chose.' } });
+});
+
+r.post('/password', 'signed-in', passwordChangeLimiter, validate({ body: PasswordChangeSchema }), async (req, res) => {
+  const { sessionsEnded } = await changePassword(req.user!.id, req.sessionID, req.body, req.ip ?? null);
+  res.json({ data: { message: sessionsEnded > 0 ? `Your password is changed. You were signed out on ${sessionsEnded === 1 ? 'one other device' : `${sessionsEnded} other devices`}.` : 'Your password is changed.', sessionsEnded } });
 });
 
 export const authRouter = r.router;

@@ -1,4 +1,5 @@
 /** Clients of the firm. */
+import type { z } from 'zod';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
@@ -6,7 +7,7 @@ import { Client, User } from '../models';
 import { presentTeamMember } from '../presenters/user';
 import { sequelize } from '../db/sequelize';
 import { ClientCreateSchema, ClientListQuerySchema, ClientUpdateSchema } from '../../shared/schemas/client';
-import { IdParamsSchema } from '../../shared/schemas/common';
+import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { presentClient } from '../presenters/client';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { recordAudit } from '../commands/audit-recorder';
@@ -25,10 +26,12 @@ const NONE = { propertyCount: 0, totalAcres: 0 };
 
 r.get('/', STAFF, validate({ query: ClientListQuerySchema }), async (req, res) => {
   const { firmId } = actor(req);
-  const { q } = req.validQuery as { q?: string };
+  const query = req.validQuery as z.infer<typeof ClientListQuerySchema>;
+  const { q } = query;
   const where: WhereOptions = q ? { firmId, [Op.or]: [{ name: { [Op.iLike]: `%${q}%` } }, { email: { [Op.iLike]: `%${q}%` } }] } : { firmId };
-  const [clients, stats] = await Promise.all([Client.findAll({ where, order: [['name', 'ASC']] }), clientStats(firmId)]);
-  res.json({ data: clients.map((c) => presentClient(c, stats.get(c.id) ?? NONE)) });
+  const { rows: clients, count } = await Client.findAndCountAll({ where, order: [['name', 'ASC'], ['id', 'ASC']], limit: query.limit, offset: query.offset });
+  const stats = await clientStats(firmId, clients.map((c) => c.id));
+  res.json({ data: clients.map((c) => presentClient(c, stats.get(c.id) ?? NONE)), page: pageOf(query, count) });
 });
 
 r.post('/', STAFF, validate({ body: ClientCreateSchema }), async (req, res) => {

@@ -45,6 +45,16 @@ r.get('/', STAFF, async (req, res) => {
     Prescription.findAll({ where: { firmId, year: { [Op.gte]: year - 1 } }, attributes: ['id', 'propertyId', 'unitId', 'practiceId', 'schedule'] }),
     Practice.findAll({ where: { firmId, archived: false }, attributes: ['id', 'name', 'definition'] }),
   ]);
+  const [depositDrafts, moneyIn] = await Promise.all([
+    q<{ id: number; number: string; client_name: string; property_name: string | null; proposal_id: number | null; proposal_number: string | null; total_cents: number; decided_at: Date | null }>(`
+      SELECT i.id, i.number, c.name AS client_name, pr.name AS property_name, i.proposal_id, p.number AS proposal_number, i.total_cents, p.decided_at
+      FROM invoices i JOIN clients c ON c.id = i.client_id LEFT JOIN properties pr ON pr.id = i.property_id LEFT JOIN proposals p ON p.id = i.proposal_id
+      WHERE i.firm_id = :firmId AND i.status = 'draft' AND i.kind = 'deposit' ORDER BY i.created_at DESC, i.id DESC LIMIT 12`),
+    q<{ id: number; invoice_id: number; number: string; client_name: string; amount_cents: number; received_at: Date; status: string }>(`
+      SELECT pay.id, pay.invoice_id, i.number, c.name AS client_name, pay.amount_cents, pay.received_at, i.status
+      FROM invoice_payments pay JOIN invoices i ON i.id = pay.invoice_id JOIN clients c ON c.id = i.client_id
+      WHERE pay.firm_id = :firmId AND pay.received_at >= now() - interval '14 days' ORDER BY pay.received_at DESC, pay.id DESC LIMIT 12`),
+  ]);
   const [unitRows, propertyRows, finishedTasks] = await Promise.all([
     Unit.findAll({ where: { id: [...new Set(prescriptions.map((p) => p.unitId))] }, attributes: ['id', 'name'] }),
     Property.findAll({ where: { id: [...new Set(prescriptions.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
@@ -75,6 +85,8 @@ r.get('/', STAFF, async (req, res) => {
       windows: practices.map((p) => ({ practiceName: p.name, ...practiceWindow(p.definition, region, year) })).map(({ practiceName, earliest, latest }) => ({ practiceName, earliest, latest })),
     },
     activity: activity.map((a) => ({ id: a.id, action: a.action, actorName: a.actor_name, subjectType: a.subject_type, subjectId: a.subject_id, createdAt: new Date(a.created_at).toISOString() })),
+    depositDrafts: depositDrafts.map((d) => ({ id: d.id, number: d.number, clientName: d.client_name, propertyName: d.property_name, proposalId: d.proposal_id, proposalNumber: d.proposal_number, totalCents: d.total_cents, approvedAt: d.decided_at ? new Date(d.decided_at).toISOString() : null })),
+    moneyIn: moneyIn.map((m) => ({ id: m.id, invoiceId: m.invoice_id, number: m.number, clientName: m.client_name, amountCents: m.amount_cents, receivedAt: new Date(m.received_at).toISOString(), paidInFull: m.status === 'paid' })),
   };
   res.json({ data: body });
 });

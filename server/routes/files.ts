@@ -10,7 +10,7 @@ import { downloadName } from '../../shared/domain/file-kinds';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { clientVisibleFiles, presentFiles, staffFiles } from '../services/files/file-reader';
 import { assertClientMayUpload, removeSharedFile, shareFile, updateSharedFile, uploadClientFile } from '../commands/file-sharer';
-import { readFile } from '../services/storage/disk-storage';
+import { sendStoredFile } from '../services/storage/storage';
 import { notFound } from '../errors';
 
 const r = defineRoutes('/files');
@@ -47,16 +47,14 @@ r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req
   const me = actor(req);
   const file = await findInFirm(SharedFile, Number(req.params.id), me.firmId, 'That file');
   if (me.role === 'client' && (file.clientId !== me.clientId || !file.visibleToClient)) throw notFound('That file');
-  const bytes = await readFile(file.storageKey);
   const extension = file.storageKey.split('.').pop() ?? 'bin';
   const name = downloadName(file.title, extension);
   res.setHeader('Content-Type', file.contentType);
-  res.setHeader('Content-Length', String(bytes.length));
   res.setHeader('Content-Disposition', `attachment; filename="${name}"; filename*=UTF-8''${encodeURIComponent(name)}`);
   // Never run anything from a stored file, whatever a browser makes of it.
   res.setHeader('Content-Security-Policy', "default-src 'none'; sandbox");
   res.setHeader('Cache-Control', 'private, no-store');
-  res.send(bytes);
+  await sendStoredFile(res, file.storageKey);
 });
 
 r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: FileUpdateSchema }), async (req, res) => {

@@ -7,10 +7,9 @@ import { singleUpload } from '../middlewares/upload';
 import { LOGO_LIMITS } from '../../shared/limits';
 import { checkLogo, LOGO_TOO_LARGE } from '../services/firm-logo';
 import { settingsFromProfile } from '../services/firm-profile';
-import { readFile, saveFile } from '../services/storage/disk-storage';
+import { readFile, saveFile } from '../services/storage/storage';
 import { presentFirm } from '../presenters/firm';
 import { actor } from '../policies/firm-scope';
-import { refreshTileOrigins } from '../services/imagery/tile-origins';
 import { recordAudit } from '../commands/audit-recorder';
 import { sequelize } from '../db/sequelize';
 import { badRequest, notFound, payloadTooLarge } from '../errors';
@@ -37,7 +36,6 @@ r.patch('/settings', OWNER, validate({ body: FirmSettingsUpdateSchema }), async 
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.settings-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(req.body) }, ip: req.ip ?? null }, transaction);
     return row;
   });
-  await refreshTileOrigins();
   res.json({ data: presentFirm(firm) });
 });
 

@@ -23,6 +23,8 @@ import { invoicesRouter } from './invoices';
 import { webhooksRouter } from './webhooks';
 import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRouter } from './results';
 import { filesRouter } from './files';
+import { jobsRouter } from './jobs';
+import { outboxRouter } from './outbox';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -60,4 +62,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/harvests', router: harvestsRouter },
   { path: '/season-reports', router: seasonReportsRouter },
   { path: '/files', router: filesRouter },
+  { path: '/jobs', router: jobsRouter },
+  { path: '/outbox', router: outboxRouter },
 ];

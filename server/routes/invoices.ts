@@ -3,9 +3,11 @@ import type { Request } from 'express';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { waitForJob } from '../services/jobs/job-queue';
+import { presentJob } from '../presenters/job';
 import { Invoice, Task } from '../models';
 import { sequelize } from '../db/sequelize';
-import { IdParamsSchema } from '../../shared/schemas/common';
+import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type BillableTaskDto, type InvoiceListQuery, type ReceivablesDto } from '../../shared/schemas/invoice';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { addManualLine, createInvoice, removeManualLine, sendInvoice, updateInvoice, voidInvoice } from '../commands/invoice-writer';
@@ -36,10 +38,11 @@ r.get('/', STAFF_AND_CLIENT, validate({ query: InvoiceListQuerySchema }), async 
   if (q.propertyId) where.propertyId = q.propertyId;
   if (q.proposalId) where.proposalId = q.proposalId;
   if (q.status) {
-    if (me.role === 'client' && q.status === 'draft') return res.json({ data: [] });
+    if (me.role === 'client' && q.status === 'draft') return res.json({ data: [], page: pageOf(q, 0) });
     where.status = q.status;
   }
-  res.json({ data: await listInvoiceRows(where as WhereOptions, todayInZone(me.firmTimezone)) });
+  const [total, data] = await Promise.all([Invoice.count({ where: where as WhereOptions }), listInvoiceRows(where as WhereOptions, todayInZone(me.firmTimezone), q)]);
+  res.json({ data, page: pageOf(q, total) });
 });
 
 r.get('/receivables', STAFF, async (req, res) => {
@@ -100,7 +103,10 @@ r.delete('/:id/lines/:lineId', STAFF, validate({ params: LineParamsSchema }), as
 });
 
 r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  res.json({ data: await readInvoice(await sendInvoice(actor(req), Number(req.params.id), req.ip ?? null)) });
+  const { invoice, job } = await sendInvoice(actor(req), Number(req.params.id), req.ip ?? null);
+  // The PDF and e-mail are a job; a quick one is finished before the answer, which names it either way.
+  const settled = await waitForJob(job.id);
+  res.json({ data: await readInvoice(invoice), job: presentJob(settled ?? job) });
 });
 
 r.post('/:id/void', STAFF, validate({ params: IdParamsSchema, body: VoidSchema }), async (req, res) => {

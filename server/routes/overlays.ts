@@ -9,8 +9,8 @@ import { OverlayCornersSchema, OverlayUpdateSchema } from '../../shared/schemas/
 import { GEOMETRY_LIMITS } from '../../shared/limits';
 import { presentOverlay } from '../presenters/firm';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { prepareOverlay } from '../services/imagery/overlay-image';
-import { deleteFile, readFile, saveFile } from '../services/storage/disk-storage';
+import { runOverlayPrep } from '../services/geo-work/geo-pool';
+import { deleteFile, saveFile, sendStoredFile } from '../services/storage/storage';
 import { sequelize } from '../db/sequelize';
 import { badRequest, unprocessable } from '../errors';
 import { recordAudit } from '../commands/audit-recorder';
@@ -28,7 +28,7 @@ perProperty.get('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), as
 
 const UploadFieldsSchema = z.object({ name: z.string().trim().max(120).optional(), corners: z.string().optional() });
 
-perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.overlayMaxBytes), async (req, res) => {
+perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.overlayMaxBytes, 'image'), async (req, res) => {
   const me = actor(req);
   const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
   if (!req.file) throw badRequest('Attach the image in the form field “file” (GeoTIFF, or PNG/JPEG with its corners).');
@@ -45,7 +45,9 @@ perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), s
     if (!parsed.success) throw unprocessable(describeZodError(parsed.error).message);
     corners = parsed.data as Corners;
   }
-  const prepared = await prepareOverlay(req.file.buffer, corners);
+  // Checked and converted in a worker thread: a large GeoTIFF never holds up other requests.
+  const answer = await runOverlayPrep({ bytes: req.file.buffer, corners });
+  const prepared = { ...answer, bytes: Buffer.from(answer.bytes.buffer, answer.bytes.byteOffset, answer.bytes.byteLength) };
   const key = await saveFile('overlays', prepared.bytes, prepared.extension);
   try {
     const overlay = await sequelize.transaction(async (transaction) => {
@@ -81,7 +83,7 @@ r.get('/:id/image', STAFF, validate({ params: IdParamsSchema }), async (req, res
   res.setHeader('Content-Type', overlay.contentType);
   res.setHeader('Cache-Control', 'private, max-age=86400');
   res.setHeader('X-Content-Type-Options', 'nosniff');
-  res.send(await readFile(overlay.storageKey));
+  await sendStoredFile(res, overlay.storageKey);
 });
 
 export const propertyOverlaysRouter = perProperty.router;

@@ -5,7 +5,7 @@ import { validate } from '../middlewares/validate';
 import { singleUpload } from '../middlewares/upload';
 import { Client, Property } from '../models';
 import { sequelize } from '../db/sequelize';
-import { IdParamsSchema } from '../../shared/schemas/common';
+import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { PropertyCreateSchema, PropertyListQuerySchema, PropertyUpdateSchema } from '../../shared/schemas/property';
 import { UnitBulkCreateSchema, UnitCreateSchema } from '../../shared/schemas/unit';
 import { GEOMETRY_LIMITS } from '../../shared/limits';
@@ -15,9 +15,13 @@ import { actor, findInFirm } from '../policies/firm-scope';
 import { createProperty, updateProperty } from '../commands/property-writer';
 import { createUnits } from '../commands/unit-writer';
 import { recordAudit } from '../commands/audit-recorder';
-import { loadPlan, planEtag, planSummary, unitsJson } from '../services/plan/plan-reader';
-import { readGeoFile, writeGeoFile, isExportFormat, isGeoFileError, EXPORT_FORMATS } from '../services/geo-files';
-import { AppError, badRequest, conflict, unprocessable } from '../errors';
+import { loadPlan, planEtagAt, planRevision, planSummary, unitsAnswer } from '../services/plan/plan-reader';
+import { etagMatches, sendPrecompressed } from '../services/http/precompressed';
+import { writeGeoFile, isExportFormat, EXPORT_FORMATS } from '../services/geo-files';
+import { runGeoImport } from '../services/geo-work/geo-pool';
+import { loadImportGeometries, storeImport } from '../services/geo-files/import-store';
+import { ImportFeaturesQuerySchema, ImportParamsSchema } from '../../shared/schemas/geo-import';
+import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
 import { Firm, Proposal } from '../models';
@@ -43,11 +47,15 @@ async function present(firmId: number, property: Property) {
 
 r.get('/', STAFF, validate({ query: PropertyListQuerySchema }), async (req, res) => {
   const { firmId } = actor(req);
-  const { clientId, q } = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const query = req.validQuery as z.infer<typeof PropertyListQuerySchema>;
+  const { clientId, q } = query;
   const where: WhereOptions = { firmId, ...(clientId ? { clientId } : {}), ...(q ? { name: { [Op.iLike]: `%${q}%` } } : {}) };
-  const properties = await Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC']] });
+  const [total, properties] = await Promise.all([
+    Property.count({ where }),
+    Property.findAll({ where, include: [{ model: Client, as: 'client', attributes: ['name'] }], order: [['name', 'ASC'], ['id', 'ASC']], limit: query.limit, offset: query.offset }),
+  ]);
   const counts = await unitCounts(firmId, properties.map((p) => p.id));
-  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)) });
+  res.json({ data: properties.map((p) => presentProperty(p, (p as Property & { client?: Client }).client?.name ?? '', counts.get(p.id) ?? 0)), page: pageOf(query, total) });
 });
 
 r.post('/', STAFF, validate({ body: PropertyCreateSchema }), async (req, res) => {
@@ -81,15 +89,15 @@ r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) =
 });
 
 r.get('/:id/units', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const { firmId } = actor(req);
-  const plan = await loadPlan(Number(req.params.id), firmId, { lean: true });
-  const etag = planEtag(plan);
+  // The revision first, alone: a 304 costs the session read and this one small query.
+  const propertyId = Number(req.params.id);
+  const revision = await planRevision(propertyId, actor(req).firmId);
+  const etag = planEtagAt(propertyId, revision);
   res.setHeader('ETag', etag);
   res.setHeader('Cache-Control', 'private, no-cache');
-  if (req.headers['if-none-match'] === etag) return res.status(304).end();
-  const body = await unitsJson(plan);
-  res.type('application/json').setHeader('Content-Length', body.length);
-  res.end(body);
+  res.vary('Accept-Encoding');
+  if (etagMatches(req.headers['if-none-match'], etag)) return res.status(304).end();
+  sendPrecompressed(req, res, await unitsAnswer(propertyId, revision));
 });
 
 r.post('/:id/units', STAFF, validate({ params: IdParamsSchema, body: UnitCreateSchema }), async (req, res) => {
@@ -100,7 +108,7 @@ r.post('/:id/units', STAFF, validate({ params: IdParamsSchema, body: UnitCreateS
 
 r.post('/:id/units/bulk', STAFF, validate({ params: IdParamsSchema, body: UnitBulkCreateSchema }), async (req, res) => {
   const me = actor(req);
-  const units = await createUnits(me, Number(req.params.id), req.body.units, req.ip ?? null);
+  const units = await createUnits(me, Number(req.params.id), req.body.units, req.ip ?? null, { confirmLargeArea: req.body.confirmLargeArea });
   res.status(201).json({ data: units.map(presentUnit) });
 });
 
@@ -110,17 +118,24 @@ r.get('/:id/plan', STAFF, validate({ params: IdParamsSchema }), async (req, res)
   res.json({ data: await planSummary(plan) });
 });
 
-r.post('/:id/imports', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.importMaxBytes), async (req, res) => {
-  const { firmId } = actor(req);
-  await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+r.post('/:id/imports', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.importMaxBytes, 'file'), async (req, res) => {
+  const me = actor(req);
+  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
   if (!req.file) throw badRequest('Attach the file in the form field “file” (a .geojson, .kml, .kmz, .gpx or zipped shapefile).');
-  try {
-    const result = await readGeoFile({ filename: req.file.originalname, buffer: req.file.buffer });
-    res.json({ data: result });
-  } catch (err) {
-    if (isGeoFileError(err)) throw new AppError(err.status, err.code, err.message, err.details);
-    throw err;
-  }
+  // Read in a worker thread; the answer comes back as JSON text, so nothing large is rebuilt here.
+  const answer = await runGeoImport({ filename: req.file.originalname, bytes: req.file.buffer });
+  await storeImport({ id: answer.importId, firmId: me.firmId, propertyId: property.id, userId: me.id, format: answer.format, featureCount: answer.featureCount, geometriesJson: answer.geometriesJson });
+  res.type('application/json').send(`{"data":${answer.previewJson}}`);
+});
+
+r.get('/:id/imports/:importId/features', STAFF, validate({ params: ImportParamsSchema, query: ImportFeaturesQuerySchema }), async (req, res) => {
+  const { firmId } = actor(req);
+  const { id, importId } = req.params as unknown as z.infer<typeof ImportParamsSchema>;
+  const { items } = req.validQuery as z.output<typeof ImportFeaturesQuerySchema>;
+  await findInFirm(Property, id, firmId, 'That property');
+  const features = await loadImportGeometries(firmId, id, importId, items);
+  if (!features) throw notFound('That import (imports are kept for a day; upload the file again)');
+  res.json({ data: features });
 });
 
 const ExportQuerySchema = z.object({

@@ -4,8 +4,10 @@ import { Op, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { waitForJob } from '../services/jobs/job-queue';
+import { presentJob } from '../presenters/job';
 import { Client, Property, Proposal } from '../models';
-import { IdParamsSchema } from '../../shared/schemas/common';
+import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { ApproveSchema, DeclineSchema, ProposalCreateSchema, ProposalListQuerySchema, ProposalUpdateSchema } from '../../shared/schemas/proposal';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { draftProposal, reviseProposal, sendProposal, updateProposal, withdrawProposal } from '../commands/proposal-writer';
@@ -32,8 +34,8 @@ async function readable(req: Request): Promise<Proposal> {
 const ctx = (req: Request) => ({ ip: req.ip ?? null, userAgent: req.get('user-agent') ?? null });
 
 /** List rows: numbers and totals without lines. */
-async function listRows(where: WhereOptions, today: string) {
-  const rows = await Proposal.findAll({ where, order: [['createdAt', 'DESC'], ['version', 'DESC']] });
+async function listRows(where: WhereOptions, today: string, page?: { limit: number; offset: number }) {
+  const rows = await Proposal.findAll({ where, order: [['createdAt', 'DESC'], ['version', 'DESC'], ['id', 'DESC']], limit: page?.limit, offset: page?.offset });
   const [properties, clients] = await Promise.all([
     Property.findAll({ where: { id: [...new Set(rows.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
     Client.findAll({ where: { id: [...new Set(rows.map((p) => p.clientId))] }, attributes: ['id', 'name'] }),
@@ -74,18 +76,20 @@ perProperty.post('/:id/proposals', STAFF, validate({ params: IdParamsSchema, bod
 
 r.get('/', STAFF_AND_CLIENT, validate({ query: ProposalListQuerySchema }), async (req, res) => {
   const me = actor(req);
-  const { status, propertyId } = req.validQuery as z.infer<typeof ProposalListQuerySchema>;
+  const query = req.validQuery as z.infer<typeof ProposalListQuerySchema>;
+  const { status, propertyId } = query;
   const where: Record<string | symbol, unknown> = { firmId: me.firmId };
   if (me.role === 'client') Object.assign(where, { clientId: me.clientId, status: { [Op.ne]: 'draft' } });
   if (propertyId) where.propertyId = propertyId;
   const today = todayInZone(me.firmTimezone);
   if (status === 'expired') Object.assign(where, { status: 'sent', expiresOn: { [Op.lt]: today } });
   else if (status) {
-    if (me.role === 'client' && status === 'draft') return res.json({ data: [] });
+    if (me.role === 'client' && status === 'draft') return res.json({ data: [], page: pageOf(query, 0) });
     where.status = status;
     if (status === 'sent') where.expiresOn = { [Op.or]: [{ [Op.gte]: today }, { [Op.is]: null }] };
   }
-  res.json({ data: await listRows(where as WhereOptions, today) });
+  const [total, data] = await Promise.all([Proposal.count({ where: where as WhereOptions }), listRows(where as WhereOptions, today, query)]);
+  res.json({ data, page: pageOf(query, total) });
 });
 
 r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
@@ -114,8 +118,10 @@ r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ProposalUpdateSc
 });
 
 r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const proposal = await sendProposal(actor(req), Number(req.params.id), req.ip ?? null);
-  res.json({ data: await readProposal(proposal) });
+  const { proposal, job } = await sendProposal(actor(req), Number(req.params.id), req.ip ?? null);
+  // The PDF and e-mail are a job; a quick one is finished before the answer, which names it either way.
+  const settled = await waitForJob(job.id);
+  res.json({ data: await readProposal(proposal), job: presentJob(settled ?? job) });
 });
 
 r.post('/:id/revise', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {

@@ -3,6 +3,8 @@ import type { Request } from 'express';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { waitForJob } from '../services/jobs/job-queue';
+import { presentJob } from '../presenters/job';
 import { CameraSurvey, HarvestRecord, Property, SeasonReport, SharedFile, Unit } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import {
@@ -16,10 +18,10 @@ import {
 import { actor, findInFirm } from '../policies/firm-scope';
 import { notFound } from '../errors';
 import { createHarvest, createSurvey, deleteHarvest, deleteSurvey, updateHarvest, updateSurvey } from '../commands/results-writer';
-import { deleteSeasonReport, makeSeasonReport, sendSeasonReport } from '../commands/season-report-maker';
+import { deleteSeasonReport, requestSeasonReport, sendSeasonReport, withdrawSeasonReport } from '../commands/season-report-maker';
 import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
 import { presentHarvest, presentSeasonReport } from '../presenters/results';
-import { readFile } from '../services/storage/disk-storage';
+import { sendStoredFile } from '../services/storage/storage';
 
 const perProperty = defineRoutes('/properties');
 const surveys = defineRoutes('/surveys');
@@ -81,9 +83,16 @@ perProperty.get('/:id/season-reports', STAFF_AND_CLIENT, validate({ params: IdPa
 });
 
 perProperty.post('/:id/season-reports', STAFF, validate({ params: IdParamsSchema, body: SeasonReportCreateSchema }), async (req, res) => {
-  const report = await makeSeasonReport(actor(req), Number(req.params.id), req.body as z.output<typeof SeasonReportCreateSchema>, req.ip ?? null);
+  const me = actor(req);
+  const job = await requestSeasonReport(me, Number(req.params.id), req.body as z.output<typeof SeasonReportCreateSchema>, req.ip ?? null);
+  // Made by a background job: a quick one answers 201 with the report as before; a slow one 202 with
+  // the job, which the page polls at GET /api/jobs/:id.
+  const settled = (await waitForJob(job.id)) ?? job;
+  const reportId = settled.status === 'done' ? Number(settled.result?.seasonReportId) : null;
+  const report = reportId ? await SeasonReport.findOne({ where: { id: reportId, firmId: me.firmId } }) : null;
+  if (!report) return res.status(202).json({ data: null, job: presentJob(settled) });
   const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
-  res.status(201).json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
+  res.status(201).json({ data: presentSeasonReport(report, file?.byteSize ?? 0), job: presentJob(settled) });
 });
 
 // ---- surveys ----
@@ -125,17 +134,22 @@ harvests.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req,
 reports.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
   const me = actor(req);
   const report = await findInFirm(SeasonReport, Number(req.params.id), me.firmId, 'That season report');
-  if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null)) throw notFound('That season report');
+  if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null || report.withdrawnAt !== null)) throw notFound('That season report');
   const file = await SharedFile.findByPk(report.sharedFileId);
   if (!file) throw notFound('That season report’s PDF');
-  const pdf = await readFile(file.storageKey);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="season-report-${report.season}.pdf"`);
-  res.send(pdf);
+  await sendStoredFile(res, file.storageKey);
 });
 
 reports.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
   const report = await sendSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+  const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
+  res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
+});
+
+reports.post('/:id/withdraw', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const report = await withdrawSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
   const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
   res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
 });

@@ -6,14 +6,14 @@ import { validate } from '../middlewares/validate';
 import { arrayUpload } from '../middlewares/upload';
 import { Property, Task, TaskPhoto } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskCompleteSchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, type TaskListQuery } from '../../shared/schemas/task';
+import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskCompleteSchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema, type TaskListQuery } from '../../shared/schemas/task';
 import { PHOTO_LIMITS } from '../../shared/limits';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
+import { assignTasks, completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
 import { listTasks, readTask } from '../services/tasks/task-reader';
 import { inspectPhoto } from '../services/tasks/photo-intake';
 import { propertyProgress } from '../services/tasks/progress';
-import { readFile } from '../services/storage/disk-storage';
+import { sendStoredFile } from '../services/storage/storage';
 import { badRequest, notFound, unprocessable } from '../errors';
 
 const r = defineRoutes('/tasks');
@@ -36,6 +36,13 @@ r.get('/:id', WORKERS, validate({ params: IdParamsSchema }), async (req, res) =>
 r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: TaskUpdateSchema }), async (req, res) => {
   const task = await updateTask(actor(req), Number(req.params.id), req.body, req.ip ?? null);
   res.json({ data: await readTask(actor(req), task) });
+});
+
+/** Several selected tasks to one crew member (or unassigned), all or nothing. */
+r.post('/assign', STAFF, validate({ body: TaskAssignSchema }), async (req, res) => {
+  const me = actor(req);
+  const tasks = await assignTasks(me, req.body, req.ip ?? null);
+  res.json({ data: await Promise.all(tasks.map((t) => readTask(me, t))) });
 });
 
 function idempotencyKey(req: Request): string {
@@ -91,7 +98,7 @@ photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], validate({ p
   res.setHeader('Content-Type', photo.contentType);
   res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
   res.setHeader('Content-Disposition', 'inline');
-  res.send(await readFile(photo.storageKey));
+  await sendStoredFile(res, photo.storageKey);
 });
 
 perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {

@@ -5,9 +5,12 @@ import { seedDemo } from '../db/seeds/demo';
 import { seedDemoPrescriptions } from '../db/seeds/demo-prescriptions';
 import { seedDemoSchedule } from '../db/seeds/demo-schedule';
 import { seedDemoPortal } from '../db/seeds/demo-portal';
+import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
   await migrateUp();
+  // Jobs the seed hands over (the sent proposal's e-mail) wait for the app's workers.
+  await startJobQueue({ workers: false, install: true });
   const firm = await seedDemo();
   await seedDemoPrescriptions(firm);
   await seedDemoSchedule(firm);
@@ -17,5 +20,6 @@ try {
   console.error((err as Error).message);
   process.exitCode = 1;
 } finally {
+  await stopJobQueue();
   await sequelize.close();
 }

@@ -17,6 +17,8 @@ export interface CapturedMessage {
   receivedAt: string;
   from: string;
   to: string[];
+  /** The app's outbox row id (header X-Browseline-Message), so the app can show a firm only its own mail. */
+  outboxId: number | null;
   subject: string;
   text: string;
   html: string | null;
@@ -43,11 +45,13 @@ export async function startSmtpCapture(opts: { smtpPort: number; httpPort: numbe
       simpleParser(stream)
         .then((mail) => {
           const to = session.envelope.rcptTo.map((r) => r.address);
+          const outboxHeader = Number(mail.headers.get('x-browseline-message'));
           messages.unshift({
             id: nextId++,
             receivedAt: new Date().toISOString(),
             from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
             to,
+            outboxId: Number.isInteger(outboxHeader) && outboxHeader > 0 ? outboxHeader : null,
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : null,
@@ -66,7 +70,7 @@ export async function startSmtpCapture(opts: { smtpPort: number; httpPort: numbe
   });
 
   const app = express();
-  const summary = (m: CapturedMessage) => ({ id: m.id, receivedAt: m.receivedAt, from: m.from, to: m.to, subject: m.subject, attachments: m.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, size: a.size })) });
+  const summary = (m: CapturedMessage) => ({ id: m.id, receivedAt: m.receivedAt, from: m.from, to: m.to, outboxId: m.outboxId, subject: m.subject, attachments: m.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, size: a.size })) });
   app.get('/messages', (_req, res) => res.json({ data: messages.map(summary) }));
   app.get('/messages/:id', (req, res) => {
     const m = messages.find((x) => x.id === Number(req.params.id));

@@ -51,6 +51,8 @@ cat <<MSG
   Demo accounts (password demo-browseline):
     owner@browseline.test · consultant@browseline.test · crew@browseline.test · client@browseline.test
 MSG
-NODE_ENV=${NODE_ENV:-development} node_modules/.bin/tsx server/index.ts &
+# Production mode unless the captured-mail reader is asked for explicitly (DEV_MAIL_READER=true, development only).
+if [ "${DEV_MAIL_READER:-}" = true ]; then server_env=development; else server_env=production; fi
+NODE_ENV=${NODE_ENV:-$server_env} node_modules/.bin/tsx server/index.ts &
 pids+=($!)
 wait "${pids[-1]}"

@@ -200,7 +200,9 @@ function checkPolygon(rings: Position[][], base: Path, partName: string, deepChe
     }
   }
 
-  // Below a square metre there is nothing to plant: corners on one line, or drawn twice.
+  // Below a square metre there is nothing to plant: corners on one line, or drawn twice. This is a
+  // check of the shape as drawn on the map (turf's edges run straight in longitude and sin(latitude),
+  // so corners on one parallel enclose nothing), not a measure: acres come from geometry.ts.
   if (area(outer) < 1) {
     const [lon, lat] = rings[0][0];
     problems.push({

@@ -149,11 +149,24 @@ export function allocateByLargestRemainder(totalCents: number, shares: ReadonlyA
   return result;
 }
 
+const currencyFormats = new Map<string, { format: Intl.NumberFormat; minorDigits: number }>();
+
+/** One Intl formatter per locale and currency (making one costs far more than using it). */
+function currencyFormat(locale: string, currency: string): { format: Intl.NumberFormat; minorDigits: number } {
+  const key = `${locale}|${currency}`;
+  let entry = currencyFormats.get(key);
+  if (!entry) {
+    const format = new Intl.NumberFormat(locale, { style: 'currency', currency });
+    entry = { format, minorDigits: format.resolvedOptions().maximumFractionDigits ?? 2 };
+    currencyFormats.set(key, entry);
+  }
+  return entry;
+}
+
 /** Cents as a currency string for display, e.g. 123456 → "$1,234.56" (exact, no float division). */
 export function formatCents(cents: number, currency = 'USD', locale = 'en-US'): string {
   assertCents(cents, 'cents', { allowNegative: true });
-  const format = new Intl.NumberFormat(locale, { style: 'currency', currency });
-  const minorDigits = format.resolvedOptions().maximumFractionDigits ?? 2;
+  const { format, minorDigits } = currencyFormat(locale, currency);
   const abs = BigInt(Math.abs(cents));
   const scale = 10n ** BigInt(minorDigits);
   const decimal = minorDigits === 0 ? `${abs}` : `${abs / scale}.${(abs % scale).toString().padStart(minorDigits, '0')}`;

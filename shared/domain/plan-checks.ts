@@ -5,7 +5,6 @@
  */
 import {
   along,
-  area,
   bbox,
   booleanPointInPolygon,
   buffer,
@@ -13,12 +12,13 @@ import {
   feature,
   featureCollection,
   intersect,
-  length,
   lineSplit,
 } from '@turf/turf';
 import type { BBox, Feature, Geometry, LineString, Polygon } from 'geojson';
 import {
+  areaSqM,
   fitsFamily,
+  lengthM,
   measureArea,
   measureUnit,
   type AreaGeometry,
@@ -170,7 +170,7 @@ function boundaryWarnings(unit: PlanUnit, boundary: Feature<AreaGeometry>, unitA
       }];
     }
     const outside = difference(featureCollection([shape, boundary]));
-    const outsideAcres = outside ? sqMetresToAcres(area(outside)) : 0;
+    const outsideAcres = outside ? sqMetresToAcres(areaSqM(outside.geometry)) : 0;
     if (outsideAcres < NEGLIGIBLE_ACRES) return [];
     return [{
       code: 'partly-outside-boundary',
@@ -223,7 +223,7 @@ function lineOutside(geom: LineGeometry, boundary: Feature<AreaGeometry>): { tot
     const split = lineSplit(feature(part), boundary).features;
     const pieces = split.length > 0 ? split : [feature(part)];
     for (const piece of pieces) {
-      const pieceM = length(piece, { units: 'meters' });
+      const pieceM = lengthM(piece.geometry);
       totalM += pieceM;
       const middle = along(piece, pieceM / 2, { units: 'meters' });
       if (!booleanPointInPolygon(middle, boundary)) outsideM += pieceM;
@@ -283,7 +283,7 @@ export function inscribedWidthFt(polygon: Polygon, capFt: number): number {
 function survivesInset(polygon: Polygon, insetFt: number): boolean {
   if (insetFt <= 0) return true;
   const shrunk = buffer(feature(polygon), -insetFt * METRES_PER_FOOT, { units: 'meters' });
-  return shrunk !== undefined && area(shrunk) > 0;
+  return shrunk !== undefined && areaSqM(shrunk.geometry) > 0;
 }
 
 /** Pairwise overlaps of area units; pairs whose bounding boxes are apart are skipped unclipped. */
@@ -298,7 +298,7 @@ function overlapWarnings(areaUnits: { unit: PlanUnit; box: BBox }[]): PlanWarnin
         const shared = intersect(
           featureCollection([feature(a.unit.geometry as AreaGeometry), feature(b.unit.geometry as AreaGeometry)]),
         );
-        const acres = shared ? sqMetresToAcres(area(shared)) : 0;
+        const acres = shared ? sqMetresToAcres(areaSqM(shared.geometry)) : 0;
         if (acres < NEGLIGIBLE_ACRES) continue;
         warnings.push({
           code: 'overlap',

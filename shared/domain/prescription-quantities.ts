@@ -42,6 +42,11 @@ export interface PrescriptionLine {
   unitPriceCents: number;
   amountCents: number;
   category: LineCategory;
+  /**
+   * How the firm arrived at the price, for staff only (e.g. what the work would cost without the
+   * rate's minimum charge). Never copied into a proposal, invoice or anything a landowner reads.
+   */
+  pricingNote?: string;
 }
 
 export interface ItemResult {
@@ -341,13 +346,28 @@ function computeStep(step: PracticeStep, input: PrescriptionInput, params: StepP
     );
     result.services.push(line);
     const base = { stepKeys: [step.key], materialKey: null, rateKey: line.rateKey, category: line.category };
+    // Named by the step it serves, so a spreader used for seed and for fertilizer reads as two jobs, not one line twice.
+    const named = serviceLineName(line.name, step.name);
     serviceLines.push(
       line.minimumApplied
-        ? { ...base, description: `${line.name}: minimum charge (${fmt(line.quantity)} ${unitWithCount(line.quantity, line.unit)} would be ${formatCentsPlain(line.calculatedCents)})`, quantity: 1, unit: 'minimum', unitPriceCents: line.amountCents, amountCents: line.amountCents }
-        : { ...base, description: line.name, quantity: line.quantity, unit: line.unit, unitPriceCents: line.unitPriceCents, amountCents: line.amountCents },
+        ? {
+            ...base,
+            description: `${named} (minimum charge)`,
+            quantity: 1,
+            unit: 'minimum',
+            unitPriceCents: line.amountCents,
+            amountCents: line.amountCents,
+            pricingNote: `${fmt(line.quantity)} ${unitWithCount(line.quantity, line.unit)} would be ${formatCentsPlain(line.calculatedCents)}; the rate's minimum charge applies.`,
+          }
+        : { ...base, description: named, quantity: line.quantity, unit: line.unit, unitPriceCents: line.unitPriceCents, amountCents: line.amountCents },
     );
   });
   return result;
+}
+
+/** "Broadcast spreader — Fertilize at planting": a labor, equipment or fee line named with the step it serves. */
+export function serviceLineName(rateName: string, stepName: string): string {
+  return `${rateName} — ${stepName}`;
 }
 
 function formatCentsPlain(cents: number): string {

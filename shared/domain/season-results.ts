@@ -125,3 +125,34 @@ export function surveyTrend(surveys: readonly TrendSurveyInput[]): SurveyTrendRo
       fawnDoeRatio: s.estimates.fawnDoeRatio,
     }));
 }
+
+/** What a season has to report: finished work, camera surveys and harvest records, counted. */
+export interface SeasonContents {
+  work: number;
+  surveys: number;
+  harvests: number;
+}
+
+/**
+ * The sentence refusing a season report with nothing in it (no finished work, survey or harvest
+ * record in the season), or null when there is something to report.
+ */
+export function emptySeasonReason(contents: SeasonContents, seasonLabel: string): string | null {
+  if (contents.work > 0 || contents.surveys > 0 || contents.harvests > 0) return null;
+  return `There is nothing to report for the ${seasonLabel} season yet: no finished work, camera survey or harvest record falls in it. Record one, or pick another season, then make the report.`;
+}
+
+/** The acres line of a season report: the established units, or what there is when none is finished. */
+export function establishedText(acres: number, units: readonly { name: string; acresText: string | null }[], workCount: number): string {
+  if (units.length === 0 || acres <= 0) {
+    return workCount > 0
+      ? `${workCount} ${workCount === 1 ? 'task was' : 'tasks were'} finished this season; no unit has all of its work finished yet, so no acres are counted as established.`
+      : 'No unit has all of its work finished yet, so no acres are counted as established.';
+  }
+  return `established this season: ${units.map((u) => (u.acresText ? `${u.name} (${u.acresText})` : u.name)).join(', ')}.`;
+}
+
+/** True when a chart would show at least one bar (a chart of zeros tells the reader nothing). */
+export function hasBars(series: readonly { values: readonly (number | null)[] }[]): boolean {
+  return series.some((s) => s.values.some((v) => v !== null && v > 0));
+}

@@ -11,6 +11,9 @@ import type { StepWindow } from './planting-windows';
 import { addDays, parseIsoDate, type IsoDate } from './planting-windows';
 import { formatDate, formatDateSpan } from './clock';
 
+/** The header that carries a completion's idempotency key (one per completion, reused on every retry). */
+export const IDEMPOTENCY_HEADER = 'Idempotency-Key';
+
 export const TASK_STATUSES = ['planned', 'scheduled', 'done', 'skipped'] as const;
 export type TaskStatus = (typeof TASK_STATUSES)[number];
 

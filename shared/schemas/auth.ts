@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RecordIdSchema } from './common';
 import { LIMITS } from '../limits';
 
 export const ROLES = ['owner', 'consultant', 'crew', 'client'] as const;
@@ -36,7 +37,7 @@ export const InviteCreateSchema = z
     email,
     name: z.string().trim().min(1, { message: 'enter the person’s name' }).max(LIMITS.nameMax),
     role: z.enum(['consultant', 'crew', 'client']),
-    clientId: z.number().int().positive().optional(),
+    clientId: RecordIdSchema.optional(),
   })
   .refine((v) => v.role !== 'client' || v.clientId !== undefined, {
     message: 'choose the client this contact belongs to',
@@ -52,6 +53,17 @@ export const TokenPasswordSchema = z
   })
   .refine((v) => v.password === v.confirmPassword, { message: 'the two passwords differ', path: ['confirmPassword'] });
 export type TokenPasswordInput = z.infer<typeof TokenPasswordSchema>;
+
+/** The signed-in "change password" form. */
+export const PasswordChangeSchema = z
+  .object({
+    currentPassword: z.string().min(1, { message: 'enter your current password' }).max(LIMITS.passwordMax),
+    password,
+    confirmPassword: z.string(),
+  })
+  .refine((v) => v.password === v.confirmPassword, { message: 'the two passwords differ', path: ['confirmPassword'] })
+  .refine((v) => v.password !== v.currentPassword, { message: 'choose a password different from the current one', path: ['password'] });
+export type PasswordChangeInput = z.infer<typeof PasswordChangeSchema>;
 
 export const PasswordResetRequestSchema = z.object({ email });
 export type PasswordResetRequestInput = z.infer<typeof PasswordResetRequestSchema>;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
-import { optionalText } from './common';
+import { optionalText, PageQuerySchema } from './common';
 
 export const ClientCreateSchema = z.object({
   name: z.string().trim().min(1, { message: 'enter the client’s name' }).max(LIMITS.nameMax),
@@ -34,6 +34,8 @@ export const ClientSchema = z.object({
 });
 export type ClientDto = z.infer<typeof ClientSchema>;
 
-export const ClientListQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
-});
+export const ClientListQuerySchema = z
+  .object({
+    q: z.string().trim().max(100).optional(),
+  })
+  .extend(PageQuerySchema.shape);

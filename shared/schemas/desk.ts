@@ -11,6 +11,10 @@ export const DeskSummarySchema = z.object({
   /** The season strip: this year's windows of the firm's practices in its region. */
   season: z.object({ year: z.number().int(), region: z.string(), windows: z.array(z.object({ practiceName: z.string(), earliest: z.string(), latest: z.string() })) }),
   activity: z.array(z.object({ id: z.number().int(), action: z.string(), actorName: z.string().nullable(), subjectType: z.string().nullable(), subjectId: z.number().nullable(), createdAt: z.string() })),
+  /** Deposit invoices drafted when a landowner approved, not sent yet, newest first. */
+  depositDrafts: z.array(z.object({ id: z.number().int(), number: z.string(), clientName: z.string(), propertyName: z.string().nullable(), proposalId: z.number().int().nullable(), proposalNumber: z.string().nullable(), totalCents: z.number().int(), approvedAt: z.string().nullable() })),
+  /** Payments received in the last fourteen days, newest first. */
+  moneyIn: z.array(z.object({ id: z.number().int(), invoiceId: z.number().int(), number: z.string(), clientName: z.string(), amountCents: z.number().int(), receivedAt: z.string(), paidInFull: z.boolean() })),
 });
 export type DeskSummary = z.infer<typeof DeskSummarySchema>;
 

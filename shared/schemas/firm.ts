@@ -1,12 +1,12 @@
 import { z } from 'zod';
 import { isTimeZone } from '../domain/clock';
 
-/** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png */
+/** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png (https only). */
 export const TileUrlTemplateSchema = z
   .string()
   .trim()
   .max(500)
-  .refine((v) => /^https?:\/\/[^\s/]+\//.test(v), { message: 'start the address with https:// and the server name' })
+  .refine((v) => /^https:\/\/[^\s/]+\//.test(v), { message: 'start the address with https:// and the server name (plain http is not allowed)' })
   .refine((v) => v.includes('{z}') && v.includes('{x}') && v.includes('{y}'), { message: 'the address must contain {z}, {x} and {y}' });
 
 export const FirmSettingsUpdateSchema = z.object({
@@ -14,7 +14,14 @@ export const FirmSettingsUpdateSchema = z.object({
   tileAttribution: z.string().trim().max(200).nullish(),
   taxRatePct: z.number().min(0).max(30).optional(),
   timezone: z.string().trim().refine(isTimeZone, { message: 'choose a time zone from the list, such as America/Chicago' }).optional(),
+  /** Property size, acres, above which saving a boundary asks for a confirmation (default 20,000). */
+  largeAreaAcres: z.number({ message: 'enter the acreage above which a boundary needs confirming' }).min(1).max(10_000_000).optional(),
+  /** Hours without any request after which a session ends (besides the 14-day limit from sign-in). */
+  idleTimeoutHours: z.number({ message: 'give the idle time in hours' }).min(0.25, { message: 'must be at least a quarter of an hour' }).max(168, { message: 'must be at most 168 hours (a week)' }).optional(),
 });
+
+/** The idle timeout of a firm that has not chosen one. */
+export const DEFAULT_IDLE_TIMEOUT_HOURS = 8;
 export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
 
 const optionalProfileText = (max: number) => z.union([z.string().trim().max(max), z.null()]).transform((v) => (v ? v : null)).optional();
@@ -74,7 +81,7 @@ export const FirmSchema = z.object({
   region: z.string(),
   /** IANA time zone: the firm's "today" and the times on its documents. */
   timezone: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number() }),
   address: z.string().nullable(),
   website: z.string().nullable(),
   licenceNumbers: z.string().nullable(),

@@ -4,7 +4,16 @@ import type { Geometry, LineString, MultiLineString, MultiPolygon, Point, Polygo
 import { findGeometryProblems } from '../domain/geometry-problems';
 import { GEOMETRY_LIMITS } from '../limits';
 
-const position = z.array(z.number({ message: 'coordinates must be numbers' })).min(2, { message: 'a position needs a longitude and a latitude' }).max(3);
+/**
+ * A position [longitude, latitude] or [longitude, latitude, altitude]. The altitude (which GPS units
+ * and KML tools often add) is dropped here, for every geometry the API accepts, as imports already
+ * do: the plan is flat and the database columns are two-dimensional.
+ */
+const position = z
+  .array(z.number({ message: 'coordinates must be numbers' }))
+  .min(2, { message: 'a position needs a longitude and a latitude' })
+  .max(3, { message: 'a position is a longitude, a latitude and at most an altitude' })
+  .transform((p) => (p.length > 2 ? p.slice(0, 2) : p));
 
 const point = z.object({ type: z.literal('Point'), coordinates: position });
 const multiPoint = z.object({ type: z.literal('MultiPoint'), coordinates: z.array(position) });

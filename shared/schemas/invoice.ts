@@ -1,9 +1,11 @@
 /** Invoices: what the API takes (zod) and answers (types shared by the server's presenter and the client). */
 import { z } from 'zod';
+import { IdSchema, RecordIdSchema } from './common';
 import { parseDollarsToCents } from '../domain/money';
+import { PageQuerySchema } from './common';
 import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceKind, type InvoiceLineSource, type InvoiceStatus } from '../domain/invoicing';
 
-const id = z.number({ message: 'must be a record id' }).int().positive({ message: 'must be a positive whole number' });
+const id = RecordIdSchema;
 
 export const InvoiceCreateSchema = z
   .object({
@@ -15,11 +17,11 @@ export const InvoiceCreateSchema = z
 export type InvoiceCreateInput = z.infer<typeof InvoiceCreateSchema>;
 
 export const InvoiceListQuerySchema = z.object({
-  clientId: z.coerce.number().int().positive().optional(),
-  propertyId: z.coerce.number().int().positive().optional(),
-  proposalId: z.coerce.number().int().positive().optional(),
+  clientId: IdSchema.optional(),
+  propertyId: IdSchema.optional(),
+  proposalId: IdSchema.optional(),
   status: z.enum(INVOICE_STATUSES, { message: 'status must be draft, open, paid or void' }).optional(),
-});
+}).extend(PageQuerySchema.shape);
 export type InvoiceListQuery = z.infer<typeof InvoiceListQuerySchema>;
 
 export const InvoiceUpdateSchema = z.object({
@@ -40,7 +42,7 @@ export const ManualLineSchema = z.object({
 });
 export type ManualLineInput = z.infer<typeof ManualLineSchema>;
 
-export const LineParamsSchema = z.object({ id: z.coerce.number().int().positive(), lineId: z.coerce.number().int().positive() });
+export const LineParamsSchema = z.object({ id: IdSchema, lineId: IdSchema });
 
 export const CheckoutSchema = z.object({
   amountCents: z.number({ message: 'the amount must be a number of cents' }).int({ message: 'the amount is whole cents' }).positive({ message: 'the amount must be more than zero' }).optional(),
@@ -52,6 +54,11 @@ export const VoidSchema = z.object({
 });
 
 export const RefundSchema = z.object({
+  /**
+   * One key per refund the owner means to make, made when the form is filled and sent again with
+   * every retry of that same refund: the payments service then refunds once, whatever is lost.
+   */
+  requestKey: z.string({ message: 'the refund request needs its key; reload the page and try again' }).trim().min(8, { message: 'must be at least 8 characters' }).max(200).regex(/^[A-Za-z0-9_.:-]+$/, { message: 'may hold letters, digits and - _ . : only' }),
   paymentId: id,
   amountCents: z.number({ message: 'the amount must be a number of cents' }).int({ message: 'the amount is whole cents' }).positive({ message: 'the amount must be more than zero' }),
   reason: z.string().trim().max(500).optional(),
@@ -143,7 +150,7 @@ export const ManualLineFormSchema = ManualLineSchema.omit({ unitPriceCents: true
 });
 export type ManualLineFormInput = z.input<typeof ManualLineFormSchema>;
 
-export const BillableTasksQuerySchema = z.object({ proposalId: z.coerce.number().int().positive() });
+export const BillableTasksQuerySchema = z.object({ proposalId: IdSchema });
 
 /** A done task not billed yet, offered for a progress invoice. */
 export interface BillableTaskDto {

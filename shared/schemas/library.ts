@@ -3,8 +3,8 @@
  * and prescriptions. Materials convert to the domain's MaterialDefinition (shared/domain/practice.ts).
  */
 import { z } from 'zod';
+import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
-import { DATE_FIELD_MESSAGE } from './common';
 import { UNIT_KINDS } from '../domain/unit-kinds';
 import { WINDOW_KEYS } from '../domain/planting-windows';
 import { CAUTION_IDS } from '../domain/cautions';
@@ -150,7 +150,7 @@ const StepParametersSchema = z.object({
 
 export const PrescriptionParametersSchema = z.object({ steps: z.record(z.string(), StepParametersSchema).optional() });
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: DATE_FIELD_MESSAGE });
+const isoDate = IsoDateSchema;
 
 export const PrescriptionCreateSchema = z.object({
   practiceId: z.number().int().positive({ message: 'choose a practice from the library' }),

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import type { MultiPolygon } from 'geojson';
 import { LIMITS } from '../limits';
-import { optionalText } from './common';
+import { optionalText, IdSchema, PageQuerySchema } from './common';
 import { BoundarySchema } from './geometry';
 
 import { REGIONS } from '../domain/planting-windows';
@@ -10,7 +10,7 @@ export { REGIONS };
 export type { Region } from '../domain/planting-windows';
 
 export const PropertyCreateSchema = z.object({
-  clientId: z.coerce.number().int().positive({ message: 'choose the client who owns the property' }),
+  clientId: IdSchema,
   name: z.string().trim().min(1, { message: 'enter a name for the property' }).max(LIMITS.nameMax),
   county: optionalText(80),
   state: optionalText(40),
@@ -18,18 +18,22 @@ export const PropertyCreateSchema = z.object({
   objectives: optionalText(LIMITS.textMax),
   notes: optionalText(LIMITS.textMax),
   boundary: BoundarySchema.nullish(),
+  /** Keeps a boundary larger than the firm's large-area threshold (otherwise 422). */
+  confirmLargeArea: z.boolean().optional(),
 });
 export type PropertyCreateInput = z.infer<typeof PropertyCreateSchema>;
 
 export const PropertyUpdateSchema = PropertyCreateSchema.omit({ clientId: true }).partial().extend({
-  clientId: z.coerce.number().int().positive().optional(),
+  clientId: IdSchema.optional(),
 });
 export type PropertyUpdateInput = z.infer<typeof PropertyUpdateSchema>;
 
-export const PropertyListQuerySchema = z.object({
-  clientId: z.coerce.number().int().positive().optional(),
-  q: z.string().trim().max(100).optional(),
-});
+export const PropertyListQuerySchema = z
+  .object({
+    clientId: IdSchema.optional(),
+    q: z.string().trim().max(100).optional(),
+  })
+  .extend(PageQuerySchema.shape);
 
 /** A property as the API answers it; acres and perimeter are computed on the server. */
 export const PropertySchema = z.object({

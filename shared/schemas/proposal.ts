@@ -1,8 +1,9 @@
 import { z } from 'zod';
+import { IsoDateSchema, RecordIdSchema, IdSchema } from './common';
 import { LIMITS } from '../limits';
-import { DATE_FIELD_MESSAGE } from './common';
+import { PageQuerySchema } from './common';
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: DATE_FIELD_MESSAGE });
+const isoDate = IsoDateSchema;
 const pct = (label: string, max: number) =>
   z.number({ message: `${label} must be a number` }).min(0, { message: `${label} cannot be negative` }).max(max, { message: `${label} cannot be more than ${max} %` });
 const decimalQuantity = z
@@ -17,10 +18,10 @@ export const DiscountSchema = z.discriminatedUnion('kind', [
 ]);
 
 export const ProposalLineInputSchema = z.object({
-  id: z.number().int().positive().optional(),
+  id: RecordIdSchema.optional(),
   groupLabel: z.string().trim().min(1).max(120),
-  unitId: z.number().int().positive().nullish(),
-  prescriptionId: z.number().int().positive().nullish(),
+  unitId: RecordIdSchema.nullish(),
+  prescriptionId: RecordIdSchema.nullish(),
   category: z.enum(['materials', 'labor', 'equipment', 'fees']),
   description: z.string().trim().min(1, { message: 'describe the line' }).max(300),
   quantity: decimalQuantity,
@@ -32,7 +33,7 @@ export const ProposalLineInputSchema = z.object({
 export type ProposalLineInput = z.infer<typeof ProposalLineInputSchema>;
 
 export const ProposalCreateSchema = z.object({
-  prescriptionIds: z.array(z.number().int().positive()).max(500).optional(),
+  prescriptionIds: z.array(RecordIdSchema).max(500).optional(),
   title: z.string().trim().min(1).max(160).optional(),
   introduction: z.string().trim().max(LIMITS.textMax).nullish(),
   terms: z.string().trim().max(LIMITS.textMax).optional(),
@@ -51,7 +52,7 @@ export type ProposalUpdateInput = z.infer<typeof ProposalUpdateSchema>;
 
 export const ApproveSchema = z.object({
   signedName: z.string().trim().min(3, { message: 'type your full name to approve' }).max(120),
-  optionIds: z.array(z.number().int().positive()).max(200).optional(),
+  optionIds: z.array(RecordIdSchema).max(200).optional(),
 });
 export type ApproveInput = z.infer<typeof ApproveSchema>;
 
@@ -62,7 +63,9 @@ export const DeclineSchema = z.object({
 export const PROPOSAL_STATES = ['draft', 'sent', 'approved', 'declined', 'withdrawn', 'expired'] as const;
 export type ProposalDisplayStatus = (typeof PROPOSAL_STATES)[number];
 
-export const ProposalListQuerySchema = z.object({
-  status: z.enum(PROPOSAL_STATES).optional(),
-  propertyId: z.coerce.number().int().positive().optional(),
-});
+export const ProposalListQuerySchema = z
+  .object({
+    status: z.enum(PROPOSAL_STATES).optional(),
+    propertyId: IdSchema.optional(),
+  })
+  .extend(PageQuerySchema.shape);

@@ -3,7 +3,7 @@
  * schemas for the server's validation, the consultant's forms and the answers' types.
  */
 import { z } from 'zod';
-import { IsoDateSchema } from './common';
+import { IsoDateSchema, RecordIdSchema, IdSchema } from './common';
 import { LIMITS } from '../limits';
 import { AGE_CLASSES, type HarvestSummary, type SeasonSummary, type SurveyEstimates, type SurveyEstimatesDisplay, type SurveyWarning } from '../domain/survey-estimates';
 import type { Caution } from '../domain/cautions';
@@ -65,7 +65,7 @@ export const SurveyFieldsSchema = z.object({
   /** The identified bucks; when given, one entry per unique buck. */
   bucks: z.array(IdentifiedBuckSchema).max(MAX_SURVEY_BUCKS, { message: `list at most ${MAX_SURVEY_BUCKS} bucks` }).optional(),
   /** Camera sites (plan units of kind camera-site) of the property that were used. */
-  cameraUnitIds: z.array(z.number().int().positive()).max(500, { message: 'pick at most 500 camera sites' }).optional(),
+  cameraUnitIds: z.array(RecordIdSchema).max(500, { message: 'pick at most 500 camera sites' }).optional(),
   /** Cameras used, when some are not on the map; at least the number of camera sites picked. */
   cameraCount: z.number({ error: 'Cameras: enter a whole number' }).int({ message: 'Cameras: enter a whole number' }).min(1, { message: 'a survey needs at least one camera' }).max(1000).nullish(),
   notes: optionalNote(LIMITS.textMax),
@@ -125,7 +125,7 @@ export const HarvestFieldsSchema = z.object({
     .max(60, { message: 'antler points above 60: check the number' })
     .nullish(),
   /** The plan unit (stand, plot) it was taken from, if any. */
-  unitId: z.number().int().positive().nullish(),
+  unitId: RecordIdSchema.nullish(),
   /** Where it was taken when no unit fits ("Ridge ladder stand"). */
   stand: optionalNote(LIMITS.nameMax),
   hunter: optionalNote(LIMITS.nameMax),
@@ -155,7 +155,7 @@ export const SeasonSchema = z.coerce
   .min(1990, { message: 'season: enter a year from 1990 on' })
   .max(2100, { message: 'season: enter a year before 2100' });
 
-export const SeasonParamsSchema = z.object({ id: z.coerce.number().int().positive(), season: SeasonSchema });
+export const SeasonParamsSchema = z.object({ id: IdSchema, season: SeasonSchema });
 
 /** A season report to make (a PDF kept for the client; sending is a separate step). */
 export const SeasonReportCreateSchema = z.object({
@@ -224,6 +224,8 @@ export interface SeasonReportDto {
   recommendations: string | null;
   sentAt: string | null;
   sentTo: string[];
+  /** Set when a sent report was withdrawn from the landowner's portal. */
+  withdrawnAt: string | null;
   byteSize: number;
   pdfUrl: string;
   createdAt: string;

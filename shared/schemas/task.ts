@@ -1,6 +1,6 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
-import { IdSchema, IsoDateSchema } from './common';
+import { IdSchema, IsoDateSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskStatus, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
 
@@ -13,9 +13,13 @@ export const TaskListQuerySchema = z
     /** Tasks whose dates (or, unscheduled, whose window) touch [from, to]. */
     from: IsoDateSchema.optional(),
     to: IsoDateSchema.optional(),
+    /** `true` adds each task's unit outline (the field sheet's sketches); lists carry none otherwise. */
+    geometry: z.enum(['true', 'false'], { message: 'geometry must be true or false' }).optional(),
   })
+  .extend(PageQuerySchema.shape)
   .refine((q) => !q.from || !q.to || q.from <= q.to, { message: '"from" must not come after "to"', path: ['to'] });
-export type TaskListQuery = z.infer<typeof TaskListQuerySchema>;
+/** A task list filter; the page members may be left out (the server's defaults apply). */
+export type TaskListQuery = Omit<z.infer<typeof TaskListQuerySchema>, 'limit' | 'offset'> & Partial<PageQuery>;
 
 export const TaskUpdateSchema = z
   .object({
@@ -28,6 +32,22 @@ export const TaskUpdateSchema = z
   .refine((b) => Object.keys(b).length > 0, { message: 'send at least one of assigneeId, startDate, endDate, notes' })
   .refine((b) => !b.startDate || !b.endDate || b.startDate <= b.endDate, { message: 'the end date must not come before the start date', path: ['endDate'] });
 export type TaskUpdateInput = z.infer<typeof TaskUpdateSchema>;
+
+/** The most tasks one "assign selected" may change at once (a season's work on a large property). */
+export const TASK_ASSIGN_MAX = 200;
+
+/** Several tasks given to one person (or back to nobody) at once, from the timeline's selection. */
+export const TaskAssignSchema = z
+  .object({
+    taskIds: z
+      .array(IdSchema, { error: 'taskIds: list the tasks to assign' })
+      .min(1, { message: 'taskIds: select at least one task' })
+      .max(TASK_ASSIGN_MAX, { message: `taskIds: assign at most ${TASK_ASSIGN_MAX} tasks at once` })
+      .refine((ids) => new Set(ids).size === ids.length, { message: 'taskIds: list each task once' }),
+    assigneeId: IdSchema.nullable(),
+  })
+  .strict();
+export type TaskAssignInput = z.infer<typeof TaskAssignSchema>;
 
 export const QuantityUsedSchema = z.object({
   key: z.string().trim().min(1).max(120),
@@ -62,7 +82,7 @@ export type TaskCompleteInput = z.output<typeof TaskCompleteSchema>;
 export const TaskSkipSchema = z.object({ reason: z.string().trim().min(3, { message: 'say why in a few words' }).max(1000) });
 
 /** The idempotency key header of a completion: made once per completion on the phone. */
-export const IDEMPOTENCY_HEADER = 'Idempotency-Key';
+export { IDEMPOTENCY_HEADER } from '../domain/tasks';
 export const IdempotencyKeySchema = z.string().trim().min(8, { message: 'must be at least 8 characters' }).max(200).regex(/^[A-Za-z0-9_.:-]+$/, { message: 'may hold letters, digits and - _ . : only' });
 
 export interface TaskPhotoDto {
@@ -117,6 +137,8 @@ export interface TaskDto {
 export interface TaskListDto {
   tasks: TaskDto[];
   warnings: TaskWarning[];
+  /** The tasks matching the filter in all (`tasks` holds `limit` of them from `offset`). */
+  page?: PageDto;
 }
 
 export interface UnitProgressDto extends Progress {

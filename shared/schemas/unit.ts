@@ -12,6 +12,8 @@ export const UnitCreateSchema = z.object({
   name: z.string().trim().min(1, { message: 'give the unit a name, e.g. “North clover plot”' }).max(LIMITS.nameMax),
   notes: optionalText(LIMITS.textMax),
   geometry: UnitGeometrySchema,
+  /** Keeps a unit larger than its property (or, with no boundary, than the firm's threshold); otherwise 422. */
+  confirmLargeArea: z.boolean().optional(),
 });
 export type UnitCreateInput = z.infer<typeof UnitCreateSchema>;
 
@@ -21,6 +23,8 @@ export type UnitUpdateInput = z.infer<typeof UnitUpdateSchema>;
 /** Several units (and optionally the boundary) in one transaction, e.g. from an import. */
 export const UnitBulkCreateSchema = z.object({
   units: z.array(UnitCreateSchema).max(2000),
+  /** Confirms every large unit of the batch at once. */
+  confirmLargeArea: z.boolean().optional(),
 });
 export type UnitBulkCreateInput = z.infer<typeof UnitBulkCreateSchema>;
 

@@ -1,47 +1,13 @@
-import { createBrowserRouter, Navigate, Outlet, RouterProvider } from 'react-router-dom';
+import { useEffect } from 'react';
+import { createBrowserRouter, Navigate, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
 import { useMe } from '../features/auth/api/get-me';
 import { homeFor, paths } from '../config/paths';
 import { RequireRole } from '../components/layouts/require-role';
-import { ConsultantLayout } from '../components/layouts/consultant-layout';
-import { FieldLayout } from '../components/layouts/field-layout';
-import { PortalLayout } from '../components/layouts/portal-layout';
 import { Loading } from '../components/ui/card';
-import { LoginPage } from './routes/auth/login';
-import { ForgotPasswordPage } from './routes/auth/forgot-password';
-import { SignupPage } from './routes/auth/signup';
-import { VerifyEmailPage } from './routes/auth/verify-email';
-import { ResetPasswordPage } from './routes/auth/reset-password';
-import { AcceptInvitePage } from './routes/auth/accept-invite';
-import { DeskPage } from './routes/desk/desk';
-import { ClientsPage } from './routes/clients/clients';
-import { ClientPage } from './routes/clients/client';
-import { PropertiesPage } from './routes/properties/properties';
-import { PropertyPage } from './routes/properties/property';
-import { TeamPage } from './routes/settings/team';
-import { MailPage } from './routes/settings/mail';
-import { FieldHomePage } from './routes/field/field-home';
-import { FieldShell } from './routes/field/field-shell';
-import { FieldTaskPage } from './routes/field/field-task';
-import { PortalHomePage } from './routes/portal/portal-home';
-import { PortalProposalsPage } from './routes/portal/portal-proposals';
-import { PortalProposalPage } from './routes/portal/portal-proposal';
-import { ProposalsPage } from './routes/proposals/proposals';
-import { ProposalPage } from './routes/proposals/proposal';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
-import { PropertyPrescriptionsPage } from './routes/properties/property-prescriptions';
-import { SchedulePage } from './routes/schedule/schedule';
-import { InvoicesPage } from './routes/invoices/invoices';
-import { InvoicePage } from './routes/invoices/invoice';
-import { PortalInvoicesPage } from './routes/portal/portal-invoices';
-import { PortalInvoicePage } from './routes/portal/portal-invoice';
-import { PropertyResultsPage } from './routes/properties/property-results';
-import { PortalPropertyResultsPage, PortalResultsPage } from './routes/portal/portal-results';
-import { PortalPropertyPage } from './routes/portal/portal-property';
-import { PortalProgressHomePage, PortalProgressPage } from './routes/portal/portal-progress';
-import { PortalFilesPage } from './routes/portal/portal-files';
-import { PreviewLayout } from './routes/portal/preview-layout';
-import { PreviewProposalsPage } from './routes/portal/preview-proposals';
+import { page } from './lazy-page';
+import { deskLoader, fieldHomeLoader, fieldTaskLoader, portalHomeLoader, portalPropertyLoader } from './route-loaders';
 
 function RootRedirect() {
   const me = useMe();
@@ -49,106 +15,118 @@ function RootRedirect() {
   return <Navigate to={me.data ? homeFor(me.data.role) : paths.login} replace />;
 }
 
+/** The sign-in page is its own page (index.html): leave the app for it, keeping ?next=. */
+function LeaveForSignIn() {
+  useEffect(() => {
+    window.location.replace(`${paths.login}${window.location.search}`);
+  }, []);
+  return <Loading />;
+}
+
 const STAFF = ['owner', 'consultant'] as const;
 
-const router = createBrowserRouter([
-  { path: '/', element: <RootRedirect />, errorElement: <RouteErrorPage /> },
-  { path: paths.login, element: <LoginPage />, errorElement: <RouteErrorPage /> },
-  { path: paths.forgotPassword, element: <ForgotPasswordPage />, errorElement: <RouteErrorPage /> },
-  { path: paths.signup, element: <SignupPage />, errorElement: <RouteErrorPage /> },
-  { path: paths.verifyEmail(), element: <VerifyEmailPage />, errorElement: <RouteErrorPage /> },
-  { path: paths.resetPassword(), element: <ResetPasswordPage />, errorElement: <RouteErrorPage /> },
-  { path: paths.acceptInvite(), element: <AcceptInvitePage />, errorElement: <RouteErrorPage /> },
-  {
-    element: (
-      <RequireRole roles={STAFF}>
-        <ConsultantLayout />
-      </RequireRole>
-    ),
-    errorElement: <RouteErrorPage />,
-    children: [
-      { path: paths.desk, element: <DeskPage /> },
-      { path: paths.clients, element: <ClientsPage /> },
-      { path: paths.client(), element: <ClientPage /> },
-      { path: paths.properties, element: <PropertiesPage /> },
-      { path: paths.property(), element: <PropertyPage /> },
-      { path: paths.proposals, element: <ProposalsPage /> },
-      { path: paths.proposal(), element: <ProposalPage /> },
-      { path: paths.schedule, element: <SchedulePage /> },
-      { path: paths.invoices, element: <InvoicesPage /> },
-      { path: paths.invoice(), element: <InvoicePage /> },
-      { path: paths.team, element: <TeamPage /> },
-      { path: paths.mail, element: <MailPage /> },
-      libraryRoutes,
-      { path: paths.propertyPrescriptions(), element: <PropertyPrescriptionsPage /> },
-      { path: paths.propertyResults(), element: <PropertyResultsPage /> },
-      {
-        // Preview as client: the portal's pages with the client's scope, writes off.
-        path: paths.previewClient(),
-        element: <PreviewLayout />,
-        children: [
-          { index: true, element: <PortalHomePage /> },
-          { path: 'properties/:id', element: <PortalPropertyPage /> },
-          { path: 'properties/:id/progress', element: <PortalProgressPage /> },
-          { path: 'progress', element: <PortalProgressHomePage /> },
-          { path: 'files', element: <PortalFilesPage /> },
-          { path: 'proposals', element: <PreviewProposalsPage /> },
-        ],
-      },
-      // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
-      { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), hydrateFallbackElement: <Loading />, handle: { fullBleed: true } },
-    ],
-  },
-  {
-    element: (
-      <RequireRole roles={STAFF}>
-        <Outlet />
-      </RequireRole>
-    ),
-    errorElement: <RouteErrorPage />,
-    children: [{ path: paths.planPrint(), lazy: () => import('./routes/properties/plan-print'), hydrateFallbackElement: <Loading /> }],
-  },
-  {
-    element: (
-      <RequireRole roles={['crew', 'owner', 'consultant']}>
-        <FieldLayout />
-      </RequireRole>
-    ),
-    errorElement: <RouteErrorPage />,
-    children: [
-      {
-        element: <FieldShell />,
-        children: [
-          { path: paths.field, element: <FieldHomePage /> },
-          { path: paths.fieldTask(), element: <FieldTaskPage /> },
-        ],
-      },
-    ],
-  },
-  {
-    element: (
-      <RequireRole roles={['client']}>
-        <PortalLayout />
-      </RequireRole>
-    ),
-    errorElement: <RouteErrorPage />,
-    children: [
-      { path: paths.portal, element: <PortalHomePage /> },
-      { path: paths.portalProposals, element: <PortalProposalsPage /> },
-      { path: paths.portalProposal(), element: <PortalProposalPage /> },
-      { path: paths.portalInvoices, element: <PortalInvoicesPage /> },
-      { path: paths.portalInvoice(), element: <PortalInvoicePage /> },
-      { path: paths.portalResults, element: <PortalResultsPage /> },
-      { path: paths.portalPropertyResults(), element: <PortalPropertyResultsPage /> },
-      { path: paths.portalProperty(), element: <PortalPropertyPage /> },
-      { path: paths.portalPropertyProgress(), element: <PortalProgressPage /> },
-      { path: paths.portalProgress, element: <PortalProgressHomePage /> },
-      { path: paths.portalFiles, element: <PortalFilesPage /> },
-    ],
-  },
-  { path: '*', element: <NotFoundPage /> },
-]);
+/** Only the signed-in roles reach the children (the layout's code loads after the check). */
+const gate = (roles: readonly ('owner' | 'consultant' | 'crew' | 'client')[], children: RouteObject[]): RouteObject => ({
+  element: (
+    <RequireRole roles={roles}>
+      <Outlet />
+    </RequireRole>
+  ),
+  errorElement: <RouteErrorPage />,
+  hydrateFallbackElement: <Loading />,
+  children,
+});
 
+const portalPages: RouteObject[] = [
+  { path: 'properties/:id', ...page(() => import('./routes/portal/portal-property'), (m) => m.PortalPropertyPage) },
+  { path: 'properties/:id/progress', ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressPage) },
+  { path: 'progress', ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressHomePage) },
+  { path: 'files', ...page(() => import('./routes/portal/portal-files'), (m) => m.PortalFilesPage) },
+];
+
+const routes: RouteObject[] = [
+  { path: '/', element: <RootRedirect />, errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.login, element: <LeaveForSignIn />, errorElement: <RouteErrorPage /> },
+  { path: paths.forgotPassword, ...page(() => import('./routes/auth/forgot-password'), (m) => m.ForgotPasswordPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.signup, ...page(() => import('./routes/auth/signup'), (m) => m.SignupPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.verifyEmail(), ...page(() => import('./routes/auth/verify-email'), (m) => m.VerifyEmailPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.resetPassword(), ...page(() => import('./routes/auth/reset-password'), (m) => m.ResetPasswordPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.acceptInvite(), ...page(() => import('./routes/auth/accept-invite'), (m) => m.AcceptInvitePage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  gate(['owner', 'consultant', 'crew', 'client'], [{ path: paths.changePassword, ...page(() => import('./routes/account/change-password'), (m) => m.ChangePasswordPage) }]),
+  gate(STAFF, [
+    {
+      ...page(() => import('../components/layouts/consultant-layout'), (m) => m.ConsultantLayout),
+      children: [
+        { path: paths.desk, loader: deskLoader, ...page(() => import('./routes/desk/desk'), (m) => m.DeskPage) },
+        { path: paths.clients, ...page(() => import('./routes/clients/clients'), (m) => m.ClientsPage) },
+        { path: paths.client(), ...page(() => import('./routes/clients/client'), (m) => m.ClientPage) },
+        { path: paths.properties, ...page(() => import('./routes/properties/properties'), (m) => m.PropertiesPage) },
+        { path: paths.property(), ...page(() => import('./routes/properties/property'), (m) => m.PropertyPage) },
+        { path: paths.proposals, ...page(() => import('./routes/proposals/proposals'), (m) => m.ProposalsPage) },
+        { path: paths.proposal(), ...page(() => import('./routes/proposals/proposal'), (m) => m.ProposalPage) },
+        { path: paths.schedule, ...page(() => import('./routes/schedule/schedule'), (m) => m.SchedulePage) },
+        { path: paths.invoices, ...page(() => import('./routes/invoices/invoices'), (m) => m.InvoicesPage) },
+        { path: paths.invoice(), ...page(() => import('./routes/invoices/invoice'), (m) => m.InvoicePage) },
+        { path: paths.team, ...page(() => import('./routes/settings/team'), (m) => m.TeamPage) },
+        { path: paths.mail, ...page(() => import('./routes/settings/mail'), (m) => m.MailPage) },
+        libraryRoutes,
+        { path: paths.propertyPrescriptions(), ...page(() => import('./routes/properties/property-prescriptions'), (m) => m.PropertyPrescriptionsPage) },
+        { path: paths.propertyResults(), ...page(() => import('./routes/properties/property-results'), (m) => m.PropertyResultsPage) },
+        {
+          // Preview as client: the portal's pages with the client's scope, writes off.
+          path: paths.previewClient(),
+          ...page(() => import('./routes/portal/preview-layout'), (m) => m.PreviewLayout),
+          children: [
+            { index: true, ...page(() => import('./routes/portal/portal-home'), (m) => m.PortalHomePage) },
+            ...portalPages,
+            { path: 'proposals', ...page(() => import('./routes/portal/preview-proposals'), (m) => m.PreviewProposalsPage) },
+          ],
+        },
+        // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.
+        { path: paths.planMap(), lazy: () => import('./routes/properties/plan-map'), handle: { fullBleed: true } },
+      ],
+    },
+  ]),
+  gate(STAFF, [{ path: paths.planPrint(), lazy: () => import('./routes/properties/plan-print') }]),
+  gate(['crew', 'owner', 'consultant'], [
+    {
+      ...page(() => import('../components/layouts/field-layout'), (m) => m.FieldLayout),
+      children: [
+        {
+          ...page(() => import('./routes/field/field-shell'), (m) => m.FieldShell),
+          children: [
+            { path: paths.field, loader: fieldHomeLoader, ...page(() => import('./routes/field/field-home'), (m) => m.FieldHomePage) },
+            { path: paths.fieldTask(), loader: fieldTaskLoader, ...page(() => import('./routes/field/field-task'), (m) => m.FieldTaskPage) },
+          ],
+        },
+      ],
+    },
+  ]),
+  gate(['client'], [
+    {
+      ...page(() => import('../components/layouts/portal-layout'), (m) => m.PortalLayout),
+      children: [
+        { path: paths.portal, loader: portalHomeLoader, ...page(() => import('./routes/portal/portal-home'), (m) => m.PortalHomePage) },
+        { path: paths.portalProposals, ...page(() => import('./routes/portal/portal-proposals'), (m) => m.PortalProposalsPage) },
+        { path: paths.portalProposal(), ...page(() => import('./routes/portal/portal-proposal'), (m) => m.PortalProposalPage) },
+        { path: paths.portalInvoices, ...page(() => import('./routes/portal/portal-invoices'), (m) => m.PortalInvoicesPage) },
+        { path: paths.portalInvoice(), ...page(() => import('./routes/portal/portal-invoice'), (m) => m.PortalInvoicePage) },
+        { path: paths.portalResults, ...page(() => import('./routes/portal/portal-results'), (m) => m.PortalResultsPage) },
+        { path: paths.portalPropertyResults(), ...page(() => import('./routes/portal/portal-results'), (m) => m.PortalPropertyResultsPage) },
+        { path: paths.portalProperty(), loader: portalPropertyLoader, ...page(() => import('./routes/portal/portal-property'), (m) => m.PortalPropertyPage) },
+        { path: paths.portalPropertyProgress(), ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressPage) },
+        { path: paths.portalProgress, ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressHomePage) },
+        { path: paths.portalFiles, ...page(() => import('./routes/portal/portal-files'), (m) => m.PortalFilesPage) },
+      ],
+    },
+  ]),
+  { path: '*', element: <NotFoundPage /> },
+];
+
+let router: ReturnType<typeof createBrowserRouter> | null = null;
+
+/** The app's routes; the router starts on first render, after the kept query cache is restored (main.tsx). */
 export function AppRouter() {
+  router ??= createBrowserRouter(routes);
   return <RouterProvider router={router} />;
 }

@@ -20,6 +20,8 @@ export const paths = {
   proposal: (id: number | string = ':id') => `/proposals/${id}`,
   invoices: '/invoices',
   invoice: (id: number | string = ':id') => `/invoices/${id}`,
+  /** The signed-in "change password" page (every role). */
+  changePassword: '/account/password',
   team: '/settings/team',
   mail: '/settings/mail',
   library: '/library',

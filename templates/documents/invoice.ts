@@ -9,7 +9,7 @@ import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interface
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatCents } from '../../shared/domain/money';
 import { firmBlock, type LetterheadFirm } from './firm-block';
-import { DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
+import { DOC_COLORS, FONT_HEADING, keyValueTable, neverBreakBefore, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
 const OCHRE = '#C99A2E';
@@ -17,7 +17,8 @@ const MOSS_TINT = '#EEF3EA';
 
 export interface InvoiceDocumentInput {
   firm: LetterheadFirm;
-  client: { name: string };
+  /** The client billed, with their postal address as written on their record (lines kept). */
+  client: { name: string; address?: string | null };
   property: { name: string } | null;
   invoice: {
     number: string;
@@ -95,7 +96,7 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
 
   const facts = keyValueTable(
     [
-      { label: 'Billed to', value: input.client.name },
+      { label: 'Billed to', value: input.client.address?.trim() ? `${input.client.name}\n${input.client.address.trim()}` : input.client.name },
       ...(input.property ? [{ label: 'Property', value: input.property.name }] : []),
       ...(invoice.proposalNumber ? [{ label: 'For proposal', value: invoice.proposalNumber }] : []),
       { label: 'Terms', value: invoice.termsDays === 0 ? 'Due on receipt' : `Net ${invoice.termsDays} days` },
@@ -160,15 +161,15 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
 
   const howToPay: Content[] =
     invoice.status === 'open'
-      ? [{ unbreakable: true, stack: [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any cheque.', style: 'small', margin: [0, 3, 0, 0] }] }]
+      ? [{ unbreakable: true, stack: [{ text: 'How to pay', style: 'h2' }, { text: `Pay by card in your portal, all at once or in parts: ${invoice.portalUrl}`, fontSize: 9.5 }, { text: 'Please write the invoice number on any check.', style: 'small', margin: [0, 3, 0, 0] }] }]
       : [];
 
-  const frame = pageFrame({ title: `Invoice ${invoice.number}`, firmName: firm.name, firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined, preparedOn: issued ?? undefined });
+  const frame = pageFrame({ title: `Invoice ${invoice.number}`, firmName: firm.name, firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined, preparedOn: issued ?? undefined, headerFromPage: 2 });
   return {
     ...frame,
-    header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : frame.header(currentPage, pageCount, pageSize)),
+    // Page 1 carries its own letterhead; the running header starts on page 2 (pageFrame's headerFromPage).
     // Short sections are unbreakable stacks, so a heading never sits alone at a page's foot.
-    pageBreakBefore: () => false,
+    pageBreakBefore: neverBreakBefore(),
     watermark: invoice.status === 'draft' || invoice.status === 'void' ? { text: invoice.status.toUpperCase(), color: invoice.status === 'void' ? DOC_COLORS.clay : OCHRE, opacity: 0.09, bold: true, font: FONT_HEADING, fontSize: 110 } : undefined,
     info: { title: `Invoice ${invoice.number}`, author: firm.name, subject: `${KIND_TITLE[invoice.kind]} for ${input.client.name}` },
     content: [

@@ -12,7 +12,7 @@
  * input that does not, so a PDF can never show figures that contradict each other.
  */
 import type { Geometry, MultiPolygon, Polygon } from 'geojson';
-import type { Column, Content, CustomTableLayout, Node, NodeQueries, TableCell, TDocumentDefinitions, Watermark } from 'pdfmake/interfaces';
+import type { Column, Content, CustomTableLayout, TableCell, TDocumentDefinitions, Watermark } from 'pdfmake/interfaces';
 import { z } from 'zod';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatLatLon } from '../../shared/domain/geometry';
@@ -24,7 +24,7 @@ import { kindSwatchSvg, renderPlanMap } from '../../server/services/documents/ma
 import {
   DOC_COLORS,
   FONT_HEADING,
-  keepHeadingsWithNext,
+  keepWithNextRule,
   keyValueTable,
   pageFrame,
   renderPdf,
@@ -732,7 +732,7 @@ function approvalSection(data: DocData, money: (c: number) => string): Content {
       { text: 'Approved', font: FONT_HEADING, bold: true, fontSize: 11, color: DOC_COLORS.mossDeep, margin: [0, 0, 0, 4] },
       { text: [{ text: 'Approved by ' }, { text: approval.signedName, bold: true }, { text: ` on ${formatSignedAt(approval.signedAt, data.timeZone)}.` }] },
       {
-        text: `The approval covers version ${proposal.version} exactly as printed: its lines, prices, options, discount, sales tax, deposit and terms. The SHA-256 hash of that content:`,
+        text: `The approval covers version ${proposal.version} exactly as printed: its lines, prices, options, discount, sales tax, deposit and terms. Approval fingerprint (a code computed from all of that; any change would change it):`,
         style: 'small',
         margin: [0, 4, 0, 2],
       },
@@ -787,12 +787,7 @@ function approvalSection(data: DocData, money: (c: number) => string): Content {
  * Page-break rule of the proposal: headings stay with what follows (the shared rule), and a unit's
  * header row in the price table moves to the next page unless one line row fits below it.
  */
-export function proposalPageBreakBefore(node: Node, queries: NodeQueries): boolean {
-  if (keepHeadingsWithNext(node, queries)) return true;
-  if (typeof node.id !== 'string' || !node.id.startsWith(GROUP_ROW_ID)) return false;
-  const { verticalRatio, pageInnerHeight } = node.startPosition;
-  return (1 - verticalRatio) * pageInnerHeight < GROUP_ROW_KEEP_PT && queries.getNodesOnNextPage().length > 0;
-}
+export const proposalPageBreakBefore = keepWithNextRule({ idPrefix: GROUP_ROW_ID, keepPt: GROUP_ROW_KEEP_PT });
 
 /** The pdfmake document definition of a proposal (build a fresh one for every render). */
 export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinitions {
@@ -850,11 +845,11 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
     firmName: firm.name,
     firmContact: [firm.phone, firm.email].filter(Boolean).join(' · ') || undefined,
     preparedOn,
+    // Page 1 carries its own letterhead; the running header starts on page 2.
+    headerFromPage: 2,
   });
   return {
     ...frame,
-    // Page 1 carries its own letterhead; the running header starts on page 2.
-    header: (currentPage, pageCount, pageSize) => (currentPage === 1 ? null : frame.header(currentPage, pageCount, pageSize)),
     watermark: watermarkFor(look),
     pageBreakBefore: proposalPageBreakBefore,
     info: {

@@ -10,7 +10,7 @@
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import type { Caution } from '../../shared/domain/cautions';
 import type { HarvestSummary, SeasonSummary, SurveyEstimatesDisplay, SurveyWarning } from '../../shared/domain/survey-estimates';
-import type { SurveyTrendRow } from '../../shared/domain/season-results';
+import { establishedText, hasBars, type SurveyTrendRow } from '../../shared/domain/season-results';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatAcres } from '../../shared/domain/plan-checks';
 import { AGE_CLASS_LABELS } from '../../shared/schemas/results';
@@ -84,20 +84,23 @@ function workSection(input: SeasonReportDocumentInput): Content[] {
   } else {
     out.push(table(['Finished', 'Work', 'Where'], input.work.map((w) => [formatReportDate(w.doneOn, 'work.doneOn'), `${w.name} — ${w.practiceName}`, w.unitName]), [92, '*', 150]));
   }
-  out.push({
-    margin: [0, 10, 0, 0],
-    columns: [
-      { width: 'auto', text: formatAcres(input.acresEstablished), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.mossDeep },
-      {
-        width: '*',
-        margin: [10, 4, 0, 0],
-        text:
-          input.unitsEstablished.length === 0
-            ? 'established this season (no unit had all of its work finished).'
-            : `established this season: ${input.unitsEstablished.map((u) => (u.acres ? `${u.name} (${formatAcres(u.acres)})` : u.name)).join(', ')}.`,
-      },
-    ],
-  });
+  const established = establishedText(
+    input.acresEstablished,
+    input.unitsEstablished.map((u) => ({ name: u.name, acresText: u.acres ? formatAcres(u.acres) : null })),
+    input.work.length,
+  );
+  if (input.unitsEstablished.length === 0 || input.acresEstablished <= 0) {
+    // Never "0.00 acre established": say what there is instead.
+    out.push({ text: established, margin: [0, 10, 0, 0] });
+  } else {
+    out.push({
+      margin: [0, 10, 0, 0],
+      columns: [
+        { width: 'auto', text: formatAcres(input.acresEstablished), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.mossDeep },
+        { width: '*', margin: [10, 4, 0, 0], text: established },
+      ],
+    });
+  }
   const photos = input.photos.slice(0, MAX_PHOTOS);
   if (photos.length > 0) {
     const cells = photos.map((p) => ({ stack: [{ image: p.dataUrl, fit: [(CONTENT_WIDTH_PT - 12) / 2, 150] }, { text: p.caption, style: 'small', margin: [0, 2, 0, 6] }] }) as Content);
@@ -136,17 +139,18 @@ function surveySection(input: SeasonReportDocumentInput): Content[] {
     const warnings = s.warnings.filter((w) => w.severity === 'warning');
     if (warnings.length > 0) out.push({ ul: warnings.map((w) => ({ text: w.message, style: 'caution' })), margin: [0, 6, 0, 0], markerColor: DOC_COLORS.clay } as Content);
   }
-  if (input.surveyTrend.length > 0) {
+  const surveySeries = [
+    { label: 'Bucks', color: BUCK_COLOR, values: input.surveyTrend.map((t) => Math.round(t.bucks)) },
+    { label: 'Does', color: DOE_COLOR, values: input.surveyTrend.map((t) => Math.round(t.does)) },
+    { label: 'Fawns', color: FAWN_COLOR, values: input.surveyTrend.map((t) => Math.round(t.fawns)) },
+  ];
+  if (input.surveyTrend.length > 0 && hasBars(surveySeries)) {
     out.push(
       chart(
         barChartSvg({
           title: 'Estimated deer by season (camera surveys)',
           categories: input.surveyTrend.map((t) => t.label),
-          series: [
-            { label: 'Bucks', color: BUCK_COLOR, values: input.surveyTrend.map((t) => Math.round(t.bucks)) },
-            { label: 'Does', color: DOE_COLOR, values: input.surveyTrend.map((t) => Math.round(t.does)) },
-            { label: 'Fawns', color: FAWN_COLOR, values: input.surveyTrend.map((t) => Math.round(t.fawns)) },
-          ],
+          series: surveySeries,
           widthPt: CONTENT_WIDTH_PT,
           heightPt: 170,
           axisLabel: 'deer',
@@ -201,7 +205,7 @@ function harvestSection(input: SeasonReportDocumentInput): Content[] {
     );
   }
   const trend = input.harvestTrend.filter((s) => s.doesPerBuck !== null);
-  if (trend.length > 0) {
+  if (trend.length > 0 && hasBars([{ values: trend.map((s) => s.doesPerBuck) }])) {
     out.push(
       chart(
         barChartSvg({

@@ -41,6 +41,20 @@ export function paymentReceiptEmail(input: InvoiceMailBase & { amountCents: numb
   });
 }
 
+/** Tells the firm's consultant (and owners) that a landowner paid: how much, on which invoice, what is left. */
+export function paymentReceivedStaffEmail(input: { firmName: string; clientName: string; propertyName: string; number: string; amountCents: number; balanceCents: number; receivedOn: string; url: string }): RenderedEmail {
+  return renderEmail({
+    subject: `${input.clientName} paid ${formatCents(input.amountCents)} on invoice ${input.number}`,
+    firmName: input.firmName,
+    greeting: 'Hello,',
+    paragraphs: [
+      `${input.clientName} paid ${formatCents(input.amountCents)} on ${input.receivedOn} for invoice ${input.number} (${input.propertyName}).`,
+      input.balanceCents > 0 ? `${formatCents(input.balanceCents)} is still to pay on it.` : 'The invoice is now paid in full.',
+    ],
+    action: { label: 'Open the invoice', url: input.url },
+  });
+}
+
 /** A reminder for an invoice past its due date. */
 export function overdueReminderEmail(input: InvoiceMailBase & { balanceCents: number; dueOn: string; daysOverdue: number }): RenderedEmail {
   return renderEmail({

@@ -11,6 +11,7 @@ let browser: Browser;
 let proposalId = 0;
 let depositCents = 0;
 let invoiceId = 0;
+let proposalNumber = '';
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 150 });
 /** "$1,234.56" → 123456. */
@@ -40,6 +41,7 @@ beforeAll(async () => {
   const prescriptions = ((await (await sp.request.get(`${baseUrl}/api/properties/${farm.id}/prescriptions`)).json()) as { data: { id: number }[] }).data;
   const drafted = await write(sp.request, `/api/properties/${farm.id}/proposals`, { prescriptionIds: [prescriptions[0].id], title: 'Fall plot work for Kettle Hollow Farm', depositPct: 25 });
   proposalId = drafted.id as number;
+  proposalNumber = drafted.number as string;
   await write(sp.request, `/api/proposals/${proposalId}/send`);
   await staff.close();
   const owner = await browser.newContext();
@@ -62,17 +64,30 @@ describe('a deposit invoice from approval to payment', () => {
     const watch = watchPage(page);
     await signIn(page, baseUrl, 'consultant@browseline.test');
     await page.waitForURL(`${baseUrl}/desk`);
-    await page.goto(`${baseUrl}/proposals/${proposalId}`);
-    const card = page.locator('section', { has: page.getByRole('heading', { name: 'Invoices', exact: true }) });
-    await card.getByRole('button', { name: 'Create deposit invoice' }).click();
+    // The Desk says the approval drafted the deposit invoice and leads to it.
+    const drafts = ((await (await page.request.get(`${baseUrl}/api/invoices?proposalId=${proposalId}`)).json()) as { data: { id: number; kind: string; status: string }[] }).data;
+    const draftId = drafts.find((i) => i.kind === 'deposit' && i.status === 'draft')!.id;
+    const prompt = page.getByRole('region', { name: /^Deposit invoices? to send$/ }).getByRole('listitem').filter({ has: page.locator(`a[href="/invoices/${draftId}"]`) });
+    await poll(() => prompt.count()).toBe(1);
+    expect(await prompt.textContent()).toMatch(new RegExp(`approved ${proposalNumber}.*Browseline drafted deposit invoice INV-`));
+    await screenshot(page, 'desk-deposit-prompt');
+    await prompt.getByRole('link', { name: /^Review and send INV-/ }).click();
     await page.waitForURL(/\/invoices\/\d+$/);
     invoiceId = Number(new URL(page.url()).pathname.split('/').pop());
     await poll(() => page.locator('[data-status="draft"]').count()).toBeGreaterThan(0);
     expect(cents(await page.getByTestId('invoice-total').textContent())).toBe(depositCents);
     await screenshot(page, 'invoice-draft-consultant');
-    await page.getByRole('button', { name: 'Send', exact: true }).click();
+    // Sending asks first, as sending a proposal does; Cancel sends nothing.
+    await page.getByRole('button', { name: 'Send…', exact: true }).click();
+    const confirm = page.getByRole('dialog', { name: /^Send INV-.* to Okonkwo-Larsen Family\?$/ });
+    await confirm.waitFor();
+    await screenshot(page, 'invoice-send-confirm');
+    await confirm.getByRole('button', { name: 'Cancel' }).click();
+    expect(await page.locator('[data-status="draft"]').count()).toBeGreaterThan(0);
+    await page.getByRole('button', { name: 'Send…', exact: true }).click();
+    await confirm.getByRole('button', { name: 'Send invoice' }).click();
     await poll(() => page.locator('[data-status="open"]').count()).toBeGreaterThan(0);
-    expect(await page.getByRole('button', { name: 'Send again' }).count()).toBe(1);
+    expect(await page.getByRole('button', { name: 'Send again…' }).count()).toBe(1);
     watch.assertClean();
     await context.close();
   });
@@ -127,6 +142,16 @@ describe('a deposit invoice from approval to payment', () => {
     const receipt = async () => ((await (await fetch(`${mailUrl}/messages`)).json()) as { data: Summary[] }).data.filter((m) => m.to.includes('client@browseline.test') && /^Receipt: /.test(m.subject));
     await poll(async () => (await receipt()).length).toBe(1);
     expect(cents((await receipt())[0].subject)).toBe(depositCents);
+    // The consultant is e-mailed that the client paid, and the Desk shows the money in.
+    const told = async () => ((await (await fetch(`${mailUrl}/messages`)).json()) as { data: Summary[] }).data.filter((m) => m.to.includes('consultant@browseline.test') && /^Okonkwo-Larsen Family paid \$/.test(m.subject));
+    await poll(async () => (await told()).length).toBe(1);
+    expect(cents((await told())[0].subject)).toBe(depositCents);
+    await page.goto(`${baseUrl}/desk`);
+    const moneyIn = page.getByRole('list', { name: 'Payments received' }).getByRole('listitem').filter({ has: page.locator(`a[href="/invoices/${invoiceId}"]`) });
+    await poll(() => moneyIn.count()).toBe(1);
+    expect(cents(await moneyIn.textContent())).toBe(depositCents);
+    expect(await moneyIn.textContent()).toContain('paid in full');
+    await screenshot(page, 'desk-money-in');
     watch.assertClean();
     await context.close();
   });

@@ -88,6 +88,15 @@ describe('season results from the consultant to the landowner', () => {
     await page.getByRole('button', { name: 'Send to client' }).first().click();
     await poll(() => page.getByText(/Sent .* to .*client@browseline\.test/).count()).toBeGreaterThan(0);
 
+    // Made again twice (a second thought each time): one unsent 2025–26 report, not a pile of them.
+    for (const words of ['First thoughts.', 'Second thoughts.']) {
+      await page.getByLabel('Recommendations for next season').fill(words);
+      await page.getByRole('button', { name: 'Make season report' }).click();
+      await poll(() => page.getByRole('listitem', { name: 'Season report 2025–26' }).filter({ hasText: 'not sent yet' }).count()).toBe(1);
+    }
+    await poll(() => page.getByRole('listitem', { name: 'Season report 2025–26' }).count()).toBe(2); // the sent one and one draft
+    await screenshot(page, 'results-reports-remade');
+
     // On a 360 px phone nothing is wider than the screen: the page scrolls only up and down.
     const phone = await browser.newContext({ viewport: { width: 360, height: 800 }, storageState: await context.storageState() });
     const phonePage = await phone.newPage();
@@ -132,5 +141,33 @@ describe('season results from the consultant to the landowner', () => {
     await poll(() => page.getByRole('heading', { name: /This property is not in/ }).isVisible()).toBe(true);
     watch.assertClean();
     await context.close();
+  });
+
+  it('the consultant withdraws the sent report; the landowner’s portal no longer lists it', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.goto(`${baseUrl}/properties/${propertyId}/results`);
+    const sent = page.getByRole('listitem', { name: 'Season report 2025–26' }).filter({ hasText: /Sent .* to / });
+    await poll(() => sent.count()).toBe(1);
+    await sent.getByRole('button', { name: 'Withdraw from the portal' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Withdraw season report 2025–26?' });
+    await dialog.getByRole('button', { name: 'Withdraw from the portal' }).click();
+    await poll(() => page.getByText(/withdrawn from the portal/).count()).toBe(1);
+    await screenshot(page, 'results-report-withdrawn');
+    watch.assertClean();
+    await context.close();
+
+    const landowner = await browser.newContext({ viewport: { width: 360, height: 800 } });
+    const phone = await landowner.newPage();
+    await signIn(phone, baseUrl, 'client@browseline.test');
+    await phone.waitForURL(`${baseUrl}/portal`);
+    await phone.goto(`${baseUrl}/portal/properties/${propertyId}/results`);
+    await poll(() => phone.getByRole('heading', { name: 'Early-autumn check' }).count()).toBe(1);
+    await poll(() => phone.getByText('No season report yet').count()).toBe(1);
+    expect(await phone.getByRole('link', { name: 'Open the report (PDF)' }).count()).toBe(0);
+    await landowner.close();
   });
 });

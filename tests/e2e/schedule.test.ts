@@ -6,6 +6,7 @@ import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core
 import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
 import { todayIn } from '../../shared/domain/clock';
+import { expectNoAxeViolations } from '../support/axe';
 
 const baseUrl = inject('baseUrl');
 const WAIT = { timeout: 15_000 };
@@ -47,6 +48,8 @@ let propertyId = 0;
 let propertyName = '';
 let crewId = 0;
 let task: Task;
+let second: Task;
+let openTasks: Task[] = [];
 let consultantApi: Awaited<ReturnType<typeof apiSession>>;
 
 beforeAll(async () => {
@@ -76,6 +79,8 @@ beforeAll(async () => {
   const open = tasks.filter((t) => t.status === 'planned' && t.assigneeId === null && t.unitName === 'Club plot').sort((a, b) => a.earliest.localeCompare(b.earliest));
   expect(open.length).toBeGreaterThan(1);
   task = open[0];
+  second = open[1];
+  openTasks = open;
 });
 
 afterAll(async () => {
@@ -141,6 +146,39 @@ describe('the consultant’s schedule', () => {
     await daySection.locator(`[data-task-id="${task.id}"]`).waitFor(WAIT);
     expect(await daySection.locator(`[data-task-id="${task.id}"]`).textContent()).toContain('Rosa Quintero');
     await screenshot(page, 'schedule-week-list');
+    watch.assertClean();
+    await context.close();
+  });
+
+  it('saves a crew member and a note on the first Save; after a reload the panel shows both', async () => {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.goto(`${baseUrl}/schedule?property=${propertyId}&view=timeline&from=${second.earliest}&to=${addDays(second.earliest, 77)}`);
+    await page.locator(`[data-task-id="${second.id}"]`).click(WAIT);
+    const panel = page.getByRole('dialog', { name: second.name });
+    await panel.getByLabel('Crew member', { exact: true }).selectOption({ label: 'Rosa Quintero' });
+    const note = 'The gate is chained; the key hangs in the shed.';
+    await panel.getByLabel('Notes for the crew', { exact: true }).fill(note);
+    await panel.getByRole('button', { name: 'Save' }).click();
+    // One press: saved, no "Nothing changed".
+    await expect.poll(async () => (await json<Task & { notes: string | null }>(await consultantApi.request.get(`${baseUrl}/api/tasks/${second.id}`))).notes, WAIT).toBe(note);
+    expect(await panel.getByText(/Nothing changed/).count()).toBe(0);
+    expect((await json<Task>(await consultantApi.request.get(`${baseUrl}/api/tasks/${second.id}`))).assigneeId).toBe(crewId);
+
+    // A reload opens the same panel (the task is in the address); the picker and the note show what was saved.
+    await page.reload();
+    const again = page.getByRole('dialog', { name: second.name });
+    await again.getByLabel('Notes for the crew', { exact: true }).waitFor(WAIT);
+    await expect.poll(() => again.getByLabel('Crew member', { exact: true }).evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]?.textContent), WAIT).toBe('Rosa Quintero');
+    expect(await again.getByLabel('Notes for the crew', { exact: true }).inputValue()).toBe(note);
+    await screenshot(page, 'schedule-panel-after-reload');
+    // Unassign it again so the later steps find the task as the seed left it.
+    await again.getByLabel('Crew member', { exact: true }).selectOption({ label: 'Unassigned' });
+    await again.getByRole('button', { name: 'Save' }).click();
+    await expect.poll(async () => (await json<Task>(await consultantApi.request.get(`${baseUrl}/api/tasks/${second.id}`))).assigneeId, WAIT).toBe(null);
     watch.assertClean();
     await context.close();
   });
@@ -219,6 +257,93 @@ describe('the consultant’s schedule', () => {
     await panel.getByRole('button', { name: 'Reopen task' }).waitFor(WAIT);
     expect((await panel.boundingBox())!.width).toBeLessThanOrEqual(360);
     await screenshot(page, 'schedule-task-panel-360');
+    watch.assertClean();
+    await context.close();
+  });
+  it('timeline: labels readable over two years, the unit named by crew, a bar dragged inside its window, several tasks assigned at once', async () => {
+    const days = (a: string, b: string) => (Date.parse(`${b}T00:00:00Z`) - Date.parse(`${a}T00:00:00Z`)) / 86_400_000;
+    const rest = openTasks.filter((t) => t.id !== task.id && t.id !== second.id);
+    const roomy = rest.find((t) => days(t.earliest, t.latest) >= 10);
+    expect(roomy, 'a Club plot step with a window of ten days or more').toBeDefined();
+    const [pickA, pickB] = rest.filter((t) => t.id !== roomy!.id);
+    const { request, csrf } = consultantApi;
+    const start = addDays(roomy!.earliest, 2);
+    await json(await request.patch(`${baseUrl}/api/tasks/${roomy!.id}`, { headers: { 'X-CSRF-Token': csrf }, data: { startDate: start } }));
+
+    // bypassCSP only lets the journey inject axe-core; the app's own CSP is unchanged.
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 }, bypassCSP: true });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+
+    // Two years of weeks: every label is whole (nothing cut to "B…") and none lies on its bar.
+    await page.goto(`${baseUrl}/schedule?view=timeline&from=${addDays(roomy!.earliest, -360)}&to=${addDays(roomy!.earliest, 360)}`);
+    await page.locator(`[data-task-id="${roomy!.id}"]`).waitFor(WAIT);
+    await page.locator('[data-bar-label]').first().waitFor(WAIT);
+    const labels = await page.locator('[data-bar-label]').evaluateAll((els) =>
+      els.map((el) => {
+        const bar = el.parentElement!.querySelector('button')!.getBoundingClientRect();
+        const box = el.getBoundingClientRect();
+        return { text: el.textContent, cut: el.scrollWidth > el.clientWidth + 1, overlaps: box.left < bar.right - 1 && box.right > bar.left + 1 };
+      }),
+    );
+    expect(labels.length).toBeGreaterThan(3);
+    expect(labels.filter((l) => l.cut || l.overlaps)).toEqual([]);
+    const insideCut = await page.locator('[data-task-id]').evaluateAll((els) => els.filter((el) => el.scrollWidth > el.clientWidth + 1).map((el) => el.getAttribute('aria-label')));
+    expect(insideCut).toEqual([]);
+    await screenshot(page, 'schedule-timeline-two-years');
+    await expectNoAxeViolations(page, 'the schedule timeline over two years');
+
+    // Drag the bar three days to the right: it snaps to days and saves through the same route as the panel.
+    await page.goto(`${baseUrl}/schedule?property=${propertyId}&view=timeline&from=${roomy!.earliest}&to=${addDays(roomy!.earliest, 7 * 7)}`);
+    const bar = page.locator(`[data-task-id="${roomy!.id}"]`);
+    await bar.waitFor(WAIT);
+    const lane = (await bar.evaluate((el) => el.parentElement!.getBoundingClientRect().width)) as number;
+    const totalDays = 7 * 8;
+    const dayPx = lane / totalDays;
+    const box = (await bar.boundingBox())!;
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(box.x + box.width / 2 + dayPx * 1.5, box.y + box.height / 2, { steps: 4 });
+    await page.mouse.move(box.x + box.width / 2 + dayPx * 3.2, box.y + box.height / 2, { steps: 4 });
+    await screenshot(page, 'schedule-timeline-dragging');
+    await page.mouse.up();
+    await expect.poll(async () => (await json<Task>(await request.get(`${baseUrl}/api/tasks/${roomy!.id}`))).startDate, WAIT).toBe(addDays(start, 3));
+    // No panel opened: a drag is not a click.
+    expect(await page.getByRole('dialog').count()).toBe(0);
+    // Far past the window's end: it stops on the window's last day.
+    const moved = (await bar.boundingBox())!;
+    await page.mouse.move(moved.x + moved.width / 2, moved.y + moved.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(moved.x + moved.width / 2 + dayPx * 200, moved.y + moved.height / 2, { steps: 6 });
+    await page.mouse.up();
+    await expect.poll(async () => (await json<Task>(await request.get(`${baseUrl}/api/tasks/${roomy!.id}`))).startDate, WAIT).toBe(roomy!.latest);
+
+    // Tick two unassigned tasks and give both to Rosa Quintero at once.
+    await page.goto(`${baseUrl}/schedule?property=${propertyId}&view=timeline&by=crew&from=${addDays(pickA.earliest, -14)}&to=${addDays(pickB.latest > pickA.latest ? pickB.latest : pickA.latest, 7)}`);
+    const unassigned = page.getByRole('group', { name: 'Unassigned' });
+    await unassigned.locator(`[data-task-id="${pickA.id}"]`).waitFor(WAIT);
+    // By crew member, each bar names its unit.
+    expect(await unassigned.locator(`[data-task-id="${pickA.id}"]`).getAttribute('aria-label')).toContain(`${pickA.name} · Club plot`);
+    await unassigned.getByRole('checkbox', { name: `Select ${pickA.name} · Club plot` }).check();
+    await unassigned.getByRole('checkbox', { name: `Select ${pickB.name} · Club plot` }).check();
+    const selection = page.getByRole('region', { name: 'Selected tasks' });
+    await selection.getByText('2 tasks selected').waitFor();
+    await selection.getByLabel('Assign to').selectOption({ label: 'Rosa Quintero' });
+    await screenshot(page, 'schedule-timeline-selection');
+    await expectNoAxeViolations(page, 'the timeline by crew member with two tasks selected');
+    await selection.getByRole('button', { name: 'Assign selected' }).click();
+    const rosa = page.getByRole('group', { name: 'Rosa Quintero' });
+    await rosa.locator(`[data-task-id="${pickA.id}"]`).waitFor(WAIT);
+    await rosa.locator(`[data-task-id="${pickB.id}"]`).waitFor(WAIT);
+    for (const t of [pickA, pickB]) expect((await json<Task>(await request.get(`${baseUrl}/api/tasks/${t.id}`))).assigneeId).toBe(crewId);
+    expect(await page.getByRole('region', { name: 'Selected tasks' }).count()).toBe(0);
+    await screenshot(page, 'schedule-timeline-assigned');
+    // The week list's rows, too (their names are their visible text).
+    await page.goto(`${baseUrl}/schedule`);
+    await page.locator('[data-task-id]').first().waitFor(WAIT);
+    await expectNoAxeViolations(page, 'the schedule week list');
     watch.assertClean();
     await context.close();
   });

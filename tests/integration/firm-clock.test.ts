@@ -229,6 +229,8 @@ describe('documents that never change', () => {
   });
 
   it('a sent season report cannot be deleted, nor its PDF file', async () => {
+    // A season with nothing in it makes no report; one harvest gives it something to say.
+    expect((await send(consultant, 'post', `/api/properties/${propertyId}/harvests`, { date: '2026-10-05', sex: 'male', ageClass: '1.5' })).status).toBe(201);
     const made = await send(consultant, 'post', `/api/properties/${propertyId}/season-reports`, { season: 2026 });
     expect(made.status).toBe(201);
     const id = made.body.data.id;

@@ -1,6 +1,7 @@
 // Invoices and payments end to end over HTTP: a real PostgreSQL, the app listening on loopback for
 // webhooks, and the local payments fake driven by the app's real `stripe` SDK calls. A small proxy
 // between the app and the fake can drop answers, to show that a retry after an outage charges once.
+import crypto from 'node:crypto';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { execFileSync } from 'node:child_process';
@@ -13,6 +14,7 @@ import { rectangle } from '../support/geodesy';
 import { Invoice, InvoicePayment, OutboxMessage, Practice, Proposal, Task } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
 import { config } from '../../server/config';
+import { DeskSummarySchema } from '../../shared/schemas/desk';
 import { createPaymentsFake, type LogLine, type PaymentsFake } from '../../server/scripts/payments-fake/app';
 import { sendOverdueReminders } from '../../server/commands/reminder-sender';
 import { addDays } from '../../shared/domain/planting-windows';
@@ -124,6 +126,13 @@ afterAll(async () => {
 describe('deposit invoice', () => {
   let depositId: number;
 
+  it('is on the Desk after the approval: the draft deposit invoice, waiting to be sent', async () => {
+    const desk = DeskSummarySchema.parse((await consultant.get('/api/desk').expect(200)).body.data);
+    const draft = desk.depositDrafts.find((d) => d.proposalId === proposal.id);
+    expect(draft).toMatchObject({ proposalNumber: proposal.number, totalCents: proposal.depositCents });
+    expect(draft!.approvedAt).not.toBeNull();
+  });
+
   it('is drafted in the approval’s transaction, numbered per firm, for the proposal’s deposit to the cent', async () => {
     const res = await send(consultant, 'post', '/api/invoices', { proposalId: proposal.id, kind: 'deposit' });
     expect(res.status).toBe(200); // the draft made at approval, not a new one
@@ -182,6 +191,14 @@ describe('deposit invoice', () => {
     expect(await InvoicePayment.count({ where: { invoiceId: depositId } })).toBe(1);
     expect((await getInvoice(consultant, depositId)).amountPaidCents).toBe(after.totalCents);
     expect(await OutboxMessage.count({ where: { kind: 'payment-receipt', toAddress: ctx.users.client.email } })).toBe(1);
+    // The consultant who made the invoice and the owner hear of it once, through the outbox; the Desk shows it.
+    const staffMail = await OutboxMessage.findAll({ where: { kind: 'payment-received' } });
+    const invoiceMail = staffMail.filter((m) => m.subject.includes(after.number));
+    expect(invoiceMail.map((m) => m.toAddress).sort()).toEqual([ctx.users.consultant.email, ctx.users.owner.email].sort());
+    expect(invoiceMail[0].subject).toMatch(/paid \$[\d,]+\.\d{2} on invoice INV-/);
+    const desk = DeskSummarySchema.parse((await consultant.get('/api/desk').expect(200)).body.data);
+    expect(desk.moneyIn.find((m) => m.invoiceId === depositId)).toMatchObject({ amountCents: after.totalCents, paidInFull: true });
+    expect(desk.depositDrafts.find((d) => d.id === depositId)).toBeUndefined();
   });
 
   it('refuses to pay or void a paid invoice', async () => {
@@ -194,16 +211,46 @@ describe('deposit invoice', () => {
   it('lets only the owner refund, and records the refund once though its webhook also arrives', async () => {
     const inv = await getInvoice(owner, depositId);
     const paymentId = inv.payments[0].id;
-    expect((await send(consultant, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: 500 })).status).toBe(403);
-    const tooMuch = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: inv.totalCents + 1 });
+    expect((await send(consultant, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: 500, requestKey: 'refund-consultant-1' })).status).toBe(403);
+    const tooMuch = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: inv.totalCents + 1, requestKey: 'refund-too-much-1' });
     expect(tooMuch.status).toBe(422);
-    const res = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: 500, reason: 'Seed came in under the estimate' });
+    const noKey = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: 500 });
+    expect(noKey.status).toBe(422);
+    expect(noKey.body.error).toMatch(/requestKey/);
+    const res = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, { paymentId, amountCents: 500, reason: 'Seed came in under the estimate', requestKey: 'refund-seed-under-1' });
     expect(res.status).toBe(200);
     await fake.state.idle();
     const after = await getInvoice(owner, depositId);
     expect(after.amountRefundedCents).toBe(500);
     expect(after.payments[0].refunds).toHaveLength(1);
     expect(after.status).toBe('paid'); // a refund is the firm's choice; it does not reopen the invoice
+    expect(await OutboxMessage.count({ where: { kind: 'invoice-refund', toAddress: ctx.users.client.email } })).toBe(1);
+  });
+
+  it('refunds once when the answer is lost and the owner sends the same refund again, and does not say nothing happened', async () => {
+    const inv = await getInvoice(owner, depositId);
+    const payment = inv.payments[0];
+    const refundsBefore = fake.state.events().filter((e) => e.type === 'refund.created').length;
+    const body = { paymentId: payment.id, amountCents: 300, reason: 'Lime came in under the estimate', requestKey: `refund-${crypto.randomUUID()}` };
+    proxyMode = 'drop-answer';
+    const lost = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, body);
+    proxyMode = 'pass';
+    expect(lost.status).toBe(503);
+    expect(lost.body.error).toMatch(/cannot tell yet/);
+    expect(lost.body.error).not.toMatch(/Nothing was charged/);
+    await fake.state.idle(); // the service did refund, and its webhook recorded it (refunded so far changed)
+    expect((await getInvoice(owner, depositId)).amountRefundedCents).toBe(payment.refundedCents + 300);
+    const again = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, body);
+    expect(again.status, JSON.stringify(again.body)).toBe(200);
+    await fake.state.idle();
+    const after = await getInvoice(owner, depositId);
+    expect(after.amountRefundedCents).toBe(payment.refundedCents + 300); // not 600
+    expect(after.payments[0].refunds).toHaveLength(payment.refunds.length + 1);
+    expect(fake.state.events().filter((e) => e.type === 'refund.created').length).toBe(refundsBefore + 1);
+    expect(await OutboxMessage.count({ where: { kind: 'invoice-refund', toAddress: ctx.users.client.email } })).toBe(2); // one e-mail per refund
+    // The same request key with another amount is refused, not turned into a second refund.
+    const reused = await send(owner, 'post', `/api/invoices/${depositId}/refunds`, { ...body, amountCents: 200 });
+    expect(reused.status).toBe(409);
   });
 });
 
@@ -223,6 +270,24 @@ describe('webhook signatures', () => {
     const [{ n }] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM processed_events WHERE event_id = 'evt_forged_1'", { type: 'SELECT' as never });
     expect(Number(n)).toBe(0);
     expect(await InvoicePayment.count({ where: { processorPaymentId: 'pi_forged' } })).toBe(0);
+  });
+
+  it('answers 400 to a signed event of the wrong shape (so the service stops retrying) and changes nothing', async () => {
+    const now = Math.floor(Date.now() / 1000);
+    const bad = [
+      { id: 'evt_bad_1', object: 'event', type: 'payment_intent.succeeded', created: now, data: { object: { id: 'pi_bad', object: 'payment_intent', amount: 'a lot', currency: 'usd', created: now, metadata: { invoiceId: '1', firmId: '1' } } } },
+      { id: 'evt_bad_2', object: 'event', type: 'checkout.session.completed', created: now, data: null },
+      { id: 'evt_bad_3', object: 'event', type: 'refund.created', created: now, data: { object: { id: 're_bad', amount: -5, payment_intent: 42 } } },
+      { object: 'event', type: 'payment_intent.succeeded', created: now, data: { object: {} } },
+    ];
+    for (const event of bad) {
+      const body = JSON.stringify(event);
+      const res = await requestFor().post('/api/webhooks/payments').set('Content-Type', 'application/json').set('Stripe-Signature', verifier.webhooks.generateTestHeaderString({ payload: body, secret: config.payments.webhookSecret })).send(body);
+      expect(res.status, body).toBe(400);
+      expect(res.body.error).toMatch(/signed but malformed/);
+    }
+    const [{ n }] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM processed_events WHERE event_id LIKE 'evt_bad_%'", { type: 'SELECT' as never });
+    expect(Number(n)).toBe(0);
   });
 });
 
@@ -295,7 +360,7 @@ describe('progress and final invoices', () => {
     proxyMode = 'pass';
     // …and the retry carries the same idempotency key, so the service replays the same page.
     const { sessionId } = await pay(finalId, 1_000);
-    const creates = fakeLog.filter((l) => l.msg === 'request' && l.method === 'POST' && l.path === '/v1/checkout/sessions' && l.status === 200 && String(l.idempotencyKey).includes(`-i${finalId}-paid0-amt1000`));
+    const creates = fakeLog.filter((l) => l.msg === 'request' && l.method === 'POST' && l.path === '/v1/checkout/sessions' && l.status === 200 && String(l.idempotencyKey).includes(`-i${finalId}-u${ctx.users.client.id}-paid0-amt1000`));
     expect(creates.length).toBeGreaterThanOrEqual(2); // the lost call and the retry
     expect(new Set(creates.map((l) => l.idempotencyKey)).size).toBe(1);
     expect(creates.filter((l) => l.idempotentReplayed !== true)).toHaveLength(1); // the service made one page only
@@ -305,6 +370,14 @@ describe('progress and final invoices', () => {
     expect(partial.status).toBe('open');
     expect(partial.amountPaidCents).toBe(1_000);
     expect(eventsOf('payment_intent.succeeded', (o) => (o.metadata as Record<string, string>).invoiceId === String(finalId))).toHaveLength(1);
+
+    // A second contact of the same client can pay an amount the first one started: the key names the payer.
+    const contact2 = await signedInAgent((await makeUser(ctx.firm.id, 'client', ctx.client.id)).email, PASSWORD);
+    const started = await send(client, 'post', `/api/invoices/${finalId}/checkout`, { amountCents: 700 });
+    expect(started.status).toBe(200);
+    const other = await send(contact2, 'post', `/api/invoices/${finalId}/checkout`, { amountCents: 700 });
+    expect(other.status, JSON.stringify(other.body)).toBe(200);
+    expect(other.body.data.url).not.toBe(started.body.data.url);
 
     const tooMuch = await send(client, 'post', `/api/invoices/${finalId}/checkout`, { amountCents: partial.balanceCents + 1 });
     expect(tooMuch.status).toBe(422);
@@ -328,7 +401,7 @@ describe('receivables and reminders', () => {
     expect(rec.body.data.outstandingCents).toBe(rec.body.data.buckets.reduce((s: number, b: { amountCents: number }) => s + b.amountCents, 0));
     const paidInvoices = await Invoice.findAll({ where: { proposalId: proposal.id, status: 'paid' } });
     expect(paidInvoices).toHaveLength(2); // deposit and final; the progress invoice is still open
-    expect(rec.body.data.paidThisMonthCents).toBe(paidInvoices.reduce((s, i) => s + i.totalCents, 0) - 500); // less the refund
+    expect(rec.body.data.paidThisMonthCents).toBe(paidInvoices.reduce((s, i) => s + i.totalCents, 0) - 500 - 300); // less the two refunds
     expect((await client.get('/api/invoices/receivables')).status).toBe(403);
 
     const today = new Date().toISOString().slice(0, 10);

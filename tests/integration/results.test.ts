@@ -5,8 +5,8 @@ import { capturedMailTo, capturedMessage, signedInAgent, type Agent } from '../s
 import { deliverAllMail } from '../support/test-app';
 import { makeClient, makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
-import { OutboxMessage, Property, SharedFile, Task, TaskPhoto } from '../../server/models';
-import { saveFile } from '../../server/services/storage/disk-storage';
+import { OutboxMessage, Property, SeasonReport, SharedFile, Task, TaskPhoto } from '../../server/models';
+import { saveFile } from '../../server/services/storage/storage';
 import { SurveyCreateSchema } from '../../shared/schemas/results';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
@@ -337,6 +337,54 @@ describe('season summary and report', () => {
     const strangerStaff = await signedInAgent(otherFirm.users.consultant.email, PASSWORD);
     expect((await send(strangerStaff, 'post', `/api/season-reports/${reportId}/send`)).status).toBe(404);
     expect((await send(client, 'post', `/api/season-reports/${reportId}/send`)).status).toBe(403);
+  });
+
+  it('refuses a season with no finished work, survey or harvest, saying what to do', async () => {
+    const before = await SeasonReport.count({ where: { propertyId } });
+    const res = await send(consultant, 'post', `/api/properties/${propertyId}/season-reports`, { season: 2019 });
+    expect(res.status).toBe(422);
+    expect(res.body.error).toBe('There is nothing to report for the 2019–20 season yet: no finished work, camera survey or harvest record falls in it. Record one, or pick another season, then make the report.');
+    expect(await SeasonReport.count({ where: { propertyId } })).toBe(before);
+  });
+
+  it('replaces an unsent report when the season is made again, and never a sent one', async () => {
+    const first = await send(consultant, 'post', `/api/properties/${propertyId}/season-reports`, { season: 2023, recommendations: 'First draft.' });
+    expect(first.status).toBe(201);
+    const firstFile = await SharedFile.findOne({ where: { id: (await SeasonReport.findByPk(first.body.data.id))!.sharedFileId } });
+    const again = await send(consultant, 'post', `/api/properties/${propertyId}/season-reports`, { season: 2023, recommendations: 'Second draft.' });
+    expect(again.status).toBe(201);
+    const rows = await SeasonReport.findAll({ where: { propertyId, season: 2023 } });
+    expect(rows.map((r) => r.id)).toEqual([again.body.data.id]);
+    expect(await SharedFile.count({ where: { propertyId, category: 'season-report', title: firstFile!.title } })).toBe(1);
+    expect(await SharedFile.findByPk(firstFile!.id)).toBeNull();
+    // The sent 2024–25 report stays when 2024 is made again; the new one is added beside it.
+    await send(consultant, 'post', `/api/properties/${propertyId}/season-reports`, { season: 2024 }).expect(201);
+    expect(await SeasonReport.findByPk(reportId)).not.toBeNull();
+    // The list never holds two unsent reports of one season.
+    const list = (await consultant.get(`/api/properties/${propertyId}/season-reports`)).body.data as { season: number; sentAt: string | null }[];
+    const unsent = list.filter((r) => r.sentAt === null).map((r) => r.season);
+    expect(new Set(unsent).size).toBe(unsent.length);
+  });
+
+  it('withdraws a sent report from the portal: the client no longer lists or opens it; sending again brings it back', async () => {
+    const pdfUrl = `/api/season-reports/${reportId}/pdf`;
+    expect((await pdfBytes(client, pdfUrl)).status).toBe(200);
+    expect((await send(client, 'post', `/api/season-reports/${reportId}/withdraw`)).status).toBe(403);
+    const res = await send(consultant, 'post', `/api/season-reports/${reportId}/withdraw`);
+    expect(res.status).toBe(200);
+    expect(res.body.data.withdrawnAt).not.toBeNull();
+    expect((await pdfBytes(client, pdfUrl)).status).toBe(404);
+    expect((await client.get(`/api/properties/${propertyId}/season-reports`)).body.data.map((r: { id: number }) => r.id)).not.toContain(reportId);
+    const file = await SharedFile.findByPk((await SeasonReport.findByPk(reportId))!.sharedFileId);
+    expect(file!.visibleToClient).toBe(false);
+    expect((await client.get('/api/files')).body.data.map((f: { id: number }) => f.id)).not.toContain(file!.id);
+    // Twice is a 409 with a sentence; the staff still read it.
+    const twice = await send(consultant, 'post', `/api/season-reports/${reportId}/withdraw`);
+    expect(twice.status).toBe(409);
+    expect(twice.body.error).toMatch(/already withdrawn/);
+    expect((await pdfBytes(consultant, pdfUrl)).status).toBe(200);
+    await send(consultant, 'post', `/api/season-reports/${reportId}/send`).expect(200);
+    expect((await pdfBytes(client, pdfUrl)).status).toBe(200);
   });
 
   it('refuses a season that is not a year', async () => {

@@ -91,6 +91,16 @@ describe('POST /api/signup', () => {
     expect((await User.findByPk(user.id))!.emailVerified).toBe(false);
   });
 
+  it('refuses a guessable password as every other password form does (zxcvbn score under 3), and makes nothing', async () => {
+    const email = `weak-${unique()}@example.test`;
+    // "password1234" passes the 10-character rule; zxcvbn-ts's common-password list knows it (from its dictionary).
+    const res = await post(await anonymousAgent(), '/api/signup', { firmName: 'Guessable Firm', name: 'Weak Owner', email, password: 'password1234' });
+    expect(res.status).toBe(422);
+    expect(JSON.stringify(res.body)).toMatch(/choose another password/);
+    expect(await User.count({ where: { email } })).toBe(0);
+    expect(await OutboxMessage.count({ where: { toAddress: email } })).toBe(0);
+  });
+
   it('refuses bad input with sentences, and garbage tokens without a 500', async () => {
     const agent = await anonymousAgent();
     const bad = await post(agent, '/api/signup', { firmName: '', name: 'x', email: 'not-an-address', password: 'short' });

@@ -108,6 +108,41 @@ describe('tasks from an approved proposal', () => {
   });
 });
 
+describe('assigning several tasks at once', () => {
+  it('gives the selected tasks to one crew member in one transaction; a stranger’s task or a crew caller changes nothing', async () => {
+    const tasks = await tasksOf(consultant, `?propertyId=${propertyId}`);
+    const [a, b] = tasks.filter((t) => t.status !== 'done' && t.status !== 'skipped');
+    const before = await Task.findAll({ where: { id: [a.id, b.id] }, order: [['id', 'ASC']] });
+    const res = await send(consultant, 'post', '/api/tasks/assign', { taskIds: [a.id, b.id], assigneeId: crew2Id });
+    expect(res.status).toBe(200);
+    expect(res.body.data.map((t: { assigneeId: number }) => t.assigneeId)).toEqual([crew2Id, crew2Id]);
+    expect((await Task.findAll({ where: { id: [a.id, b.id] } })).every((t) => t.assigneeId === crew2Id)).toBe(true);
+    expect(await AuditEvent.count({ where: { action: 'tasks.assigned', firmId: ctx.firm.id } })).toBe(1);
+
+    // Another firm's task in the selection: 404 and neither task changes.
+    const other = await makeFirm();
+    const otherProperty = await makeProperty(other.firm.id, other.client.id);
+    const foreign = await Task.create({ firmId: other.firm.id, propertyId: otherProperty.id, stepKey: 'seed', name: 'Seed the plot', kind: 'seeding', practiceName: 'Fall brassica plot', unitName: 'Their plot', earliest: '2026-08-01', latest: '2026-09-15' } as never);
+    const refused = await send(consultant, 'post', '/api/tasks/assign', { taskIds: [a.id, foreign.id], assigneeId: null });
+    expect(refused.status).toBe(404);
+    expect(refused.body.error).toMatch(/selected tasks/);
+    expect((await Task.findByPk(foreign.id))!.assigneeId).toBeNull();
+    expect((await Task.findByPk(a.id))!.assigneeId).toBe(crew2Id);
+    // Someone of another firm as the assignee, a repeated id, an empty list: 422 with a sentence.
+    expect((await send(consultant, 'post', '/api/tasks/assign', { taskIds: [a.id], assigneeId: other.users.crew.id })).status).toBe(422);
+    const repeated = await send(consultant, 'post', '/api/tasks/assign', { taskIds: [a.id, a.id], assigneeId: null });
+    expect(repeated.status).toBe(422);
+    expect(JSON.stringify(repeated.body)).toMatch(/each task once/);
+    expect((await send(consultant, 'post', '/api/tasks/assign', { taskIds: [], assigneeId: null })).status).toBe(422);
+    // The crew cannot assign.
+    expect((await send(crew, 'post', '/api/tasks/assign', { taskIds: [a.id], assigneeId: null })).status).toBe(403);
+    expect((await Task.findByPk(a.id))!.assigneeId).toBe(crew2Id);
+
+    // Back as they were, for the tests that follow.
+    for (const t of before) await send(consultant, 'patch', `/api/tasks/${t.id}`, { assigneeId: t.assigneeId }).expect(200);
+  });
+});
+
 describe('the crew’s view', () => {
   it('shows a crew member only their own tasks, without prices; a client sees none', async () => {
     const mine = await tasksOf(crew);

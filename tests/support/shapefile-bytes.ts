@@ -8,8 +8,10 @@
 export interface PolygonShapefileInput {
   /** Rings in file coordinates; the ESRI description wants the outer ring clockwise and closed. */
   rings: [number, number][][];
-  /** Text of the NAME attribute (at most 20 ASCII characters). */
+  /** Text of the NAME attribute (at most 20 characters, each written as one byte: Latin-1). */
   name: string;
+  /** dBASE language-driver id written at byte 29 of the .dbf header (0 when not given). */
+  ldid?: number;
 }
 
 export interface ShapefileMembers {
@@ -85,6 +87,7 @@ export function buildPolygonShapefile(input: PolygonShapefileInput): ShapefileMe
   dv.setUint32(4, 1, true); // number of records
   dv.setUint16(8, headerLength, true);
   dv.setUint16(10, recordLength, true);
+  dbf[29] = input.ldid ?? 0; // language driver id (dBASE IV header)
   const field = 32;
   'NAME'.split('').forEach((c, i) => (dbf[field + i] = c.charCodeAt(0)));
   dbf[field + 11] = 'C'.charCodeAt(0);

@@ -6,7 +6,13 @@ import * as m0004 from './0004-proposals';
 import * as m0005 from './0005-tasks';
 import * as m0006 from './0006-invoices';
 import * as m0008 from './0008-results';
+import * as m0010 from './0010-ellipsoid-measures';
 import * as m0012 from './0012-frozen-documents';
+import * as m0014 from './0014-season-report-withdrawal';
+import * as m0016 from './0016-background-jobs';
+import * as m0018 from './0018-refund-request-keys';
+import * as m0019 from './0019-outbox-retry-window';
+import * as m0024 from './0024-geo-imports';
 import * as m0026 from './0026-firm-profile';
 import * as m0027 from './0027-signup';
 
@@ -18,7 +24,13 @@ export const migrations = [
   { name: '0005-tasks', ...m0005 },
   { name: '0006-invoices', ...m0006 },
   { name: '0008-results', ...m0008 },
+  { name: '0010-ellipsoid-measures', ...m0010 },
   { name: '0012-frozen-documents', ...m0012 },
+  { name: '0014-season-report-withdrawal', ...m0014 },
+  { name: '0016-background-jobs', ...m0016 },
+  { name: '0018-refund-request-keys', ...m0018 },
+  { name: '0019-outbox-retry-window', ...m0019 },
+  { name: '0024-geo-imports', ...m0024 },
   { name: '0026-firm-profile', ...m0026 },
   { name: '0027-signup', ...m0027 },
 ];

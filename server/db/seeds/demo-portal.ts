@@ -5,7 +5,7 @@
  */
 import zlib from 'node:zlib';
 import { Client, Property, SharedFile, User, type Firm } from '../../models';
-import { saveFile } from '../../services/storage/disk-storage';
+import { saveFile } from '../../services/storage/storage';
 import { renderPdf, pageFrame, keyValueTable } from '../../services/documents/pdf';
 
 const FAMILY = 'Okonkwo-Larsen Family';

@@ -1,6 +1,8 @@
 /** passport-local: e-mail + password against bcrypt hashes; the session keeps only the user id. */
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../../db/sequelize';
 import { Firm, User } from '../../models';
 import { verifyPassword } from './passwords';
 import { AppError } from '../../errors';
@@ -53,14 +55,27 @@ passport.use(
 );
 
 passport.serializeUser((user, done) => done(null, user.id));
-passport.deserializeUser(async (id: number, done) => {
-  try {
-    const user = await User.findByPk(id, { include: [{ model: Firm, attributes: ['name', 'timezone'] }] });
-    if (!user || !user.active) return done(null, false);
-    done(null, await toSessionUser(user));
-  } catch (err) {
-    done(err);
-  }
+/**
+ * The signed-in user of a session, read lean on every request: one indexed query for exactly what
+ * authorization and the answers need (never the password hash, no model instances).
+ */
+export async function readSessionUser(id: number): Promise<SessionUser | null> {
+  const rows = await sequelize.query<SessionUser>(
+    `SELECT u.id, u.email, u.name, u.role, u.firm_id AS "firmId", f.name AS "firmName", f.timezone AS "firmTimezone", u.client_id AS "clientId"
+     FROM users u JOIN firms f ON f.id = u.firm_id WHERE u.id = $1 AND u.active`,
+    { bind: [id], type: QueryTypes.SELECT },
+  );
+  const user = rows[0];
+  return user ? { ...user, firmTimezone: usableZone(user.firmTimezone) } : null;
+}
+
+passport.deserializeUser((id: number, done) => {
+  // A session from before ids were numbers, or tampered with, is simply signed out.
+  if (!Number.isSafeInteger(id)) return done(null, false);
+  readSessionUser(id).then(
+    (user) => done(null, user ?? false),
+    (err: unknown) => done(err),
+  );
 });
 
 export { passport };

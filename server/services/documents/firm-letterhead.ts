@@ -1,7 +1,7 @@
 /** The firm's letterhead for a PDF: the profile (live or as kept in a sent document's snapshot) with its logo read from storage. */
 import type { DocumentFirm } from '../../../shared/schemas/firm';
 import type { LetterheadFirm } from '../../../templates/documents/firm-block';
-import { readFile } from '../storage/disk-storage';
+import { readFile } from '../storage/storage';
 import { readImageSize } from '../../../shared/domain/image-size';
 import { logger } from '../../logger';
 

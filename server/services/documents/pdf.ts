@@ -7,7 +7,6 @@
  * Merriweather, body text Source Sans 3, whose default figures are already tabular (equal advance
  * widths), so columns of numbers line up.
  */
-import pdfmake from 'pdfmake';
 import type {
   Content,
   CustomTableLayout,
@@ -21,6 +20,7 @@ import type {
   TFontDictionary,
 } from 'pdfmake/interfaces';
 import { formatCents } from '../../../shared/domain/money';
+import { packDefinition, pdfFunction, registerPdfFunction } from './pdf-functions';
 import { documentFontFiles } from './fonts';
 import { DOC_COLORS, FONT_BODY, FONT_HEADING } from './look';
 
@@ -42,26 +42,6 @@ export const FONT_FILES = {
   [FONT_HEADING]: fontFiles.heading,
   [FONT_BODY]: fontFiles.body,
 } satisfies TFontDictionary;
-
-const ALLOWED_LOCAL_FILES = new Set<string>(Object.values(FONT_FILES).flatMap((f) => Object.values(f)));
-
-type PdfmakeServer = typeof pdfmake & { setLocalAccessPolicy(cb: (path: string) => boolean): void };
-
-/**
- * Our own pdfmake instance, so that no other module can change its fonts or loosen its access
- * policies (the package exports one shared instance; its constructor makes a fresh one).
- */
-function createEngine(): PdfmakeServer {
-  const Engine = (pdfmake as unknown as { constructor: new () => PdfmakeServer }).constructor;
-  const engine = new Engine();
-  engine.setFonts(structuredClone(FONT_FILES));
-  engine.setUrlAccessPolicy(() => false); // never fetch: images must be data URLs
-  engine.setLocalAccessPolicy((path) => ALLOWED_LOCAL_FILES.has(path));
-  engine.clearTableLayouts();
-  return engine;
-}
-
-const engine = createEngine();
 
 /** Default text style of every document: Source Sans 3, 10 pt, ink. */
 export const documentDefaultStyle = {
@@ -108,6 +88,8 @@ export interface PageFrameOptions {
   firmContact?: string;
   /** Preparation date as people read it ("May 4, 2026"), shown in the footer. */
   preparedOn?: string;
+  /** The first page that carries the running header (2 when page 1 has its own letterhead); 1 by default. */
+  headerFromPage?: number;
 }
 
 export interface PageFrame {
@@ -116,46 +98,61 @@ export interface PageFrame {
   pageMargins: Margins;
 }
 
+const SIDE_MARGIN_PT = 54;
+
+function frameHeader(options: PageFrameOptions): DynamicContent {
+  const side = SIDE_MARGIN_PT;
+  return (currentPage, _pageCount, pageSize) =>
+    currentPage < (options.headerFromPage ?? 1)
+      ? null
+      : {
+          margin: [side, 30, side, 0],
+          stack: [
+            {
+              columns: [
+                { text: options.firmName, font: FONT_HEADING, bold: true, fontSize: 10, color: DOC_COLORS.mossDeep },
+                { text: options.title, alignment: 'right', fontSize: 9, color: DOC_COLORS.slate, margin: [0, 1, 0, 0] },
+              ],
+            },
+            {
+              canvas: [{ type: 'line', x1: 0, y1: 6, x2: pageSize.width - 2 * side, y2: 6, lineWidth: 0.75, lineColor: DOC_COLORS.rule }],
+            },
+          ],
+        };
+}
+
+function frameFooter(options: PageFrameOptions): DynamicContent {
+  const side = SIDE_MARGIN_PT;
+  const left = [options.firmName, options.firmContact].filter(Boolean).join('  ·  ');
+  return (currentPage, pageCount, pageSize) => ({
+    margin: [side, 18, side, 0],
+    stack: [
+      {
+        canvas: [{ type: 'line', x1: 0, y1: 0, x2: pageSize.width - 2 * side, y2: 0, lineWidth: 0.5, lineColor: DOC_COLORS.rule }],
+      },
+      {
+        margin: [0, 5, 0, 0],
+        columns: [
+          { text: left, fontSize: 8, color: DOC_COLORS.slate, width: '*' },
+          ...(options.preparedOn
+            ? [{ text: `Prepared ${options.preparedOn}`, fontSize: 8, color: DOC_COLORS.slate, alignment: 'center' as const, width: 'auto' as const }]
+            : []),
+          { text: `Page ${currentPage} of ${pageCount}`, fontSize: 8, color: DOC_COLORS.slate, alignment: 'right', width: 90 },
+        ],
+      },
+    ],
+  });
+}
+
+registerPdfFunction('pageFrame.header', frameHeader);
+registerPdfFunction('pageFrame.footer', frameFooter);
+
 /** Running header (firm, document title) and footer (contact, date, "Page N of M") for US Letter. */
 export function pageFrame(options: PageFrameOptions): PageFrame {
-  const side = 54;
-  const left = [options.firmName, options.firmContact].filter(Boolean).join('  ·  ');
   return {
-    pageMargins: [side, 70, side, 60],
-    header: (_currentPage, _pageCount, pageSize) => ({
-      margin: [side, 30, side, 0],
-      stack: [
-        {
-          columns: [
-            { text: options.firmName, font: FONT_HEADING, bold: true, fontSize: 10, color: DOC_COLORS.mossDeep },
-            { text: options.title, alignment: 'right', fontSize: 9, color: DOC_COLORS.slate, margin: [0, 1, 0, 0] },
-          ],
-        },
-        {
-          canvas: [
-            { type: 'line', x1: 0, y1: 6, x2: pageSize.width - 2 * side, y2: 6, lineWidth: 0.75, lineColor: DOC_COLORS.rule },
-          ],
-        },
-      ],
-    }),
-    footer: (currentPage, pageCount, pageSize) => ({
-      margin: [side, 18, side, 0],
-      stack: [
-        {
-          canvas: [{ type: 'line', x1: 0, y1: 0, x2: pageSize.width - 2 * side, y2: 0, lineWidth: 0.5, lineColor: DOC_COLORS.rule }],
-        },
-        {
-          margin: [0, 5, 0, 0],
-          columns: [
-            { text: left, fontSize: 8, color: DOC_COLORS.slate, width: '*' },
-            ...(options.preparedOn
-              ? [{ text: `Prepared ${options.preparedOn}`, fontSize: 8, color: DOC_COLORS.slate, alignment: 'center' as const, width: 'auto' as const }]
-              : []),
-            { text: `Page ${currentPage} of ${pageCount}`, fontSize: 8, color: DOC_COLORS.slate, alignment: 'right', width: 90 },
-          ],
-        },
-      ],
-    }),
+    pageMargins: [SIDE_MARGIN_PT, 70, SIDE_MARGIN_PT, 60],
+    header: pdfFunction<DynamicContent, PageFrameOptions>('pageFrame.header', { ...options }),
+    footer: pdfFunction<DynamicContent, PageFrameOptions>('pageFrame.footer', { ...options }),
   };
 }
 
@@ -254,28 +251,69 @@ export function keepHeadingsWithNext(node: Node, queries: NodeQueries): boolean 
   return roomBelowPt < HEADING_KEEP_PT && queries.getNodesOnNextPage().length > 0;
 }
 
-/**
- * Renders a document definition to PDF bytes. The definition is consumed (pdfmake annotates it
- * while laying it out): build a fresh one for every render. Styles and the default style of the
- * shared look are filled in where the definition does not set them.
- */
-export async function renderPdf(docDefinition: TDocumentDefinitions): Promise<Buffer> {
-  const definition: TDocumentDefinitions = {
+export interface KeepWithNextOptions {
+  /** Nodes whose id starts with this prefix are kept with what follows them, like headings. */
+  idPrefix: string;
+  /** Room such a node needs below it on its page, in points. */
+  keepPt: number;
+}
+
+function keepWithNext(options: KeepWithNextOptions) {
+  return (node: Node, queries: NodeQueries): boolean => {
+    if (keepHeadingsWithNext(node, queries)) return true;
+    if (typeof node.id !== 'string' || !node.id.startsWith(options.idPrefix)) return false;
+    const { verticalRatio, pageInnerHeight } = node.startPosition;
+    return (1 - verticalRatio) * pageInnerHeight < options.keepPt && queries.getNodesOnNextPage().length > 0;
+  };
+}
+
+registerPdfFunction('keepHeadingsWithNext', () => keepHeadingsWithNext);
+registerPdfFunction('keepWithNext', keepWithNext);
+registerPdfFunction('neverBreakBefore', () => () => false);
+
+/** Page-break rule: headings, and the nodes whose id starts with `idPrefix`, stay with what follows them. */
+export function keepWithNextRule(options: KeepWithNextOptions): (node: Node, queries: NodeQueries) => boolean {
+  return pdfFunction('keepWithNext', options);
+}
+
+/** Page-break rule that never moves a node (for documents made of short unbreakable sections). */
+export function neverBreakBefore(): (node: Node, queries: NodeQueries) => boolean {
+  return pdfFunction('neverBreakBefore');
+}
+
+/** The definition with the shared look filled in where it does not set its own (page size, styles, break rule). */
+export function withDocumentDefaults(docDefinition: TDocumentDefinitions): TDocumentDefinitions {
+  return {
     pageSize: 'LETTER',
-    pageBreakBefore: keepHeadingsWithNext,
+    pageBreakBefore: pdfFunction<(node: Node, queries: NodeQueries) => boolean>('keepHeadingsWithNext'),
     ...docDefinition,
     defaultStyle: { ...documentDefaultStyle, ...docDefinition.defaultStyle },
     styles: { ...documentStyles, ...docDefinition.styles },
     info: { creator: 'Browseline', producer: 'Browseline', ...docDefinition.info },
   };
+}
+
+/** The sentence a render failure answers with. */
+export function renderFailure(reason: string, cause?: unknown): DocumentRenderError {
+  return new DocumentRenderError(
+    `The PDF could not be rendered: ${reason}. Images must be embedded as data URLs, fonts must be ${FONT_HEADING} or ${FONT_BODY}, and SVG must be well-formed.`,
+    { cause },
+  );
+}
+
+/**
+ * Renders a document definition to PDF bytes in a worker thread (server/services/documents/pdf-pool.ts),
+ * so the event loop never waits on layout. The definition is consumed: build a fresh one for every
+ * render. Styles and the default style of the shared look are filled in where it does not set them.
+ * Functions in it must be table layouts or made with `pdfFunction` (see pdf-functions.ts).
+ */
+export async function renderPdf(docDefinition: TDocumentDefinitions): Promise<Buffer> {
+  let packed: unknown;
   try {
-    const buffer = await engine.createPdf(definition).getBuffer();
-    return buffer;
+    packed = packDefinition(withDocumentDefaults(docDefinition));
   } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
-    throw new DocumentRenderError(
-      `The PDF could not be rendered: ${reason}. Images must be embedded as data URLs, fonts must be ${FONT_HEADING} or ${FONT_BODY}, and SVG must be well-formed.`,
-      { cause: error },
-    );
+    throw renderFailure(error instanceof Error ? error.message : String(error), error);
   }
+  const { renderPacked } = await import('./pdf-pool');
+  return renderPacked(packed);
 }

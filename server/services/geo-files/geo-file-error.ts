@@ -5,6 +5,8 @@ export type GeoFileErrorCode =
   | 'unreadable-file' // 422: a format we read, but damaged or not valid
   | 'too-many-features' // 413: over the feature guard
   | 'too-large' // 413: an archive entry expands beyond the guard
+  | 'too-many-vertices' // 413: more coordinate positions than one import may take
+  | 'too-many-entries' // 413: an archive with more entries than one import may open
   | 'invalid-export' // 422: the plan handed to an exporter is not exportable
   | 'unknown-export-format'; // 400: an export format we do not offer
 
@@ -43,6 +45,17 @@ export function tooManyFeatures(found: number | string, maxFeatures: number): Ge
     `This file holds ${typeof found === 'number' ? found.toLocaleString('en-US') : found} features; one import can take at most ${maxFeatures.toLocaleString('en-US')}. ` +
       'Split the file, or remove the features you do not need, and upload again.',
     { maxFeatures },
+  );
+}
+
+/** 413: the file holds more coordinate positions (vertices) than one import may take. */
+export function tooManyVertices(maxVertices: number): GeoFileError {
+  return new GeoFileError(
+    413,
+    'too-many-vertices',
+    `This file holds more than ${maxVertices.toLocaleString('en-US')} vertices (corner and track points), the most one import can take. ` +
+      'Simplify the shapes (a tolerance of a metre or two is plenty for a plan), or split the file, and upload again.',
+    { maxVertices },
   );
 }
 

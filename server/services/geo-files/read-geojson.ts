@@ -1,5 +1,7 @@
 /** GeoJSON (RFC 7946) reading: FeatureCollection, Feature or a bare geometry, with structural checks. */
-import { tooManyFeatures, unreadableFile } from './geo-file-error';
+import type { Position } from 'geojson';
+import { tooManyFeatures, tooManyVertices, unreadableFile } from './geo-file-error';
+import { crsPlan, reprojectGeometry } from './crs';
 import type { SourceFeature } from './normalize-features';
 
 const GEOMETRY_TYPES = ['Point', 'MultiPoint', 'LineString', 'MultiLineString', 'Polygon', 'MultiPolygon', 'GeometryCollection'];
@@ -29,10 +31,30 @@ function describeJsonSyntaxError(text: string, error: Error): string {
 const isRecord = (value: unknown): value is Record<string, unknown> =>
   typeof value === 'object' && value !== null && !Array.isArray(value);
 
-const CRS84_NAMES = /^(urn:ogc:def:crs:OGC:(1\.3:)?CRS84|urn:ogc:def:crs:EPSG::4326|EPSG:4326|CRS84)$/i;
+/** Positions in GeoJSON text, counted without parsing: every "[" that opens a list of numbers. */
+export function countJsonPositions(text: string): number {
+  let count = 0;
+  for (let i = text.indexOf('['); i !== -1; i = text.indexOf('[', i + 1)) {
+    let j = i + 1;
+    while (j < text.length && (text.charCodeAt(j) === 32 || text.charCodeAt(j) === 10 || text.charCodeAt(j) === 13 || text.charCodeAt(j) === 9)) j += 1;
+    const c = text.charCodeAt(j);
+    if ((c >= 48 && c <= 57) || c === 45) count += 1; // a digit or "-"
+  }
+  return count;
+}
 
-/** Parse GeoJSON text into source features; throws 422 GeoFileError for JSON that is not GeoJSON. */
-export function readGeoJsonText(text: string, maxFeatures: number): GeoJsonSources {
+/** Features in GeoJSON text, counted without parsing (every "type": "Feature"). */
+export function countJsonFeatures(text: string): number {
+  return text.match(/"type"\s*:\s*"Feature"/g)?.length ?? 0;
+}
+
+/** Parse GeoJSON text into source features; throws 422 GeoFileError for JSON that is not GeoJSON, 413 over a guard. */
+export function readGeoJsonText(text: string, limits: { maxFeatures: number; maxVertices: number }): GeoJsonSources {
+  // The guards run on the text first, so an oversized file is refused before it is built in memory.
+  if (countJsonPositions(text) > limits.maxVertices) throw tooManyVertices(limits.maxVertices);
+  const featureCount = countJsonFeatures(text);
+  if (featureCount > limits.maxFeatures) throw tooManyFeatures(featureCount, limits.maxFeatures);
+  const maxFeatures = limits.maxFeatures;
   let data: unknown;
   try {
     data = JSON.parse(text);
@@ -52,15 +74,24 @@ export function readGeoJsonText(text: string, maxFeatures: number): GeoJsonSourc
   if (data.type === 'Topology') {
     throw unreadableFile('This file is TopoJSON, not GeoJSON. Convert it to GeoJSON (for example with topojson-client) and upload that file.');
   }
+  let transform: ((p: Position) => Position) | null = null;
+  let notesForAll: string[] | undefined;
   if (isRecord(data.crs)) {
     const crsName = isRecord(data.crs.properties) ? data.crs.properties.name : undefined;
-    if (typeof crsName === 'string' && !CRS84_NAMES.test(crsName.trim())) {
-      warnings.push(
-        `The file declares the coordinate system "${crsName}"; GeoJSON (RFC 7946) is WGS84 longitude/latitude and only such coordinates can be imported.`,
-      );
+    if (typeof crsName === 'string') {
+      const plan = crsPlan(crsName.trim());
+      if (plan.warning) warnings.push(plan.warning);
+      transform = plan.transform ?? null;
+      notesForAll = plan.note ? [plan.note] : undefined;
     }
   }
+  const result = sourcesOf(data as Record<string, unknown> & { type: string }, maxFeatures);
+  if (transform) for (const source of result) source.geometry = reprojectGeometry(source.geometry, transform);
+  if (notesForAll) for (const source of result) source.notes = [...(source.notes ?? []), ...notesForAll];
+  return { sources: result, warnings };
+}
 
+function sourcesOf(data: Record<string, unknown> & { type: string }, maxFeatures: number): SourceFeature[] {
   if (data.type === 'FeatureCollection') {
     if (!Array.isArray(data.features)) {
       throw unreadableFile('This GeoJSON FeatureCollection has no "features" list. Export the layer again.');
@@ -73,13 +104,13 @@ export function readGeoJsonText(text: string, maxFeatures: number): GeoJsonSourc
       }
       return { index, geometry: feature.geometry, properties: feature.properties };
     });
-    return { sources, warnings };
+    return sources;
   }
   if (data.type === 'Feature') {
-    return { sources: [{ index: 0, geometry: data.geometry, properties: data.properties }], warnings };
+    return [{ index: 0, geometry: data.geometry, properties: data.properties }];
   }
   if (GEOMETRY_TYPES.includes(data.type)) {
-    return { sources: [{ index: 0, geometry: data, properties: {} }], warnings };
+    return [{ index: 0, geometry: data, properties: {} }];
   }
   throw unreadableFile(
     `This file is JSON but not GeoJSON: its "type" is "${data.type.slice(0, 60)}"; expected FeatureCollection, Feature or a geometry type.`,

@@ -15,8 +15,12 @@ export interface GeoFileInput {
 export interface ReadGeoFileOptions {
   /** Guard on the number of features (found plus skipped); defaults to DEFAULT_MAX_FEATURES. */
   maxFeatures?: number;
-  /** Guard on the bytes one archive entry may expand to; defaults to DEFAULT_MAX_UNZIPPED_BYTES. */
+  /** Guard on the bytes the entries of an archive may expand to together; defaults to DEFAULT_MAX_UNZIPPED_BYTES. */
   maxUnzippedBytes?: number;
+  /** Guard on the coordinate positions of the whole file; defaults to DEFAULT_MAX_VERTICES. */
+  maxVertices?: number;
+  /** Guard on the entries an archive may list; defaults to DEFAULT_MAX_ZIP_ENTRIES. */
+  maxZipEntries?: number;
 }
 
 export interface ImportedFeature {
@@ -32,6 +36,8 @@ export interface ImportedFeature {
   properties: Record<string, unknown>;
   /** What the importer changed or noticed (ring closed, elevations dropped, …). */
   notes: string[];
+  /** Set on an open line (a walked GPS track) whose ends lie close enough to close it into an area: the gap in metres. */
+  closableGapM?: number;
 }
 
 export interface SkippedFeature {

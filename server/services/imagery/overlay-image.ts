@@ -8,6 +8,7 @@ import { encode } from 'fast-png';
 import proj4 from 'proj4';
 import { AppError, unprocessable, unsupportedMedia } from '../../errors';
 import type { Corners } from '../../models';
+import { GEOMETRY_LIMITS } from '../../../shared/limits';
 
 export type ImageKind = 'png' | 'jpeg' | 'tiff';
 
@@ -21,7 +22,53 @@ export function sniffImage(bytes: Buffer): ImageKind | null {
   return null;
 }
 
-const MAX_PIXELS = 8192 * 8192;
+const MAX_PIXELS = GEOMETRY_LIMITS.overlayMaxPixels;
+const MAX_DECODED_BYTES = GEOMETRY_LIMITS.overlayMaxDecodedBytes;
+
+const megapixels = (n: number): string => `${(n / 1e6).toFixed(n < 1e7 ? 1 : 0)} megapixels`;
+
+/** 413 naming the limit, for an image whose header says it is too large to decode. */
+function imageTooLarge(width: number, height: number, why: string): AppError {
+  return new AppError(
+    413,
+    'payload_too_large',
+    `The image is ${width.toLocaleString('en-US')} × ${height.toLocaleString('en-US')} pixels (${megapixels(width * height)})${why}; ` +
+      `an overlay may have at most ${megapixels(MAX_PIXELS)} and ${Math.round(MAX_DECODED_BYTES / 1024 / 1024)} MB of pixel data. Export it at a coarser resolution or crop it to the property.`,
+    { maxPixels: MAX_PIXELS, maxDecodedBytes: MAX_DECODED_BYTES },
+  );
+}
+
+/** Width × height, samples and bits from a TIFF's first image header, checked against the limits before any pixel is decoded. */
+export function checkTiffSize(width: number, height: number, samplesPerPixel: number, bitsPerSample: number): void {
+  if (!(width > 0 && height > 0)) throw unprocessable('The TIFF header gives no image size. Export the image again as a GeoTIFF.');
+  if (width * height > MAX_PIXELS) throw imageTooLarge(width, height, '');
+  const decoded = width * height * Math.max(1, samplesPerPixel) * Math.max(1, Math.ceil(bitsPerSample / 8));
+  if (decoded > MAX_DECODED_BYTES) throw imageTooLarge(width, height, ` with ${samplesPerPixel} bands of ${bitsPerSample} bits, ${Math.round(decoded / 1024 / 1024)} MB once decoded`);
+}
+
+/** Width and height from a PNG's IHDR chunk (PNG specification, 11.2.2) or a JPEG's SOF marker (ITU T.81, B.2.2); null if not found. */
+export function imageDimensions(bytes: Buffer, kind: 'png' | 'jpeg'): { width: number; height: number } | null {
+  if (kind === 'png') {
+    if (bytes.length < 24 || bytes.toString('latin1', 12, 16) !== 'IHDR') return null;
+    return { width: bytes.readUInt32BE(16), height: bytes.readUInt32BE(20) };
+  }
+  let offset = 2;
+  while (offset + 9 < bytes.length) {
+    if (bytes[offset] !== 0xff) return null;
+    const marker = bytes[offset + 1];
+    if (marker === 0xd8 || (marker >= 0xd0 && marker <= 0xd7) || marker === 0x01 || marker === 0xff) {
+      offset += marker === 0xff ? 1 : 2;
+      continue;
+    }
+    const length = bytes.readUInt16BE(offset + 2);
+    // Start-of-frame markers C0–CF, except DHT (C4), JPG (C8) and DAC (CC).
+    if (marker >= 0xc0 && marker <= 0xcf && marker !== 0xc4 && marker !== 0xc8 && marker !== 0xcc) {
+      return { height: bytes.readUInt16BE(offset + 5), width: bytes.readUInt16BE(offset + 7) };
+    }
+    offset += 2 + length;
+  }
+  return null;
+}
 
 /** A proj4 definition for the EPSG codes imagery usually comes in, or null. */
 export function projectionFor(epsg: number): string | null {
@@ -51,7 +98,8 @@ export async function prepareGeoTiff(bytes: Buffer): Promise<PreparedOverlay> {
   }
   const width = image.getWidth();
   const height = image.getHeight();
-  if (width * height > MAX_PIXELS) throw new AppError(413, 'payload_too_large', `The image is ${width} × ${height} pixels; the limit is about 67 megapixels. Export it at a coarser resolution.`);
+  const bits = image.getBitsPerSample();
+  checkTiffSize(width, height, image.getSamplesPerPixel(), typeof bits === 'number' ? bits : 8);
   let bbox: number[];
   try {
     bbox = image.getBoundingBox();
@@ -87,6 +135,8 @@ export async function prepareOverlay(bytes: Buffer, corners: Corners | null): Pr
   const kind = sniffImage(bytes);
   if (!kind) throw unsupportedMedia('That file is not a GeoTIFF, PNG or JPEG image. Export the orthophoto as one of those.');
   if (kind === 'tiff') return prepareGeoTiff(bytes);
+  const size = imageDimensions(bytes, kind);
+  if (size && size.width * size.height > MAX_PIXELS) throw imageTooLarge(size.width, size.height, '');
   if (!corners) throw unprocessable('corners: a PNG or JPEG carries no location. Give the longitude and latitude of its four corners (top-left, top-right, bottom-right, bottom-left).', [{ path: 'corners', message: 'required for PNG and JPEG' }]);
   return kind === 'png' ? { bytes, contentType: 'image/png', extension: 'png', corners } : { bytes, contentType: 'image/jpeg', extension: 'jpg', corners };
 }

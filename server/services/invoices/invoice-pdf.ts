@@ -12,14 +12,14 @@ import { letterheadFirm } from '../documents/firm-letterhead';
 export async function invoiceDocumentSnapshot(invoice: Invoice, transaction?: Transaction): Promise<InvoiceDocumentSnapshot> {
   const [firm, client, property, proposal, lines] = await Promise.all([
     Firm.findByPk(invoice.firmId, { transaction }),
-    Client.findByPk(invoice.clientId, { attributes: ['name'], transaction }),
+    Client.findByPk(invoice.clientId, { attributes: ['name', 'address'], transaction }),
     invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null,
     invoice.proposalId ? Proposal.findByPk(invoice.proposalId, { attributes: ['number'], transaction }) : null,
     InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
   ]);
   return {
     firm: documentFirm(firm!),
-    client: { name: client?.name ?? '' },
+    client: { name: client?.name ?? '', address: client?.address ?? null },
     property: property ? { name: property.name } : null,
     invoice: {
       number: invoice.number,

@@ -31,8 +31,8 @@ export async function readInvoice(invoice: Invoice, transaction?: Transaction): 
 }
 
 /** List rows, newest first; `today` is the firm's (overdue is read against it). */
-export async function listInvoiceRows(where: WhereOptions, today: string): Promise<InvoiceRowDto[]> {
-  const rows = await Invoice.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+export async function listInvoiceRows(where: WhereOptions, today: string, page?: { limit: number; offset: number }): Promise<InvoiceRowDto[]> {
+  const rows = await Invoice.findAll({ where, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: page?.limit, offset: page?.offset });
   const names = await namesFor(rows);
   return rows.map((i) => presentInvoiceRow(i, names(i), today));
 }

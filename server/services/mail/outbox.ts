@@ -36,10 +36,21 @@ export async function enqueueEmail(input: EnqueueInput, transaction?: Transactio
   );
 }
 
-const MAX_ATTEMPTS = 8;
+/** How long a message is retried from the moment it is queued (or resent by the owner): 3 days. */
+export const RETRY_WINDOW_MS = 3 * 24 * 3_600_000;
 
 /** Minutes to wait before the next try: 1, 2, 4, … capped at an hour. */
 export const retryDelayMs = (attempts: number): number => Math.min(60, 2 ** Math.max(0, attempts - 1)) * 60_000;
+
+/**
+ * After a failed try: wait by `retryDelayMs` and try again while the retry window lasts; the try
+ * that falls after `retryUntil` gives up ('failed', shown to the owner, who may resend it).
+ */
+export function afterFailedTry(attempts: number, now: Date, retryUntil: Date): { status: 'pending' | 'failed'; nextAttemptAt: Date } {
+  const next = new Date(now.getTime() + retryDelayMs(attempts));
+  if (now.getTime() >= retryUntil.getTime()) return { status: 'failed', nextAttemptAt: next };
+  return { status: 'pending', nextAttemptAt: next.getTime() > retryUntil.getTime() ? retryUntil : next };
+}
 
 /**
  * Delivers the messages that are due. Rows are claimed with SKIP LOCKED, so several server
@@ -76,15 +87,8 @@ export async function deliverDueMessages(limit = 20): Promise<{ sent: number; fa
         return 'sent';
       } catch (err) {
         const attempts = message.attempts + 1;
-        await message.update(
-          {
-            attempts,
-            lastError: (err as Error).message.slice(0, 500),
-            status: attempts >= MAX_ATTEMPTS ? 'failed' : 'pending',
-            nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts)),
-          },
-          { transaction },
-        );
+        const { status, nextAttemptAt } = afterFailedTry(attempts, new Date(), message.retryUntil);
+        await message.update({ attempts, lastError: (err as Error).message.slice(0, 500), status, nextAttemptAt }, { transaction });
         logger.warn({ messageId: message.id, attempts, err: (err as Error).message }, 'mail delivery failed');
         return 'failed';
       }
@@ -94,6 +98,18 @@ export async function deliverDueMessages(limit = 20): Promise<{ sent: number; fa
     else failed++;
   }
   return { sent, failed };
+}
+
+/** Puts a failed (or waiting) message of the firm back in the queue now, with a fresh 3-day retry window. */
+export async function resendMessage(firmId: number, id: number): Promise<OutboxMessage | null> {
+  return sequelize.transaction(async (transaction) => {
+    const message = await OutboxMessage.findOne({ where: { id, firmId }, lock: transaction.LOCK.UPDATE, transaction });
+    if (!message) return null;
+    if (message.status === 'sent') return message;
+    const now = new Date();
+    await message.update({ status: 'pending', attempts: 0, nextAttemptAt: now, retryUntil: new Date(now.getTime() + RETRY_WINDOW_MS) }, { transaction });
+    return message;
+  });
 }
 
 /** Starts polling the outbox; returns a function that stops it. */

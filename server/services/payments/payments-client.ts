@@ -31,16 +31,33 @@ export function verifyWebhook(rawBody: Buffer, signature: string): Stripe.Event 
   return payments().webhooks.constructEvent(rawBody, signature, config.payments.webhookSecret);
 }
 
-/** Runs a payments API call; connection failures and service errors become a 503 that says nothing was charged. */
-export async function callPayments<T>(what: string, call: () => Promise<T>): Promise<T> {
+/**
+ * What a failed call may have done. 'nothing': the call cannot move money by itself (a payment page,
+ * a read), so "nothing was charged" is true. 'unknown': the call moves money (a refund) and, when the
+ * answer is lost, the service may have done it: the message must say so, not that nothing happened.
+ */
+export type CallEffect = 'nothing' | 'unknown';
+
+/** Runs a payments API call; connection failures and service errors become a 503 with a sentence that is true. */
+export async function callPayments<T>(what: string, call: () => Promise<T>, effect: CallEffect = 'nothing'): Promise<T> {
   try {
     return await call();
   } catch (err) {
     if (err instanceof AppError) throw err;
     const e = err as { type?: string; statusCode?: number; message?: string; code?: string };
     logger.warn({ what, type: e.type, statusCode: e.statusCode, code: e.code, msg: e.message }, 'payments call failed');
+    if (e.type === 'StripeIdempotencyError') {
+      throw new AppError(409, 'payments_request_reused', `This request was sent before with other values, so the payment service refused to ${what}. Reload the page and start again.`);
+    }
     if (e.type === 'StripeInvalidRequestError' && e.statusCode && e.statusCode < 500) {
       throw new AppError(409, 'payments_refused', `The payment service refused to ${what}: ${e.message ?? 'no reason given'}.`);
+    }
+    if (effect === 'unknown') {
+      throw new AppError(
+        503,
+        'payments_outcome_unknown',
+        `We did not get an answer from the payment service, so we cannot tell yet whether it managed to ${what}. Do not start a new one: send this same request again (it cannot be done twice), or reload the invoice in a few minutes to see whether it went through.`,
+      );
     }
     throw serviceUnavailable(`The payment service is not reachable right now, so we could not ${what}. Nothing was charged; please try again in a few minutes.`);
   }

@@ -8,11 +8,13 @@ import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
 import { Property } from '../../models';
 import { notFound } from '../../errors';
+import { buildId } from '../../build-id';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
 import { planWarnings, shareByKind } from '../../../shared/domain/plan-checks';
 import type { PlanSummary } from '../../../shared/schemas/unit';
 import { stripCrs } from '../../presenters/geojson';
 import { GEOMETRY_LIMITS } from '../../../shared/limits';
+import { precompress, type Precompressed } from '../http/precompressed';
 
 export interface LoadedPlan {
   property: Property;
@@ -47,21 +49,39 @@ export async function loadPlan(propertyId: number, firmId: number, options: { le
     property,
     revision: property.revision,
     units: () =>
-      (rows ??= sequelize.query<UnitRow>(
-        `SELECT id, property_id AS "propertyId", kind, name, notes, ST_AsGeoJSON(geometry, 9)::json AS geometry,
-                acres, perimeter_ft AS "perimeterFt", length_ft AS "lengthFt", created_at AS "createdAt", updated_at AS "updatedAt"
-         FROM units WHERE property_id = :propertyId ORDER BY id`,
-        { replacements: { propertyId }, type: QueryTypes.SELECT },
-      )),
+      (rows ??= sequelize.query<UnitRow>(UNITS_SQL, { replacements: { propertyId }, type: QueryTypes.SELECT })),
   };
 }
 
-/** A weak ETag that changes with every write to the plan. */
-export const planEtag = (plan: LoadedPlan): string => `W/"plan-${plan.property.id}-r${plan.revision}"`;
+const UNITS_SQL = `SELECT id, property_id AS "propertyId", kind, name, notes, ST_AsGeoJSON(geometry, 9)::json AS geometry,
+                acres, perimeter_ft AS "perimeterFt", length_ft AS "lengthFt", created_at AS "createdAt", updated_at AS "updatedAt"
+         FROM units WHERE property_id = :propertyId ORDER BY id`;
 
-/** The serialised `{ data: UnitDto[] }` answer of the plan's units, as bytes ready to send. */
-export function unitsJson(plan: LoadedPlan): Promise<Buffer> {
-  return remember(`units:${plan.property.id}:${plan.revision}`, async () => Buffer.from(JSON.stringify({ data: (await plan.units()).map(presentUnit) })));
+/**
+ * The plan's revision, read first and alone (one small indexed query): 404 outside the firm. A write
+ * bumps the revision in the same transaction as its units, so units read after it are at least as new.
+ */
+export async function planRevision(propertyId: number, firmId: number): Promise<number> {
+  const rows = await sequelize.query<{ revision: number }>('SELECT revision FROM properties WHERE id = $1 AND firm_id = $2', {
+    bind: [propertyId, firmId],
+    type: QueryTypes.SELECT,
+  });
+  if (rows.length === 0) throw notFound('That property');
+  return rows[0].revision;
+}
+
+/** The weak ETag of a plan at a revision and build (a new answer format is never a 304). */
+export const planEtagAt = (propertyId: number, revision: number): string => `W/"plan-${propertyId}-r${revision}-${buildId}"`;
+
+/**
+ * The `{ data: UnitDto[] }` answer of a plan at a revision, serialised and compressed once (gzip and
+ * brotli) and cached by revision; call after `planRevision` has checked the firm.
+ */
+export function unitsAnswer(propertyId: number, revision: number): Promise<Precompressed> {
+  return remember(`units-answer:${propertyId}:${revision}`, async () => {
+    const rows = await sequelize.query<UnitRow>(UNITS_SQL, { replacements: { propertyId }, type: QueryTypes.SELECT });
+    return precompress(Buffer.from(JSON.stringify({ data: rows.map(presentUnit) })));
+  });
 }
 
 /** Share of the property by kind and the plan warnings. */

@@ -67,7 +67,10 @@ export function summariseHarvests(harvests: readonly HarvestDto[]) {
 /** The property's season reports, newest first; clients see only the ones sent to them. */
 export async function listSeasonReports(me: SessionUser, property: Property, opts: Opts = {}): Promise<SeasonReportDto[]> {
   const where: Record<string | symbol, unknown> = { propertyId: property.id };
-  if (me.role === 'client') where.sentAt = { [Op.ne]: null };
+  if (me.role === 'client') {
+    where.sentAt = { [Op.ne]: null };
+    where.withdrawnAt = null;
+  }
   const rows = await SeasonReport.findAll({ where, order: [['season', 'DESC'], ['id', 'DESC']], transaction: opts.transaction });
   const files = await SharedFile.findAll({ where: { id: rows.map((r) => r.sharedFileId) }, attributes: ['id', 'byteSize'], transaction: opts.transaction });
   const size = new Map(files.map((f) => [f.id, f.byteSize]));

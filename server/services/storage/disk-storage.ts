@@ -1,34 +1,61 @@
 /**
  * Uploaded files on disk, outside the web root, under random names; the database keeps the key.
- * Swap this module for object storage when several servers share no disk.
+ * The default for one machine (STORAGE=disk); several machines share object storage instead.
  */
-import crypto from 'node:crypto';
-import fs from 'node:fs/promises';
+import fsp from 'node:fs/promises';
 import path from 'node:path';
-import { config } from '../../config';
+import { StoredFileMissing, type Storage, type StoredObject } from './storage-types';
 
-const KEY = /^[a-z0-9-]+\/[a-f0-9]{32}(\.[a-z0-9]{1,8})?$/;
+const isMissing = (err: unknown): boolean => (err as NodeJS.ErrnoException)?.code === 'ENOENT';
 
-function fullPath(key: string): string {
-  if (!KEY.test(key)) throw new Error('invalid storage key');
-  return path.join(config.uploadsDir, key);
+/** Storage in a folder on this machine's disk. */
+export function createDiskStorage(root: string): Storage {
+  const fullPath = (key: string) => path.join(root, key);
+  return {
+    kind: 'disk',
+    async put(key, bytes) {
+      const target = fullPath(key);
+      await fsp.mkdir(path.dirname(target), { recursive: true });
+      await fsp.writeFile(target, bytes, { flag: 'wx', mode: 0o640 });
+    },
+    async get(key) {
+      try {
+        return await fsp.readFile(fullPath(key));
+      } catch (err) {
+        if (isMissing(err)) throw new StoredFileMissing(key);
+        throw err;
+      }
+    },
+    async open(key) {
+      let handle: fsp.FileHandle;
+      try {
+        handle = await fsp.open(fullPath(key), 'r');
+      } catch (err) {
+        if (isMissing(err)) throw new StoredFileMissing(key);
+        throw err;
+      }
+      const { size } = await handle.stat();
+      return { stream: handle.createReadStream(), byteSize: size };
+    },
+    async remove(key) {
+      await fsp.rm(fullPath(key), { force: true });
+    },
+    async *list(prefix) {
+      const folder = fullPath(prefix.replace(/\/$/, ''));
+      let names: string[];
+      try {
+        names = await fsp.readdir(folder);
+      } catch (err) {
+        if (isMissing(err)) return;
+        throw err;
+      }
+      for (const name of names) {
+        const stat = await fsp.stat(path.join(folder, name)).catch(() => null);
+        if (!stat?.isFile()) continue;
+        const object: StoredObject = { key: `${prefix.replace(/\/$/, '')}/${name}`, byteSize: stat.size, lastModified: stat.mtime };
+        yield object;
+      }
+    },
+  };
 }
 
-/** Writes bytes under a new random key in a folder ("overlays", "photos", …); answers the key. */
-export async function saveFile(folder: string, bytes: Buffer, extension: string): Promise<string> {
-  const key = `${folder}/${crypto.randomBytes(16).toString('hex')}${extension ? `.${extension}` : ''}`;
-  const target = fullPath(key);
-  await fs.mkdir(path.dirname(target), { recursive: true });
-  await fs.writeFile(target, bytes, { flag: 'wx', mode: 0o640 });
-  return key;
-}
-
-/** Reads a stored file. */
-export async function readFile(key: string): Promise<Buffer> {
-  return fs.readFile(fullPath(key));
-}
-
-/** Deletes a stored file; a missing file is not an error. */
-export async function deleteFile(key: string): Promise<void> {
-  await fs.rm(fullPath(key), { force: true });
-}

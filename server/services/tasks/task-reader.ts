@@ -8,6 +8,7 @@ import { sequelize } from '../../db/sequelize';
 import { Property, Task, TaskPhoto, Unit, User } from '../../models';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { TaskDto, TaskListQuery } from '../../../shared/schemas/task';
+import { LIST_PAGE, pageOf, type PageDto } from '../../../shared/schemas/common';
 import { fieldBucket, taskWarnings, type TaskWarning } from '../../../shared/domain/tasks';
 import { stripCrs } from '../../presenters/geojson';
 import { todayInZone } from '../clock';
@@ -103,14 +104,24 @@ export async function presentTasks(actor: SessionUser, tasks: Task[], options: {
   return { tasks: views, warnings };
 }
 
-/** The tasks an actor may see, filtered, in date order. */
-export async function listTasks(actor: SessionUser, query: TaskListQuery): Promise<{ tasks: TaskView[]; warnings: TaskWarning[] }> {
-  const rows = await Task.findAll({
-    where: taskScope(actor, query),
-    order: [[sequelize.fn('COALESCE', sequelize.col('start_date'), sequelize.col('earliest')), 'ASC'], ['propertyId', 'ASC'], ['unitName', 'ASC'], ['position', 'ASC'], ['id', 'ASC']],
-    limit: 2000,
-  });
-  return presentTasks(actor, rows, { withGeometry: actor.role === 'crew' });
+/**
+ * A page of the tasks an actor may see, filtered, in date order, with the number matching in all
+ * (never cut silently). Unit outlines only when asked (`geometry=true`, the field sheet's sketches).
+ */
+export async function listTasks(actor: SessionUser, query: TaskListQuery): Promise<{ tasks: TaskView[]; warnings: TaskWarning[]; page: PageDto }> {
+  const page = { limit: query.limit ?? LIST_PAGE.defaultLimit, offset: query.offset ?? 0 };
+  const where = taskScope(actor, query);
+  const [total, rows] = await Promise.all([
+    Task.count({ where }),
+    Task.findAll({
+      where,
+      order: [[sequelize.fn('COALESCE', sequelize.col('start_date'), sequelize.col('earliest')), 'ASC'], ['propertyId', 'ASC'], ['unitName', 'ASC'], ['position', 'ASC'], ['id', 'ASC']],
+      limit: page.limit,
+      offset: page.offset,
+    }),
+  ]);
+  const presented = await presentTasks(actor, rows, { withGeometry: query.geometry === 'true' });
+  return { ...presented, page: pageOf(page, total) };
 }
 
 /** One task as its DTO, with the unit's geometry for the small map. */

@@ -102,10 +102,11 @@ describe('overlaps between area units', () => {
     // Half of one square (geometry): the squares share exactly the east half of the first
     const half = measureArea(a.geometry as Polygon).acres / 2;
     expect(Math.abs(w.acres! / half - 1)).toBeLessThan(0.001);
-    // 50 m × 100 m = 5,000 m² = 1.2355 acres (4,046.8564224 m²/acre, NIST HB 44), ellipsoid tolerance 0.35 %
-    expect(Math.abs(w.acres! / (5000 / 4046.8564224) - 1)).toBeLessThan(0.0035);
+    // 50 m × 100 m = 5,000 m² = 1.2355 acres (4,046.8564224 m²/acre, NIST HB 44); the squares are
+    // built on the ellipsoid (GeographicLib), so the measure agrees within the overlap's own slack
+    expect(Math.abs(w.acres! / (5000 / 4046.8564224) - 1)).toBeLessThan(0.001);
     expect(w.message).toBe(
-      '"East clover" and "Thicket" overlap by 1.23 acres: trim one of them so that ground is not planned or billed twice.',
+      '"East clover" and "Thicket" overlap by 1.24 acres: trim one of them so that ground is not planned or billed twice.',
     );
   });
 
@@ -134,7 +135,7 @@ describe('units and the property boundary', () => {
     const half = measureArea(straddling.geometry as Polygon).acres / 2;
     expect(Math.abs(w.acres! / half - 1)).toBeLessThan(0.001);
     expect(w.message).toBe(
-      '"Switchgrass block" extends 1.23 acres outside the property boundary: trim it to the boundary, or correct the boundary.',
+      '"Switchgrass block" extends 1.24 acres outside the property boundary: trim it to the boundary, or correct the boundary.',
     );
   });
 
@@ -189,7 +190,8 @@ describe('food plots as a share of the property (1–10 %, Georgia DNR biologist
     const warnings = planWarnings({ boundary, units: plots(40, 40) });
     expect(warnings.map((w) => w.code)).toEqual(['food-plot-share-high']); // the plots neither overlap nor leave the boundary
     const [w] = warnings;
-    expect(w.message).toMatch(/^Food plots total 79\.\d acres, 12 % of the property/); // 80 / 640 = 12.5 %
+    // 40 + 40 acres built on the ellipsoid; 80 / 640 = 12.5 %, which rounds either way at the last digit
+    expect(w.message).toMatch(/^Food plots total 80\.0 acres, 1[23] % of the property/);
   });
 
   it('is quiet between 1 and 10 %, and when there are no food plots', () => {

@@ -102,6 +102,29 @@ describe('pooling purchases across steps', () => {
   });
 });
 
+describe('words a landowner reads on the lines', () => {
+  it('names each labor and equipment line by its step, so no two lines of a prescription read the same', () => {
+    const result = starter('fall-brassica-plot', { acres: 3.3 });
+    const services = result.lines.filter((l) => l.rateKey !== null);
+    const spreader = services.filter((l) => l.rateKey === services.find((s) => /spreader/i.test(s.description))?.rateKey);
+    expect(spreader.length).toBeGreaterThan(1); // the starter plot spreads seed and fertilizer (invented demo practice)
+    expect(new Set(spreader.map((l) => l.description)).size).toBe(spreader.length);
+    expect(spreader.every((l) => /^Broadcast spreader — \S/.test(l.description))).toBe(true);
+    const descriptions = result.lines.map((l) => l.description);
+    expect(new Set(descriptions).size).toBe(descriptions.length);
+  });
+
+  it('keeps the pricing working of a minimum charge in a staff note, out of the description', () => {
+    const result = starter('access-route-clearing', { lengthFt: 1250 });
+    const minimum = result.lines.find((l) => l.rateKey === 'rate-brush-mower')!;
+    expect(minimum.description).toMatch(/\(minimum charge\)$/);
+    expect(minimum.description).not.toMatch(/would be|\$/);
+    // 12.5 × $22.00 = $275.00 (invented demo rate), under the $350.00 minimum
+    expect(minimum.pricingNote).toBe("12.5 100 ft would be $275.00; the rate's minimum charge applies.");
+    expect(result.lines.filter((l) => l.unit !== 'minimum').every((l) => l.pricingNote === undefined)).toBe(true);
+  });
+});
+
 describe('line and point units', () => {
   it('prices an access route by its length with minimum charges', () => {
     const result = starter('access-route-clearing', { lengthFt: 1250 });

@@ -565,11 +565,11 @@ describe('readGeoFile refuses what it cannot read, with a status and an actionab
     const e = await expectGeoFileError(
       () => readGeoFile({ filename: 'unclosed-tag.kml', buffer: fixture('unclosed-tag.kml') }),
       422,
-      /^This file is a KML but its XML could not be read: .*"Placemark" != "Document".* near line 11/,
+      /^This file is a KML but its XML could not be read: unexpected close tag near line 12\b/,
     );
-    // xmldom reports where it stood when it met </Document> (line 12 of the fixture) while the
-    // Placemark opened on line 9 was still open: the end of line 11.
-    expect(e.details?.line).toBe(11);
+    // The streaming parser stops at </Document> on line 12 of the fixture, while the Placemark
+    // opened on line 9 is still open.
+    expect(e.details?.line).toBe(12);
   });
 
   it('JSON syntax error → 422 with the line', async () => {

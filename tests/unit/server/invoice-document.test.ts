@@ -1,7 +1,11 @@
 import { execFileSync } from 'node:child_process';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DomainValidationError } from '../../../shared/domain/errors';
 import { renderInvoicePdf, type InvoiceDocumentInput } from '../../../templates/documents/invoice';
+import { pdfWorkersReady } from '../../../server/services/documents/pdf-pool';
+
+// PDFs render in a worker thread; its first start (fonts, modules) is not part of a test.
+beforeAll(pdfWorkersReady, 60_000);
 
 /** Invented demo figures; each total is arithmetic on the lines (no source). */
 const input = (): InvoiceDocumentInput => ({
@@ -19,6 +23,17 @@ const input = (): InvoiceDocumentInput => ({
 });
 
 describe('the invoice PDF', () => {
+  it('writes the client’s postal address under "Billed to" and US spelling for how to pay', async () => {
+    const doc = input();
+    doc.client.address = '4410 Kettle Hollow Road\nRidgeway, WI 53582'; // invented demo address
+    const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: await renderInvoicePdf(doc) }).toString();
+    expect(text).toMatch(/Billed to\s+Okonkwo-Larsen Family/);
+    expect(text).toContain('4410 Kettle Hollow Road');
+    expect(text).toContain('Ridgeway, WI 53582');
+    expect(text).toContain('on any check');
+    expect(text).not.toMatch(/cheque/i);
+  });
+
   it('prints the lines, the credit, the totals and the balance exactly as given', async () => {
     const pdf = await renderInvoicePdf(input());
     const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString();

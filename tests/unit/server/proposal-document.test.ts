@@ -257,6 +257,9 @@ describe('proposal PDF by status', () => {
     const text = pdfText(pdf, 'approved');
     expect(text).toContain('Approved by Marta Lindqvist on April 27, 2027, 10:42 AM CDT');
     expect(text).toContain(hash);
+    // Labelled plainly for the landowner, not as a hash algorithm.
+    expect(text).toMatch(/Approval fingerprint/);
+    expect(text).not.toMatch(/SHA-256/);
     expect(pdfText(pdf, 'approved-p1', { first: 1, last: 1 })).toContain('APPROVED — by Marta Lindqvist');
     expect(text).not.toMatch(/type your name to approve/);
   }, 30_000);

@@ -4,6 +4,7 @@ import { AuthCard } from '../../../features/auth/components/auth-card';
 import { SetPasswordForm } from '../../../features/auth/components/set-password-form';
 import { Loading } from '../../../components/ui/card';
 import { homeFor, paths } from '../../../config/paths';
+import { invitationIntro, invitationTitle } from '../../../features/auth/lib/invitation-words';
 
 export function AcceptInvitePage() {
   const token = useParams().token ?? '';
@@ -11,7 +12,7 @@ export function AcceptInvitePage() {
   const accept = useAcceptInvitation();
   const navigate = useNavigate();
   return (
-    <AuthCard title="Join your team on Browseline">
+    <AuthCard title={invitationTitle(invitation.data?.role)}>
       {invitation.isPending ? (
         <Loading />
       ) : invitation.isError ? (
@@ -22,11 +23,11 @@ export function AcceptInvitePage() {
       ) : (
         <>
           <p className="mb-4 text-sm text-slate">
-            Welcome, {invitation.data.name}. {invitation.data.firmName} invited {invitation.data.email}. Choose a password to finish.
+            {invitationIntro(invitation.data)}
           </p>
           <SetPasswordForm
             token={token}
-            submitLabel="Create my account"
+            submitLabel={invitation.data.role === 'client' ? 'Open my portal' : 'Create my account'}
             busy={accept.isPending}
             error={accept.error}
             onSubmit={(v) => accept.mutate(v, { onSuccess: (user) => navigate(homeFor(user.role), { replace: true }) })}

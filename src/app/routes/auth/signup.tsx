@@ -1,7 +1,6 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { Link } from 'react-router-dom';
 import { SignupSchema } from '../../../../shared/schemas/auth';
 import { useSignup } from '../../../features/auth/api/signup';
 import { AuthCard } from '../../../features/auth/components/auth-card';
@@ -19,9 +18,9 @@ export function SignupPage() {
       {signup.isSuccess ? (
         <div className="flex flex-col gap-4 text-sm">
           <p role="status">{signup.data.data.message}</p>
-          <Link to={paths.login} className="text-moss-deep underline">
+          <a href={paths.login} className="text-moss-deep underline">
             Go to sign in
-          </Link>
+          </a>
         </div>
       ) : (
         <form onSubmit={form.handleSubmit((v) => signup.mutate(v))} noValidate className="flex flex-col gap-4">
@@ -37,9 +36,9 @@ export function SignupPage() {
           <Button type="submit" busy={signup.isPending}>
             Create the firm
           </Button>
-          <Link to={paths.login} className="text-center text-sm text-moss-deep hover:underline">
+          <a href={paths.login} className="text-center text-sm text-moss-deep hover:underline">
             I already have an account
-          </Link>
+          </a>
         </form>
       )}
     </AuthCard>

@@ -20,9 +20,9 @@ export function VerifyEmailPage() {
       {verify.isSuccess ? (
         <div className="flex flex-col gap-4 text-sm">
           <p role="status">{verify.data.data.message}</p>
-          <Link to={`${paths.login}?email=${encodeURIComponent(verify.data.data.email)}`} className="text-moss-deep underline">
+          <a href={`${paths.login}?email=${encodeURIComponent(verify.data.data.email)}`} className="text-moss-deep underline">
             Sign in
-          </Link>
+          </a>
         </div>
       ) : verify.isError ? (
         <div className="flex flex-col gap-4 text-sm">

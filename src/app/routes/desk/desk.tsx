@@ -2,7 +2,8 @@ import { Link } from 'react-router-dom';
 import { useDesk } from '../../../features/desk/api/get-desk';
 import { useMe } from '../../../features/auth/api/get-me';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
-import { describeAction, formatAcres, formatRelative } from '../../../lib/format';
+import { formatAcres, formatRelative } from '../../../lib/format';
+import { describeAction } from '../../../features/desk/lib/action-words';
 import { paths } from '../../../config/paths';
 import { SeasonStrip } from '../../../features/desk/components/season-strip';
 import { FirstSteps } from '../../../features/desk/components/first-steps';
@@ -39,6 +40,28 @@ export function DeskPage() {
         <Figure label="Acres under plan" value={d.counts.totalAcres.toLocaleString('en-US')} />
         <Figure label="Crew members" value={String(d.counts.crew)} />
       </div>
+      {d.depositDrafts.length > 0 ? (
+        <section aria-labelledby="deposit-drafts-heading" className="rounded-md border-l-4 border-ochre bg-card px-4 py-3">
+          <h2 id="deposit-drafts-heading" className="text-base font-bold">
+            Deposit {d.depositDrafts.length === 1 ? 'invoice' : 'invoices'} to send
+          </h2>
+          <ul className="mt-2 flex flex-col gap-2">
+            {d.depositDrafts.map((i) => (
+              <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 text-sm">
+                <span>
+                  {i.clientName} approved {i.proposalNumber ?? 'a proposal'}
+                  {i.approvedAt ? ` ${formatRelative(i.approvedAt)}` : ''}; Browseline drafted deposit invoice <span className="font-semibold">{i.number}</span> for{' '}
+                  <span className="figure">{formatCents(i.totalCents)}</span>
+                  {i.propertyName ? ` (${i.propertyName})` : ''}.
+                </span>
+                <Link to={paths.invoice(i.id)} className="font-semibold text-moss-deep underline">
+                  Review and send {i.number}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Waiting on landowners" action={<Link to={paths.proposals} className="text-sm text-moss-deep hover:underline">All proposals</Link>}>
           {d.waiting.length === 0 ? (
@@ -76,6 +99,25 @@ export function DeskPage() {
           )}
         </Card>
       </div>
+      <Card title="Money in" action={<Link to={paths.invoices} className="text-sm text-moss-deep hover:underline">All invoices</Link>}>
+        {d.moneyIn.length === 0 ? (
+          <EmptyState title="No payments in the last two weeks">When a landowner pays an invoice in their portal, it shows here and you get an e-mail.</EmptyState>
+        ) : (
+          <ul className="flex flex-col gap-2" aria-label="Payments received">
+            {d.moneyIn.map((m) => (
+              <li key={m.id} className="rounded border border-rule bg-paper/60 px-3 py-2 text-sm">
+                <span className="figure font-semibold text-ink">{formatCents(m.amountCents)}</span> from {m.clientName} on{' '}
+                <Link to={paths.invoice(m.invoiceId)} className="text-moss-deep underline">
+                  {m.number}
+                </Link>
+                <span className="block text-slate">
+                  {formatRelative(m.receivedAt)} · {m.paidInFull ? 'paid in full' : 'part payment'}
+                </span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </Card>
       <Card title="The season">
         <SeasonStrip season={d.season} />
       </Card>

@@ -6,6 +6,7 @@ import { TaskCard } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
 import { CalendarFeedsCard } from '../../../features/field/components/calendar-feeds-card';
 import { BUCKETS } from '../../../features/field/lib/task-text';
+import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock';
 
@@ -14,7 +15,7 @@ function TaskBuckets({ me }: { me: { id: number; role: string } }) {
   const tasks = useMyTasks(me);
   const queue = useCompletionQueue();
   if (tasks.isPending) return <Loading label="Loading your tasks…" />;
-  if (tasks.isError) return <ErrorPanel error={tasks.error} onRetry={() => tasks.refetch()} />;
+  if (tasks.isError && !tasks.data) return <ErrorPanel error={tasks.error} onRetry={() => tasks.refetch()} />;
   const open = tasks.data.tasks.filter((t) => t.bucket !== 'finished' || queue.waitingFor(t.id));
   const done = tasks.data.tasks.filter((t) => t.bucket === 'finished' && !queue.waitingFor(t.id));
   return (
@@ -67,8 +68,9 @@ function TaskBuckets({ me }: { me: { id: number; role: string } }) {
 export function FieldHomePage() {
   const me = useMe();
   const home = useFieldHome();
+  const tasks = useMyTasks(me.data ?? { id: 0, role: 'crew' }, Boolean(me.data));
   if (home.isPending || !me.data) return <Loading />;
-  if (home.isError) return <ErrorPanel error={home.error} />;
+  if (home.isError && !home.data) return <ErrorPanel error={home.error} />;
   // Today in the firm's time zone, whatever zone the phone is set to.
   const todayIso = todayIn(me.data.firmTimezone, new Date());
   return (
@@ -80,6 +82,7 @@ export function FieldHomePage() {
         <h1 className="text-2xl font-bold">Field sheet</h1>
         <p className="text-slate">{me.data.name} · {home.data.firm.name}</p>
       </div>
+      <OfflineNotice updatedAt={tasks.dataUpdatedAt || home.dataUpdatedAt} refreshFailed={tasks.isRefetchError || home.isRefetchError} />
       <QueueNotice />
       <TaskBuckets me={me.data} />
       <Card title="Who to call">

@@ -1,9 +1,10 @@
-import { useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { parseId } from '../../../lib/route-params';
 import { ApiError } from '../../../lib/api-client';
 import { formatDateRange, formatQuantity } from '../../../lib/quantity-format';
+import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, ErrorPanel, Loading } from '../../../components/ui/card';
 import { Button } from '../../../components/ui/button';
 import { useTask } from '../../../features/field/api/get-task';
@@ -11,12 +12,16 @@ import type { FieldTask } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { UnitMap } from '../../../features/field/components/unit-map';
 import { KindChip, TaskStatusChip } from '../../../features/field/components/task-card';
-import { CompleteForm } from '../../../features/field/components/complete-form';
-import { SkipForm } from '../../../features/field/components/skip-form';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
-import { geoUri } from '../../../features/field/lib/unit-sketch';
+import { Directions } from '../../../features/field/components/directions';
 import { plannedDates, windowText } from '../../../features/field/lib/task-text';
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
+
+// The forms (and the shared zod schemas they check with) load after the page shows; the page asks for them at once.
+const loadCompleteForm = () => import('../../../features/field/components/complete-form');
+const loadSkipForm = () => import('../../../features/field/components/skip-form');
+const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
+const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
 
 function BackLink() {
   return (
@@ -96,6 +101,10 @@ export function FieldTaskPage() {
   const task = useTask(id);
   const queue = useCompletionQueue();
   const [mode, setMode] = useState<'view' | 'done' | 'skip'>('view');
+  useEffect(() => {
+    void loadCompleteForm().catch(() => undefined);
+    void loadSkipForm().catch(() => undefined);
+  }, []);
   if (!id || (task.isError && task.error instanceof ApiError && task.error.status === 404)) {
     return (
       <div className="flex flex-col gap-3">
@@ -108,15 +117,15 @@ export function FieldTaskPage() {
     );
   }
   if (task.isPending) return <Loading />;
-  if (task.isError) return <ErrorPanel error={task.error} onRetry={() => task.refetch()} />;
+  if (task.isError && !task.data) return <ErrorPanel error={task.error} onRetry={() => task.refetch()} />;
   const t = task.data;
   const waiting = queue.waitingFor(t.id);
   const open = (t.status === 'planned' || t.status === 'scheduled') && !waiting;
-  const maps = geoUri(t.location, t.unitName);
   const dates = plannedDates(t);
   return (
     <div className="flex flex-col gap-4">
       <BackLink />
+      <OfflineNotice updatedAt={task.dataUpdatedAt} refreshFailed={task.isRefetchError} />
       <QueueNotice showWaiting={false} />
       <div>
         <TaskStatusChip task={t} waitingToSend={Boolean(waiting)} />
@@ -147,14 +156,7 @@ export function FieldTaskPage() {
         </ul>
       ) : null}
       <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
-      {maps ? (
-        <a href={maps} className="inline-flex min-h-12 items-center justify-center gap-2 rounded border border-moss bg-card px-4 py-2 text-base font-semibold text-moss-deep">
-          Open in maps
-          <span className="text-xs font-normal text-slate">
-            ({t.location![1].toFixed(5)}, {t.location![0].toFixed(5)})
-          </span>
-        </a>
-      ) : null}
+      <Directions location={t.location} label={t.unitName} />
       <QuantitiesCard task={t} />
       {t.cautions.map((c) => (
         <CautionBox key={c.id} title={c.title}>
@@ -174,12 +176,16 @@ export function FieldTaskPage() {
       ) : null}
       {open && mode === 'done' ? (
         <Card title="Mark done">
-          <CompleteForm task={t} onCancel={() => setMode('view')} />
+          <Suspense fallback={<Loading />}>
+            <CompleteForm task={t} onCancel={() => setMode('view')} />
+          </Suspense>
         </Card>
       ) : null}
       {open && mode === 'skip' ? (
         <Card title="Skip this task">
-          <SkipForm task={t} onCancel={() => setMode('view')} />
+          <Suspense fallback={<Loading />}>
+            <SkipForm task={t} onCancel={() => setMode('view')} />
+          </Suspense>
         </Card>
       ) : null}
     </div>

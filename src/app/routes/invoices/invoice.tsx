@@ -52,6 +52,8 @@ function RefundControl({ invoiceId, payment }: { invoiceId: number; payment: Inv
   const [open, setOpen] = useState(false);
   const [amount, setAmount] = useState('');
   const [error, setError] = useState<string | undefined>();
+  // One key per refund the owner means to make: kept through retries of it, new once it is done or the amount changes.
+  const [requestKey, setRequestKey] = useState(() => `refund-${crypto.randomUUID()}`);
   const left = payment.amountCents - payment.refundedCents;
   if (left <= 0) return <span className="text-xs text-slate">Refunded in full</span>;
   if (!open) return <TextButton onClick={() => setOpen(true)}>Refund…</TextButton>;
@@ -67,10 +69,10 @@ function RefundControl({ invoiceId, payment }: { invoiceId: number; payment: Inv
           return setError((err as Error).message);
         }
         if (cents <= 0 || cents > left) return setError(`between $0.01 and ${formatCents(left)}`);
-        refund.mutate({ id: invoiceId, paymentId: payment.id, amountCents: cents }, { onSuccess: () => { toast('success', `${formatCents(cents)} refunded.`); setOpen(false); }, onError: (err) => toast('error', `Not refunded: ${err.message}`) });
+        refund.mutate({ id: invoiceId, paymentId: payment.id, amountCents: cents, requestKey }, { onSuccess: () => { toast('success', `${formatCents(cents)} refunded.`); setOpen(false); setRequestKey(`refund-${crypto.randomUUID()}`); }, onError: (err) => toast('error', err.message) });
       }}
     >
-      <TextField label={`Refund amount ($, at most ${formatCents(left)})`} inputMode="decimal" value={amount} onChange={(e) => { setAmount(e.target.value); setError(undefined); }} error={error} className="w-56" />
+      <TextField label={`Refund amount ($, at most ${formatCents(left)})`} inputMode="decimal" value={amount} onChange={(e) => { setAmount(e.target.value); setError(undefined); setRequestKey(`refund-${crypto.randomUUID()}`); }} error={error} className="w-56" />
       <Button type="submit" variant="danger" size="sm" busy={refund.isPending}>Refund</Button>
       <Button type="button" variant="ghost" size="sm" onClick={() => setOpen(false)}>Cancel</Button>
     </form>
@@ -87,6 +89,7 @@ export function InvoicePage() {
   const removeLine = useRemoveInvoiceLine();
   const toast = useToast();
   const [voiding, setVoiding] = useState(false);
+  const [confirmingSend, setConfirmingSend] = useState(false);
   const [voidReason, setVoidReason] = useState('');
   if (id === null || (invoice.isError && invoice.error instanceof ApiError && invoice.error.status === 404)) return <MissingRecord what="invoice" backTo={paths.invoices} backLabel="All invoices" />;
   if (invoice.isPending) return <Loading label="Loading invoice…" />;
@@ -96,8 +99,14 @@ export function InvoicePage() {
   const canVoid = (inv.status === 'draft' || inv.status === 'open') && inv.amountPaidCents === 0;
   const doSend = () =>
     send.mutate(inv.id, {
-      onSuccess: (next) => toast('success', `${next.number} ${isDraft ? 'issued and e-mailed' : 'e-mailed again'} to ${next.clientName}.`),
-      onError: (e) => toast('error', `Not sent: ${e.message}`),
+      onSuccess: (next) => {
+        setConfirmingSend(false);
+        toast('success', `${next.number} ${isDraft ? 'issued and e-mailed' : 'e-mailed again'} to ${next.clientName}.`);
+      },
+      onError: (e) => {
+        setConfirmingSend(false);
+        toast('error', `Not sent: ${e.message}`);
+      },
     });
   return (
     <div className="flex flex-col gap-4">
@@ -107,8 +116,8 @@ export function InvoicePage() {
         actions={
           <>
             {isDraft || inv.status === 'open' ? (
-              <Button onClick={doSend} busy={send.isPending}>
-                {isDraft ? 'Send' : 'Send again'}
+              <Button onClick={() => setConfirmingSend(true)} busy={send.isPending}>
+                {isDraft ? 'Send…' : 'Send again…'}
               </Button>
             ) : null}
             <a className={buttonClasses('secondary')} href={`/api/invoices/${inv.id}/pdf`} target="_blank" rel="noreferrer">
@@ -149,6 +158,25 @@ export function InvoicePage() {
       <Card title="Payments">
         <PaymentsList invoice={inv} action={me.data?.role === 'owner' ? (p) => <RefundControl invoiceId={inv.id} payment={p} /> : undefined} />
       </Card>
+      <ConfirmDialog
+        open={confirmingSend}
+        title={isDraft ? `Send ${inv.number} to ${inv.clientName}?` : `E-mail ${inv.number} to ${inv.clientName} again?`}
+        confirmLabel={isDraft ? 'Send invoice' : 'Send again'}
+        busy={send.isPending}
+        onConfirm={doSend}
+        onCancel={() => setConfirmingSend(false)}
+      >
+        {isDraft ? (
+          <>
+            <p>
+              It is issued today for <span className="figure">{formatCents(inv.totalCents)}</span>, {inv.termsDays === 0 ? 'due on receipt' : `due in ${inv.termsDays} days`}, and e-mailed with the PDF and a link to pay in their portal.
+            </p>
+            <p className="mt-2 text-slate">Once sent, its lines cannot change; void it and make a new one to correct it.</p>
+          </>
+        ) : (
+          <p>They get the same invoice again, with the PDF and the link to pay. Nothing on it changes.</p>
+        )}
+      </ConfirmDialog>
       <ConfirmDialog
         open={voiding}
         title={`Void ${inv.number}?`}

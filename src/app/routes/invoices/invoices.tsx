@@ -1,14 +1,17 @@
+import { lazy, Suspense } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { formatCents } from '../../../../shared/domain/money';
 import { INVOICE_STATUSES, type InvoiceStatus } from '../../../../shared/domain/invoicing';
 import type { InvoiceRowDto } from '../../../../shared/schemas/invoice';
 import { useInvoices } from '../../../features/invoices/api/get-invoices';
 import { InvoiceStatusChip, INVOICE_STATUS_LABELS } from '../../../features/invoices/components/invoice-status-chip';
-import { ReceivablesPanel } from '../../../features/invoices/components/receivables-panel';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { DataTable, type DataColumn } from '../../../components/ui/data-table';
 import { PageHeader } from '../../../components/ui/page-header';
 import { SelectField } from '../../../components/ui/select-field';
+
+// The receivables chart (recharts) loads after the list of invoices.
+const ReceivablesPanel = lazy(() => import('../../../features/invoices/components/receivables-panel').then((m) => ({ default: m.ReceivablesPanel })));
 import { paths } from '../../../config/paths';
 import { formatDay } from '../../../lib/firm-clock';
 
@@ -46,7 +49,9 @@ export function InvoicesPage() {
   return (
     <div className="flex flex-col gap-4">
       <PageHeader title="Invoices">Deposits, progress and final invoices. Make them from an approved proposal’s page.</PageHeader>
-      <ReceivablesPanel />
+      <Suspense fallback={null}>
+        <ReceivablesPanel />
+      </Suspense>
       <Card>
         {invoices.isPending ? (
           <Loading label="Loading invoices…" />

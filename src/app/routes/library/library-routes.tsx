@@ -1,20 +1,16 @@
 import { Navigate, type RouteObject } from 'react-router-dom';
 import { paths } from '../../../config/paths';
-import { LibraryLayout } from './library-layout';
-import { PracticesPage } from './practices';
-import { PracticePage } from './practice';
-import { MaterialsPage } from './materials';
-import { RatesPage } from './rates';
+import { page } from '../../lazy-page';
 
-/** The Library's routes, for the consultant shell: /library/practices, /library/practices/:id, /library/materials, /library/rates. */
+/** The Library's routes, for the consultant shell: /library/practices, /library/practices/:id, /library/materials, /library/rates (each page its own chunk). */
 export const libraryRoutes: RouteObject = {
   path: paths.library,
-  element: <LibraryLayout />,
+  ...page(() => import('./library-layout'), (m) => m.LibraryLayout),
   children: [
     { index: true, element: <Navigate to={paths.libraryPractices} replace /> },
-    { path: paths.libraryPractices, element: <PracticesPage /> },
-    { path: paths.practice(), element: <PracticePage /> },
-    { path: paths.libraryMaterials, element: <MaterialsPage /> },
-    { path: paths.libraryRates, element: <RatesPage /> },
+    { path: paths.libraryPractices, ...page(() => import('./practices'), (m) => m.PracticesPage) },
+    { path: paths.practice(), ...page(() => import('./practice'), (m) => m.PracticePage) },
+    { path: paths.libraryMaterials, ...page(() => import('./materials'), (m) => m.MaterialsPage) },
+    { path: paths.libraryRates, ...page(() => import('./rates'), (m) => m.RatesPage) },
   ],
 };

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import { usePortalProperties } from '../../../features/portal/api/get-portal-properties';
 import { usePortalScope } from '../../../features/portal/api/portal-scope';
 import { ProgressRing } from '../../../features/portal/components/progress-ring';
+import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { buttonClasses } from '../../../components/ui/button';
 import { formatAcres } from '../../../lib/format';
@@ -11,11 +12,12 @@ export function PortalHomePage() {
   const scope = usePortalScope();
   const home = usePortalProperties();
   if (home.isPending) return <Loading label="Loading your land…" />;
-  if (home.isError) return <ErrorPanel error={home.error} onRetry={() => void home.refetch()} />;
+  if (home.isError && !home.data) return <ErrorPanel error={home.error} onRetry={() => void home.refetch()} />;
   const h = home.data;
   const total = h.properties.reduce((sum, p) => sum + (p.acres ?? 0), 0);
   return (
     <div className="flex flex-col gap-5">
+      <OfflineNotice updatedAt={home.dataUpdatedAt} refreshFailed={home.isRefetchError} />
       <div>
         <h1 className="text-2xl font-bold">Your land</h1>
         <p className="text-slate">

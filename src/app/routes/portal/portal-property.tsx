@@ -1,3 +1,4 @@
+import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { lazy, Suspense } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { KIND_STYLES, isUnitKind, type UnitKind } from '../../../../shared/domain/unit-kinds';
@@ -71,12 +72,13 @@ export function PortalPropertyPage() {
   const detail = usePortalProperty(id ?? 0);
   if (id === null || (detail.error instanceof ApiError && detail.error.status === 404)) return <PortalMissing backTo={scope.links.home} />;
   if (detail.isPending) return <Loading label="Loading the plan…" />;
-  if (detail.isError) return <ErrorPanel error={detail.error} onRetry={() => void detail.refetch()} />;
+  if (detail.isError && !detail.data) return <ErrorPanel error={detail.error} onRetry={() => void detail.refetch()} />;
   const d = detail.data;
   const planned = d.units.filter((u) => u.prescriptions.length > 0);
   const others = d.units.filter((u) => u.prescriptions.length === 0);
   return (
     <div className="flex flex-col gap-5">
+      <OfflineNotice updatedAt={detail.dataUpdatedAt} refreshFailed={detail.isRefetchError} />
       <div className="flex flex-col gap-3 sm:flex-row sm:items-start sm:justify-between">
         <div className="min-w-0">
           <nav aria-label="Breadcrumb" className="text-sm">

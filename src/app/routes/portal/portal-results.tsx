@@ -3,7 +3,7 @@ import { usePortalHome } from '../../../features/portal/api/get-portal-home';
 import { useResults } from '../../../features/results/api/get-results';
 import { SurveyEstimatesCard } from '../../../features/results/components/survey-estimates-card';
 import { HarvestTable } from '../../../features/results/components/harvest-table';
-import { AgeStructureChart, BuckDoeTrendChart, SurveyRatioChart, SurveyTrendChart } from '../../../features/results/components/results-charts';
+import { AgeStructureChart, BuckDoeTrendChart, SurveyRatioChart, SurveyTrendChart } from '../../../features/results/components/lazy-results-charts';
 import { PortalSeasonReports } from '../../../features/results/components/season-reports-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { MissingRecord } from '../../../components/ui/missing-record';

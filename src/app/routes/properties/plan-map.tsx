@@ -7,6 +7,7 @@ import type { UnitDto, UnitUpdateInput } from '../../../../shared/schemas/unit';
 import { ApiError } from '../../../lib/api-client';
 import { paths } from '../../../config/paths';
 import { Button } from '../../../components/ui/button';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { ErrorPanel, Loading } from '../../../components/ui/card';
 import { useToast } from '../../../components/ui/toast';
 import { useProperty } from '../../../features/plan-map/api/get-property';
@@ -20,7 +21,7 @@ import { useCreateUnitsBulk } from '../../../features/plan-map/api/create-units-
 import { useUpdateUnit } from '../../../features/plan-map/api/update-unit';
 import { useDeleteUnit } from '../../../features/plan-map/api/delete-unit';
 import { useUpdatePropertyBoundary } from '../../../features/plan-map/api/update-property-boundary';
-import { useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
+import { fetchImportGeometries, useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
 import { usePlanUndo } from '../../../features/plan-map/hooks/use-plan-undo';
 import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
 import { PlaceSearch } from '../../../features/plan-map/components/place-search';
@@ -36,6 +37,7 @@ import { defaultUnitName, kindsPresent, unitsToCollections } from '../../../feat
 import { defaultImportChoice, planImportSave, type ImportChoice } from '../../../features/plan-map/lib/import-choices';
 import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../../../features/plan-map/lib/measure-format';
 import type { ColourBy } from '../../../features/plan-map/lib/plan-layers';
+import { isLargeAreaRefusal } from '../../../features/plan-map/lib/large-area-answer';
 import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
 import { useTasks } from '../../../features/schedule/api/get-tasks';
 import type { UnitWorkStatus } from '../../../../shared/domain/tasks';
@@ -84,6 +86,24 @@ function MeasureReadout({ reading, onClear }: { reading: MeasureReading; onClear
   );
 }
 
+/** Finish, Undo point and Cancel while a line or an area is being drawn. */
+function DrawControls({ points, area, onFinish, onUndo, onCancel }: { points: number; area: boolean; onFinish: () => void; onUndo: () => void; onCancel: () => void }) {
+  const canFinish = points >= (area ? 3 : 2);
+  return (
+    <div role="group" aria-label="Drawing" className="flex flex-wrap items-center gap-1.5">
+      <Button type="button" className="!px-3 !py-1" onClick={onFinish} disabled={!canFinish} title="Finish the shape (Enter)">
+        Finish
+      </Button>
+      <Button type="button" variant="secondary" className="!px-3 !py-1" onClick={onUndo} disabled={points < 1} title="Take back the last point (Backspace)">
+        Undo point
+      </Button>
+      <Button type="button" variant="secondary" className="!px-3 !py-1" onClick={onCancel} title="Stop drawing; nothing is saved (Esc)">
+        Cancel
+      </Button>
+    </div>
+  );
+}
+
 interface ImportState {
   fileName: string;
   preview: ImportPreviewDto;
@@ -118,6 +138,9 @@ export function PlanMapPage() {
   const [editingBoundary, setEditingBoundary] = useState(false);
   const [drawTarget, setDrawTarget] = useState<DrawTarget | null>(null);
   const [measure, setMeasure] = useState<MeasureReading | null>(null);
+  const [drawPoints, setDrawPoints] = useState(0);
+  // The question asked when the server refuses an unconfirmed large area (422 naming confirmLargeArea).
+  const [largeAsk, setLargeAsk] = useState<{ message: string; resolve: (keep: boolean) => void } | null>(null);
   const [importState, setImportState] = useState<ImportState | null>(null);
   const [tilesFailed, setTilesFailed] = useState(false);
   const [uploadProgress, setUploadProgress] = useState<number | null | undefined>(undefined);
@@ -150,6 +173,8 @@ export function PlanMapPage() {
   const boundaryBox = useMemo(() => (boundary ? bboxOf([boundary]) : null), [boundary]);
 
   useEffect(() => controller?.setUnits(collections), [controller, collections]);
+  // New corners snap to the boundary's corners and to other units' corners.
+  useEffect(() => controller?.setSnapTargets([...(boundary ? [boundary] : []), ...unitList.map((u) => u.geometry)]), [controller, boundary, unitList]);
   // Without a boundary the graticule is laid around the units instead.
   const unitsBox = useMemo(() => (boundaryBox ? null : bboxOf(unitList.map((u) => u.geometry))), [boundaryBox, unitList]);
   const gridKey = JSON.stringify(boundaryBox ?? unitsBox);
@@ -215,12 +240,33 @@ export function PlanMapPage() {
     [controller],
   );
 
+  /** Asks whether to keep a large area; answers the person's choice. */
+  const askLargeArea = (message: string) => new Promise<boolean>((resolve) => setLargeAsk({ message, resolve }));
+
+  /**
+   * Saves, and when the server refuses an unconfirmed large area, asks and saves again confirmed.
+   * Answers null when the person chose not to keep it (nothing saved).
+   */
+  const withLargeAreaCheck = async <T,>(save: (confirmLargeArea: boolean) => Promise<T>): Promise<T | null> => {
+    try {
+      return await save(false);
+    } catch (err) {
+      if (!isLargeAreaRefusal(err)) throw err;
+      if (!(await askLargeArea(err.message))) return null;
+      return save(true);
+    }
+  };
+
   const saveDrawn = async (target: DrawTarget, geometry: Geometry) => {
     setDrawTarget(null);
     if (target.type === 'unit') {
       const name = defaultUnitName(target.kind, unitList);
       try {
-        const unit = await createUnit.mutateAsync({ kind: target.kind, name, geometry });
+        const unit = await withLargeAreaCheck((confirmLargeArea) => createUnit.mutateAsync({ kind: target.kind, name, geometry, ...(confirmLargeArea ? { confirmLargeArea } : {}) }));
+        if (!unit) {
+          toast('success', `${name} was not saved.`);
+          return;
+        }
         undo.record({ type: 'create', unitId: unit.id, name: unit.name });
         setSelectedId(unit.id);
         const measureText = unit.acres !== null ? ` (${formatAcresShort(unit.acres)})` : unit.lengthFt !== null ? ` (${formatFeet(unit.lengthFt)})` : '';
@@ -235,7 +281,11 @@ export function PlanMapPage() {
       if (boundary && !window.confirm('Replace the property boundary with the one you drew? You can undo it.')) return;
       try {
         const before = boundary;
-        const saved = await updateBoundary.mutateAsync(geometry);
+        const saved = await withLargeAreaCheck((confirmLargeArea) => updateBoundary.mutateAsync({ boundary: geometry, confirmLargeArea }));
+        if (!saved) {
+          toast('success', 'The boundary was not saved.');
+          return;
+        }
         undo.record({ type: 'boundary', before });
         controller?.fitTo(bboxOf([geometry]), true);
         toast('success', `Boundary saved: ${formatAcresShort(saved.acres ?? 0)}.`);
@@ -249,7 +299,12 @@ export function PlanMapPage() {
     if (target.type === 'boundary') {
       try {
         const before = boundary;
-        await updateBoundary.mutateAsync(geometry as Polygon | MultiPolygon);
+        const saved = await withLargeAreaCheck((confirmLargeArea) => updateBoundary.mutateAsync({ boundary: geometry as Polygon | MultiPolygon, confirmLargeArea }));
+        if (!saved) {
+          controller?.setEditing(null);
+          setEditingBoundary(false);
+          return;
+        }
         undo.record({ type: 'boundary', before });
       } catch (err) {
         toast('error', `The boundary change was not saved. ${errorText(err)}`);
@@ -261,7 +316,12 @@ export function PlanMapPage() {
     const before = unitList.find((u) => u.id === target.unitId);
     if (!before) return;
     try {
-      await updateUnit.mutateAsync({ unitId: target.unitId, input: { geometry } });
+      const saved = await withLargeAreaCheck((confirmLargeArea) => updateUnit.mutateAsync({ unitId: target.unitId, input: { geometry, ...(confirmLargeArea ? { confirmLargeArea } : {}) } }));
+      if (!saved) {
+        controller?.setEditing(null);
+        controller?.setEditing({ type: 'unit', unitId: before.id, kind: before.kind, geometry: before.geometry });
+        return;
+      }
       undo.record({ type: 'update', unitId: before.id, name: before.name, before: { geometry: before.geometry } });
     } catch (err) {
       toast('error', `The new shape of ${before.name} was not saved. ${errorText(err)}`);
@@ -280,6 +340,7 @@ export function PlanMapPage() {
     },
     onMeasure: setMeasure,
     onToolEnded: () => setDrawTarget(null),
+    onDrawProgress: setDrawPoints,
     onTilesFailed: () => setTilesFailed(true),
   };
 
@@ -325,6 +386,10 @@ export function PlanMapPage() {
       if ((e.key === 'Delete' || e.key === 'Backspace') && selected && !drawTarget) {
         e.preventDefault();
         void removeUnit(selected);
+      } else if (drawTarget && (e.key === 'Backspace' || ((e.ctrlKey || e.metaKey) && !e.shiftKey && e.key.toLowerCase() === 'z'))) {
+        // While drawing, Backspace and Ctrl+Z take back the last point, not a saved change.
+        e.preventDefault();
+        controller?.undoVertex();
       } else if ((e.ctrlKey || e.metaKey) && !e.shiftKey && e.key.toLowerCase() === 'z' && !drawTarget) {
         e.preventDefault();
         void runUndo();
@@ -365,16 +430,26 @@ export function PlanMapPage() {
     if (importPlan.boundary && boundary && !window.confirm('Replace the property boundary with the imported one? You can undo it.')) return;
     setSavingImport(true);
     try {
+      // The preview drew outlines; save the full geometries of the chosen features.
+      const { preview, choices } = importState;
+      const chosen = preview.features.filter((_, i) => choices[i] !== 'skip').map((f) => f.item);
+      const full = new Map((await fetchImportGeometries(propertyId, preview.importId, chosen)).map((g) => [g.item, g.geometry]));
+      if (chosen.some((item) => !full.has(item))) throw new Error('The uploaded file is no longer on the server; upload it again.');
+      const toSave = planImportSave(preview.features.map((f) => ({ ...f, geometry: full.get(f.item) ?? f.geometry })), choices);
       const parts: string[] = [];
-      if (importPlan.boundary) {
+      if (toSave.boundary) {
         const before = boundary;
-        const saved = await updateBoundary.mutateAsync(importPlan.boundary);
+        const importedBoundary = toSave.boundary;
+        const saved = await withLargeAreaCheck((confirmLargeArea) => updateBoundary.mutateAsync({ boundary: importedBoundary, confirmLargeArea }));
+        if (!saved) return;
         undo.record({ type: 'boundary', before });
-        controller?.fitTo(bboxOf([importPlan.boundary]), true);
+        controller?.fitTo(bboxOf([toSave.boundary]), true);
         parts.push(`boundary (${formatAcresShort(saved.acres ?? 0)})`);
       }
-      if (importPlan.units.length > 0) {
-        const created = await createBulk.mutateAsync(importPlan.units);
+      if (toSave.units.length > 0) {
+        const importedUnits = toSave.units;
+        const created = await withLargeAreaCheck((confirmLargeArea) => createBulk.mutateAsync({ units: importedUnits, confirmLargeArea }));
+        if (!created) return;
         undo.record({ type: 'create-many', unitIds: created.map((u) => u.id) });
         parts.push(`${created.length} unit${created.length === 1 ? '' : 's'}`);
       }
@@ -450,7 +525,8 @@ export function PlanMapPage() {
           <input
             ref={fileInput}
             type="file"
-            className="sr-only"
+            // Out of the accessibility tree: the "Import file" button is the one control people use.
+            hidden
             id="plan-import-file"
             accept=".geojson,.json,.kml,.kmz,.gpx,.zip"
             onChange={(e) => {
@@ -482,8 +558,23 @@ export function PlanMapPage() {
                     ? 'Click to add points; click the last point again (or press Enter) to finish. Esc to stop.'
                     : drawTarget.type === 'measure' && drawTarget.shape === 'line'
                       ? 'Click to add points; click the last point again to finish. Nothing is saved.'
-                      : 'Click to add corners; click the first corner to close the shape. Esc to stop.'}
+                      : 'Click to add corners; click the first corner to close the shape. Esc to stop.'}{' '}
+                {drawTarget.type === 'unit' && KIND_STYLES[drawTarget.kind].family === 'point' ? '' : 'Corners snap to the boundary’s and other units’ corners.'}
               </p>
+            ) : null}
+            {drawTarget && !(drawTarget.type === 'unit' && KIND_STYLES[drawTarget.kind].family === 'point') ? (
+              <div className="pointer-events-auto">
+                <DrawControls
+                  points={drawPoints}
+                  area={drawTarget.type === 'boundary' || (drawTarget.type === 'measure' ? drawTarget.shape === 'area' : KIND_STYLES[drawTarget.kind].family === 'area')}
+                  onFinish={() => controller?.finishDraw()}
+                  onUndo={() => controller?.undoVertex()}
+                  onCancel={() => {
+                    controller?.cancelDraw();
+                    setMeasure(null);
+                  }}
+                />
+              </div>
             ) : null}
             {measure ? (
               <div className="pointer-events-auto">
@@ -528,6 +619,22 @@ export function PlanMapPage() {
             </div>
           ) : null}
         </div>
+        <ConfirmDialog
+          open={largeAsk !== null}
+          title="Keep this large area?"
+          confirmLabel="Keep it"
+          onConfirm={() => {
+            largeAsk?.resolve(true);
+            setLargeAsk(null);
+          }}
+          onCancel={() => {
+            largeAsk?.resolve(false);
+            setLargeAsk(null);
+          }}
+        >
+          <p>{largeAsk?.message.replace(/;? ?to keep it anyway, confirm the large area \(confirmLargeArea: true\)\.$/, '.')}</p>
+          <p className="mt-2 text-slate">Cancel leaves the plan as it was.</p>
+        </ConfirmDialog>
         <aside aria-label="Plan ledger" className="max-h-[45vh] w-full shrink-0 overflow-y-auto border-t border-rule bg-card px-4 py-4 lg:max-h-none lg:w-[22rem] lg:border-l lg:border-t-0">
           {importState && importPlan ? (
             <ImportPanel

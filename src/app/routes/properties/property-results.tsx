@@ -8,7 +8,7 @@ import { SurveyForm } from '../../../features/results/components/survey-form';
 import { HarvestForm } from '../../../features/results/components/harvest-form';
 import { HarvestTable } from '../../../features/results/components/harvest-table';
 import { SurveyEstimatesCard } from '../../../features/results/components/survey-estimates-card';
-import { AgeStructureChart, BuckDoeTrendChart, SurveyRatioChart, SurveyTrendChart } from '../../../features/results/components/results-charts';
+import { AgeStructureChart, BuckDoeTrendChart, SurveyRatioChart, SurveyTrendChart } from '../../../features/results/components/lazy-results-charts';
 import { SeasonReportsCard } from '../../../features/results/components/season-reports-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';

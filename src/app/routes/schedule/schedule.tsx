@@ -1,7 +1,15 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { addDays, formatMonthDay } from '../../../../shared/domain/planting-windows';
 import { TASK_STATUSES, weekStart } from '../../../../shared/domain/tasks';
+import { TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
+import { useUpdateTask } from '../../../features/schedule/api/update-task';
+import { useAssignTasks } from '../../../features/schedule/api/assign-tasks';
+import { datesText } from '../../../features/schedule/components/task-text';
+import type { DraggedDates } from '../../../features/schedule/lib/timeline';
+import { useToast } from '../../../components/ui/toast';
+import { ApiError } from '../../../lib/api-client';
+import { LIST_PAGE } from '../../../../shared/schemas/common';
 import { useTasks } from '../../../features/schedule/api/get-tasks';
 import { useProperties } from '../../../features/properties/api/get-properties';
 import { useTeam } from '../../../features/team/api/team';
@@ -81,7 +89,12 @@ export function SchedulePage() {
   const today = todayUtc();
   const params = readScheduleParams(search, today);
   // Query keys compare by value, so a fresh object each render asks for nothing new.
-  const query = taskQueryFor(params);
+  const filter = taskQueryFor(params);
+  // The list is paged: "Show more" asks for a longer page; a new filter starts again at one page.
+  const filterKey = JSON.stringify(filter);
+  const [more, setMore] = useState<{ key: string; pages: number }>({ key: filterKey, pages: 1 });
+  const pages = more.key === filterKey ? more.pages : 1;
+  const query = pages > 1 ? { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * LIST_PAGE.defaultLimit) } : filter;
   const tasks = useTasks(query);
   const team = useTeam();
   const properties = useProperties();
@@ -89,6 +102,37 @@ export function SchedulePage() {
     () => (team.data ?? []).filter((m) => m.status === 'active' && (m.role === 'crew' || m.role === 'consultant' || m.role === 'owner')).map((m) => ({ id: m.id, name: m.name, role: m.role })),
     [team.data],
   );
+  const update = useUpdateTask();
+  const assign = useAssignTasks();
+  const toast = useToast();
+  const failure = (e: unknown, what: string) => (e instanceof ApiError ? e.message : `${what} Check your connection and try again.`);
+  // A dragged bar: the same schema as the panel's form, then the same route (the server's checks apply).
+  const move = (task: TaskDto, dates: DraggedDates) => {
+    const parsed = TaskUpdateSchema.safeParse({ startDate: dates.startDate, endDate: dates.endDate });
+    if (!parsed.success) {
+      toast('error', `${task.name} was not moved: ${parsed.error.issues[0]?.message ?? 'the dates are not valid'}.`);
+      return;
+    }
+    update.mutate(
+      { taskId: task.id, input: parsed.data },
+      {
+        onSuccess: (saved) => toast('success', `${saved.name} on ${saved.unitName} moved to ${datesText(saved)}.`),
+        onError: (e) => toast('error', `${task.name} was not moved: ${failure(e, 'The new dates were not saved.')}`),
+      },
+    );
+  };
+  const assignSelected = (taskIds: number[], assigneeId: number | null) =>
+    assign.mutateAsync({ taskIds, assigneeId }).then(
+      (saved) => {
+        const who = assigneeId === null ? 'nobody' : (people.find((p) => p.id === assigneeId)?.name ?? 'the crew member');
+        toast('success', `${saved.length} ${saved.length === 1 ? 'task' : 'tasks'} assigned to ${who}.`);
+        return true;
+      },
+      (e: unknown) => {
+        toast('error', `Nothing was assigned: ${failure(e, 'The tasks were not saved.')}`);
+        return false;
+      },
+    );
   const change = (c: Change, replace = false) => setSearch((cur) => writeScheduleParams(cur, c), { replace });
   const open = (taskId: number) => change({ task: taskId });
   const list = tasks.data?.tasks ?? [];
@@ -143,6 +187,20 @@ export function SchedulePage() {
       <Filters params={params} onChange={change} people={people} properties={properties.data ?? []} />
       <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="min-w-0" aria-busy={tasks.isFetching || undefined}>
+          {tasks.data?.page && tasks.data.page.total > list.length ? (
+            <p className="mb-2 flex flex-wrap items-center gap-3 text-sm text-slate" role="status">
+              <span className="tabular-nums">
+                Showing {list.length.toLocaleString('en-US')} of {tasks.data.page.total.toLocaleString('en-US')} tasks
+              </span>
+              {query.limit === undefined || query.limit < LIST_PAGE.maxLimit ? (
+                <Button variant="secondary" size="sm" onClick={() => setMore({ key: filterKey, pages: pages + 1 })}>
+                  Show more
+                </Button>
+              ) : (
+                <span>Narrow the dates or filters to see the rest.</span>
+              )}
+            </p>
+          ) : null}
           {tasks.isPending ? (
             <Loading label="Loading the schedule…" />
           ) : tasks.isError ? (
@@ -154,7 +212,7 @@ export function SchedulePage() {
           ) : params.view === 'week' ? (
             <WeekList tasks={list} monday={params.week} today={today} onOpen={open} />
           ) : (
-            <TimelineView tasks={list} from={params.from} to={params.to} by={params.by} today={today} onOpen={open} />
+            <TimelineView tasks={list} from={params.from} to={params.to} by={params.by} today={today} people={people} assigning={assign.isPending} onOpen={open} onMove={move} onAssign={assignSelected} />
           )}
         </div>
         {tasks.data ? <WarningsPanel warnings={tasks.data.warnings} onOpen={open} /> : null}

@@ -13,7 +13,9 @@ import { useToast } from '../../../components/ui/toast';
 import { formatRelative } from '../../../lib/format';
 import { paths } from '../../../config/paths';
 import { FirmProfileForm } from '../../../features/firm/components/firm-profile-form';
+import { JobsCard } from '../../../features/jobs/components/jobs-card';
 import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
+import { UndeliveredMailCard } from '../../../features/outbox/components/undelivered-mail-card';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Client contact' };
 const STATUS_STYLE: Record<string, string> = { active: 'bg-moss/10 text-moss-deep', invited: 'bg-ochre/20 text-ink', disabled: 'bg-rule text-slate' };
@@ -91,6 +93,7 @@ export function TeamPage() {
           <FirmSettingsForm />
         </Card>
       ) : null}
+      {isOwner ? <UndeliveredMailCard /> : null}
       <Card title="Invite someone">
         <InviteForm isOwner={isOwner} />
       </Card>
@@ -138,6 +141,7 @@ export function TeamPage() {
           </table>
         )}
       </Card>
+      <JobsCard />
     </div>
   );
 }

@@ -1,20 +1,20 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api, ApiError } from '../../../lib/api-client';
-import type { SessionUser } from '../../../../shared/schemas/auth';
+import { getMe as readMe } from './session-requests';
 import { setFirmZone } from '../../../lib/firm-clock';
+import type { SessionUser } from '../../../../shared/schemas/auth';
 
-/** The signed-in user, or null when nobody is signed in. */
+/** The signed-in user, or null when nobody is signed in; records the firm's time zone for the clock. */
 export async function getMe(): Promise<SessionUser | null> {
-  try {
-    const body = await api.get<{ user: SessionUser }>('/api/auth/me');
-    setFirmZone(body.user.firmTimezone);
-    return body.user;
-  } catch (err) {
-    if (err instanceof ApiError && err.status === 401) return null;
-    throw err;
-  }
+  const user = await readMe();
+  if (user) setFirmZone(user.firmTimezone);
+  return user;
 }
 
 export const getMeQueryOptions = () => queryOptions({ queryKey: ['auth', 'me'], queryFn: getMe, staleTime: 60_000 });
 
-export const useMe = () => useQuery(getMeQueryOptions());
+/** The signed-in user (a cache restored offline also sets the firm's zone). */
+export function useMe() {
+  const me = useQuery(getMeQueryOptions());
+  if (me.data) setFirmZone(me.data.firmTimezone);
+  return me;
+}

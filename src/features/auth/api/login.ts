@@ -1,40 +1,22 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '../../../lib/api-client';
-import type { LoginInput, SessionUser } from '../../../../shared/schemas/auth';
-import { setFirmZone } from '../../../lib/firm-clock';
+import { forgetPersistedQueries } from '../../../lib/query-persistence';
+import { paths } from '../../../config/paths';
+import { login } from './session-requests';
 
-interface SignInAnswer {
-  user: SessionUser;
-  csrfToken: string;
-}
+export { login };
 
-/** Signs in; the session is new, so its CSRF token replaces the old one. */
-export async function login(input: LoginInput): Promise<SessionUser> {
-  const body = await api.post<SignInAnswer>('/api/auth/login', input);
-  setCsrfToken(body.csrfToken);
-  return body.user;
-}
-
-export function useLogin() {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: login,
-    onSuccess: (user) => {
-      qc.clear();
-      setFirmZone(user.firmTimezone);
-      qc.setQueryData(['auth', 'me'], user);
-    },
-  });
-}
-
+/** Signs out, forgets what this person saw (persisted cache, memory) and leaves for the sign-in page with a full page load. */
 export function useLogout() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<void>('/api/auth/logout'),
-    onSettled: () => {
+    onSettled: async () => {
       setCsrfToken(null);
+      // Nothing this person saw stays on the phone for the next one.
+      await forgetPersistedQueries();
       qc.clear();
-      qc.setQueryData(['auth', 'me'], null);
+      window.location.replace(paths.login);
     },
   });
 }

@@ -17,7 +17,7 @@ export function FirstSteps({ clients }: { clients: number }) {
       <ol className="flex flex-col gap-3" aria-label="First steps">
         {steps.map((s, i) => (
           <li key={s.title} className="flex items-start gap-3 text-sm">
-            <span className={`mt-0.5 flex h-6 w-6 shrink-0 items-center justify-center rounded-full text-xs font-bold ${s.done ? 'bg-moss text-white' : 'border border-rule text-slate'}`} aria-hidden="true">
+            <span className={`mt-0.5 flex shrink-0 items-center justify-center rounded-full text-xs font-bold ${s.done ? 'bg-moss text-white' : 'border border-rule text-slate'}`} style={{ width: '1.5rem', height: '1.5rem' }} aria-hidden="true">
               {s.done ? '✓' : i + 1}
             </span>
             <span className="flex-1">

@@ -1,5 +1,5 @@
 import { api } from '../../../lib/api-client';
-import { IDEMPOTENCY_HEADER } from '../../../../shared/schemas/task';
+import { IDEMPOTENCY_HEADER } from '../../../../shared/domain/tasks';
 import { completionForm, type QueuedCompletion } from '../lib/completion-queue';
 import type { FieldTask } from './get-my-tasks';
 

@@ -9,12 +9,13 @@ export type FieldTask = TaskDto & { unitGeometry?: Geometry | null };
 
 /**
  * The signed-in worker's tasks: a crew member gets only their own (the server sees to it, without
- * prices); staff opening the field sheet ask for the tasks assigned to themselves.
+ * prices); staff opening the field sheet ask for the tasks assigned to themselves. The units'
+ * outlines come only when asked (`geometry=true`), for the sketches.
  */
 export const getMyTasks = (me: { id: number; role: string }, signal?: AbortSignal) =>
-  getData<TaskListDto & { tasks: FieldTask[] }>(me.role === 'crew' ? '/api/tasks' : `/api/tasks?assigneeId=${me.id}`, signal);
+  getData<TaskListDto & { tasks: FieldTask[] }>(me.role === 'crew' ? '/api/tasks?geometry=true' : `/api/tasks?assigneeId=${me.id}&geometry=true`, signal);
 
 export const getMyTasksQueryOptions = (me: { id: number; role: string }) => queryOptions({ queryKey: fieldKeys.mine, queryFn: ({ signal }) => getMyTasks(me, signal) });
 
 /** The worker's tasks, refreshed every few minutes while the sheet is open. */
-export const useMyTasks = (me: { id: number; role: string }) => useQuery({ ...getMyTasksQueryOptions(me), refetchInterval: 5 * 60_000 });
+export const useMyTasks = (me: { id: number; role: string }, enabled = true) => useQuery({ ...getMyTasksQueryOptions(me), refetchInterval: 5 * 60_000, enabled });

@@ -30,11 +30,11 @@ export function KindChip({ kind }: { kind: string | null }) {
   );
 }
 
-/** One task on the field sheet: what, where, when; the whole card opens the task. */
+/** One task on the field sheet: what, where, when; the whole card opens the task (its text is its name, so what is seen is what is heard). */
 export function TaskCard({ task, waitingToSend }: { task: FieldTask; waitingToSend: boolean }) {
   const dates = plannedDates(task);
   return (
-    <Link to={paths.fieldTask(task.id)} className="block rounded-md border border-rule bg-card p-3 hover:border-moss focus:outline-none focus:ring-2 focus:ring-moss/40" aria-label={`${task.name} — ${task.unitName}, ${task.propertyName}`}>
+    <Link to={paths.fieldTask(task.id)} className="block rounded-md border border-rule bg-card p-3 hover:border-moss focus:outline-none focus:ring-2 focus:ring-moss/40">
       <div className="flex items-start justify-between gap-2">
         <span className="font-semibold text-ink">{task.name}</span>
         <TaskStatusChip task={task} waitingToSend={waitingToSend} />

@@ -12,6 +12,10 @@ import { Button } from '../../../components/ui/button';
 import { ErrorPanel, Loading } from '../../../components/ui/card';
 import { useToast } from '../../../components/ui/toast';
 
+// One-off sizes as inline styles: new utility classes would grow the stylesheet every page (the field sheet too) loads first.
+const LOGO_BOX = { height: '4rem' } as const;
+const LOGO_IMAGE = { maxHeight: '3.5rem', maxWidth: '9rem', objectFit: 'contain' } as const;
+
 const whole = (what: string, min: number, max: number) =>
   z.coerce.number({ message: `enter ${what} as a number` }).int({ message: `${what} is in whole days` }).min(min, { message: `at least ${min}` }).max(max, { message: `at most ${max}` });
 
@@ -106,8 +110,8 @@ function LogoPicker({ logoUrl }: { logoUrl: string | null }) {
   };
   return (
     <div className="flex items-center gap-4">
-      <div className="flex h-16 w-40 items-center justify-center rounded border border-rule bg-white">
-        {logoUrl ? <img src={logoUrl} alt="The firm’s logo" className="max-h-14 max-w-36 object-contain" /> : <span className="text-xs text-slate">No logo yet</span>}
+      <div className="flex w-40 items-center justify-center rounded border border-rule bg-white" style={LOGO_BOX}>
+        {logoUrl ? <img src={logoUrl} alt="The firm’s logo" style={LOGO_IMAGE} /> : <span className="text-xs text-slate">No logo yet</span>}
       </div>
       <div className="flex flex-col gap-1">
         <label className="text-sm font-semibold text-ink" htmlFor="firm-logo">

@@ -15,15 +15,16 @@ const FormSchema = z.object({
   tileAttribution: z.string().trim().max(200),
   taxRatePct: z.coerce.number({ message: 'enter the rate as a number' }).min(0, { message: 'cannot be negative' }).max(30, { message: 'above 30 % looks like a typing slip' }),
   timezone: z.string().refine(isTimeZone, { message: 'choose the firm’s time zone from the list' }),
+  idleTimeoutHours: z.coerce.number({ message: 'enter the hours as a number' }).min(0.25, { message: 'at least a quarter of an hour' }).max(168, { message: 'at most 168 hours (a week)' }),
 });
 
-/** The owner's firm settings: imagery tile service, the default sales-tax rate and the firm's time zone. */
+/** The owner's firm settings: imagery tile service, the default sales-tax rate, the firm's time zone and the idle sign-out time. */
 export function FirmSettingsForm() {
   const firm = useFirm();
   if (firm.isPending) return <Loading />;
   if (firm.isError) return <ErrorPanel error={firm.error} />;
   const s = firm.data.settings;
-  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct, timezone: firm.data.timezone }} />;
+  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct, timezone: firm.data.timezone, idleTimeoutHours: s.idleTimeoutHours }} />;
 }
 
 function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema> }) {
@@ -34,7 +35,7 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
   const zone = form.watch('timezone');
   const submit = form.handleSubmit((v) =>
     update.mutate(
-      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct, timezone: v.timezone },
+      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct, timezone: v.timezone, idleTimeoutHours: v.idleTimeoutHours },
       { onSuccess: () => toast('success', 'Firm settings saved.'), onError: (e) => toast('error', e.message) },
     ),
   );
@@ -44,7 +45,7 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
         className="md:col-span-2"
         label="Imagery tile service (XYZ address)"
         placeholder="https://tiles.example.com/{z}/{x}/{y}.jpg"
-        hint="Optional. When set, plan maps show this imagery under the plan. Leave empty for the plain offline background."
+        hint="Optional, https only. When set, plan maps show this imagery under the plan. Leave empty for the plain offline background."
         error={form.formState.errors.tileUrlTemplate?.message}
         {...form.register('tileUrlTemplate')}
       />
@@ -62,6 +63,7 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
           </option>
         ))}
       </SelectField>
+      <TextField label="Sign out after idle time (hours)" inputMode="decimal" hint="Everyone in the firm is signed out after this long without using Browseline (default 8). Sessions end 14 days after sign-in in any case." error={form.formState.errors.idleTimeoutHours?.message} {...form.register('idleTimeoutHours')} />
       <div className="md:col-span-2">
         <Button type="submit" busy={update.isPending}>Save firm settings</Button>
       </div>

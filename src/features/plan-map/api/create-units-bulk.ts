@@ -4,8 +4,8 @@ import type { UnitCreateInput, UnitDto } from '../../../../shared/schemas/unit';
 import { applyUnitChanges } from './get-units';
 
 /** POST /api/properties/:id/units/bulk: several units in one transaction (all or none). */
-export async function createUnitsBulk(propertyId: number, units: UnitCreateInput[]): Promise<UnitDto[]> {
-  const body = await api.post<{ data: UnitDto[] }>(`/api/properties/${propertyId}/units/bulk`, { units });
+export async function createUnitsBulk(propertyId: number, units: UnitCreateInput[], confirmLargeArea = false): Promise<UnitDto[]> {
+  const body = await api.post<{ data: UnitDto[] }>(`/api/properties/${propertyId}/units/bulk`, confirmLargeArea ? { units, confirmLargeArea } : { units });
   return body.data;
 }
 
@@ -13,7 +13,8 @@ export async function createUnitsBulk(propertyId: number, units: UnitCreateInput
 export function useCreateUnitsBulk(propertyId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (units: UnitCreateInput[]) => createUnitsBulk(propertyId, units),
+    mutationFn: (arg: UnitCreateInput[] | { units: UnitCreateInput[]; confirmLargeArea: boolean }) =>
+      Array.isArray(arg) ? createUnitsBulk(propertyId, arg) : createUnitsBulk(propertyId, arg.units, arg.confirmLargeArea),
     onSuccess: (units) => applyUnitChanges(qc, propertyId, { upsert: units }),
   });
 }

@@ -1,28 +1,8 @@
 import { useMutation } from '@tanstack/react-query';
-import type { Geometry } from 'geojson';
-import { ApiError, getCsrfToken } from '../../../lib/api-client';
-import type { KindFamily, UnitKind } from '../../../../shared/domain/unit-kinds';
+import { ApiError, getCsrfToken, getData } from '../../../lib/api-client';
+import type { ImportFullFeatureDto, ImportPreviewDto } from '../../../../shared/schemas/geo-import';
 
-/** One feature found in an uploaded file (a preview: nothing is saved yet). */
-export interface ImportedFeatureDto {
-  index: number;
-  part?: number;
-  name: string;
-  geometry: Geometry;
-  family: KindFamily;
-  /** The kind the file states, when it fits the family. */
-  kind?: UnitKind;
-  properties: Record<string, unknown>;
-  notes: string[];
-}
-
-/** What POST /api/properties/:id/imports answers. */
-export interface ImportPreviewDto {
-  format: string;
-  features: ImportedFeatureDto[];
-  skipped: { index: number; part?: number; name?: string; reason: string }[];
-  warnings: string[];
-}
+export type { ImportPreviewDto, ImportPreviewFeatureDto as ImportedFeatureDto } from '../../../../shared/schemas/geo-import';
 
 /** Upload progress from 0 to 1, or null while the server reads the file after the upload. */
 export type ImportProgress = (fraction: number | null) => void;
@@ -76,4 +56,13 @@ export function useImportFile(propertyId: number) {
   return useMutation({
     mutationFn: ({ file, onProgress }: { file: File; onProgress?: ImportProgress }) => importFile(propertyId, file, onProgress),
   });
+}
+
+/**
+ * GET /api/properties/:id/imports/:importId/features: the full geometries of the chosen preview
+ * items (the preview itself carries simplified outlines only).
+ */
+export function fetchImportGeometries(propertyId: number, importId: string, items: number[]): Promise<ImportFullFeatureDto[]> {
+  if (items.length === 0) return Promise.resolve([]);
+  return getData<ImportFullFeatureDto[]>(`/api/properties/${propertyId}/imports/${importId}/features?items=${items.join(',')}`);
 }

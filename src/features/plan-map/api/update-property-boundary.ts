@@ -4,9 +4,12 @@ import { api } from '../../../lib/api-client';
 import type { PropertyDto } from '../../../../shared/schemas/property';
 import { planMapKeys } from './keys';
 
-/** PATCH /api/properties/:id {boundary}: replaces the boundary (null clears it). */
-export async function updatePropertyBoundary(propertyId: number, boundary: Polygon | MultiPolygon | null): Promise<PropertyDto> {
-  const body = await api.patch<{ data: PropertyDto }>(`/api/properties/${propertyId}`, { boundary });
+/**
+ * PATCH /api/properties/:id {boundary}: replaces the boundary (null clears it). A boundary over the
+ * firm's large-area threshold needs `confirmLargeArea` (the server answers 422 naming it otherwise).
+ */
+export async function updatePropertyBoundary(propertyId: number, boundary: Polygon | MultiPolygon | null, confirmLargeArea = false): Promise<PropertyDto> {
+  const body = await api.patch<{ data: PropertyDto }>(`/api/properties/${propertyId}`, confirmLargeArea ? { boundary, confirmLargeArea } : { boundary });
   return body.data;
 }
 
@@ -22,7 +25,8 @@ export function applyProperty(qc: QueryClient, property: PropertyDto): void {
 export function useUpdatePropertyBoundary(propertyId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (boundary: Polygon | MultiPolygon | null) => updatePropertyBoundary(propertyId, boundary),
+    mutationFn: (arg: Polygon | MultiPolygon | null | { boundary: Polygon | MultiPolygon | null; confirmLargeArea: boolean }) =>
+      arg && 'boundary' in arg ? updatePropertyBoundary(propertyId, arg.boundary, arg.confirmLargeArea) : updatePropertyBoundary(propertyId, arg),
     onSuccess: (property) => applyProperty(qc, property),
   });
 }

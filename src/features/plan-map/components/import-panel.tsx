@@ -8,6 +8,9 @@ import { formatAcresShort, formatFeet } from '../lib/measure-format';
 import { KindSwatch } from './kind-swatch';
 
 function featureMeasure(f: ImportPreviewDto['features'][number]): string {
+  // Measured by the server on the full geometry (the preview draws a simplified outline).
+  if (f.acres !== undefined) return formatAcresShort(f.acres);
+  if (f.lengthFt !== undefined) return formatFeet(f.lengthFt);
   try {
     if (f.geometry.type === 'Polygon' || f.geometry.type === 'MultiPolygon') return formatAcresShort(measureArea(f.geometry).acres);
     if (f.geometry.type === 'LineString' || f.geometry.type === 'MultiLineString') return formatFeet(measureLine(f.geometry).lengthFt);
@@ -87,7 +90,7 @@ export function ImportPanel({
                     onChange={(e) => onChoose(i, e.target.value as ImportChoice)}
                     className="flex-1 rounded border border-rule bg-white px-2 py-1 text-sm focus:border-moss focus:outline-none"
                   >
-                    {choicesFor(f.family).map((c) => (
+                    {choicesFor(f.family, f.closableGapM !== undefined).map((c) => (
                       <option key={c} value={c}>
                         {choiceLabel(c)}
                         {f.kind && c === f.kind ? ' (from the file)' : ''}

@@ -28,7 +28,7 @@ export function PlaceSearch({ onPick }: { onPick: (place: PlaceDto) => void }) {
     setOpen(false);
   };
   return (
-    <div className="relative w-72 max-w-full">
+    <div className="relative max-w-full" style={{ width: '18rem' }}>
       <input
         type="search"
         aria-label="Find a place"
@@ -51,7 +51,7 @@ export function PlaceSearch({ onPick }: { onPick: (place: PlaceDto) => void }) {
         className="w-full rounded border border-rule bg-card/95 px-3 py-1.5 text-sm text-ink shadow-sm placeholder:text-slate/70 focus:border-moss focus:outline-none focus:ring-2 focus:ring-moss/30"
       />
       {open && query.length >= 2 ? (
-        <ul id={listId} role="listbox" aria-label="Places found" className="absolute inset-x-0 top-full mt-1 max-h-72 overflow-auto rounded border border-rule bg-card text-sm shadow-md">
+        <ul id={listId} role="listbox" aria-label="Places found" className="absolute inset-x-0 mt-1 overflow-y-auto rounded border border-rule bg-card text-sm shadow-md" style={{ top: '100%', maxHeight: '18rem' }}>
           {places.isError ? (
             <li className="px-3 py-2 text-clay">{places.error.message}</li>
           ) : results.length === 0 ? (

@@ -50,6 +50,7 @@ export function PlanMapCanvas({
       onMeasure: (m) => callbacksRef.current.onMeasure?.(m),
       onToolEnded: () => callbacksRef.current.onToolEnded?.(),
       onTilesFailed: (m) => callbacksRef.current.onTilesFailed?.(m),
+      onDrawProgress: (n) => callbacksRef.current.onDrawProgress?.(n),
     };
     const controller = new PlanMapController(containerRef.current, forward);
     controllerRef.current = controller;

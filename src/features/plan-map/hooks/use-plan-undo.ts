@@ -48,19 +48,20 @@ export function usePlanUndo(propertyId: number, hooks: { onUnitGone?: (unitId: n
           op.unitIds.forEach((id) => hooksRef.current.onUnitGone?.(id));
           break;
         case 'update': {
-          const unit = await updateUnit(op.unitId, op.before);
+          // Undo puts back what was saved before, confirmed then if it was large.
+          const unit = await updateUnit(op.unitId, { ...op.before, confirmLargeArea: true });
           applyUnitChanges(qc, propertyId, { upsert: [unit] });
           break;
         }
         case 'delete': {
-          const unit = await createUnit(propertyId, op.unit);
+          const unit = await createUnit(propertyId, { ...op.unit, confirmLargeArea: true });
           applyUnitChanges(qc, propertyId, { upsert: [unit] });
           rest = remapUnitId(rest, op.unitId, unit.id);
           hooksRef.current.onUnitBack?.(unit.id);
           break;
         }
         case 'boundary': {
-          const property = await updatePropertyBoundary(propertyId, op.before);
+          const property = await updatePropertyBoundary(propertyId, op.before, true);
           applyProperty(qc, property);
           break;
         }

@@ -1,5 +1,6 @@
 /** What becomes of each feature found in an imported file: the boundary, a unit of some kind, or nothing. */
 import type { Geometry, MultiPolygon, Polygon, Position } from 'geojson';
+import { closeTrack } from '../../../../shared/domain/track-closing';
 import { AREA_KINDS, KIND_STYLES, LINE_KINDS, POINT_KINDS, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import { LIMITS } from '../../../../shared/limits';
 import type { UnitCreateInput } from '../../../../shared/schemas/unit';
@@ -15,6 +16,8 @@ export interface ImportCandidate {
   family: KindFamily;
   kind?: UnitKind;
   geometry: Geometry;
+  /** Set on an open line whose ends lie close enough to be closed into an area (metres apart). */
+  closableGapM?: number;
 }
 
 const BOUNDARY_WORDS = /\b(boundary|property line|parcel|outline)\b/i;
@@ -29,10 +32,10 @@ export function defaultImportChoice(feature: ImportCandidate): ImportChoice {
   return DEFAULT_KIND_BY_FAMILY[feature.family];
 }
 
-/** The choices that fit a feature's family, in the order the picker lists them. */
-export function choicesFor(family: KindFamily): ImportChoice[] {
+/** The choices that fit a feature's family, in the order the picker lists them; a closable track may also become an area. */
+export function choicesFor(family: KindFamily, closable = false): ImportChoice[] {
   if (family === 'area') return ['boundary', ...AREA_KINDS, 'skip'];
-  if (family === 'line') return [...LINE_KINDS, 'skip'];
+  if (family === 'line') return closable ? [...LINE_KINDS, 'boundary', ...AREA_KINDS, 'skip'] : [...LINE_KINDS, 'skip'];
   return [...POINT_KINDS, 'skip'];
 }
 
@@ -59,10 +62,16 @@ export function planImportSave(features: readonly ImportCandidate[], choices: re
   const rings: Position[][][] = [];
   const units: UnitCreateInput[] = [];
   const problems: string[] = [];
-  features.forEach((f, i) => {
+  features.forEach((original, i) => {
     const choice = choices[i] ?? 'skip';
-    const label = f.name.trim() || `Feature ${i + 1}`;
+    const label = original.name.trim() || `Feature ${i + 1}`;
     if (choice === 'skip') return;
+    // A walked track with its ends close together, chosen as an area: join its ends.
+    const wantsArea = choice === 'boundary' || KIND_STYLES[choice]?.family === 'area';
+    const f: ImportCandidate =
+      wantsArea && original.family === 'line' && original.closableGapM !== undefined && original.geometry.type === 'LineString'
+        ? { ...original, family: 'area', geometry: closeTrack(original.geometry) }
+        : original;
     if (choice === 'boundary') {
       if (f.geometry.type === 'Polygon') rings.push(f.geometry.coordinates);
       else if (f.geometry.type === 'MultiPolygon') rings.push(...f.geometry.coordinates);

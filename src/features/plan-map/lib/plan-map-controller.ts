@@ -14,9 +14,10 @@ import {
   TerraDrawSelectMode,
   type GeoJSONStoreFeatures,
   type HexColor,
+  type TerraDrawMouseEvent,
 } from 'terra-draw';
 import { TerraDrawMapLibreGLAdapter } from 'terra-draw-maplibre-gl-adapter';
-import type { BBox, Geometry, LineString, MultiPolygon, Polygon } from 'geojson';
+import type { BBox, Geometry, LineString, MultiPolygon, Polygon, Position } from 'geojson';
 import { KIND_STYLES, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import { bboxOf, measureArea, measureLine } from '../../../../shared/domain/geometry';
 import { CARD, INK, MOSS_DEEP, OCHRE, SKY, offlineStyle } from './map-style';
@@ -38,6 +39,7 @@ import {
   type MapOverlay,
 } from './plan-layers';
 import type { FamilyCollections } from './unit-features';
+import { cursorMeasureText, SnapIndex } from './draw-assist';
 
 
 /** What a drawing tool makes. */
@@ -64,7 +66,12 @@ export interface PlanMapCallbacks {
   onTilesFailed?: (message: string) => void;
   /** The drawing tool ended by itself: Escape, or a measure was finished (it stays shown). */
   onToolEnded?: () => void;
+  /** How many points the shape being drawn has (to enable Finish and Undo point). */
+  onDrawProgress?: (points: number) => void;
 }
+
+/** Pixels within which a new corner snaps to a corner of the boundary or of another unit. */
+export const SNAP_PIXELS = 10;
 
 const MODE = {
   select: 'select',
@@ -100,6 +107,10 @@ export class PlanMapController {
   private editing: { target: EditTarget; featureId: string | number; signature: string } | null = null;
   private measureFeatureId: string | number | null = null;
   private nameMarker: Marker | null = null;
+  private cursorLabel: Marker | null = null;
+  private readonly snapIndex = new SnapIndex();
+  /** The drawing modes by name, for Finish and Undo point. */
+  private readonly drawModes = new Map<string, TerraDrawPolygonMode | TerraDrawLineStringMode>();
   private pending: (() => void)[] = [];
   private destroyed = false;
 
@@ -185,6 +196,9 @@ export class PlanMapController {
     const vertex = { coordinatePointColor: hex(CARD), coordinatePointOutlineColor: hex(INK), coordinatePointWidth: 4, coordinatePointOutlineWidth: 1.5 };
     const closing = { closingPointColor: hex(CARD), closingPointOutlineColor: hex(INK), closingPointWidth: 5, closingPointOutlineWidth: 2 };
     const editFlags = { feature: { draggable: true, coordinates: { draggable: true, midpoints: true, deletable: true } } };
+    // New corners snap to the shape's own corners and to the corners of the boundary and the units.
+    const snapping = { toCoordinate: true, toCustom: (event: TerraDrawMouseEvent) => this.snapToPlan(event) };
+    const snapStyle = { snappingPointColor: hex(OCHRE), snappingPointWidth: 6, snappingPointOutlineColor: hex(INK), snappingPointOutlineWidth: 2 };
     const adapter = new TerraDrawMapLibreGLAdapter({ map: this.map, coordinatePrecision: 9 });
     const draw = new TerraDraw({
       adapter,
@@ -220,30 +234,35 @@ export class PlanMapController {
             midPointOutlineWidth: 1.5,
           },
         }),
-        new TerraDrawPolygonMode({
+        this.keepMode(new TerraDrawPolygonMode({
           modeName: MODE.polygon,
-          styles: { fillColor: fill, fillOpacity: 0.45, outlineColor: stroke, outlineWidth: 2.5, ...closing, ...vertex },
-        }),
-        new TerraDrawLineStringMode({
+          snapping,
+          styles: { fillColor: fill, fillOpacity: 0.45, outlineColor: stroke, outlineWidth: 2.5, ...closing, ...vertex, ...snapStyle },
+        })),
+        this.keepMode(new TerraDrawLineStringMode({
           modeName: MODE.line,
-          styles: { lineStringColor: stroke, lineStringWidth: 3.5, ...closing, ...vertex },
-        }),
+          snapping,
+          styles: { lineStringColor: stroke, lineStringWidth: 3.5, ...closing, ...vertex, ...snapStyle },
+        })),
         new TerraDrawPointMode({
           modeName: MODE.point,
           styles: { pointColor: fill, pointWidth: 8, pointOutlineColor: hex(CARD), pointOutlineWidth: 2.5 },
         }),
-        new TerraDrawPolygonMode({
+        this.keepMode(new TerraDrawPolygonMode({
           modeName: MODE.boundary,
-          styles: { fillColor: hex(CARD), fillOpacity: 0.35, outlineColor: hex(INK), outlineWidth: 2.5, ...closing, ...vertex },
-        }),
-        new TerraDrawLineStringMode({
+          snapping,
+          styles: { fillColor: hex(CARD), fillOpacity: 0.35, outlineColor: hex(INK), outlineWidth: 2.5, ...closing, ...vertex, ...snapStyle },
+        })),
+        this.keepMode(new TerraDrawLineStringMode({
           modeName: MODE.measureLine,
-          styles: { lineStringColor: hex(SKY), lineStringWidth: 3, lineStringDash: [4, 3], ...closing, ...vertex },
-        }),
-        new TerraDrawPolygonMode({
+          snapping,
+          styles: { lineStringColor: hex(SKY), lineStringWidth: 3, lineStringDash: [4, 3], ...closing, ...vertex, ...snapStyle },
+        })),
+        this.keepMode(new TerraDrawPolygonMode({
           modeName: MODE.measureArea,
-          styles: { fillColor: hex(SKY), fillOpacity: 0.15, outlineColor: hex(SKY), outlineWidth: 2.5, ...closing, ...vertex },
-        }),
+          snapping,
+          styles: { fillColor: hex(SKY), fillOpacity: 0.15, outlineColor: hex(SKY), outlineWidth: 2.5, ...closing, ...vertex, ...snapStyle },
+        })),
       ],
     });
     draw.on('change', (ids, type) => this.onDrawChange(ids, type));
@@ -252,6 +271,62 @@ export class PlanMapController {
       setTimeout(() => this.onDrawFinish(id, context.action), 0);
     });
     return draw;
+  }
+
+  private keepMode<M extends TerraDrawPolygonMode | TerraDrawLineStringMode>(mode: M): M {
+    this.drawModes.set(mode.mode, mode);
+    return mode;
+  }
+
+  /** The nearest corner of the boundary or a unit within SNAP_PIXELS of the pointer, if any. */
+  private snapToPlan(event: TerraDrawMouseEvent): Position | undefined {
+    return this.snapIndex.nearest(
+      event.lng,
+      event.lat,
+      SNAP_PIXELS,
+      (lon, lat) => this.map.project([lon, lat]),
+      (x, y) => {
+        const p = this.map.unproject([x, y]);
+        return [p.lng, p.lat];
+      },
+      [event.containerX, event.containerY],
+    );
+  }
+
+  /** The corners new drawings snap to: the boundary's and every unit's. */
+  setSnapTargets(geometries: readonly Geometry[]): void {
+    this.snapIndex.set(geometries);
+  }
+
+  /** Ends the shape being drawn as if its last point were clicked again (Enter). */
+  finishDraw(): void {
+    const mode = this.draw ? this.drawModes.get(this.draw.getMode()) : undefined;
+    mode?.onKeyUp({ key: 'Enter', heldKeys: [], preventDefault: () => {} });
+  }
+
+  /** Takes back the last point of the shape being drawn. */
+  undoVertex(): void {
+    const mode = this.draw ? this.drawModes.get(this.draw.getMode()) : undefined;
+    if (mode && mode.undoSize() > 0) mode.undo();
+  }
+
+  /** The live measure next to the cursor while drawing (null hides it). */
+  private setCursorLabel(at: Position | null, text: string): void {
+    if (!at || !text) {
+      this.cursorLabel?.remove();
+      this.cursorLabel = null;
+      return;
+    }
+    if (!this.cursorLabel) {
+      const el = document.createElement('div');
+      el.dataset.testid = 'cursor-measure';
+      el.setAttribute('aria-hidden', 'true');
+      el.className = 'pointer-events-none rounded bg-ink/85 px-1.5 py-0.5 text-xs font-semibold text-white shadow whitespace-nowrap figure';
+      this.cursorLabel = new Marker({ element: el, anchor: 'left', offset: [14, 14] });
+    }
+    this.cursorLabel.getElement().textContent = text;
+    this.cursorLabel.setLngLat([at[0], at[1]]);
+    if (!this.cursorLabel.getElement().isConnected) this.cursorLabel.addTo(this.map);
   }
 
   private isIdle(): boolean {
@@ -292,6 +367,9 @@ export class PlanMapController {
   private emitMeasure(geometry: Geometry, drawing: boolean): void {
     const target = this.drawTarget;
     if (!target) return;
+    const label = drawing ? cursorMeasureText(geometry) : null;
+    this.setCursorLabel(label?.at ?? null, label?.text ?? '');
+    if (drawing) this.callbacks.onDrawProgress?.(label?.points ?? 0);
     try {
       if (geometry.type === 'LineString' && geometry.coordinates.length >= 2) {
         const m = measureLine(geometry);
@@ -311,6 +389,8 @@ export class PlanMapController {
     if (!feature) return;
     const geometry = feature.geometry as Geometry;
     if (action === 'draw') {
+      this.setCursorLabel(null, '');
+      this.callbacks.onDrawProgress?.(0);
       const target = this.drawTarget;
       if (!target) return;
       if (target.type === 'measure') {
@@ -340,6 +420,8 @@ export class PlanMapController {
   startDraw(target: DrawTarget | null): void {
     this.whenReady(() => {
       if (!this.draw) return;
+      this.setCursorLabel(null, '');
+      this.callbacks.onDrawProgress?.(0);
       this.clearMeasure();
       this.setEditing(null);
       this.drawTarget = target;
@@ -538,6 +620,7 @@ export class PlanMapController {
       /* the map may already be gone */
     }
     this.nameMarker?.remove();
+    this.cursorLabel?.remove();
     this.map.remove();
   }
 }

@@ -174,7 +174,10 @@ export function PrescriptionDetails({ view, summary = true }: { view: Prescripti
             <tbody>
               {view.lines.map((l, i) => (
                 <tr key={i} className="border-b border-rule/60 align-top">
-                  <td className="py-1 pr-2">{l.description}</td>
+                  <td className="py-1 pr-2">
+                    {l.description}
+                    {l.pricingNote ? <span className="block text-slate">Staff note: {l.pricingNote}</span> : null}
+                  </td>
                   <td className="whitespace-nowrap py-1 pr-2 text-right tabular-nums text-slate">
                     {formatQuantity(l.quantity)} {l.unit}
                   </td>

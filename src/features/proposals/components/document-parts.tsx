@@ -224,7 +224,8 @@ export function ApprovalRecord({ approval, lines, showTechnical = false }: { app
       </p>
       <p className="mt-1">{chosen.length ? `Options chosen: ${chosen.map((l) => l.description).join('; ')}.` : 'No options chosen.'}</p>
       <p className="mt-1 text-slate">
-        Fingerprint of the approved content (SHA-256): <code className="break-all font-mono text-xs text-ink">{approval.contentHash}</code>
+        Approval fingerprint <span className="text-xs">(a code computed from everything approved; any change would change it)</span>:{' '}
+        <code className="break-all font-mono text-xs text-ink">{approval.contentHash}</code>
       </p>
       {showTechnical && (approval.ip || approval.userAgent) ? (
         <p className="mt-1 break-words text-xs text-slate">

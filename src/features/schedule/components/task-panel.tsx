@@ -1,8 +1,8 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { Controller, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { TaskUpdateSchema, type TaskDto, type TaskUpdateInput } from '../../../../shared/schemas/task';
+import { TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatMonthDay } from '../../../../shared/domain/planting-windows';
 import { Button } from '../../../components/ui/button';
@@ -17,6 +17,7 @@ import { useUpdateTask } from '../api/update-task';
 import { useReopenTask } from '../api/reopen-task';
 import { TaskStatusChip, WARNING_LABELS } from './task-status-chip';
 import { datesText, windowText } from './task-text';
+import { taskChanges } from '../lib/task-changes';
 
 /** Someone a task can be given to. */
 export interface Assignable {
@@ -40,12 +41,7 @@ function ScheduleForm({ task, people }: { task: TaskDto; people: readonly Assign
   });
   const errors = form.formState.errors;
   const submit = form.handleSubmit((values) => {
-    const dirty = form.formState.dirtyFields;
-    const input: TaskUpdateInput = {};
-    if (dirty.assigneeId) input.assigneeId = values.assigneeId ?? null;
-    if (dirty.startDate) input.startDate = values.startDate ?? null;
-    if (dirty.endDate) input.endDate = values.endDate ?? null;
-    if (dirty.notes) input.notes = values.notes ?? null;
+    const input = taskChanges(task, values);
     if (Object.keys(input).length === 0) {
       setServerError('Nothing changed: pick a crew member, a date or write a note first.');
       return;
@@ -68,27 +64,35 @@ function ScheduleForm({ task, people }: { task: TaskDto; people: readonly Assign
   const rootMessage = (errors as { message?: string }).message ?? errors.root?.message;
   return (
     <form onSubmit={submit} noValidate aria-label="Schedule this task" className="flex flex-col gap-3">
-      <SelectField label="Crew member" error={errors.assigneeId?.message} {...form.register('assigneeId', { setValueAs: idOrNull })}>
-        <option value="">Unassigned</option>
-        {crew.length > 0 ? (
-          <optgroup label="Crew">
-            {crew.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.name}
-              </option>
-            ))}
-          </optgroup>
-        ) : null}
-        {staff.length > 0 ? (
-          <optgroup label="Consultants">
-            {staff.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.name}
-              </option>
-            ))}
-          </optgroup>
-        ) : null}
-      </SelectField>
+      {/* Controlled, so the saved crew member shows even when the team list arrives after the task. */}
+      <Controller
+        control={form.control}
+        name="assigneeId"
+        render={({ field }) => (
+          <SelectField label="Crew member" error={errors.assigneeId?.message} name={field.name} ref={field.ref} onBlur={field.onBlur} value={field.value === null || field.value === undefined ? '' : String(field.value)} onChange={(e) => field.onChange(idOrNull(e.target.value))}>
+            <option value="">Unassigned</option>
+            {task.assigneeId !== null && !people.some((p) => p.id === task.assigneeId) ? <option value={task.assigneeId}>{task.assigneeName ?? 'The crew member now assigned'}</option> : null}
+            {crew.length > 0 ? (
+              <optgroup label="Crew">
+                {crew.map((p) => (
+                  <option key={p.id} value={p.id}>
+                    {p.name}
+                  </option>
+                ))}
+              </optgroup>
+            ) : null}
+            {staff.length > 0 ? (
+              <optgroup label="Consultants">
+                {staff.map((p) => (
+                  <option key={p.id} value={p.id}>
+                    {p.name}
+                  </option>
+                ))}
+              </optgroup>
+            ) : null}
+          </SelectField>
+        )}
+      />
       <div className="grid grid-cols-1 gap-3 min-[420px]:grid-cols-2">
         <TextField label="Start date" type="date" hint={`Window ${windowText(task)}`} error={errors.startDate?.message} {...form.register('startDate', { setValueAs: blankToNull })} />
         <TextField label="End date" type="date" hint="Leave empty for a one-day task." error={errors.endDate?.message} {...form.register('endDate', { setValueAs: blankToNull })} />

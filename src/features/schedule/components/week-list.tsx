@@ -10,7 +10,6 @@ function TaskRow({ task, onOpen }: { task: TaskDto; onOpen: (id: number) => void
         type="button"
         onClick={() => onOpen(task.id)}
         data-task-id={task.id}
-        aria-label={`${task.name} on ${task.unitName}, ${task.propertyName}: ${task.assigneeName ?? 'unassigned'}, ${task.status}`}
         className="grid w-full grid-cols-1 gap-x-4 gap-y-0.5 rounded px-2 py-2 text-left text-sm hover:bg-rule/30 focus-visible:outline focus-visible:outline-2 focus-visible:outline-moss sm:grid-cols-[minmax(0,1.3fr)_minmax(0,1.2fr)_minmax(0,0.8fr)_auto]"
       >
         <span className="min-w-0">

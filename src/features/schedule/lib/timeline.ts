@@ -140,3 +140,86 @@ export function weekGroups<T extends LayoutTask>(tasks: readonly T[], monday: Is
   }
   return [...days, { date: null, tasks: unscheduled }];
 }
+
+/** The text a task's bar carries: its step, and in the by-crew view the unit too (a crew member's row holds several units). */
+export function laneText(task: Pick<LayoutTask, 'name' | 'unitName'>, by: GroupBy): string {
+  return by === 'crew' ? `${task.name} · ${task.unitName}` : task.name;
+}
+
+/** Where a bar's label goes: inside the bar when it fits whole, else beside it where there is room. */
+export interface LabelPlacement {
+  where: 'inside' | 'after' | 'before';
+  /** The label's left edge across the lane, in px (for 'before', its right edge sits just left of the bar). */
+  leftPx: number;
+  /** The room the label may take, in px (it is truncated only when neither side has room for it). */
+  maxWidthPx: number;
+}
+
+/** The bar's inner padding and the gap between a bar (or its warning mark) and a label beside it, in px. */
+export const LABEL_PAD_PX = 6;
+export const LABEL_GAP_PX = 6;
+/** The narrowest a bar is drawn, in px, so a one-day task can still be seen and clicked. */
+export const BAR_MIN_PX = 20;
+
+/**
+ * Places a bar's label so that it is always readable, whatever the date range: inside the bar
+ * when the whole text fits, otherwise after the bar (and after its warning mark), or before it when
+ * the bar sits near the lane's right edge. Never on top of the bar, so nothing covers a letter.
+ */
+export function barLabelPlacement(input: { barLeftPx: number; barWidthPx: number; labelWidthPx: number; laneWidthPx: number; markWidthPx?: number }): LabelPlacement {
+  const width = Math.max(input.barWidthPx, BAR_MIN_PX);
+  if (input.labelWidthPx + 2 * LABEL_PAD_PX <= width) return { where: 'inside', leftPx: input.barLeftPx + LABEL_PAD_PX, maxWidthPx: width - 2 * LABEL_PAD_PX };
+  const afterLeft = input.barLeftPx + width + (input.markWidthPx ?? 0) + LABEL_GAP_PX;
+  const roomAfter = Math.max(0, input.laneWidthPx - afterLeft);
+  const roomBefore = Math.max(0, input.barLeftPx - LABEL_GAP_PX);
+  if (roomAfter >= input.labelWidthPx || roomAfter >= roomBefore) return { where: 'after', leftPx: afterLeft, maxWidthPx: roomAfter };
+  const shown = Math.min(input.labelWidthPx, roomBefore);
+  return { where: 'before', leftPx: input.barLeftPx - LABEL_GAP_PX - shown, maxWidthPx: roomBefore };
+}
+
+/** The dates a drag would give a task. */
+export interface DraggedDates {
+  /** Whole days moved, after keeping the task inside its window (0: it stays where it is). */
+  days: number;
+  startDate: IsoDate;
+  endDate: IsoDate;
+}
+
+/**
+ * A scheduled task moved by whole days, kept inside its window (earliest to latest): the move is
+ * cut short at the window's edge, and the task's length never changes. Null for a task with no
+ * dates, or one longer than its window (it cannot be moved without leaving it).
+ */
+export function dragDates(task: Pick<LayoutTask, 'earliest' | 'latest' | 'startDate' | 'endDate'>, days: number): DraggedDates | null {
+  if (!task.startDate) return null;
+  const end = task.endDate ?? task.startDate;
+  const length = daysBetween(task.startDate, end);
+  if (daysBetween(task.earliest, task.latest) < length) return null;
+  // The furthest the task may go each way while staying in the window (zero when it sits outside it already).
+  const maxBack = Math.max(0, daysBetween(task.earliest, task.startDate));
+  const maxForward = Math.max(0, daysBetween(end, task.latest));
+  const moved = Math.round(Math.max(-maxBack, Math.min(maxForward, days)));
+  return { days: moved, startDate: addDays(task.startDate, moved), endDate: addDays(end, moved) };
+}
+
+/** Whole days a pointer moved across a lane of `laneWidthPx` showing `totalDays` days (snapped to the nearest day). */
+export function pointerDays(dxPx: number, laneWidthPx: number, totalDays: number): number {
+  if (laneWidthPx <= 0 || totalDays <= 0) return 0;
+  const days = Math.round(dxPx / (laneWidthPx / totalDays));
+  return Object.is(days, -0) ? 0 : days;
+}
+
+/** The narrowest room a week's label ("Dec 28") needs in the header, in px. */
+export const WEEK_LABEL_MIN_PX = 48;
+
+/**
+ * The header's week labels at any range: every week when there is room, otherwise every n-th week
+ * (n chosen so each label has WEEK_LABEL_MIN_PX), each spanning the weeks up to the next label.
+ */
+export function weekHeaderCells(weeks: readonly IsoDate[], laneWidthPx: number): { monday: IsoDate; span: number }[] {
+  const perWeek = weeks.length > 0 && laneWidthPx > 0 ? laneWidthPx / weeks.length : WEEK_LABEL_MIN_PX;
+  const step = Math.max(1, Math.ceil(WEEK_LABEL_MIN_PX / perWeek));
+  const cells: { monday: IsoDate; span: number }[] = [];
+  for (let i = 0; i < weeks.length; i += step) cells.push({ monday: weeks[i], span: Math.min(step, weeks.length - i) });
+  return cells;
+}

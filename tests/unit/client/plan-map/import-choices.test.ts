@@ -65,3 +65,33 @@ describe('turning the choices into what to save', () => {
     expect(plan.units[1].name).toHaveLength(120);
   });
 });
+
+describe('a walked track whose ends lie close together', () => {
+  // An open walk around a field: four corners, the last a few metres short of the first.
+  const walked: ImportCandidate = {
+    name: 'Field walk',
+    family: 'line',
+    closableGapM: 8,
+    geometry: { type: 'LineString', coordinates: [[-90, 43], [-90, 43.002], [-89.997, 43.002], [-89.997, 43], [-89.9999, 43]] },
+  };
+
+  it('offers the boundary and the area kinds besides the line kinds', () => {
+    expect(choicesFor('line', true)).toContain('boundary');
+    expect(choicesFor('line', true)).toContain('food-plot');
+    expect(choicesFor('line', false)).not.toContain('boundary');
+  });
+
+  it('becomes the boundary or an area unit, closed by joining its ends', () => {
+    const plan = planImportSave([walked, { ...walked, name: 'Plot walk' }], ['boundary', 'food-plot']);
+    expect(plan.problems).toEqual([]);
+    expect(plan.boundary).toEqual({ type: 'Polygon', coordinates: [[...walked.geometry.type === 'LineString' ? walked.geometry.coordinates : [], [-90, 43]]] });
+    expect(plan.units[0].kind).toBe('food-plot');
+    expect(plan.units[0].geometry.type).toBe('Polygon');
+  });
+
+  it('stays a line when chosen as one, and an open line without the mark cannot be the boundary', () => {
+    const plan = planImportSave([walked, { ...walked, closableGapM: undefined }], ['fence', 'boundary']);
+    expect(plan.units[0].geometry.type).toBe('LineString');
+    expect(plan.problems[0]).toMatch(/cannot be the property boundary/);
+  });
+});

@@ -1,0 +1,21 @@
+/** Types for s3rver 3.7 (it ships none): the parts the tests use. */
+declare module 's3rver' {
+  import type { AddressInfo } from 'node:net';
+
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    silent?: boolean;
+    directory?: string;
+    resetOnClose?: boolean;
+    allowMismatchedSignatures?: boolean;
+    vhostBuckets?: boolean;
+    configureBuckets?: { name: string; configs?: (string | Buffer)[] }[];
+  }
+
+  export default class S3rver {
+    constructor(options?: S3rverOptions);
+    run(): Promise<AddressInfo>;
+    close(): Promise<void>;
+  }
+}

@@ -1,0 +1,44 @@
+/**
+ * The query cache kept in IndexedDB (TanStack Query's persister): restored before the app's first
+ * render, so the field sheet, a task and the portal open with no signal showing the last data this
+ * person saw. Sign-in and sign-out clear it (lib/persisted-cache.ts).
+ */
+import type { QueryClient } from '@tanstack/react-query';
+import { persistQueryClient } from '@tanstack/react-query-persist-client';
+import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
+import { clearPersistedCache, PERSISTED_CACHE_KEY, persistedCacheStorage } from './persisted-cache';
+import { shouldPersistQuery } from './persist-rules';
+import type { SessionUser } from '../../shared/schemas/auth';
+
+/** Kept data older than this is dropped. */
+export const PERSIST_MAX_AGE_MS = 7 * 24 * 3600 * 1000;
+
+let stopPersisting: (() => void) | null = null;
+
+/** Stops keeping the cache and removes what was kept (sign-out): no write of this session can follow. */
+export async function forgetPersistedQueries(): Promise<void> {
+  stopPersisting?.();
+  stopPersisting = null;
+  await clearPersistedCache();
+}
+
+/** Restores the kept cache (at most `waitMs`), then keeps it up to date; answers when the app may render. */
+export async function startQueryPersistence(queryClient: QueryClient, waitMs = 1500): Promise<void> {
+  // Kept queries must live in memory as long as on disk, or an unmounted one would be dropped from both.
+  for (const head of ['auth', 'tasks', 'field', 'portal', 'calendar-feeds']) queryClient.setQueryDefaults([head], { gcTime: PERSIST_MAX_AGE_MS });
+  const persister = createAsyncStoragePersister({ storage: persistedCacheStorage, key: PERSISTED_CACHE_KEY, throttleTime: 1000 });
+  const [unsubscribe, restored] = persistQueryClient({
+    queryClient,
+    persister,
+    maxAge: PERSIST_MAX_AGE_MS,
+    buster: 'browseline-1',
+    dehydrateOptions: {
+      shouldDehydrateQuery: (query) => {
+        const role = queryClient.getQueryData<SessionUser | null>(['auth', 'me'])?.role;
+        return query.state.status === 'success' && shouldPersistQuery(query.queryKey, role);
+      },
+    },
+  });
+  stopPersisting = unsubscribe;
+  await Promise.race([restored.catch(() => undefined), new Promise((resolve) => setTimeout(resolve, waitMs))]);
+}

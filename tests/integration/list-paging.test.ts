@@ -1,0 +1,84 @@
+/**
+ * Lists are paged with totals, never cut silently: the answer says how many match in all, `limit`
+ * and `offset` walk through them, bad paging is a 422 with a sentence, and task lists carry unit
+ * outlines only when asked.
+ */
+import { beforeAll, describe, expect, it } from 'vitest';
+import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
+import { signedInAgent, type Agent } from '../support/test-app';
+import { Task, Unit } from '../../server/models';
+import { measureUnit } from '../../shared/domain/geometry';
+import { LIST_PAGE } from '../../shared/schemas/common';
+import type { Polygon } from 'geojson';
+
+let ctx: Awaited<ReturnType<typeof makeFirm>>;
+let consultant: Agent;
+let crew: Agent;
+const TASKS = 7;
+
+beforeAll(async () => {
+  ctx = await makeFirm();
+  consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+  crew = await signedInAgent(ctx.users.crew.email, PASSWORD);
+  const property = await makeProperty(ctx.firm.id, ctx.client.id);
+  const geometry: Polygon = { type: 'Polygon', coordinates: [[[-90.938, 43.268], [-90.936, 43.268], [-90.936, 43.267], [-90.938, 43.267], [-90.938, 43.268]]] };
+  const m = measureUnit('food-plot', geometry);
+  const unit = await Unit.create({ firmId: ctx.firm.id, propertyId: property.id, kind: 'food-plot', name: 'Clover Plot', notes: null, geometry, acres: m.acres, perimeterFt: m.perimeterFt, lengthFt: m.lengthFt });
+  await Task.bulkCreate(
+    Array.from({ length: TASKS }, (_, i) => ({
+      firmId: ctx.firm.id,
+      propertyId: property.id,
+      unitId: unit.id,
+      stepKey: `step-${i}`,
+      name: `Step ${i + 1}`,
+      kind: 'planting',
+      practiceName: 'Clover plot',
+      unitName: unit.name,
+      earliest: `2026-08-${String(10 + i).padStart(2, '0')}`,
+      latest: '2026-09-15',
+      assigneeId: ctx.users.crew.id,
+    })),
+  );
+});
+
+describe('paged lists', () => {
+  it('answers a page of tasks with the total, and the next page from an offset', async () => {
+    const first = await consultant.get('/api/tasks?limit=3').expect(200);
+    expect(first.body.data.tasks).toHaveLength(3);
+    expect(first.body.data.page).toEqual({ total: TASKS, limit: 3, offset: 0 });
+    const rest = await consultant.get('/api/tasks?limit=3&offset=6').expect(200);
+    expect(rest.body.data.tasks).toHaveLength(1);
+    const ids = new Set([...first.body.data.tasks, ...rest.body.data.tasks].map((t: { id: number }) => t.id));
+    expect(ids.size).toBe(4);
+    const all = await consultant.get('/api/tasks').expect(200);
+    expect(all.body.data.page).toEqual({ total: TASKS, limit: LIST_PAGE.defaultLimit, offset: 0 });
+  });
+
+  it('leaves unit outlines out of task lists unless asked', async () => {
+    const plain = await crew.get('/api/tasks').expect(200);
+    expect(plain.body.data.tasks[0].unitGeometry).toBeNull();
+    expect(plain.body.data.tasks[0].location).toHaveLength(2);
+    const withOutlines = await crew.get('/api/tasks?geometry=true').expect(200);
+    expect(withOutlines.body.data.tasks[0].unitGeometry.type).toBe('Polygon');
+  });
+
+  it('pages properties, clients, proposals and invoices with their totals', async () => {
+    await makeProperty(ctx.firm.id, ctx.client.id);
+    const properties = await consultant.get('/api/properties?limit=1').expect(200);
+    expect(properties.body.data).toHaveLength(1);
+    expect(properties.body.page).toEqual({ total: 2, limit: 1, offset: 0 });
+    const clients = await consultant.get('/api/clients').expect(200);
+    expect(clients.body.page.total).toBe(clients.body.data.length);
+    for (const url of ['/api/proposals', '/api/invoices']) {
+      const res = await consultant.get(url).expect(200);
+      expect(res.body.page).toEqual({ total: 0, limit: LIST_PAGE.defaultLimit, offset: 0 });
+    }
+  });
+
+  it('refuses a page past the limit or a negative offset with a sentence', async () => {
+    const tooMany = await consultant.get(`/api/tasks?limit=${LIST_PAGE.maxLimit + 1}`).expect(422);
+    expect(JSON.stringify(tooMany.body)).toMatch(/at most 2000/);
+    const negative = await consultant.get('/api/invoices?offset=-1').expect(422);
+    expect(JSON.stringify(negative.body)).toMatch(/zero or more/);
+  });
+});

@@ -1,0 +1,43 @@
+import { execFileSync } from 'node:child_process';
+import { describe, expect, it } from 'vitest';
+import { renderSeasonReportPdf, type SeasonReportDocumentInput } from '../../../templates/documents/season-report';
+import { harvestSummary } from '../../../shared/domain/survey-estimates';
+import { emptySeasonReason, establishedText, hasBars } from '../../../shared/domain/season-results';
+
+/** Invented demo content: one yearling doe taken, no finished work, no survey. */
+const onlyAHarvest = (): SeasonReportDocumentInput => ({
+  firm: { name: 'Fernhill Habitat Consulting', phone: null, email: null },
+  client: { name: 'Okonkwo-Larsen Family' },
+  property: { name: 'Kettle Hollow Farm', acres: 160, locality: null },
+  season: { label: '2025–26', startsOn: '2025-07-01', endsOn: '2026-06-30' },
+  preparedOn: '2026-07-02',
+  work: [],
+  acresEstablished: 0,
+  unitsEstablished: [],
+  photos: [],
+  surveys: [],
+  surveyTrend: [],
+  harvest: harvestSummary([{ date: '2025-12-13', sex: 'doe', ageClass: '1.5', dressedWeightLb: 81 }]),
+  harvestTrend: [],
+  recommendations: null,
+  cautions: [],
+});
+
+describe('the season report says what there is', () => {
+  it('never prints "0.00 acre established": with no unit finished it says so in words', async () => {
+    const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: await renderSeasonReportPdf(onlyAHarvest()) }).toString();
+    expect(text).not.toMatch(/0\.00 acres?/);
+    expect(text.replace(/\s+/g, ' ')).toContain('No unit has all of its work finished yet, so no acres are counted as established.');
+    expect(text).toContain('1 deer taken');
+    expect(text).toContain('No camera survey was recorded this season.');
+  });
+
+  it('draws no chart of zeros, and refuses a season with nothing at all', () => {
+    expect(hasBars([{ values: [0, 0, null] }])).toBe(false);
+    expect(hasBars([{ values: [0, 1.4] }])).toBe(true);
+    expect(emptySeasonReason({ work: 0, surveys: 0, harvests: 0 }, '2019–20')).toMatch(/^There is nothing to report for the 2019–20 season yet/);
+    expect(emptySeasonReason({ work: 0, surveys: 0, harvests: 1 }, '2025–26')).toBeNull();
+    expect(establishedText(0, [], 2)).toBe('2 tasks were finished this season; no unit has all of its work finished yet, so no acres are counted as established.');
+    expect(establishedText(2.37, [{ name: 'Hollow plot', acresText: '2.37 acres' }], 2)).toBe('established this season: Hollow plot (2.37 acres).');
+  });
+});
