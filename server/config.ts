@@ -47,6 +47,8 @@ export const config = {
     /** Failed sign-ins per account, from all addresses together, in the window. */
     accountMax: int(env.LOGIN_ACCOUNT_RATE_MAX, 30),
   },
+  /** Sign-ups per IP address per window. */
+  signupRateLimit: { windowMs: int(env.SIGNUP_RATE_WINDOW_MS, 60 * 60 * 1000), max: int(env.SIGNUP_RATE_MAX, 5) },
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
   /** Where files live: 'disk' (UPLOADS_DIR, one machine) or 's3' (object storage shared by every instance). */
   storage: {

@@ -7,6 +7,7 @@ export const LIMITS = {
   textMax: 4000,
   jsonBodyBytes: 2 * 1024 * 1024,
   inviteTtlHours: 72,
+  verifyTtlHours: 48,
   resetTtlMinutes: 60,
 } as const;
 
@@ -41,4 +42,13 @@ export const GEOMETRY_LIMITS = {
 export const PHOTO_LIMITS = {
   maxBytes: 15 * 1024 * 1024,
   perCompletion: 8,
+} as const;
+
+/** The firm's logo: PNG or JPEG, checked by size and pixels before it is kept. */
+export const LOGO_LIMITS = {
+  maxBytes: 1024 * 1024,
+  /** Pixels on the longer side: a letterhead prints it about 1.5 in wide, so 2000 px is plenty. */
+  maxSide: 2000,
+  /** Pixels on the shorter side: smaller prints blurry. */
+  minSide: 32,
 } as const;

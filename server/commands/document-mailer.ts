@@ -11,6 +11,7 @@ import { renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
 import { proposalSentEmail } from '../../templates/email/proposal-sent';
 import { invoiceSentEmail } from '../../templates/email/invoice';
 import { config } from '../config';
+import { emailFirmContact } from '../services/firm-profile';
 import type { JobContext } from '../services/jobs/job-queue';
 
 export interface DocumentEmailData {
@@ -39,7 +40,7 @@ export async function sendDocumentEmail(data: DocumentEmailData, job: JobContext
               firmId: data.firmId,
               kind: 'proposal-sent',
               to,
-              email: proposalSentEmail({ firmName: firm?.name ?? '', consultantName: data.consultantName, propertyName: property?.name ?? '', number: proposal.number, version: proposal.version, totalCents: proposal.totalCents, expiresOn: proposal.expiresOn, url: `${config.publicUrl}/portal/proposals/${proposal.id}` }),
+              email: proposalSentEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), consultantName: data.consultantName, propertyName: property?.name ?? '', number: proposal.number, version: proposal.version, totalCents: proposal.totalCents, expiresOn: proposal.expiresOn, url: `${config.publicUrl}/portal/proposals/${proposal.id}` }),
               attachments: [{ filename: `${proposal.number}-v${proposal.version}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
             },
             transaction,
@@ -64,7 +65,7 @@ export async function sendDocumentEmail(data: DocumentEmailData, job: JobContext
             firmId: invoice.firmId,
             kind: 'invoice-sent',
             to,
-            email: invoiceSentEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, kind: invoice.kind, totalCents: invoice.totalCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), dueOn: invoice.dueOn, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+            email: invoiceSentEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? 'your property', number: invoice.number, kind: invoice.kind, totalCents: invoice.totalCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), dueOn: invoice.dueOn, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
             attachments: [{ filename: `${invoice.number}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
           },
           transaction,

@@ -4,6 +4,7 @@
  * order), and refunds by the owner. Every create call carries an idempotency key derived from the
  * invoice's state, so a retry after an outage replays the first call instead of charging twice.
  */
+import { emailFirmContact } from '../services/firm-profile';
 import type Stripe from 'stripe';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
@@ -134,7 +135,7 @@ async function recordPayment(facts: PaymentFacts, transaction: Transaction): Pro
         firmId,
         kind: 'payment-receipt',
         to,
-        email: paymentReceiptEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: todayIn(usableZone(firm?.timezone), payment.receivedAt), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+        email: paymentReceiptEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? 'your property', number: invoice.number, amountCents: payment.amountCents, balanceCents: Math.max(0, invoice.totalCents - invoice.amountPaidCents), receivedOn: todayIn(usableZone(firm?.timezone), payment.receivedAt), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
       },
       transaction,
     );
@@ -184,7 +185,7 @@ async function recordRefund(refund: { id: string; amount: number; paymentIntentI
     await settle(invoice, transaction);
     const [firm, property, client] = await Promise.all([Firm.findByPk(invoice.firmId, { transaction }), invoice.propertyId ? Property.findByPk(invoice.propertyId, { attributes: ['name'], transaction }) : null, Client.findByPk(invoice.clientId, { transaction })]);
     for (const to of await clientRecipients(invoice.clientId, transaction)) {
-      await enqueueEmail({ firmId: invoice.firmId, kind: 'invoice-refund', to, email: refundEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? client?.name ?? '', number: invoice.number, amountCents: refund.amount, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }) }, transaction);
+      await enqueueEmail({ firmId: invoice.firmId, kind: 'invoice-refund', to, email: refundEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? client?.name ?? '', number: invoice.number, amountCents: refund.amount, url: `${config.publicUrl}/portal/invoices/${invoice.id}` }) }, transaction);
     }
   }
   await recordAudit({ firmId: payment.firmId, userId: refund.createdById, action: 'invoice.refunded', subjectType: 'Invoice', subjectId: payment.invoiceId, data: { refundId: refund.id, amountCents: refund.amount } }, transaction);

@@ -1,4 +1,5 @@
 /** Drafts, edits, revises, sends and withdraws proposals. Approved and sent versions are immutable. */
+import { firmDefaults } from '../services/firm-profile';
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { clientRecipients } from '../services/mail/client-recipients';
@@ -21,6 +22,11 @@ export const DEFAULT_TERMS = [
   'Herbicide, chainsaw and burning work is done by trained, licensed people, following product labels, local codes and state rules.',
 ].join('\n');
 
+/** The default terms with the firm's payment terms in place of the 30 days (0 days reads "on receipt of an invoice"). */
+export function defaultTerms(paymentTermsDays: number): string {
+  const due = paymentTermsDays === 0 ? 'Payment is due on receipt of an invoice.' : `Payment is due within ${paymentTermsDays} day${paymentTermsDays === 1 ? '' : 's'} of an invoice.`;
+  return DEFAULT_TERMS.replace('Payment is due within 30 days of an invoice.', due);
+}
 
 /** The next number of a firm's counter, allocated inside the transaction (no gaps, no duplicates). */
 export async function nextFirmNumber(firmId: number, name: string, transaction: Transaction): Promise<number> {
@@ -57,7 +63,7 @@ export async function draftProposal(actor: SessionUser, propertyId: number, inpu
     const units = await Unit.findAll({ where: { id: prescriptions.map((p) => p.unitId) }, attributes: ['id', 'name'], transaction });
     const unitName = new Map(units.map((u) => [u.id, u.name]));
     const firm = await Firm.findByPk(actor.firmId, { transaction });
-    const settings = (firm?.settings ?? {}) as { taxRatePct?: number; depositPct?: number };
+    const defaults = firmDefaults(firm);
     const seq = await nextFirmNumber(actor.firmId, 'proposal', transaction);
     const today = await firmToday(actor.firmId, transaction);
     const proposal = await Proposal.create(
@@ -69,11 +75,11 @@ export async function draftProposal(actor: SessionUser, propertyId: number, inpu
         number: `P-${today.slice(0, 4)}-${String(seq).padStart(3, '0')}`,
         title: input.title ?? `Habitat plan for ${property.name}`,
         introduction: input.introduction ?? null,
-        terms: input.terms ?? DEFAULT_TERMS,
+        terms: input.terms ?? defaultTerms(defaults.paymentTermsDays),
         discount: input.discount ?? { kind: 'none' },
-        taxRatePct: input.taxRatePct ?? settings.taxRatePct ?? 0,
-        depositPct: input.depositPct ?? settings.depositPct ?? 30,
-        expiresOn: input.expiresOn ?? addDays(today, 30),
+        taxRatePct: input.taxRatePct ?? defaults.taxRatePct,
+        depositPct: input.depositPct ?? defaults.defaultDepositPct,
+        expiresOn: input.expiresOn ?? addDays(today, defaults.proposalValidDays),
         createdById: actor.id,
       },
       { transaction },

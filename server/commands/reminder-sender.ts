@@ -4,6 +4,7 @@
  * and is called directly by tests. Rows are claimed with SKIP LOCKED, so several instances never
  * remind twice.
  */
+import { emailFirmContact } from '../services/firm-profile';
 import { Op } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { Firm, Invoice, Property } from '../models';
@@ -58,7 +59,7 @@ export async function sendOverdueReminders(onDate?: string): Promise<number> {
             firmId: invoice.firmId,
             kind: 'invoice-overdue',
             to,
-            email: overdueReminderEmail({ firmName: firm?.name ?? '', propertyName: property?.name ?? 'your property', number: invoice.number, balanceCents, dueOn: invoice.dueOn, daysOverdue: daysPastDue(invoice.dueOn, today), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
+            email: overdueReminderEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property?.name ?? 'your property', number: invoice.number, balanceCents, dueOn: invoice.dueOn, daysOverdue: daysPastDue(invoice.dueOn, today), url: `${config.publicUrl}/portal/invoices/${invoice.id}` }),
           },
           transaction,
         );

@@ -2,6 +2,7 @@
  * Season reports: makes the PDF for a property's season (kept as a shared file of category
  * 'season-report', private to the firm until sent) and sends it to the landowner through the outbox.
  */
+import { emailFirmContact } from '../services/firm-profile';
 import { Op } from 'sequelize';
 import { Client, Firm, Property, SeasonReport, SharedFile, type BackgroundJob, type TaskPhoto } from '../models';
 import type { Transaction } from 'sequelize';
@@ -190,7 +191,7 @@ export async function sendSeasonReport(actor: SessionUser, id: number, ip: strin
     const [file, property, firm] = await Promise.all([
       SharedFile.findByPk(report.sharedFileId, { transaction }),
       Property.findByPk(report.propertyId, { attributes: ['id', 'name'], transaction }),
-      Firm.findByPk(actor.firmId, { attributes: ['name'], transaction }),
+      Firm.findByPk(actor.firmId, { transaction }),
     ]);
     if (!file) throw unprocessable('The report’s PDF is missing. Make the season report again, then send it.');
     const pdf = await readFile(file.storageKey);
@@ -201,7 +202,7 @@ export async function sendSeasonReport(actor: SessionUser, id: number, ip: strin
           firmId: actor.firmId,
           kind: 'season-report-sent',
           to,
-          email: seasonReportSentEmail({ firmName: firm?.name ?? '', consultantName: actor.name, propertyName: property?.name ?? '', seasonLabel: label, url: `${config.publicUrl}/portal/properties/${report.propertyId}/results` }),
+          email: seasonReportSentEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), consultantName: actor.name, propertyName: property?.name ?? '', seasonLabel: label, url: `${config.publicUrl}/portal/properties/${report.propertyId}/results` }),
           attachments: [{ filename: `season-report-${report.season}.pdf`, contentType: 'application/pdf', contentBase64: pdf.toString('base64') }],
         },
         transaction,

@@ -2,6 +2,7 @@
  * Changes to tasks: the consultant schedules and assigns; the crew completes (with photos, once per
  * idempotency key) or skips with a reason. Every change is one transaction with its audit record.
  */
+import { emailFirmContact } from '../services/firm-profile';
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { Firm, Property, Task, TaskPhoto, User } from '../models';
@@ -117,7 +118,7 @@ async function notifyUnitDone(task: Task, transaction: Transaction): Promise<voi
         firmId: task.firmId,
         kind: 'unit-done',
         to,
-        email: unitDoneEmail({ firmName: firm?.name ?? '', propertyName: property.name, unitName: task.unitName, taskNames: unitTasks.filter((t) => t.status === 'done').map((t) => t.name), doneOn: task.doneOn ?? (await firmToday(task.firmId, transaction)), url: `${config.publicUrl}/portal/properties/${property.id}/progress` }),
+        email: unitDoneEmail({ firmName: firm?.name ?? '', firmContact: emailFirmContact(firm), propertyName: property.name, unitName: task.unitName, taskNames: unitTasks.filter((t) => t.status === 'done').map((t) => t.name), doneOn: task.doneOn ?? (await firmToday(task.firmId, transaction)), url: `${config.publicUrl}/portal/properties/${property.id}/progress` }),
       },
       transaction,
     );

@@ -1,11 +1,11 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 
-/** A single-use, expiring token for an invitation or a password reset; only its SHA-256 is stored. */
+/** A single-use, expiring token for an invitation, a password reset or a sign-up's e-mail confirmation; only its SHA-256 is stored. */
 export class AuthToken extends Model<InferAttributes<AuthToken>, InferCreationAttributes<AuthToken>> {
   declare id: CreationOptional<number>;
   declare userId: number;
-  declare purpose: 'invite' | 'reset';
+  declare purpose: 'invite' | 'reset' | 'verify';
   declare tokenHash: string;
   declare expiresAt: Date;
   declare usedAt: Date | null;

@@ -9,6 +9,10 @@ export class Firm extends Model<InferAttributes<Firm>, InferCreationAttributes<F
   declare email: string | null;
   declare phone: string | null;
   declare address: string | null;
+  declare website: CreationOptional<string | null>;
+  declare licenceNumbers: CreationOptional<string | null>;
+  declare logoKey: CreationOptional<string | null>;
+  declare logoContentType: CreationOptional<string | null>;
   declare timezone: CreationOptional<string>;
   declare region: CreationOptional<string>;
   declare settings: CreationOptional<Record<string, unknown>>;
@@ -24,6 +28,10 @@ Firm.init(
     email: DataTypes.TEXT,
     phone: DataTypes.TEXT,
     address: DataTypes.TEXT,
+    website: DataTypes.TEXT,
+    licenceNumbers: { type: DataTypes.TEXT, field: 'licence_numbers' },
+    logoKey: { type: DataTypes.TEXT, field: 'logo_key' },
+    logoContentType: { type: DataTypes.TEXT, field: 'logo_content_type' },
     timezone: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'America/Chicago' },
     region: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'midwest' },
     settings: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },

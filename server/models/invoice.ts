@@ -2,9 +2,12 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import { sequelize } from '../db/sequelize';
 import type { InvoiceKind, InvoiceLineSource, InvoiceStatus } from '../../shared/domain/invoicing';
 import type { InvoiceDocumentInput } from '../../templates/documents/invoice';
+import type { DocumentFirm } from '../../shared/schemas/firm';
 
 /** The issued part of an invoice's PDF, kept when it is sent; status and payments stay live. */
-export type InvoiceDocumentSnapshot = Pick<InvoiceDocumentInput, 'firm' | 'client' | 'property' | 'invoice' | 'lines'> & {
+export type InvoiceDocumentSnapshot = Pick<InvoiceDocumentInput, 'client' | 'property' | 'invoice' | 'lines'> & {
+  /** The firm's profile as it was when sent (the logo by its storage key; logo files are never overwritten). */
+  firm: DocumentFirm;
   totals: Pick<InvoiceDocumentInput['totals'], 'subtotalCents' | 'taxCents' | 'totalCents'>;
 };
 

@@ -13,6 +13,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare phone: string | null;
   declare passwordHash: string | null;
   declare active: CreationOptional<boolean>;
+  /** False only for a signed-up owner who has not yet opened the confirmation link. */
+  declare emailVerified: CreationOptional<boolean>;
   declare lastSignInAt: Date | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -29,6 +31,7 @@ User.init(
     phone: DataTypes.TEXT,
     passwordHash: DataTypes.TEXT,
     active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+    emailVerified: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
     lastSignInAt: DataTypes.DATE,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

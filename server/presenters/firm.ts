@@ -2,6 +2,7 @@ import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
 import { DEFAULT_IDLE_TIMEOUT_HOURS } from '../../shared/schemas/firm';
 import { usableZone } from '../services/clock';
+import { firmDefaults } from '../services/firm-profile';
 import { largeAreaThreshold } from '../../shared/domain/large-area';
 
 /** The firm and the settings the app reads. */
@@ -15,6 +16,12 @@ export function presentFirm(firm: Firm): FirmDto {
     region: firm.region,
     timezone: usableZone(firm.timezone),
     settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS },
+    address: firm.address,
+    website: firm.website ?? null,
+    licenceNumbers: firm.licenceNumbers ?? null,
+    // The key changes with every new logo, so the address does too and caches never show an old one.
+    logoUrl: firm.logoKey ? `/api/firm/logo?v=${(firm.logoKey.split('/')[1] ?? '').slice(0, 12)}` : null,
+    ...firmDefaults(firm),
   };
 }
 

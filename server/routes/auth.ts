@@ -7,7 +7,8 @@ import { validate } from '../middlewares/validate';
 import { csrfToken } from '../middlewares/csrf';
 import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
 import { passport } from '../services/auth/passport';
-import { LoginSchema, PasswordChangeSchema, PasswordResetRequestSchema, TokenPasswordSchema, type SessionUser } from '../../shared/schemas/auth';
+import { LoginSchema, PasswordChangeSchema, PasswordResetRequestSchema, TokenPasswordSchema, VerifyEmailSchema, type SessionUser } from '../../shared/schemas/auth';
+import { verifySignupEmail } from '../commands/firm-signup';
 import { tooManyRequests, unauthorized } from '../errors';
 import { config } from '../config';
 import { changePassword, findLiveToken, requestPasswordReset, setPasswordFromToken } from '../commands/password-setter';
@@ -72,6 +73,7 @@ function bucketLimiter(prefix: string, limit: number, message: string, keyGenera
 }
 const resetRequestLimiter = bucketLimiter('reset:', 20, 'Too many reset requests. Wait a few minutes and try again.');
 const resetCompleteLimiter = bucketLimiter('reset-complete:', 20, 'Too many attempts to set a new password. Wait a few minutes and try again.');
+const verifyEmailLimiter = bucketLimiter('verify-email:', 20, 'Too many attempts to confirm an e-mail address. Wait a few minutes and try again.');
 const invitationAcceptLimiter = bucketLimiter('invite-accept:', 20, 'Too many attempts to accept an invitation. Wait a few minutes and try again.');
 // Guessing the current password through the change form is limited per account.
 const passwordChangeLimiter = bucketLimiter('password-change:', 10, 'Too many attempts to change the password. Wait a few minutes and try again.', (req) => `user-${req.user?.id ?? 0}`);
@@ -130,6 +132,11 @@ r.get('/password-reset/:token', 'public', validate({ params: TokenParams }), asy
 r.post('/password-reset/complete', 'public', resetCompleteLimiter, validate({ body: TokenPasswordSchema }), async (req, res) => {
   await setPasswordFromToken(req.body.token, 'reset', req.body.password, req.ip ?? null);
   res.json({ data: { message: 'Your password is changed. Sign in with the new one.' } });
+});
+
+r.post('/verify-email', 'public', verifyEmailLimiter, validate({ body: VerifyEmailSchema }), async (req, res) => {
+  const { email } = await verifySignupEmail(req.body.token, req.ip ?? null);
+  res.json({ data: { email, message: 'Your e-mail is confirmed. Sign in with the password you chose.' } });
 });
 
 r.post('/password', 'signed-in', passwordChangeLimiter, validate({ body: PasswordChangeSchema }), async (req, res) => {

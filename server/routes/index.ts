@@ -11,6 +11,8 @@ import { devMailRouter } from './dev-mail';
 import { propertiesRouter } from './properties';
 import { unitsRouter } from './units';
 import { firmRouter } from './firm';
+import { signupRouter } from './signup';
+import { placesRouter } from './places';
 import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
 import { prescriptionsRouter, propertyPrescriptionsRouter, unitPrescriptionsRouter } from './prescriptions';
@@ -37,6 +39,8 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertyOverlaysRouter },
   { path: '/units', router: unitsRouter },
   { path: '/firm', router: firmRouter },
+  { path: '/signup', router: signupRouter },
+  { path: '/places', router: placesRouter },
   { path: '/overlays', router: overlaysRouter },
   { path: '/materials', router: materialsRouter },
   { path: '/rates', router: ratesRouter },

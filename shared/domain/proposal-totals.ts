@@ -262,6 +262,8 @@ export interface PlanSnapshot {
     groups: { unitId: number | null; label: string; kind: string | null; acres: number | null; lengthFt: number | null; summaries: string[] }[];
     cautions: { id: string; title: string; text: string }[];
   };
+  /** The firm's profile as printed when sent (name, contact lines, licence numbers, logo's storage key). Not hashed. */
+  firm?: { name: string; phone?: string | null; email?: string | null; address?: string | null; website?: string | null; licenceNumbers?: string | null; logoKey?: string | null };
 }
 
 /** The proposal fields the approval record covers. */

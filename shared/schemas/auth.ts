@@ -78,3 +78,15 @@ export const TeamMemberSchema = z.object({
   lastSignInAt: z.string().nullable(),
 });
 export type TeamMember = z.infer<typeof TeamMemberSchema>;
+
+/** A new firm and its owner (`POST /api/signup`). */
+export const SignupSchema = z.object({
+  firmName: z.string().trim().min(1, { message: 'enter your firm’s name' }).max(LIMITS.nameMax),
+  name: z.string().trim().min(1, { message: 'enter your name' }).max(LIMITS.nameMax),
+  email,
+  password,
+});
+export type SignupInput = z.infer<typeof SignupSchema>;
+
+/** The token of an e-mail confirmation link (`POST /api/auth/verify-email`). */
+export const VerifyEmailSchema = z.object({ token: z.string().min(20).max(200) });

@@ -24,6 +24,55 @@ export const FirmSettingsUpdateSchema = z.object({
 export const DEFAULT_IDLE_TIMEOUT_HOURS = 8;
 export type FirmSettingsUpdateInput = z.infer<typeof FirmSettingsUpdateSchema>;
 
+const optionalProfileText = (max: number) => z.union([z.string().trim().max(max), z.null()]).transform((v) => (v ? v : null)).optional();
+
+/** Units the firm's pages and documents show areas and lengths in. */
+export const AREA_UNITS = ['acres', 'hectares'] as const;
+export const LENGTH_UNITS = ['feet', 'metres'] as const;
+
+/**
+ * The firm's profile (`PATCH /api/firm`): what every PDF and e-mail prints, and the defaults new
+ * proposals and invoices start from. Every field is optional; an empty text clears it.
+ */
+export const FirmProfileUpdateSchema = z
+  .object({
+    name: z.string().trim().min(1, { message: 'the firm needs a name' }).max(120).optional(),
+    address: optionalProfileText(300),
+    phone: optionalProfileText(40),
+    email: z
+      .union([z.string().trim().max(254).email({ message: 'enter an e-mail address such as office@example.com' }), z.literal('').transform(() => null), z.null()])
+      .optional(),
+    website: z
+      .union([
+        z.string().trim().max(200).refine((v) => /^https?:\/\/[^\s/]+\.[^\s]+$/.test(v), { message: 'start the website with https:// and the address' }),
+        z.literal('').transform(() => null),
+        z.null(),
+      ])
+      .optional(),
+    licenceNumbers: optionalProfileText(300),
+    defaultDepositPct: z.number({ message: 'enter the deposit as a number' }).min(0).max(100, { message: 'the deposit is at most 100 %' }).optional(),
+    paymentTermsDays: z.number({ message: 'enter the payment terms in days' }).int({ message: 'payment terms are whole days' }).min(0).max(365).optional(),
+    proposalValidDays: z.number({ message: 'enter how many days a proposal is valid' }).int({ message: 'validity is in whole days' }).min(1).max(365).optional(),
+    taxRatePct: z.number().min(0).max(30, { message: 'a sales tax above 30 % looks like a typing slip' }).optional(),
+    timezone: z.string().trim().refine(isTimeZone, { message: 'choose a time zone from the list, such as America/Chicago' }).optional(),
+    areaUnit: z.enum(AREA_UNITS, { message: 'choose acres or hectares' }).optional(),
+    lengthUnit: z.enum(LENGTH_UNITS, { message: 'choose feet or metres' }).optional(),
+  })
+  .strict();
+export type FirmProfileUpdateInput = z.input<typeof FirmProfileUpdateSchema>;
+
+/** What a document or e-mail prints about the firm, as the profile stood (kept in a sent document's snapshot). */
+export interface DocumentFirm {
+  name: string;
+  phone?: string | null;
+  email?: string | null;
+  address?: string | null;
+  website?: string | null;
+  licenceNumbers?: string | null;
+  /** Storage key of the logo file as it was; logo files are never overwritten. */
+  logoKey?: string | null;
+}
+
 export const FirmSchema = z.object({
   id: z.number().int(),
   name: z.string(),
@@ -33,6 +82,17 @@ export const FirmSchema = z.object({
   /** IANA time zone: the firm's "today" and the times on its documents. */
   timezone: z.string(),
   settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number() }),
+  address: z.string().nullable(),
+  website: z.string().nullable(),
+  licenceNumbers: z.string().nullable(),
+  /** Address of the logo image, or null when the firm has none. */
+  logoUrl: z.string().nullable(),
+  defaultDepositPct: z.number(),
+  paymentTermsDays: z.number().int(),
+  proposalValidDays: z.number().int(),
+  taxRatePct: z.number(),
+  areaUnit: z.enum(AREA_UNITS),
+  lengthUnit: z.enum(LENGTH_UNITS),
 });
 export type FirmDto = z.infer<typeof FirmSchema>;
 

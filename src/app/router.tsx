@@ -48,6 +48,8 @@ const routes: RouteObject[] = [
   { path: '/', element: <RootRedirect />, errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
   { path: paths.login, element: <LeaveForSignIn />, errorElement: <RouteErrorPage /> },
   { path: paths.forgotPassword, ...page(() => import('./routes/auth/forgot-password'), (m) => m.ForgotPasswordPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.signup, ...page(() => import('./routes/auth/signup'), (m) => m.SignupPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
+  { path: paths.verifyEmail(), ...page(() => import('./routes/auth/verify-email'), (m) => m.VerifyEmailPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
   { path: paths.resetPassword(), ...page(() => import('./routes/auth/reset-password'), (m) => m.ResetPasswordPage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
   { path: paths.acceptInvite(), ...page(() => import('./routes/auth/accept-invite'), (m) => m.AcceptInvitePage), errorElement: <RouteErrorPage />, hydrateFallbackElement: <Loading /> },
   gate(['owner', 'consultant', 'crew', 'client'], [{ path: paths.changePassword, ...page(() => import('./routes/account/change-password'), (m) => m.ChangePasswordPage) }]),

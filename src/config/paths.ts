@@ -2,6 +2,8 @@
 export const paths = {
   login: '/login',
   forgotPassword: '/forgot-password',
+  signup: '/signup',
+  verifyEmail: (token = ':token') => `/verify-email/${token}`,
   resetPassword: (token = ':token') => `/reset-password/${token}`,
   acceptInvite: (token = ':token') => `/invite/${token}`,
   desk: '/desk',

@@ -17,16 +17,6 @@ export const formatRelative = (iso: string): string => {
   return formatDate(iso);
 };
 
-const ACTION_WORDS: Record<string, string> = {
-  'client.created': 'added a client',
-  'user.invited': 'sent an invitation',
-  'user.joined': 'joined the firm',
-  'user.password-reset': 'reset a password',
-  'user.disabled': 'disabled an account',
-  'user.enabled': 'enabled an account',
-};
-export const describeAction = (action: string): string => ACTION_WORDS[action] ?? action.replace(/[.-]/g, ' ');
-
 /** A figure with thousands separators and a fixed number of decimals. */
 export const formatNumber = (n: number, digits = 0): string => n.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 

@@ -8,6 +8,7 @@
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatCents } from '../../shared/domain/money';
+import { firmBlock, type LetterheadFirm } from './firm-block';
 import { DOC_COLORS, FONT_HEADING, keyValueTable, neverBreakBefore, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
@@ -15,7 +16,7 @@ const OCHRE = '#C99A2E';
 const MOSS_TINT = '#EEF3EA';
 
 export interface InvoiceDocumentInput {
-  firm: { name: string; phone?: string | null; email?: string | null; address?: string | null };
+  firm: LetterheadFirm;
   /** The client billed, with their postal address as written on their record (lines kept). */
   client: { name: string; address?: string | null };
   property: { name: string } | null;
@@ -64,14 +65,13 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
   const money = (c: number) => formatCents(c, invoice.currency);
   const issued = invoice.issuedOn ? longDate(invoice.issuedOn) : null;
   const due = invoice.dueOn ? longDate(invoice.dueOn) : null;
-  const contact = [firm.address, [firm.phone, firm.email].filter(Boolean).join('  ·  ')].filter((s): s is string => Boolean(s && s.trim()));
 
   const letterhead: Content = {
     margin: [0, 0, 0, 14],
     stack: [
       {
         columns: [
-          { width: '*', stack: [{ text: firm.name, font: FONT_HEADING, bold: true, fontSize: 15, color: DOC_COLORS.mossDeep, margin: [0, 0, 0, 3] }, ...contact.map((line) => ({ text: line, fontSize: 9, color: DOC_COLORS.slate }))] },
+          firmBlock(firm),
           {
             width: 'auto',
             stack: [

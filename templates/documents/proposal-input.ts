@@ -1,6 +1,7 @@
 /** What the proposal PDF is drawn from: plain data the server assembles from the proposal. */
 import type { Geometry, MultiPolygon, Polygon } from 'geojson';
 import type { UnitKind } from '../../shared/domain/unit-kinds';
+import type { LetterheadFirm } from './firm-block';
 
 export interface ProposalDocumentLine {
   id: number;
@@ -20,7 +21,7 @@ export interface ProposalDocumentLine {
 }
 
 export interface ProposalDocumentInput {
-  firm: { name: string; phone?: string | null; email?: string | null; address?: string | null };
+  firm: LetterheadFirm;
   client: { name: string };
   property: { name: string; acres: number; boundary: Polygon | MultiPolygon; locality?: string };
   proposal: {

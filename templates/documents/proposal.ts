@@ -32,6 +32,7 @@ import {
 } from '../../server/services/documents/pdf';
 import { formatLength } from './plan-summary';
 import type { ProposalDocumentInput } from './proposal-input';
+import { firmBlock } from './firm-block';
 
 export type { ProposalDocumentInput, ProposalDocumentLine } from './proposal-input';
 
@@ -92,7 +93,7 @@ const LineSchema = z
   .refine((line) => line.optional || line.included, { message: 'is a required line, so it must be included', path: ['included'] });
 
 const ProposalDocumentInputSchema = z.object({
-  firm: z.object({ name: text(120), phone: optionalText(40), email: optionalText(120), address: optionalText(200) }),
+  firm: z.object({ name: text(120), phone: optionalText(40), email: optionalText(254), address: optionalText(300), website: optionalText(200), licenceNumbers: optionalText(300), logo: z.string().startsWith('data:image/').nullish() }),
   client: z.object({ name: text(120) }),
   property: z.object({
     name: text(120),
@@ -350,19 +351,12 @@ function watermarkFor(look: StatusLook | null): Watermark | undefined {
 
 function letterhead(data: DocData, preparedOn: string, validUntil: string | null): Content {
   const { firm, proposal } = data;
-  const contact = [firm.address, [firm.phone, firm.email].filter(Boolean).join('  ·  ')].filter((s): s is string => Boolean(s && s.trim()));
   return {
     margin: [0, 0, 0, 14],
     stack: [
       {
         columns: [
-          {
-            width: '*',
-            stack: [
-              { text: firm.name, font: FONT_HEADING, bold: true, fontSize: 15, color: DOC_COLORS.mossDeep, margin: [0, 0, 0, 3] },
-              ...contact.map((line) => ({ text: line, fontSize: 9, color: DOC_COLORS.slate })),
-            ],
-          },
+          firmBlock(firm),
           {
             width: 'auto',
             stack: [

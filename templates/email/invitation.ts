@@ -10,11 +10,12 @@ const ROLE_WORDS: Record<string, string> = {
  * The invitation e-mail. Staff and crew join the firm's workspace; a landowner (role `client`) is
  * not joining anyone's team: they are given a portal to their own land's plan.
  */
-export function invitationEmail(input: { firmName: string; inviterName: string; name: string; role: string; url: string; ttlHours: number }): RenderedEmail {
+export function invitationEmail(input: { firmName: string; firmContact?: string[]; inviterName: string; name: string; role: string; url: string; ttlHours: number }): RenderedEmail {
   const client = input.role === 'client';
   return renderEmail({
     subject: client ? `${input.firmName} opened a portal for your land on Browseline` : `${input.inviterName} invited you to ${input.firmName} on Browseline`,
     firmName: input.firmName,
+    firmContact: input.firmContact,
     greeting: `Hello ${input.name},`,
     paragraphs: client
       ? [

@@ -3,7 +3,7 @@ import { formatCents } from '../../shared/domain/money';
 import { formatDate } from '../../shared/domain/clock';
 
 interface InvoiceMailBase {
-  firmName: string;
+  firmName: string; firmContact?: string[];
   propertyName: string;
   number: string;
   url: string;
@@ -16,6 +16,7 @@ export function invoiceSentEmail(input: InvoiceMailBase & { kind: keyof typeof K
   return renderEmail({
     subject: `Invoice ${input.number} for ${input.propertyName} from ${input.firmName}`,
     firmName: input.firmName,
+    firmContact: input.firmContact,
     greeting: 'Hello,',
     paragraphs: [
       `Invoice ${input.number} bills ${KIND_WORDS[input.kind]} on ${input.propertyName}. The total is ${formatCents(input.totalCents)}${input.balanceCents !== input.totalCents ? `, of which ${formatCents(input.balanceCents)} is still to pay` : ''}${input.dueOn ? `, due ${formatDate(input.dueOn)}` : ''}. The PDF is attached.`,
@@ -30,6 +31,7 @@ export function paymentReceiptEmail(input: InvoiceMailBase & { amountCents: numb
   return renderEmail({
     subject: `Receipt: ${formatCents(input.amountCents)} paid on invoice ${input.number}`,
     firmName: input.firmName,
+    firmContact: input.firmContact,
     greeting: 'Thank you,',
     paragraphs: [
       `We received ${formatCents(input.amountCents)} on ${formatDate(input.receivedOn)} for invoice ${input.number} (${input.propertyName}).`,
@@ -58,6 +60,7 @@ export function overdueReminderEmail(input: InvoiceMailBase & { balanceCents: nu
   return renderEmail({
     subject: `Reminder: invoice ${input.number} was due ${formatDate(input.dueOn)}`,
     firmName: input.firmName,
+    firmContact: input.firmContact,
     greeting: 'Hello,',
     paragraphs: [
       `Invoice ${input.number} for ${input.propertyName} was due on ${formatDate(input.dueOn)} (${input.daysOverdue} ${input.daysOverdue === 1 ? 'day' : 'days'} ago); ${formatCents(input.balanceCents)} is still to pay.`,
@@ -72,6 +75,7 @@ export function refundEmail(input: InvoiceMailBase & { amountCents: number }): R
   return renderEmail({
     subject: `Refund of ${formatCents(input.amountCents)} on invoice ${input.number}`,
     firmName: input.firmName,
+    firmContact: input.firmContact,
     greeting: 'Hello,',
     paragraphs: [`We refunded ${formatCents(input.amountCents)} of your payment on invoice ${input.number} (${input.propertyName}). It usually reaches your card within 5 to 10 business days.`],
     action: { label: 'See the invoice', url: input.url },

@@ -16,8 +16,8 @@ const CLIENT_WRITES: { pattern: RegExp; why: string }[] = [
   { pattern: /^post \/files$/, why: 'upload a file when its consultant allows it' },
   { pattern: /^(post|put|patch) \/auth\/(logout|password.*|me.*)$/, why: 'its own session and password' },
 ];
-/** Public routes are nobody's writes: each is guarded by its own token, signature or credentials. */
-const PUBLIC_WRITES = [/^post \/auth\/(login|invitations|password-reset)/, /^post \/webhooks\//];
+/** Public routes are nobody's writes: each is guarded by its own token, signature or credentials (sign-up by its rate limit and e-mail confirmation). */
+const PUBLIC_WRITES = [/^post \/auth\/(login|invitations|password-reset|verify-email)/, /^post \/webhooks\//, /^post \/signup$/];
 /** Calling these would end the agent's own session; they are only checked against the allow-list. */
 const NOT_CALLED = [/^post \/auth\/logout$/];
 

@@ -13,6 +13,8 @@ import * as m0016 from './0016-background-jobs';
 import * as m0018 from './0018-refund-request-keys';
 import * as m0019 from './0019-outbox-retry-window';
 import * as m0024 from './0024-geo-imports';
+import * as m0026 from './0026-firm-profile';
+import * as m0027 from './0027-signup';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -29,4 +31,6 @@ export const migrations = [
   { name: '0018-refund-request-keys', ...m0018 },
   { name: '0019-outbox-retry-window', ...m0019 },
   { name: '0024-geo-imports', ...m0024 },
+  { name: '0026-firm-profile', ...m0026 },
+  { name: '0027-signup', ...m0027 },
 ];

@@ -5,6 +5,7 @@ import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
 import { Firm, User } from '../../models';
 import { verifyPassword } from './passwords';
+import { AppError } from '../../errors';
 import { usableZone } from '../clock';
 import type { SessionUser } from '../../../shared/schemas/auth';
 
@@ -43,6 +44,8 @@ passport.use(
       const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
       const ok = await verifyPassword(password, user?.passwordHash ?? null);
       if (!user || !ok || !user.active) return done(null, false);
+      // Only someone who knows the password learns the address is waiting for its confirmation.
+      if (!user.emailVerified) return done(new AppError(403, 'email_unconfirmed', 'Confirm your e-mail address first: open the link we sent when you signed up, then sign in.'));
       await user.update({ lastSignInAt: new Date() });
       return done(null, await toSessionUser(user));
     } catch (err) {

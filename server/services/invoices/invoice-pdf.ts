@@ -5,6 +5,8 @@ import { renderInvoicePdf } from '../../../templates/documents/invoice';
 import { config } from '../../config';
 import { usableZone } from '../clock';
 import { todayIn } from '../../../shared/domain/clock';
+import { documentFirm } from '../firm-profile';
+import { letterheadFirm } from '../documents/firm-letterhead';
 
 /** The issued part of the invoice's document as it stands now (firm, client, property, dates, lines, totals). */
 export async function invoiceDocumentSnapshot(invoice: Invoice, transaction?: Transaction): Promise<InvoiceDocumentSnapshot> {
@@ -16,7 +18,7 @@ export async function invoiceDocumentSnapshot(invoice: Invoice, transaction?: Tr
     InvoiceLine.findAll({ where: { invoiceId: invoice.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction }),
   ]);
   return {
-    firm: { name: firm!.name, phone: firm!.phone, email: firm!.email, address: firm!.address },
+    firm: documentFirm(firm!),
     client: { name: client?.name ?? '', address: client?.address ?? null },
     property: property ? { name: property.name } : null,
     invoice: {
@@ -52,6 +54,7 @@ export async function renderInvoicePdfFor(invoice: Invoice, transaction?: Transa
   const zone = usableZone(firm?.timezone);
   return renderInvoicePdf({
     ...issued,
+    firm: await letterheadFirm(issued.firm),
     invoice: { ...issued.invoice, status: invoice.status },
     totals: { ...issued.totals, amountPaidCents: invoice.amountPaidCents, balanceCents: Math.max(0, issued.totals.totalCents - invoice.amountPaidCents) },
     payments: payments.map((p) => ({ receivedOn: todayIn(zone, p.receivedAt), amountCents: p.amountCents, refundedCents: p.refundedCents })),

@@ -1,7 +1,8 @@
 /** Freezes a property's plan (boundary and units) and what the document shows beside it, for a proposal version when it is sent. */
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
-import { Property, ProposalLine, type Proposal } from '../../models';
+import { Firm, Property, ProposalLine, type Proposal } from '../../models';
+import { documentFirm } from '../firm-profile';
 import { proposalContext } from './proposal-reader';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
 import { stripCrs } from '../../presenters/geojson';
@@ -10,6 +11,7 @@ import type { PlanSnapshot } from '../../../shared/domain/proposal-totals';
 /** The plan of the proposal's property and the document's context as they stand, read inside the caller's transaction. */
 export async function takePlanSnapshot(proposal: Proposal, transaction: Transaction): Promise<PlanSnapshot> {
   const property = await Property.findByPk(proposal.propertyId, { transaction });
+  const firm = await Firm.findByPk(proposal.firmId, { transaction });
   const lines = await ProposalLine.findAll({ where: { proposalId: proposal.id }, order: [['position', 'ASC']], transaction });
   const context = await proposalContext(proposal, lines, transaction);
   const rows = await sequelize.query<UnitRow>(
@@ -27,5 +29,6 @@ export async function takePlanSnapshot(proposal: Proposal, transaction: Transact
     },
     units: rows.map(presentUnit).map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
     context: { clientName: context.clientName, groups: context.groups, cautions: context.cautions },
+    ...(firm ? { firm: documentFirm(firm) } : {}),
   };
 }

@@ -13,6 +13,8 @@ import { takePlanSnapshot } from './plan-snapshot';
 import { usableZone } from '../clock';
 import { todayIn } from '../../../shared/domain/clock';
 import type { PlanSnapshot } from '../../../shared/domain/proposal-totals';
+import { documentFirm } from '../firm-profile';
+import { letterheadFirm } from '../documents/firm-letterhead';
 
 /** The plan a draft shows: the property's boundary and units as they stand now. */
 async function livePlan(proposal: Proposal, transaction?: Transaction): Promise<PlanSnapshot> {
@@ -46,7 +48,8 @@ export async function renderProposalPdfFor(proposal: Proposal, transaction?: Tra
   if (!property.boundary || !property.acres) throw unprocessable('Draw the property boundary before making the proposal’s PDF.');
   const zone = usableZone(firm?.timezone);
   const input: ProposalDocumentInput = {
-    firm: { name: firm!.name, phone: firm!.phone, email: firm!.email, address: firm!.address },
+    // A sent version prints the firm as it was when sent; one sent before the profile was kept, and a draft, the firm now.
+    firm: await letterheadFirm(plan.firm ?? documentFirm(firm!)),
     client: { name: dto.clientName },
     property: { name: property.name, acres: property.acres, boundary: property.boundary as ProposalDocumentInput['property']['boundary'], locality: property.locality ?? undefined },
     proposal: {

@@ -20,7 +20,10 @@ type FieldErrors = Partial<Record<'email' | 'password', string>>;
  * phone; a successful sign-in opens the app at the person's home (or the page they asked for).
  */
 export function LoginPage() {
-  const next = safeNext(new URLSearchParams(window.location.search).get('next'));
+  const query = new URLSearchParams(window.location.search);
+  const next = safeNext(query.get('next'));
+  // The confirmation page sends the new owner here with their address filled in.
+  const initialEmail = query.get('email') ?? '';
   const [errors, setErrors] = useState<FieldErrors>({});
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -64,7 +67,7 @@ export function LoginPage() {
   return (
     <AuthCard title="Sign in">
       <form onSubmit={(e) => void submit(e)} onFocus={() => void loadSchema()} noValidate className="flex flex-col gap-4">
-        <TextField label="E-mail" name="email" type="email" autoComplete="username" error={errors.email} />
+        <TextField label="E-mail" name="email" type="email" autoComplete="username" defaultValue={initialEmail} error={errors.email} />
         <TextField label="Password" name="password" type="password" autoComplete="current-password" error={errors.password} />
         {error ? (
           <p role="alert" className="rounded border border-clay/40 bg-clay/5 px-3 py-2 text-sm text-clay">
@@ -76,6 +79,9 @@ export function LoginPage() {
         </Button>
         <a href={paths.forgotPassword} className="text-center text-sm text-moss-deep underline-offset-2 hover:underline">
           Forgot password
+        </a>
+        <a href={paths.signup} className="text-center text-sm text-moss-deep underline-offset-2 hover:underline">
+          New here? Set up your firm
         </a>
       </form>
     </AuthCard>

@@ -2,9 +2,11 @@ import { Link } from 'react-router-dom';
 import { useDesk } from '../../../features/desk/api/get-desk';
 import { useMe } from '../../../features/auth/api/get-me';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
-import { describeAction, formatAcres, formatRelative } from '../../../lib/format';
+import { formatAcres, formatRelative } from '../../../lib/format';
+import { describeAction } from '../../../features/desk/lib/action-words';
 import { paths } from '../../../config/paths';
 import { SeasonStrip } from '../../../features/desk/components/season-strip';
+import { FirstSteps } from '../../../features/desk/components/first-steps';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatDay } from '../../../lib/firm-clock';
 
@@ -31,6 +33,7 @@ export function DeskPage() {
         <h1 className="text-2xl font-bold">Desk</h1>
         <p className="text-slate">Good to see you, {firstName}. Here is {d.firm.name} this week.</p>
       </div>
+      <FirstSteps clients={d.counts.clients} />
       <div className="grid grid-cols-2 gap-3 lg:grid-cols-4">
         <Figure label="Clients" value={String(d.counts.clients)} />
         <Figure label="Properties" value={String(d.counts.properties)} />

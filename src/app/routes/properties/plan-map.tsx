@@ -24,6 +24,7 @@ import { useUpdatePropertyBoundary } from '../../../features/plan-map/api/update
 import { fetchImportGeometries, useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
 import { usePlanUndo } from '../../../features/plan-map/hooks/use-plan-undo';
 import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
+import { PlaceSearch } from '../../../features/plan-map/components/place-search';
 import { DrawChips } from '../../../features/plan-map/components/draw-chips';
 import { PlanLedger } from '../../../features/plan-map/components/plan-ledger';
 import { UnitDetail } from '../../../features/plan-map/components/unit-detail';
@@ -180,13 +181,13 @@ export function PlanMapPage() {
   const gridBox = useMemo(() => JSON.parse(gridKey) as ReturnType<typeof bboxOf>, [gridKey]);
   useEffect(() => controller?.setBoundary(boundary, gridBox), [controller, boundary, gridBox]);
 
-  // Keep the chips' height clear when fitting the view.
+  // Keep the search box and the chips clear when fitting the view.
   useEffect(() => {
     const el = chipsRef.current;
     if (!controller || !el) return;
-    const observer = new ResizeObserver(() => controller.setInsetTop(el.offsetHeight + 8));
+    const observer = new ResizeObserver(() => controller.setInsetTop(el.offsetTop + el.offsetHeight + 8));
     observer.observe(el);
-    controller.setInsetTop(el.offsetHeight + 8);
+    controller.setInsetTop(el.offsetTop + el.offsetHeight + 8);
     return () => observer.disconnect();
   }, [controller]);
 
@@ -543,6 +544,9 @@ export function PlanMapPage() {
         <div className="relative min-h-[22rem] min-w-0 flex-1">
           <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
           <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
+            <div className="pointer-events-auto relative z-20 max-w-full">
+              <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
+            </div>
             <div ref={chipsRef} className="pointer-events-auto max-w-full">
               <DrawChips active={drawTarget} onChoose={chooseTool} />
             </div>

@@ -12,6 +12,7 @@ import { Button } from '../../../components/ui/button';
 import { useToast } from '../../../components/ui/toast';
 import { formatRelative } from '../../../lib/format';
 import { paths } from '../../../config/paths';
+import { FirmProfileForm } from '../../../features/firm/components/firm-profile-form';
 import { JobsCard } from '../../../features/jobs/components/jobs-card';
 import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
 import { UndeliveredMailCard } from '../../../features/outbox/components/undelivered-mail-card';
@@ -82,6 +83,11 @@ export function TeamPage() {
         <h1 className="text-2xl font-bold">Settings · Team</h1>
         {isOwner ? <Link className="text-sm text-moss-deep hover:underline" to={paths.mail}>Captured mail (development)</Link> : null}
       </div>
+      {isOwner ? (
+        <Card title="Firm profile">
+          <FirmProfileForm />
+        </Card>
+      ) : null}
       {isOwner ? (
         <Card title="Firm settings">
           <FirmSettingsForm />

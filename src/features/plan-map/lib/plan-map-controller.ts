@@ -567,6 +567,14 @@ export class PlanMapController {
     });
   }
 
+  /** Flies to a place found by the search box: a county's box, or a town or typed point at a close zoom. */
+  flyToPlace(place: { kind: 'county' | 'town' | 'coordinates'; center: [number, number]; bbox?: [number, number, number, number] }): void {
+    this.whenReady(() => {
+      if (place.bbox) this.map.fitBounds(new LngLatBounds([place.bbox[0], place.bbox[1]], [place.bbox[2], place.bbox[3]]), { padding: 40, duration: 800 });
+      else this.map.flyTo({ center: place.center, zoom: place.kind === 'town' ? 12 : 15, duration: 800 });
+    });
+  }
+
   /** Shows a name tag over a position (the selected unit), or none. */
   setNameTag(tag: { lon: number; lat: number; text: string } | null): void {
     this.nameMarker?.remove();
