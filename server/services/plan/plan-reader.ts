@@ -4,7 +4,7 @@
  * in the same transaction, so a cache entry can never be stale (only unused) — several instances
  * stay consistent without sharing memory.
  */
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
 import { Property } from '../../models';
 import { notFound } from '../../errors';
@@ -49,13 +49,18 @@ export async function loadPlan(propertyId: number, firmId: number, options: { le
     property,
     revision: property.revision,
     units: () =>
-      (rows ??= sequelize.query<UnitRow>(UNITS_SQL, { replacements: { propertyId }, type: QueryTypes.SELECT })),
+      (rows ??= readUnitRows(propertyId)),
   };
 }
 
 const UNITS_SQL = `SELECT id, property_id AS "propertyId", kind, name, notes, ST_AsGeoJSON(geometry, 9)::json AS geometry,
                 acres, perimeter_ft AS "perimeterFt", length_ft AS "lengthFt", created_at AS "createdAt", updated_at AS "updatedAt"
          FROM units WHERE property_id = :propertyId ORDER BY id`;
+
+/** A property's units as lean rows (geometry as GeoJSON), optionally inside the caller's transaction. */
+export function readUnitRows(propertyId: number, transaction?: Transaction): Promise<UnitRow[]> {
+  return sequelize.query<UnitRow>(UNITS_SQL, { replacements: { propertyId }, type: QueryTypes.SELECT, transaction });
+}
 
 /**
  * The plan's revision, read first and alone (one small indexed query): 404 outside the firm. A write
@@ -79,7 +84,7 @@ export const planEtagAt = (propertyId: number, revision: number): string => `W/"
  */
 export function unitsAnswer(propertyId: number, revision: number): Promise<Precompressed> {
   return remember(`units-answer:${propertyId}:${revision}`, async () => {
-    const rows = await sequelize.query<UnitRow>(UNITS_SQL, { replacements: { propertyId }, type: QueryTypes.SELECT });
+    const rows = await readUnitRows(propertyId);
     return precompress(Buffer.from(JSON.stringify({ data: rows.map(presentUnit) })));
   });
 }

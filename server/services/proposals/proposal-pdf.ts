@@ -4,12 +4,11 @@ import { Firm, Property, Proposal } from '../../models';
 import { readProposal } from './proposal-reader';
 import { renderProposalPdf } from '../../../templates/documents/proposal';
 import type { ProposalDocumentInput } from '../../../templates/documents/proposal-input';
-import { stripCrs } from '../../presenters/geojson';
 import { loadPlan } from '../plan/plan-reader';
 import { presentUnit } from '../../presenters/unit';
 import { unprocessable } from '../../errors';
 import { sequelize } from '../../db/sequelize';
-import { takePlanSnapshot } from './plan-snapshot';
+import { planOf, takePlanSnapshot } from './plan-snapshot';
 import { usableZone } from '../clock';
 import { todayIn } from '../../../shared/domain/clock';
 import type { PlanSnapshot } from '../../../shared/domain/proposal-totals';
@@ -20,16 +19,7 @@ import { letterheadFirm } from '../documents/firm-letterhead';
 async function livePlan(proposal: Proposal, transaction?: Transaction): Promise<PlanSnapshot> {
   const property = await Property.findByPk(proposal.propertyId, { transaction });
   const plan = await loadPlan(proposal.propertyId, proposal.firmId);
-  const units = (await plan.units()).map(presentUnit);
-  return {
-    property: {
-      name: property?.name ?? '',
-      acres: property?.acres ?? null,
-      boundary: property?.boundary ? stripCrs(property.boundary) : null,
-      locality: property ? [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || null : null,
-    },
-    units: units.map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres, lengthFt: u.lengthFt })),
-  };
+  return planOf(property, (await plan.units()).map(presentUnit));
 }
 
 /**
