@@ -1,7 +1,7 @@
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { execFileSync } from 'node:child_process';
-import { signedInAgent, type Agent } from '../support/test-app';
-import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
+import { signedInAgent, type Agent, propertyWithBrassicaPlot } from '../support/test-app';
+import { makeFirm, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { Firm, Practice } from '../../server/models';
 
@@ -58,10 +58,7 @@ describe('today at 11:30 PM on the last day of a month, in Chicago', () => {
     ctx = await makeFirm();
     consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
     client = await signedInAgent(ctx.users.client.email, PASSWORD);
-    propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-    const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
-    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
-    expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+    propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
   });
 
   it('a proposal valid until November 30 is still open and can be approved; the invoice is dated November 30', async () => {
@@ -155,10 +152,7 @@ describe('documents that never change', () => {
     consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
     owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
     client = await signedInAgent(ctx.users.client.email, PASSWORD);
-    propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-    const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
-    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
-    expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+    propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
   });
 
   it('a sent and then approved proposal’s PDF keeps its plan when units are drawn later; a new draft shows them', async () => {

@@ -1,10 +1,10 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { encode } from 'fast-png';
-import { signedInAgent, type Agent } from '../support/test-app';
-import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
-import { rectangle } from '../support/geodesy';
-import { Firm, OutboxMessage, Practice } from '../../server/models';
+import { signedInAgent, type Agent, propertyWithBrassicaPlot } from '../support/test-app';
+import { makeFirm, PASSWORD } from '../support/factories';
+
+import { Firm, OutboxMessage } from '../../server/models';
 
 const send = (agent: Agent, method: 'post' | 'patch', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
 const upload = (agent: Agent, bytes: Buffer, name: string) => agent.post('/api/firm/logo').set('X-CSRF-Token', agent.csrf).attach('file', bytes, name);
@@ -176,10 +176,7 @@ describe('documents and e-mails print the profile; a sent one keeps it', () => {
     owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
     consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
     client = await signedInAgent(ctx.users.client.email, PASSWORD);
-    propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-    const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
-    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
-    expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+    propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
     await send(owner, 'patch', '/api/firm', PROFILE).expect(200);
     await upload(owner, png(240, 90), 'logo.png').expect(201);
   });

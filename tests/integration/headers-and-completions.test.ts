@@ -9,12 +9,12 @@ import fs from 'node:fs';
 import path from 'node:path';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { signedInAgent, testApp, type Agent } from '../support/test-app';
-import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
-import { rectangle } from '../support/geodesy';
+import { signedInAgent, testApp, type Agent, propertyWithBrassicaPlot } from '../support/test-app';
+import { makeFirm, PASSWORD } from '../support/factories';
+
 import { createApp } from '../../server/app';
 import { config } from '../../server/config';
-import { Practice, TaskPhoto } from '../../server/models';
+import { TaskPhoto } from '../../server/models';
 
 const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
 const send = (agent: Agent, method: 'post' | 'patch', url: string, body: object = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body);
@@ -69,10 +69,7 @@ describe('the same completion sent several times at once', () => {
     const consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
     const client = await signedInAgent(ctx.users.client.email, PASSWORD);
     crew = await signedInAgent(ctx.users.crew.email, PASSWORD);
-    const propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-    const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
-    const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
-    expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+    const propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
     const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 0 });
     expect((await send(consultant, 'post', `/api/proposals/${draft.body.data.id}/send`)).status).toBe(200);
     expect((await send(client, 'post', `/api/proposals/${draft.body.data.id}/approve`, { signedName: 'Pat Landowner' })).status).toBe(200);

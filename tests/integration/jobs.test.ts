@@ -4,10 +4,10 @@
  * season report made by a job whose progress the page polls (202 when it takes longer than the wait).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { signedInAgent, type Agent } from '../support/test-app';
-import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
-import { rectangle } from '../support/geodesy';
-import { OutboxMessage, Practice } from '../../server/models';
+import { signedInAgent, type Agent, propertyWithBrassicaPlot } from '../support/test-app';
+import { makeFirm, PASSWORD } from '../support/factories';
+
+import { OutboxMessage } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
 import { config } from '../../server/config';
 import { deliverJob, enqueueJob, startJobQueue, waitForJob } from '../../server/services/jobs/job-queue';
@@ -24,10 +24,7 @@ beforeAll(async () => {
   ctx = await makeFirm();
   owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
   consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
-  propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-  const plot = await send(consultant, 'post', `/api/properties/${propertyId}/units`, { kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
-  const brassica = (await Practice.findOne({ where: { firmId: ctx.firm.id, key: 'fall-brassica-plot' } }))!.id;
-  expect((await send(consultant, 'post', `/api/units/${plot.body.data.id}/prescriptions`, { practiceId: brassica })).status).toBe(201);
+  propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
 });
 
 describe('the PDF and e-mail of a sent proposal', () => {

@@ -2,6 +2,9 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import { createApp } from '../../server/app';
+import { makeProperty } from './factories';
+import { rectangle } from './geodesy';
+import { Practice } from '../../server/models';
 
 let app: Express | null = null;
 
@@ -50,4 +53,18 @@ export async function deliverAllMail(): Promise<void> {
     const { sent } = await deliverDueMessages(100);
     if (sent === 0) return;
   }
+}
+
+/**
+ * A new property of the client with one 120 m × 80 m food plot carrying the starter library's fall
+ * brassica prescription, made through the API as the consultant: the usual start of a priced plan.
+ */
+export async function propertyWithBrassicaPlot(consultant: Agent, firmId: number, clientId: number): Promise<{ propertyId: number; plotId: number }> {
+  const propertyId = (await makeProperty(firmId, clientId)).id;
+  const plot = await consultant.post(`/api/properties/${propertyId}/units`).set('X-CSRF-Token', consultant.csrf).send({ kind: 'food-plot', name: 'North plot', geometry: rectangle(-90.938, 43.2655, 120, 80) });
+  if (plot.status !== 201) throw new Error(`plot not drawn: ${plot.status} ${JSON.stringify(plot.body)}`);
+  const brassica = (await Practice.findOne({ where: { firmId, key: 'fall-brassica-plot' } }))!.id;
+  const made = await consultant.post(`/api/units/${plot.body.data.id}/prescriptions`).set('X-CSRF-Token', consultant.csrf).send({ practiceId: brassica });
+  if (made.status !== 201) throw new Error(`prescription not written: ${made.status} ${JSON.stringify(made.body)}`);
+  return { propertyId, plotId: plot.body.data.id as number };
 }
