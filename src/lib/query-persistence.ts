@@ -14,9 +14,19 @@ import type { SessionUser } from '../../shared/schemas/auth';
 export const PERSIST_MAX_AGE_MS = 7 * 24 * 3600 * 1000;
 
 let stopPersisting: (() => void) | null = null;
+/** Set at sign-out: the persister's throttled write, already scheduled, must not put the data back. */
+let closed = false;
+
+/** The storage the persister writes through; it writes nothing once this session is forgotten. */
+const sessionStorageOfQueries = {
+  getItem: persistedCacheStorage.getItem,
+  setItem: (key: string, value: string) => (closed ? Promise.resolve() : persistedCacheStorage.setItem(key, value)),
+  removeItem: persistedCacheStorage.removeItem,
+};
 
 /** Stops keeping the cache and removes what was kept (sign-out): no write of this session can follow. */
 export async function forgetPersistedQueries(): Promise<void> {
+  closed = true;
   stopPersisting?.();
   stopPersisting = null;
   await clearPersistedCache();
@@ -24,9 +34,10 @@ export async function forgetPersistedQueries(): Promise<void> {
 
 /** Restores the kept cache (at most `waitMs`), then keeps it up to date; answers when the app may render. */
 export async function startQueryPersistence(queryClient: QueryClient, waitMs = 1500): Promise<void> {
+  closed = false;
   // Kept queries must live in memory as long as on disk, or an unmounted one would be dropped from both.
   for (const head of ['auth', 'tasks', 'field', 'portal', 'calendar-feeds']) queryClient.setQueryDefaults([head], { gcTime: PERSIST_MAX_AGE_MS });
-  const persister = createAsyncStoragePersister({ storage: persistedCacheStorage, key: PERSISTED_CACHE_KEY, throttleTime: 1000 });
+  const persister = createAsyncStoragePersister({ storage: sessionStorageOfQueries, key: PERSISTED_CACHE_KEY, throttleTime: 1000 });
   const [unsubscribe, restored] = persistQueryClient({
     queryClient,
     persister,
