@@ -129,13 +129,15 @@ export const optionalText = (max: number) =>
 export const LIST_PAGE = { defaultLimit: 500, maxLimit: 2000 } as const;
 
 /** Paging of a list: `limit` rows from `offset` (query strings, so numbers are coerced). */
+/** A page's `limit` without its default (a list with a page size of its own adds one). */
+export const PageLimitSchema = z.coerce
+  .number()
+  .int({ message: 'limit must be a whole number' })
+  .min(1, { message: 'limit must be at least 1' })
+  .max(LIST_PAGE.maxLimit, { message: `limit must be at most ${LIST_PAGE.maxLimit}` });
+
 export const PageQuerySchema = z.object({
-  limit: z.coerce
-    .number()
-    .int({ message: 'limit must be a whole number' })
-    .min(1, { message: 'limit must be at least 1' })
-    .max(LIST_PAGE.maxLimit, { message: `limit must be at most ${LIST_PAGE.maxLimit}` })
-    .default(LIST_PAGE.defaultLimit),
+  limit: PageLimitSchema.default(LIST_PAGE.defaultLimit),
   offset: z.coerce.number().int({ message: 'offset must be a whole number' }).min(0, { message: 'offset must be zero or more' }).max(1_000_000).default(0),
 });
 export type PageQuery = z.infer<typeof PageQuerySchema>;

@@ -1,8 +1,15 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
-import { IdSchema, IsoDateSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
+import { IdSchema, IsoDateSchema, PageLimitSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskStatus, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
+
+/**
+ * The task list's page when the address does not say: a phone-sized page (about 80 KB of JSON, 8 KB
+ * gzip), so a week or a timeline answers in about the same time however many tasks the firm holds;
+ * the total says how many more there are ("Show more" asks for a longer page).
+ */
+export const TASK_PAGE = { defaultLimit: 100 } as const;
 
 export const TaskListQuerySchema = z
   .object({
@@ -16,7 +23,7 @@ export const TaskListQuerySchema = z
     /** `true` adds each task's unit outline (the field sheet's sketches); lists carry none otherwise. */
     geometry: z.enum(['true', 'false'], { message: 'geometry must be true or false' }).optional(),
   })
-  .extend(PageQuerySchema.shape)
+  .extend({ ...PageQuerySchema.shape, limit: PageLimitSchema.default(TASK_PAGE.defaultLimit) })
   .refine((q) => !q.from || !q.to || q.from <= q.to, { message: '"from" must not come after "to"', path: ['to'] });
 /** A task list filter; the page members may be left out (the server's defaults apply). */
 export type TaskListQuery = Omit<z.infer<typeof TaskListQuerySchema>, 'limit' | 'offset'> & Partial<PageQuery>;

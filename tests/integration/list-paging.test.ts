@@ -6,9 +6,10 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
 import { signedInAgent, type Agent } from '../support/test-app';
-import { Task, Unit } from '../../server/models';
+import { Task, TaskPhoto, Unit } from '../../server/models';
 import { measureUnit } from '../../shared/domain/geometry';
 import { LIST_PAGE } from '../../shared/schemas/common';
+import { TASK_PAGE } from '../../shared/schemas/task';
 import type { Polygon } from 'geojson';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
@@ -51,7 +52,20 @@ describe('paged lists', () => {
     const ids = new Set([...first.body.data.tasks, ...rest.body.data.tasks].map((t: { id: number }) => t.id));
     expect(ids.size).toBe(4);
     const all = await consultant.get('/api/tasks').expect(200);
-    expect(all.body.data.page).toEqual({ total: TASKS, limit: LIST_PAGE.defaultLimit, offset: 0 });
+    // The task list's own phone-sized page when the address does not say (the other lists keep LIST_PAGE).
+    expect(all.body.data.page).toEqual({ total: TASKS, limit: TASK_PAGE.defaultLimit, offset: 0 });
+    expect(TASK_PAGE.defaultLimit).toBeLessThan(LIST_PAGE.defaultLimit);
+  });
+
+  it('answers a listed task exactly as its own read does (names, point, photos)', async () => {
+    const [task] = await Task.findAll({ where: { firmId: ctx.firm.id }, order: [['id', 'ASC']], limit: 1 });
+    await TaskPhoto.create({ firmId: ctx.firm.id, taskId: task.id, storageKey: 'list-paging-photo', originalName: null, contentType: 'image/jpeg', byteSize: 1, latitude: 43.2675, longitude: -90.937, takenAt: new Date('2026-08-10T14:03:04.567Z'), uploadedById: null });
+    const listed = await consultant.get('/api/tasks?geometry=true').expect(200);
+    const one = await consultant.get(`/api/tasks/${task.id}`).expect(200);
+    const fromList = listed.body.data.tasks.find((t: { id: number }) => t.id === task.id);
+    expect(fromList.photos).toHaveLength(1);
+    expect(fromList.photos[0].takenAt).toBe('2026-08-10T14:03:04.567Z');
+    expect(fromList).toEqual(one.body.data);
   });
 
   it('leaves unit outlines out of task lists unless asked', async () => {

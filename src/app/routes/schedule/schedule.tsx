@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { addDays, formatMonthDay } from '../../../../shared/domain/planting-windows';
 import { TASK_STATUSES, weekStart } from '../../../../shared/domain/tasks';
-import { TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
+import { TASK_PAGE, TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
 import { useUpdateTask } from '../../../features/schedule/api/update-task';
 import { useAssignTasks } from '../../../features/schedule/api/assign-tasks';
 import { datesText } from '../../../features/schedule/components/task-text';
@@ -94,7 +94,7 @@ export function SchedulePage() {
   const filterKey = JSON.stringify(filter);
   const [more, setMore] = useState<{ key: string; pages: number }>({ key: filterKey, pages: 1 });
   const pages = more.key === filterKey ? more.pages : 1;
-  const query = pages > 1 ? { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * LIST_PAGE.defaultLimit) } : filter;
+  const query = pages > 1 ? { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * TASK_PAGE.defaultLimit) } : filter;
   const tasks = useTasks(query);
   const team = useTeam();
   const properties = useProperties();
