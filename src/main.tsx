@@ -1,9 +1,13 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import '@fontsource/merriweather/400.css';
-import '@fontsource/merriweather/700.css';
-import '@fontsource/source-sans-3/400.css';
-import '@fontsource/source-sans-3/600.css';
+import '@fontsource/merriweather/latin-400.css';
+import '@fontsource/merriweather/latin-ext-400.css';
+import '@fontsource/merriweather/latin-700.css';
+import '@fontsource/merriweather/latin-ext-700.css';
+import '@fontsource/source-sans-3/latin-400.css';
+import '@fontsource/source-sans-3/latin-ext-400.css';
+import '@fontsource/source-sans-3/latin-600.css';
+import '@fontsource/source-sans-3/latin-ext-600.css';
 import './styles.css';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
@@ -22,5 +26,5 @@ createRoot(document.getElementById('root')!).render(
   </StrictMode>,
 );
 
-// The service worker (offline app shell, update prompt) registers once the page has loaded.
+// The service worker (offline app shell, update prompt) registers a few seconds after the page has loaded.
 registerServiceWorkerAfterLoad();

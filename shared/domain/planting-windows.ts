@@ -10,6 +10,7 @@ import { DomainValidationError } from './errors';
 import type { PracticeDefinition, PracticeStep } from './practice';
 import { requireNumber } from './validation';
 import { formatDate, formatDateSpan } from './clock';
+import { formatIsoDate, formatMonthDay, MONTH_NAMES, parseIsoDate, type IsoDate } from './iso-dates';
 
 export const REGIONS = ['south', 'midsouth', 'midwest', 'north'] as const;
 export type Region = (typeof REGIONS)[number];
@@ -212,49 +213,10 @@ export const BRASSICA_GRAZEABLE_DAYS = { min: 80, max: 150 } as const;
 /** "Plant brassicas 60–90 days before first frost": common practice, no source. */
 export const BRASSICA_DAYS_BEFORE_FROST = { min: 60, max: 90 } as const;
 
-// ---- ISO dates (UTC calendar days) ----
+// ---- ISO dates (UTC calendar days): in iso-dates.ts, re-exported here ----
 
-/** A calendar date as "YYYY-MM-DD". */
-export type IsoDate = string;
-
-const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+export { addDays, daysBetween, formatIsoDate, formatMonthDay, parseIsoDate, type IsoDate } from './iso-dates';
 const DAY_MS = 86_400_000;
-
-/** Parse "YYYY-MM-DD" into a day number (days since 1970-01-01); throws DomainValidationError on bad input. */
-export function parseIsoDate(value: IsoDate, field = 'date'): number {
-  const match = typeof value === 'string' ? /^(\d{4})-(\d{2})-(\d{2})$/.exec(value) : null;
-  if (match) {
-    const [year, month, day] = [Number(match[1]), Number(match[2]), Number(match[3])];
-    const ms = Date.UTC(year, month - 1, day);
-    const check = new Date(ms);
-    if (check.getUTCFullYear() === year && check.getUTCMonth() === month - 1 && check.getUTCDate() === day) {
-      return Math.round(ms / DAY_MS);
-    }
-  }
-  throw new DomainValidationError(field, 'Enter a whole, real date: month, day and year.');
-}
-
-/** Format a day number as "YYYY-MM-DD". */
-export function formatIsoDate(dayNumber: number): IsoDate {
-  return new Date(dayNumber * DAY_MS).toISOString().slice(0, 10);
-}
-
-/** Add days to an ISO date. */
-export function addDays(date: IsoDate, days: number): IsoDate {
-  return formatIsoDate(parseIsoDate(date) + days);
-}
-
-/** Whole days from `from` to `to` (negative when `to` is earlier). */
-export function daysBetween(from: IsoDate, to: IsoDate): number {
-  return parseIsoDate(to) - parseIsoDate(from);
-}
-
-/** "Aug 15" for an ISO date. */
-export function formatMonthDay(date: IsoDate): string {
-  const day = parseIsoDate(date);
-  const d = new Date(day * DAY_MS);
-  return `${MONTH_NAMES[d.getUTCMonth()]} ${d.getUTCDate()}`;
-}
 
 function isoFromMonthDay(year: number, value: MonthDay): IsoDate {
   return formatIsoDate(Math.round(Date.UTC(year, value.month - 1, value.day) / DAY_MS));

@@ -8,7 +8,7 @@ import { CAUTIONS, STEP_KIND_CAUTIONS } from './cautions';
 import type { PracticeDefinition } from './practice';
 import type { PrescriptionResult } from './prescription-quantities';
 import type { StepWindow } from './planting-windows';
-import { addDays, parseIsoDate, type IsoDate } from './planting-windows';
+import { addDays, parseIsoDate, type IsoDate } from './iso-dates';
 import { formatDate, formatDateSpan } from './clock';
 
 /** The header that carries a completion's idempotency key (one per completion, reused on every retry). */

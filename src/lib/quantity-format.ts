@@ -1,5 +1,5 @@
 /** Display of quantities and dates for the practice library and prescriptions. */
-import { formatMonthDay } from '../../shared/domain/planting-windows';
+import { formatMonthDay } from '../../shared/domain/iso-dates';
 
 /** A number with thousands separators and at most `maxDigits` decimals ("1,234.5"). */
 export const formatQuantity = (value: number | null | undefined, maxDigits = 2): string =>

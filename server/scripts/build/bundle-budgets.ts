@@ -97,6 +97,7 @@ export const OFFLINE_PAGES = [
   'src/app/routes/field/field-task.tsx',
   'src/features/field/components/complete-form.tsx',
   'src/features/field/components/skip-form.tsx',
+  'src/features/field/components/calendar-feeds-card.tsx',
   'src/components/layouts/portal-layout.tsx',
   'src/app/routes/portal/portal-home.tsx',
   'src/app/routes/portal/portal-property.tsx',

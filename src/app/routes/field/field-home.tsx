@@ -1,14 +1,17 @@
+import { lazy, Suspense } from 'react';
 import { useFieldHome } from '../../../features/field/api/get-field-home';
 import { useMe } from '../../../features/auth/api/get-me';
 import { useMyTasks } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { TaskCard } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
-import { CalendarFeedsCard } from '../../../features/field/components/calendar-feeds-card';
 import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock';
+
+// Below the fold and rarely used: its code loads after the sheet shows (kept in the offline shell).
+const CalendarFeedsCard = lazy(() => import('../../../features/field/components/calendar-feeds-card').then((m) => ({ default: m.CalendarFeedsCard })));
 
 /** The assigned tasks grouped Overdue, This week, Coming up. */
 function TaskBuckets({ me }: { me: { id: number; role: string } }) {
@@ -112,7 +115,9 @@ export function FieldHomePage() {
           <li>Follow local codes, state wildlife rules and licensed practice; ask your consultant when unsure.</li>
         </ul>
       </CautionBox>
-      <CalendarFeedsCard />
+      <Suspense fallback={null}>
+        <CalendarFeedsCard />
+      </Suspense>
     </div>
   );
 }
