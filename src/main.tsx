@@ -26,5 +26,5 @@ createRoot(document.getElementById('root')!).render(
   </StrictMode>,
 );
 
-// The service worker (offline app shell, update prompt) registers a few seconds after the page has loaded.
+// The service worker (offline app shell, update prompt) registers once the page has loaded.
 registerServiceWorkerAfterLoad();

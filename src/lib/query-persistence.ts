@@ -3,8 +3,8 @@
  * render, so the field sheet, a task and the portal open with no signal showing the last data this
  * person saw. Sign-in and sign-out clear it (lib/persisted-cache.ts).
  */
-import type { QueryClient } from '@tanstack/react-query';
-import { persistQueryClient } from '@tanstack/react-query-persist-client';
+import { dehydrate, type DehydrateOptions, type QueryClient } from '@tanstack/react-query';
+import { persistQueryClient, type PersistedClient } from '@tanstack/react-query-persist-client';
 import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
 import { clearPersistedCache, PERSISTED_CACHE_KEY, persistedCacheStorage } from './persisted-cache';
 import { shouldPersistQuery } from './persist-rules';
@@ -32,24 +32,56 @@ export async function forgetPersistedQueries(): Promise<void> {
   await clearPersistedCache();
 }
 
+const BUSTER = 'browseline-1';
+
+/** Which queries are kept: answered ones this person's role may keep (persist-rules.ts), read when the cache is saved. */
+function keptQueries(queryClient: QueryClient): DehydrateOptions {
+  return {
+    shouldDehydrateQuery: (query) => {
+      const role = queryClient.getQueryData<SessionUser | null>(['auth', 'me'])?.role;
+      return query.state.status === 'success' && shouldPersistQuery(query.queryKey, role);
+    },
+  };
+}
+
+/** What the persister would write now (its format: buster, time, dehydrated queries), for an immediate save. */
+export function persistedSnapshot(queryClient: QueryClient, now = Date.now()): PersistedClient {
+  return { buster: BUSTER, timestamp: now, clientState: dehydrate(queryClient, keptQueries(queryClient)) };
+}
+
+let flushArmed = false;
+/**
+ * Saves the cache at once when the page is hidden or left (a reload, another app): the persister's
+ * throttled write could otherwise still be pending, and the page would open again without it and
+ * wait for the network before showing anything.
+ */
+function saveWhenLeaving(queryClient: QueryClient): void {
+  if (flushArmed || typeof window === 'undefined') return;
+  flushArmed = true;
+  const save = () => {
+    if (closed) return;
+    void sessionStorageOfQueries.setItem(PERSISTED_CACHE_KEY, JSON.stringify(persistedSnapshot(queryClient))).catch(() => undefined);
+  };
+  window.addEventListener('pagehide', save);
+  document.addEventListener('visibilitychange', () => {
+    if (document.visibilityState === 'hidden') save();
+  });
+}
+
 /** Restores the kept cache (at most `waitMs`), then keeps it up to date; answers when the app may render. */
 export async function startQueryPersistence(queryClient: QueryClient, waitMs = 1500): Promise<void> {
   closed = false;
   // Kept queries must live in memory as long as on disk, or an unmounted one would be dropped from both.
   for (const head of ['auth', 'tasks', 'field', 'portal', 'calendar-feeds']) queryClient.setQueryDefaults([head], { gcTime: PERSIST_MAX_AGE_MS });
-  const persister = createAsyncStoragePersister({ storage: sessionStorageOfQueries, key: PERSISTED_CACHE_KEY, throttleTime: 1000 });
+  const persister = createAsyncStoragePersister({ storage: sessionStorageOfQueries, key: PERSISTED_CACHE_KEY, throttleTime: 250 });
   const [unsubscribe, restored] = persistQueryClient({
     queryClient,
     persister,
     maxAge: PERSIST_MAX_AGE_MS,
-    buster: 'browseline-1',
-    dehydrateOptions: {
-      shouldDehydrateQuery: (query) => {
-        const role = queryClient.getQueryData<SessionUser | null>(['auth', 'me'])?.role;
-        return query.state.status === 'success' && shouldPersistQuery(query.queryKey, role);
-      },
-    },
+    buster: BUSTER,
+    dehydrateOptions: keptQueries(queryClient),
   });
   stopPersisting = unsubscribe;
+  saveWhenLeaving(queryClient);
   await Promise.race([restored.catch(() => undefined), new Promise((resolve) => setTimeout(resolve, waitMs))]);
 }

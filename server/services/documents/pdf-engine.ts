@@ -5,7 +5,8 @@
  *
  * - fonts are read and parsed once per thread: pdfkit parses a font file (cmap, glyph metrics,
  *   GSUB/GPOS) for every document; here the font bytes stay in memory and fontkit answers the
- *   same parsed font for them again (each document still writes its own subset);
+ *   same parsed font for them again, also when the same bytes are read again from disk (the
+ *   plan map's SVG labels name a font file; each document still writes its own subset);
  * - text layout (shaping a word into glyphs and advances) is kept per font across documents;
  *   pdfkit keeps it only within one document, and not at all for runs with OpenType features
  *   such as our tabular figures, which is most of a table.
@@ -39,6 +40,18 @@ interface EmbeddedFontProto {
 
 /** Parsed fonts by the identity of their bytes (the buffers held in the engine's virtual files). */
 const parsedFonts = new Map<Uint8Array, FontkitFont>();
+/** The same fonts by byte length, for bytes read again from disk (the SVG map's labels name a font file, which pdfkit reads anew). */
+const parsedByLength = new Map<number, { bytes: Uint8Array; font: FontkitFont }[]>();
+
+/** The parsed font of these bytes: the same buffer, or a buffer with the very same bytes. */
+function parsedFontOf(bytes: Uint8Array): FontkitFont | undefined {
+  const same = parsedFonts.get(bytes);
+  if (same) return same;
+  for (const entry of parsedByLength.get(bytes.length) ?? []) {
+    if (Buffer.compare(Buffer.from(entry.bytes.buffer, entry.bytes.byteOffset, entry.bytes.length), Buffer.from(bytes.buffer, bytes.byteOffset, bytes.length)) === 0) return entry.font;
+  }
+  return undefined;
+}
 /** Shaped runs per parsed font: "features\u0000text" → run (bounded). */
 const runCache = new WeakMap<object, Map<string, LayoutRun>>();
 const MAX_RUNS_PER_FONT = 50_000;
@@ -60,18 +73,21 @@ function installFontCaches(fontBuffers: Buffer[]): void {
     const format = font.constructor;
     const probe = format.probe.bind(format);
     if (!(probe as { patched?: boolean }).patched) {
-      const guarded = (b: Uint8Array) => !parsedFonts.has(b) && probe(b);
+      const guarded = (b: Uint8Array) => !parsedFontOf(b) && probe(b);
       (guarded as { patched?: boolean }).patched = true;
       format.probe = guarded;
     }
     parsedFonts.set(buffer, font);
+    const sameLength = parsedByLength.get(buffer.length) ?? [];
+    sameLength.push({ bytes: buffer, font });
+    parsedByLength.set(buffer.length, sameLength);
   }
   class ParsedFont {
     static probe(buffer: Uint8Array): boolean {
-      return parsedFonts.has(buffer);
+      return parsedFontOf(buffer) !== undefined;
     }
     constructor(stream: { buffer: Uint8Array }) {
-      return parsedFonts.get(stream.buffer) as object;
+      return parsedFontOf(stream.buffer) as object;
     }
   }
   fontkit.registerFormat(ParsedFont);
