@@ -80,3 +80,19 @@ describe('rendering in the worker thread', () => {
     expect(pdfWorkerStats().completed - before).toBe(3);
   }, 60_000);
 });
+
+describe('fonts parsed once per thread', () => {
+  it('answers the parsed font again for the same bytes read anew from disk (the plan map labels name a font file)', async () => {
+    const { readFileSync } = await import('node:fs');
+    const { createRequire } = await import('node:module');
+    const { createPdfEngine } = await import('../../../server/services/documents/pdf-engine');
+    const { FONT_FILES } = await import('../../../server/services/documents/pdf');
+    createPdfEngine(FONT_FILES);
+    const requirePdfkit = createRequire(createRequire(createRequire(import.meta.url).resolve('pdfmake')).resolve('pdfkit'));
+    const fontkit = requirePdfkit('fontkit') as { create(buffer: Uint8Array): object };
+    const file = Object.values(FONT_FILES)[0].normal as string;
+    const first = fontkit.create(readFileSync(file));
+    const again = fontkit.create(readFileSync(file));
+    expect(again).toBe(first);
+  });
+});
