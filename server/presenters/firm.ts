@@ -1,8 +1,8 @@
 import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
 import { DEFAULT_IDLE_TIMEOUT_HOURS } from '../../shared/schemas/firm';
-import { usableZone } from '../services/clock';
-import { firmDefaults } from '../services/firm-profile';
+import { usableZone } from '../../shared/domain/clock';
+import { firmDefaults } from '../../shared/domain/firm-defaults';
 import { largeAreaThreshold } from '../../shared/domain/large-area';
 
 /** The firm and the settings the app reads. */

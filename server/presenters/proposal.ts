@@ -1,5 +1,5 @@
 import type { Proposal, ProposalApproval, ProposalLine } from '../models';
-import { priceProposal } from '../services/proposals/pricing';
+import type { ProposalLineInput, ProposalTotals } from '../../shared/domain/proposal-totals';
 import type { ProposalDisplayStatus } from '../../shared/schemas/proposal';
 import type { ProposalDto } from '../../shared/schemas/proposal-dto';
 
@@ -19,9 +19,11 @@ export interface ProposalContext {
   today: string;
 }
 
-/** A proposal with its priced lines, totals, state and approval record. */
-export function presentProposal(p: Proposal, lines: ProposalLine[], approval: ProposalApproval | null, ctx: ProposalContext): ProposalDto {
-  const totals = priceProposal(p, lines);
+/**
+ * A proposal with its priced lines, totals, state and approval record. The caller prices the lines
+ * (services/proposals/pricing.ts) and passes the totals in: a presenter only shapes the answer.
+ */
+export function presentProposal(p: Proposal, lines: ProposalLine[], totals: ProposalTotals<ProposalLineInput & { quantity: string }>, approval: ProposalApproval | null, ctx: ProposalContext): ProposalDto {
   return {
     id: p.id,
     seriesId: p.seriesId ?? p.id,
@@ -47,9 +49,9 @@ export function presentProposal(p: Proposal, lines: ProposalLine[], approval: Pr
       prescriptionId: lines[i].prescriptionId,
       groupLabel: lines[i].groupLabel,
       category: lines[i].category,
-      description: l.description,
+      description: lines[i].description,
       quantity: l.quantity,
-      unit: l.unit,
+      unit: lines[i].unit,
       unitPriceCents: l.unitPriceCents,
       taxable: l.taxable,
       optional: l.optional,

@@ -25,7 +25,7 @@ import { badRequest, conflict, notFound, unprocessable } from '../errors';
 import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
 import { Firm, Proposal } from '../models';
-import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
+import { renderPlanSummaryPdf } from '../services/documents/render-documents';
 import { todayInZone } from '../services/clock';
 
 const r = defineRoutes('/properties');

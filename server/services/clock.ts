@@ -4,17 +4,14 @@
  */
 import type { Transaction } from 'sequelize';
 import { Firm } from '../models';
-import { DEFAULT_TIME_ZONE, isTimeZone, todayIn, type IsoDate } from '../../shared/domain/clock';
+import { todayIn, usableZone, type IsoDate } from '../../shared/domain/clock';
 
 /** The current instant (one place to read it, so tests can pin it with vitest's fake Date). */
 export function now(): Date {
   return new Date();
 }
 
-/** A usable zone: the firm's, or the default when a stored value is missing or unknown. */
-export function usableZone(zone: string | null | undefined): string {
-  return zone && isTimeZone(zone) ? zone : DEFAULT_TIME_ZONE;
-}
+export { usableZone };
 
 /** Today in a zone, now. */
 export function todayInZone(zone: string | null | undefined): IsoDate {

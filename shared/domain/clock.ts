@@ -52,6 +52,11 @@ export function isTimeZone(zone: unknown): zone is string {
   }
 }
 
+/** A usable zone: the firm's, or the default when a stored value is missing or unknown. */
+export function usableZone(zone: string | null | undefined): string {
+  return zone && isTimeZone(zone) ? zone : DEFAULT_TIME_ZONE;
+}
+
 /** Every zone a firm may choose, US zones first (the product's market), then the rest A–Z. */
 export function timeZoneChoices(): string[] {
   const all = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [DEFAULT_TIME_ZONE];

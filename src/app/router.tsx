@@ -2,7 +2,7 @@ import { useEffect } from 'react';
 import { createBrowserRouter, Navigate, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
 import { useMe } from '../features/auth/api/get-me';
 import { homeFor, paths } from '../config/paths';
-import { RequireRole } from '../components/layouts/require-role';
+import { RequireRole } from './layouts/require-role';
 import { Loading } from '../components/ui/card';
 import { NotFoundPage, RouteErrorPage } from './routes/not-found';
 import { libraryRoutes } from './routes/library/library-routes';
@@ -55,7 +55,7 @@ const routes: RouteObject[] = [
   gate(['owner', 'consultant', 'crew', 'client'], [{ path: paths.changePassword, ...page(() => import('./routes/account/change-password'), (m) => m.ChangePasswordPage) }]),
   gate(STAFF, [
     {
-      ...page(() => import('../components/layouts/consultant-layout'), (m) => m.ConsultantLayout),
+      ...page(() => import('./layouts/consultant-layout'), (m) => m.ConsultantLayout),
       children: [
         { path: paths.desk, loader: deskLoader, ...page(() => import('./routes/desk/desk'), (m) => m.DeskPage) },
         { path: paths.clients, ...page(() => import('./routes/clients/clients'), (m) => m.ClientsPage) },
@@ -90,7 +90,7 @@ const routes: RouteObject[] = [
   gate(STAFF, [{ path: paths.planPrint(), lazy: () => import('./routes/properties/plan-print') }]),
   gate(['crew', 'owner', 'consultant'], [
     {
-      ...page(() => import('../components/layouts/field-layout'), (m) => m.FieldLayout),
+      ...page(() => import('./layouts/field-layout'), (m) => m.FieldLayout),
       children: [
         {
           ...page(() => import('./routes/field/field-shell'), (m) => m.FieldShell),
@@ -104,7 +104,7 @@ const routes: RouteObject[] = [
   ]),
   gate(['client'], [
     {
-      ...page(() => import('../components/layouts/portal-layout'), (m) => m.PortalLayout),
+      ...page(() => import('./layouts/portal-layout'), (m) => m.PortalLayout),
       children: [
         { path: paths.portal, loader: portalHomeLoader, ...page(() => import('./routes/portal/portal-home'), (m) => m.PortalHomePage) },
         { path: paths.portalProposals, ...page(() => import('./routes/portal/portal-proposals'), (m) => m.PortalProposalsPage) },

@@ -1,6 +1,6 @@
 /** The firm's block on a document's letterhead: logo, name, address, phone and e-mail, website, licence numbers. */
 import type { Column } from 'pdfmake/interfaces';
-import { DOC_COLORS, FONT_HEADING } from '../../server/services/documents/pdf';
+import { DOC_COLORS, FONT_HEADING } from './kit/layout';
 import { firmContactLines } from '../../shared/domain/firm-contact';
 
 /** What the letterhead prints about the firm; `logo` is a PNG or JPEG data URL. */

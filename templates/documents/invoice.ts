@@ -9,7 +9,7 @@ import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interface
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatCents } from '../../shared/domain/money';
 import { firmBlock, type LetterheadFirm } from './firm-block';
-import { DOC_COLORS, FONT_HEADING, keyValueTable, neverBreakBefore, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
+import { DOC_COLORS, FONT_HEADING, keyValueTable, neverBreakBefore, pageFrame, ruledTableLayout } from './kit/layout';
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
 const OCHRE = '#C99A2E';
@@ -186,9 +186,4 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
       ...(invoice.notes?.trim() ? [{ unbreakable: true, stack: [{ text: 'Notes', style: 'h2' }, { text: invoice.notes, fontSize: 9.5 }] } as Content] : []),
     ],
   };
-}
-
-/** Renders the invoice PDF. Throws DomainValidationError naming the field to fix on bad input. */
-export async function renderInvoicePdf(input: InvoiceDocumentInput): Promise<Buffer> {
-  return renderPdf(invoiceDocument(input));
 }

@@ -12,16 +12,15 @@ import { formatLatLon } from '../../shared/domain/geometry';
 import { formatAcres } from '../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
 import { FEET_PER_MILE } from '../../shared/units';
-import { kindSwatchSvg, renderPlanMap } from '../../server/services/documents/map-svg';
+import { kindSwatchSvg, renderPlanMap } from './kit/map-svg';
 import {
   cautionBox,
   DOC_COLORS,
   FONT_HEADING,
   keyValueTable,
   pageFrame,
-  renderPdf,
   ruledTableLayout,
-} from '../../server/services/documents/pdf';
+} from './kit/layout';
 
 const GeometrySchema = z.custom<Geometry>(
   (v) => typeof v === 'object' && v !== null && typeof (v as { type?: unknown }).type === 'string',
@@ -269,9 +268,4 @@ export function planSummaryDocument(input: PlanSummaryInput): TDocumentDefinitio
     info: { title: `Plan summary — ${property.name}`, author: firm.name, subject: `Habitat plan for ${client.name}` },
     content,
   };
-}
-
-/** Renders the plan summary PDF. Throws DomainValidationError with the field to fix on bad input. */
-export async function renderPlanSummaryPdf(input: PlanSummaryInput): Promise<Buffer> {
-  return renderPdf(planSummaryDocument(input));
 }

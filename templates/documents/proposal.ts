@@ -20,16 +20,15 @@ import { formatCents } from '../../shared/domain/money';
 import { formatDate, formatMoment, isTimeZone } from '../../shared/domain/clock';
 import { formatAcres } from '../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
-import { kindSwatchSvg, renderPlanMap } from '../../server/services/documents/map-svg';
+import { kindSwatchSvg, renderPlanMap } from './kit/map-svg';
 import {
   DOC_COLORS,
   FONT_HEADING,
   keepWithNextRule,
   keyValueTable,
   pageFrame,
-  renderPdf,
   ruledTableLayout,
-} from '../../server/services/documents/pdf';
+} from './kit/layout';
 import { formatLength } from './plan-summary';
 import type { ProposalDocumentInput } from './proposal-input';
 import { firmBlock } from './firm-block';
@@ -859,9 +858,4 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
     },
     content,
   };
-}
-
-/** Renders the proposal PDF. Throws DomainValidationError naming the field to fix on bad input. */
-export async function renderProposalPdf(input: ProposalDocumentInput): Promise<Buffer> {
-  return renderPdf(proposalDocument(input));
 }

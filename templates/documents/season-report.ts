@@ -14,8 +14,8 @@ import { establishedText, hasBars, type SurveyTrendRow } from '../../shared/doma
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatAcres } from '../../shared/domain/plan-checks';
 import { AGE_CLASS_LABELS } from '../../shared/schemas/results';
-import { barChartSvg } from '../../server/services/documents/bar-chart-svg';
-import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, renderPdf, ruledTableLayout } from '../../server/services/documents/pdf';
+import { barChartSvg } from './kit/bar-chart-svg';
+import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, ruledTableLayout } from './kit/layout';
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
 /** DESIGN.md-like chart colours: moss for bucks, clay for does, ochre for fawns. */
@@ -259,9 +259,4 @@ export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumen
     info: { title: `Season report ${input.season.label} — ${input.property.name}`, author: input.firm.name, subject: `Season report for ${input.client.name}` },
     content,
   };
-}
-
-/** Renders the season report PDF. */
-export async function renderSeasonReportPdf(input: SeasonReportDocumentInput): Promise<Buffer> {
-  return renderPdf(seasonReportDocument(input));
 }

@@ -1,5 +1,6 @@
 /** Invoice PDF render time: median of 15 renders of a three-line invoice with a payment (npx tsx tests/bench/invoice-pdf.ts). */
-import { renderInvoicePdf, type InvoiceDocumentInput } from '../../templates/documents/invoice';
+import { type InvoiceDocumentInput } from '../../templates/documents/invoice';
+import { renderInvoicePdf } from '../../server/services/documents/render-documents';
 
 const input: InvoiceDocumentInput = {
   firm: { name: 'Fernhill Habitat Consulting', phone: '(608) 555-0100', email: null, address: null },

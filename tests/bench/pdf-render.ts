@@ -3,7 +3,7 @@
  * cautions) over 5 warm runs, after 5 warm-up runs (the JIT needs a few). Run: `npx tsx tests/bench/pdf-render.ts`.
  * Prints timings; asserts nothing about them.
  */
-import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
+import { renderPlanSummaryPdf } from '../../server/services/documents/render-documents';
 import { couleeBendSummary, offset, UNITS, type FixtureUnit } from '../support/document-fixtures';
 
 const POINT_KINDS = ['stand-site', 'camera-site', 'mock-scrape', 'water-source'] as const;

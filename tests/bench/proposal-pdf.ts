@@ -12,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pdfmake from 'pdfmake';
 import type { Content, TDocumentDefinitions } from 'pdfmake/interfaces';
-import { renderProposalPdf } from '../../templates/documents/proposal';
+import { renderProposalPdf } from '../../server/services/documents/render-documents';
 import { FONT_BODY, FONT_FILES, FONT_HEADING } from '../../server/services/documents/pdf';
 import { couleeBendProposal, FIXTURE_LINES, type FixtureLine } from '../support/proposal-fixtures';
 import { median } from './support';

@@ -5,7 +5,7 @@
  */
 import { Piscina } from 'piscina';
 import { createPdfEngine, renderWithEngine } from './pdf-engine';
-import { unpackDefinition } from './pdf-functions';
+import { unpackDefinition } from '../../../templates/documents/kit/pdf-functions';
 import { FONT_FILES } from './pdf'; // also registers the named document functions
 
 /** The worker's answer: the PDF bytes, or why the render failed. */

@@ -1,7 +1,7 @@
 /** Assembles an invoice's document input and renders its PDF. */
 import type { Transaction } from 'sequelize';
 import { Client, Firm, Invoice, InvoiceLine, InvoicePayment, Property, Proposal, type InvoiceDocumentSnapshot } from '../../models';
-import { renderInvoicePdf } from '../../../templates/documents/invoice';
+import { renderInvoicePdf } from '../documents/render-documents';
 import { config } from '../../config';
 import { usableZone } from '../clock';
 import { todayIn } from '../../../shared/domain/clock';

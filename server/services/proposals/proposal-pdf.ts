@@ -2,7 +2,7 @@
 import type { Transaction } from 'sequelize';
 import { Firm, Property, Proposal } from '../../models';
 import { readProposal } from './proposal-reader';
-import { renderProposalPdf } from '../../../templates/documents/proposal';
+import { renderProposalPdf } from '../documents/render-documents';
 import type { ProposalDocumentInput } from '../../../templates/documents/proposal-input';
 import { loadPlan } from '../plan/plan-reader';
 import { presentUnit } from '../../presenters/unit';

@@ -3,6 +3,7 @@ import type { Transaction } from 'sequelize';
 import { Client, Prescription, Property, Proposal, ProposalApproval, ProposalLine, Unit } from '../../models';
 import { presentProposal, type ProposalContext } from '../../presenters/proposal';
 import { firmToday } from '../clock';
+import { priceProposal } from './pricing';
 
 /** The context of a proposal: names, unit groups with prescription summaries, cautions. */
 export async function proposalContext(p: Proposal, lines: ProposalLine[], transaction?: Transaction): Promise<ProposalContext> {
@@ -40,5 +41,5 @@ export async function readProposal(p: Proposal, transaction?: Transaction) {
     ProposalLine.findAll({ where: { proposalId: p.id }, order: [['position', 'ASC']], transaction }),
     ProposalApproval.findOne({ where: { proposalId: p.id }, transaction }),
   ]);
-  return presentProposal(p, lines, approval, await proposalContext(p, lines, transaction));
+  return presentProposal(p, lines, priceProposal(p, lines), approval, await proposalContext(p, lines, transaction));
 }

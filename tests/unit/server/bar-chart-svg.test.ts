@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { barChartLayout, barChartSvg, niceStep } from '../../../server/services/documents/bar-chart-svg';
+import { barChartLayout, barChartSvg, niceStep } from '../../../templates/documents/kit/bar-chart-svg';
 
 describe('niceStep', () => {
   it('picks 1, 2 or 5 × 10ⁿ so that at most five steps reach the top', () => {

@@ -10,9 +10,10 @@ import { DomainValidationError } from '../../../shared/domain/errors';
 import { formatAcres } from '../../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../../shared/domain/unit-kinds';
 import { woffToSfnt } from '../../../server/services/documents/fonts';
-import { escapeXml, projectionFor, renderPlanMap, renderPlanMapSvg, type PlanMapUnit } from '../../../server/services/documents/map-svg';
+import { escapeXml, projectionFor, renderPlanMap, renderPlanMapSvg, type PlanMapUnit } from '../../../templates/documents/kit/map-svg';
 import { DocumentRenderError, FONT_FILES, moneyTable, renderPdf } from '../../../server/services/documents/pdf';
-import { formatLength, planSummaryDocument, renderPlanSummaryPdf } from '../../../templates/documents/plan-summary';
+import { formatLength, planSummaryDocument } from '../../../templates/documents/plan-summary';
+import { renderPlanSummaryPdf } from '../../../server/services/documents/render-documents';
 import { BOUNDARY, couleeBendSummary, offset, UNITS, type FixtureUnit } from '../../support/document-fixtures';
 import { ellipsoidAreaSqM, rectangleAt, WGS84 } from '../../support/geo-fixtures';
 

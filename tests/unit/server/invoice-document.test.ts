@@ -1,7 +1,8 @@
 import { execFileSync } from 'node:child_process';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { DomainValidationError } from '../../../shared/domain/errors';
-import { renderInvoicePdf, type InvoiceDocumentInput } from '../../../templates/documents/invoice';
+import { type InvoiceDocumentInput } from '../../../templates/documents/invoice';
+import { renderInvoicePdf } from '../../../server/services/documents/render-documents';
 import { pdfWorkersReady } from '../../../server/services/documents/pdf-pool';
 
 // PDFs render in a worker thread; its first start (fonts, modules) is not part of a test.

@@ -8,9 +8,9 @@ import { isMainThread } from 'node:worker_threads';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { TDocumentDefinitions } from 'pdfmake/interfaces';
 import { DocumentRenderError, keepWithNextRule, pageFrame, renderPdf, ruledTableLayout } from '../../../server/services/documents/pdf';
-import { packDefinition, pdfFunction, unpackDefinition } from '../../../server/services/documents/pdf-functions';
+import { packDefinition, pdfFunction, unpackDefinition } from '../../../templates/documents/kit/pdf-functions';
 import { pdfWorkerCount, pdfWorkersReady, pdfWorkerStats } from '../../../server/services/documents/pdf-pool';
-import { renderProposalPdf } from '../../../templates/documents/proposal';
+import { renderProposalPdf } from '../../../server/services/documents/render-documents';
 import { couleeBendProposal } from '../../support/proposal-fixtures';
 
 beforeAll(pdfWorkersReady, 60_000);

@@ -7,7 +7,8 @@ import { DomainValidationError } from '../../../shared/domain/errors';
 import { formatCents } from '../../../shared/domain/money';
 import { formatAcres } from '../../../shared/domain/plan-checks';
 import { proposalTotals } from '../../../shared/domain/proposal-totals';
-import { formatQuantity, proposalDocument, quantityWithUnit, renderProposalPdf } from '../../../templates/documents/proposal';
+import { formatQuantity, proposalDocument, quantityWithUnit } from '../../../templates/documents/proposal';
+import { renderProposalPdf } from '../../../server/services/documents/render-documents';
 import type { ProposalDocumentInput } from '../../../templates/documents/proposal-input';
 import { offset } from '../../support/document-fixtures';
 import {

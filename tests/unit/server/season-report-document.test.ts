@@ -1,6 +1,7 @@
 import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import { renderSeasonReportPdf, type SeasonReportDocumentInput } from '../../../templates/documents/season-report';
+import { type SeasonReportDocumentInput } from '../../../templates/documents/season-report';
+import { renderSeasonReportPdf } from '../../../server/services/documents/render-documents';
 import { harvestSummary } from '../../../shared/domain/survey-estimates';
 import { emptySeasonReason, establishedText, hasBars } from '../../../shared/domain/season-results';
 

@@ -1,13 +1,13 @@
 import { Link } from 'react-router-dom';
 import { Card } from '../../../components/ui/card';
 import { paths } from '../../../config/paths';
-import { useFirm } from '../../firm/api/firm';
 
-/** A new firm's short list of what to do first; it goes away once the firm has a client. */
-export function FirstSteps({ clients }: { clients: number }) {
-  const firm = useFirm();
+/**
+ * A new firm's short list of what to do first; it goes away once the firm has a client.
+ * `profileDone`: the firm has an address, phone or logo (the page reads the firm).
+ */
+export function FirstSteps({ clients, profileDone }: { clients: number; profileDone: boolean }) {
   if (clients > 0) return null;
-  const profileDone = Boolean(firm.data && (firm.data.address || firm.data.phone || firm.data.logoUrl));
   const steps = [
     { done: profileDone, title: 'Fill in your firm’s profile', detail: 'Address, phone, logo and licence numbers print on every proposal, invoice and e-mail.', to: paths.team, action: 'Open settings' },
     { done: false, title: 'Add your first client', detail: 'Then add their property and draw its boundary on the map.', to: paths.clients, action: 'Add a client' },

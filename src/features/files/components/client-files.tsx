@@ -3,7 +3,7 @@ import { Controller, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { FILE_CATEGORY_LABELS, FILE_LIMITS, STAFF_FILE_CATEGORIES, StaffFileUploadFormSchema, type SharedFileDto } from '../../../../shared/schemas/file';
-import { FileInputField } from './file-input-field';
+import { FileInputField } from '../../../components/ui/file-input-field';
 import { useDeleteFile, useFiles, useShareFile, useUpdateFile } from '../api/files';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';

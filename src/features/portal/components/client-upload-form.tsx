@@ -3,7 +3,7 @@ import { useForm, Controller } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { ClientFileUploadFormSchema, FILE_LIMITS } from '../../../../shared/schemas/file';
-import { FileInputField } from '../../files/components/file-input-field';
+import { FileInputField } from '../../../components/ui/file-input-field';
 import type { PortalPropertyRow } from '../../../../shared/schemas/portal';
 import { useUploadPortalFile } from '../api/upload-portal-file';
 import { TextField } from '../../../components/ui/text-field';

@@ -1,5 +1,5 @@
 import { Outlet } from 'react-router-dom';
-import { Brand } from './brand';
+import { Brand } from '../../components/layouts/brand';
 import { UserMenu } from './user-menu';
 
 /** The crew's phone-first shell. */

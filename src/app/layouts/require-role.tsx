@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { useMe } from '../../features/auth/api/get-me';
 import { homeFor, paths } from '../../config/paths';
-import { ErrorPanel, Loading } from '../ui/card';
+import { ErrorPanel, Loading } from '../../components/ui/card';
 import type { Role } from '../../../shared/schemas/auth';
 
 /** Renders its children for the given roles; others go to sign-in or to their own home. */

@@ -1,5 +1,5 @@
 import { Outlet } from 'react-router-dom';
-import { Brand } from './brand';
+import { Brand } from '../../components/layouts/brand';
 import { UserMenu } from './user-menu';
 import { PortalNav } from '../../features/portal/components/portal-nav';
 import { paths } from '../../config/paths';

@@ -13,7 +13,7 @@
  * Only SVG features that pdfmake's svg-to-pdfkit draws are used: paths, rects, circles, polylines,
  * text with text-anchor, fill-opacity, stroke-dasharray, evenodd fill. Every text is XML-escaped.
  */
-import { escapeXml } from '../geo-files/export-helpers';
+import { escapeXml } from '../../../shared/domain/xml';
 import type { BBox, Geometry, MultiPolygon, Polygon, Position } from 'geojson';
 import { DomainValidationError } from '../../../shared/domain/errors';
 import { fitsFamily, GeometryKindMismatchError } from '../../../shared/domain/geometry';

@@ -3,7 +3,7 @@
  * a value axis from zero with "nice" gridlines, one group of bars per category and the value above
  * each bar. Same palette and fonts as the rest of the documents; every text is XML-escaped.
  */
-import { escapeXml } from '../geo-files/export-helpers';
+import { escapeXml } from '../../../shared/domain/xml';
 import { DOC_COLORS, FONT_BODY, FONT_HEADING } from './look';
 
 export interface BarSeries {

@@ -1,4 +1,4 @@
-import { chosenFileProblem, FILE_LIMITS, UPLOAD_ACCEPT } from '../../../../shared/schemas/file';
+import { chosenFileProblem, FILE_LIMITS, UPLOAD_ACCEPT } from '../../../shared/schemas/file';
 
 /** The file picker of both upload forms (staff sharing and the client's own): label, accepted kinds, size limit and the problem with the chosen file. */
 export function FileInputField({ id, value, onChange, errorMessage, disabled }: { id: string; value: File | null; onChange: (file: File | null) => void; errorMessage?: string; disabled?: boolean }) {

@@ -1,6 +1,6 @@
 import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
 import { useState, type FormEvent } from 'react';
-import { Brand } from './brand';
+import { Brand } from '../../components/layouts/brand';
 import { UserMenu } from './user-menu';
 import { useMe } from '../../features/auth/api/get-me';
 import { paths } from '../../config/paths';
