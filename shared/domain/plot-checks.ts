@@ -362,3 +362,17 @@ export function plotStatus(latest: { kind: 'establishment'; status: Establishmen
   if (latest.kind === 'browse') return latest.overallUsePct >= HEAVY_BROWSE_PCT ? 'browsed-hard' : 'checked';
   return latest.excessBaSqFtPerAcre !== null && latest.excessBaSqFtPerAcre > 0 ? 'over-target' : 'checked';
 }
+
+// ---------------------------------------------------------------- re-seeding
+
+/** A seed step's components as a prescription's rates see them. */
+export interface SeedRateComponent {
+  materialKey: string;
+  rateLbPerAcre: number;
+}
+
+/** Seeding rates per material scaled by a re-seeding's factor (half rate to overseed a thin stand), rounded to 0.01 lb. */
+export function scaledSeedRates(components: readonly SeedRateComponent[], factor: number): Record<string, number> {
+  if (!(factor > 0 && factor <= 2)) throw new DomainValidationError('rateFactor', `A re-seeding takes 0 to 2 times the full rate (got ${factor}).`);
+  return Object.fromEntries(components.map((c) => [c.materialKey, Math.round(c.rateLbPerAcre * factor * 100) / 100]));
+}
