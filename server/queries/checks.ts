@@ -22,11 +22,12 @@ export async function listPropertyChecks(firmId: number, propertyId: number, sea
 
 /** The latest check's status of each checked unit of a property (one query). */
 export async function plotStatuses(firmId: number, propertyId: number): Promise<PlotStatusDto[]> {
-  const rows = await sequelize.query<{ unit_id: number; status: string; kind: string; checked_on: string }>(
-    `SELECT DISTINCT ON (unit_id) unit_id, status, kind, checked_on::text AS checked_on
-       FROM unit_checks WHERE firm_id = :firmId AND property_id = :propertyId
-      ORDER BY unit_id, checked_on DESC, id DESC`,
+  const rows = await sequelize.query<{ unit_id: number; unit_name: string; status: string; kind: string; checked_on: string }>(
+    `SELECT DISTINCT ON (c.unit_id) c.unit_id, u.name AS unit_name, c.status, c.kind, c.checked_on::text AS checked_on
+       FROM unit_checks c JOIN units u ON u.id = c.unit_id
+      WHERE c.firm_id = :firmId AND c.property_id = :propertyId
+      ORDER BY c.unit_id, c.checked_on DESC, c.id DESC`,
     { replacements: { firmId, propertyId }, type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ unitId: r.unit_id, status: r.status as PlotStatusDto['status'], kind: r.kind as PlotStatusDto['kind'], checkedOn: r.checked_on }));
+  return rows.map((r) => ({ unitId: r.unit_id, unitName: r.unit_name, status: r.status as PlotStatusDto['status'], kind: r.kind as PlotStatusDto['kind'], checkedOn: r.checked_on }));
 }

@@ -3,7 +3,7 @@
  * the server validates and the field sheet's and unit page's forms use, and the answer's shape.
  */
 import { z } from 'zod';
-import { IdSchema, IsoDateSchema } from './common';
+import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
 import { WEED_PRESSURES, type BrowseResult, type EstablishmentResult, type PlotCheckStatus, type TimberResult } from '../domain/plot-checks';
 
@@ -171,9 +171,18 @@ export const UnitCheckDtoSchema = z.looseObject({
 /** The latest check status of each checked unit of a property (plan map, Progress). */
 export interface PlotStatusDto {
   unitId: number;
+  unitName: string;
   status: PlotCheckStatus;
   kind: CheckKind;
   checkedOn: string;
 }
 
-export const PlotStatusQuerySchema = z.object({ id: IdSchema });
+/** How each plot status reads to people. */
+export const PLOT_STATUS_LABELS: Record<PlotCheckStatus, string> = {
+  established: 'Established',
+  thin: 'Thin stand',
+  failed: 'Failed stand',
+  'browsed-hard': 'Browsed hard',
+  'over-target': 'Over target basal area',
+  checked: 'Checked',
+};
