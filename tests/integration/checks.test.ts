@@ -168,3 +168,21 @@ describe('who may check', () => {
     expect((await outsider.get(`/api/properties/${propertyId}/plot-statuses`)).status).toBe(404);
   });
 });
+
+describe('the demo seed', () => {
+  it('records a thin brassica stand with its re-seeding drafted, a browse check and a cruise, once', async () => {
+    const { seedDemo } = await import('../../server/db/seeds/demo');
+    const { seedDemoPrescriptions } = await import('../../server/db/seeds/demo-prescriptions');
+    const { seedDemoChecks } = await import('../../server/db/seeds/demo-checks');
+    const firm = await seedDemo();
+    await seedDemoPrescriptions(firm);
+    await seedDemoChecks(firm);
+    const count = await UnitCheck.count({ where: { firmId: firm.id } });
+    expect(await seedDemoChecks(firm)).toBe(0);
+    expect(await UnitCheck.count({ where: { firmId: firm.id } })).toBe(count);
+    const kinds = (await UnitCheck.findAll({ where: { firmId: firm.id } })).map((c) => `${c.kind}:${c.status}`).sort();
+    expect(kinds).toEqual(['browse:checked', 'establishment:thin', 'timber:over-target']);
+    const thin = await UnitCheck.findOne({ where: { firmId: firm.id, kind: 'establishment' } });
+    expect(thin!.reseed).toMatchObject({ status: 'proposed', practiceName: 'Fall brassica plot', rateFactor: 0.5 });
+  });
+});
