@@ -26,6 +26,7 @@ import { filesRouter } from './files';
 import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
 import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
+import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -68,4 +69,7 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/units', router: unitChecksRouter },
   { path: '/checks', router: checksRouter },
   { path: '/properties', router: propertyPlotStatusesRouter },
+  { path: '/units', router: unitSoilTestsRouter },
+  { path: '/properties', router: propertySoilTestsRouter },
+  { path: '/soil-tests', router: soilTestsRouter },
 ];

@@ -15,6 +15,7 @@
  */
 import { DomainValidationError } from './errors';
 import { limeTonsPerAcreFromEnm } from './lime';
+import { roundHalfUp } from './rounding';
 
 export const LIME_METHODS = ['ncdacs', 'missouri'] as const;
 export type LimeMethod = (typeof LIME_METHODS)[number];
@@ -96,7 +97,7 @@ export function limeRecommendation(method: LimeMethod, test: SoilTestValues, tar
     return {
       method,
       targetPh,
-      tonsPerAcre: Math.round(tons * 100) / 100,
+      tonsPerAcre: roundHalfUp(tons, 2),
       working: `acidity (6.6 − ${test.bufferPh}) × 4 = ${acidity.toFixed(2)} meq/100 cm³ × (${targetPh} − ${test.ph}) ÷ (6.6 − ${test.ph}) = ${tons.toFixed(2)} t/acre`,
       source: 'NCDA&CS (ncagr.gov, buffer acidity table)',
     };
@@ -106,7 +107,7 @@ export function limeRecommendation(method: LimeMethod, test: SoilTestValues, tar
     throw new DomainValidationError('enmLbPerAcre', 'The University of Missouri method sizes lime from the lab’s ENM recommendation (lb ENM/acre): copy it from the report.');
   }
   const tons = limeTonsPerAcreFromEnm(test.enmLbPerAcre, productEnmLbPerTon);
-  return { method, targetPh, tonsPerAcre: Math.round(tons * 100) / 100, working: `${test.enmLbPerAcre} lb ENM/acre ÷ ${productEnmLbPerTon} lb ENM/ton = ${tons.toFixed(2)} t/acre`, source: 'University of Missouri Extension (ENM ÷ ENM per ton)' };
+  return { method, targetPh, tonsPerAcre: roundHalfUp(tons, 2), working: `${test.enmLbPerAcre} lb ENM/acre ÷ ${productEnmLbPerTon} lb ENM/ton = ${tons.toFixed(2)} t/acre`, source: 'University of Missouri Extension (ENM ÷ ENM per ton)' };
 }
 
 /** P and K levels and rates (all from memory; see the module comment). */
