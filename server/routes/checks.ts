@@ -1,17 +1,18 @@
-/** Checks on a unit: establishment checks, browse checks and timber cruises; the re-seeding a check drafts; plot statuses. */
+/** Checks on a unit: establishment checks, browse checks and timber cruises; the re-seeding a check drafts; plot statuses; the unit's history. */
 import type { Request } from 'express';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { ReseedDecisionSchema, UnitCheckCreateSchema } from '../../shared/schemas/checks';
 import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
-import { actor } from '../policies/firm-scope';
+import { actor, findInFirm } from '../policies/firm-scope';
 import { unprocessable } from '../errors';
 import { checkableUnit, createCheck, decideReseed } from '../commands/check-writer';
 import { listUnitChecks, plotStatuses } from '../queries/checks';
 import { presentCheck } from '../presenters/unit-check';
 import { readableProperty } from '../services/results/results-reader';
 import { Unit } from '../models';
+import { readUnitHistory } from '../queries/unit-history';
 
 const units = defineRoutes('/units');
 const checks = defineRoutes('/checks');
@@ -36,6 +37,11 @@ units.post('/:id/checks', CHECKERS, validate({ params: IdParamsSchema, body: Uni
   const { check, replayed } = await createCheck(actor(req), Number(req.params.id), req.body, optionalKey(req), req.ip ?? null);
   const unit = await Unit.findByPk(check.unitId, { attributes: ['name'] });
   res.status(replayed ? 200 : 201).json({ data: presentCheck(check, unit?.name ?? ''), replayed });
+});
+
+units.get('/:id/history', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const unit = await findInFirm(Unit, Number(req.params.id), actor(req).firmId, 'That unit');
+  res.json({ data: await readUnitHistory(unit) });
 });
 
 checks.post('/:id/reseed', STAFF, validate({ params: IdParamsSchema, body: ReseedDecisionSchema }), async (req, res) => {

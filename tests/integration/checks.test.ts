@@ -186,3 +186,19 @@ describe('the demo seed', () => {
     expect(thin!.reseed).toMatchObject({ status: 'proposed', practiceName: 'Fall brassica plot', rateFactor: 0.5 });
   });
 });
+
+describe('unit history', () => {
+  it('keeps prescriptions, checks and soil tests by season under the unit’s identity, even after its outline is edited', async () => {
+    await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-10', lab: 'County lab', ph: 6.6 });
+    const edit = await consultant.patch(`/api/units/${plotId}`).set('X-CSRF-Token', consultant.csrf).send({ geometry: rectangle(-90.938, 43.2655, 110, 80) });
+    expect(edit.status).toBe(200);
+    const res = await consultant.get(`/api/units/${plotId}/history`).expect(200);
+    expect(res.body.data.unitId).toBe(plotId);
+    const s2026 = res.body.data.seasons.find((s: { season: number }) => s.season === 2026);
+    expect(s2026.checks.map((c: { kind: string }) => c.kind)).toEqual(expect.arrayContaining(['establishment', 'browse']));
+    expect(s2026.soilTests).toHaveLength(1);
+    expect(res.body.data.seasons.flatMap((s: { prescriptions: unknown[] }) => s.prescriptions).length).toBeGreaterThanOrEqual(2); // the brassica plot and its re-seeding
+    expect((await crew.get(`/api/units/${plotId}/history`)).status).toBe(403);
+    expect((await outsider.get(`/api/units/${plotId}/history`)).status).toBe(404);
+  });
+});
