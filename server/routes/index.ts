@@ -27,6 +27,7 @@ import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
 import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
+import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -72,4 +73,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/units', router: unitSoilTestsRouter },
   { path: '/properties', router: propertySoilTestsRouter },
   { path: '/soil-tests', router: soilTestsRouter },
+  { path: '/properties', router: propertySeasonsRouter },
+  { path: '/season-drafts', router: seasonDraftsRouter },
 ];

@@ -17,6 +17,7 @@ import * as m0026 from './0026-firm-profile';
 import * as m0027 from './0027-signup';
 import * as m0060 from './0060-unit-checks';
 import * as m0061 from './0061-soil-tests';
+import * as m0062 from './0062-season-drafts';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -37,4 +38,5 @@ export const migrations = [
   { name: '0027-signup', ...m0027 },
   { name: '0060-unit-checks', ...m0060 },
   { name: '0061-soil-tests', ...m0061 },
+  { name: '0062-season-drafts', ...m0062 },
 ];
