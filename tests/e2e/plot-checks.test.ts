@@ -16,7 +16,7 @@ afterAll(async () => {
 });
 
 describe('plots that report back', () => {
-  it('the consultant records a failed establishment check and a browse check, and accepts the drafted re-seeding', async () => {
+  it('the consultant records a failed establishment check and a browse check, accepts the re-seeding, and drafts next season with the shifted mix', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, bypassCSP: true }); // bypassCSP only to inject axe
     const page = await context.newPage();
     const watch = watchPage(page);
@@ -77,6 +77,27 @@ describe('plots that report back', () => {
     await browseForm.getByRole('button', { name: 'Save the check' }).click();
     await poll(() => page.getByText('Browsed hard').first().isVisible()).toBe(true);
     await screenshot(page, 'plot-checks-browse');
+
+    // Next season: the failed plot sown again and the clover mix shifted toward what deer ate.
+    const hollowRx = (await (await page.request.get(`${baseUrl}/api/units/${hollow.id}/prescriptions`)).json()) as { data: { year: number }[] };
+    const season = Math.max(...hollowRx.data.map((p) => p.year)) + 1;
+    await page.goto(`${baseUrl}/properties/${farm.id}/next-season`);
+    await page.getByLabel('Season (year)').fill(String(season));
+    await page.getByRole('button', { name: 'Draft the plan' }).click();
+    await poll(() => page.getByText(/Failed stand at the check of/).first().isVisible()).toBe(true);
+    await poll(() => page.getByText(/deer prefer white clover/).isVisible()).toBe(true);
+    const accepts = page.getByRole('button', { name: /^Accept: / });
+    const count = await accepts.count();
+    for (let i = 0; i < count; i++) {
+      await accepts.nth(i).click();
+      await poll(() => accepts.nth(i).getAttribute('aria-pressed')).toBe('true');
+    }
+    await screenshot(page, 'plot-checks-next-season');
+    await page.getByRole('button', { name: 'Write the season and draft the proposal' }).click();
+    await page.getByRole('link', { name: `Open the draft proposal for ${season}` }).click();
+    await page.waitForURL(/\/proposals\/\d+$/);
+    await poll(() => page.getByText(/Hollow brassica plot/).first().isVisible()).toBe(true);
+    await screenshot(page, 'plot-checks-next-season-proposal');
     watch.assertClean();
     await context.close();
   });

@@ -4,6 +4,7 @@ import { makeFirm, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { Prescription, Task } from '../../server/models';
 import { UnitCheck } from '../../server/models/unit-check';
+import { SoilTest } from '../../server/models/soil-test';
 import { UnitCheckDtoSchema } from '../../shared/schemas/checks';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
@@ -179,6 +180,7 @@ describe('the demo seed', () => {
     await seedDemoChecks(firm);
     const count = await UnitCheck.count({ where: { firmId: firm.id } });
     expect(await seedDemoChecks(firm)).toBe(0);
+    expect(await SoilTest.count({ where: { firmId: firm.id, sampledOn: '2025-03-18' } })).toBe(1);
     expect(await UnitCheck.count({ where: { firmId: firm.id } })).toBe(count);
     const kinds = (await UnitCheck.findAll({ where: { firmId: firm.id } })).map((c) => `${c.kind}:${c.status}`).sort();
     expect(kinds).toEqual(['browse:checked', 'establishment:thin', 'timber:over-target']);

@@ -1,12 +1,15 @@
 /**
  * Checks on Kettle Hollow Farm, all invented: a thin brassica stand (with its re-seeding drafted for
- * the consultant), a browse check with cages on the clover plot, and a prism cruise of the oak slope.
- * Idempotent: each check carries a fixed idempotency key, so seeding again stores nothing new.
+ * the consultant), a browse check with cages on the clover plot, a prism cruise of the oak slope, and
+ * a soil test of the clover plot. Idempotent: each check carries a fixed idempotency key and the soil
+ * test is found by unit and date, so seeding again stores nothing new.
  */
 import { Unit, User, type Firm } from '../../models';
 import { createCheck } from '../../commands/check-writer';
 import { UnitCheckCreateSchema, type UnitCheckCreateInput } from '../../../shared/schemas/checks';
 import { toSessionUser } from '../../services/auth/passport';
+import { createSoilTest } from '../../commands/soil-test-writer';
+import { SoilTest } from '../../models/soil-test';
 
 const CHECKS: { unit: string; key: string; body: UnitCheckCreateInput }[] = [
   {
@@ -63,6 +66,11 @@ export async function seedDemoChecks(firm: Firm): Promise<number> {
     if (!unit) continue;
     const { replayed } = await createCheck(actor, unit.id, UnitCheckCreateSchema.parse(item.body), item.key, null);
     if (!replayed) made += 1;
+  }
+  const ridge = await Unit.findOne({ where: { firmId: firm.id, name: 'Ridge clover plot' } });
+  if (ridge && !(await SoilTest.findOne({ where: { unitId: ridge.id, sampledOn: '2025-03-18' } }))) {
+    await createSoilTest(actor, ridge.id, { sampledOn: '2025-03-18', lab: 'Driftless Soil Lab', ph: 5.6, bufferPh: 6.6, bufferMethod: 'woodruff', pPpm: 18, kPpm: 120, organicMatterPct: 3.1, cec: 12, enmLbPerAcre: 900 }, null);
+    made += 1;
   }
   return made;
 }

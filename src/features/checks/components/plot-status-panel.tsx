@@ -46,6 +46,9 @@ export function PlotStatusPanel({ propertyId }: { propertyId: number }) {
           </select>
         </label>
       ) : null}
+      <Link to={paths.nextSeason(propertyId)} className="mt-3 inline-block text-sm text-moss underline-offset-2 hover:underline">
+        Plan next season
+      </Link>
     </section>
   );
 }
