@@ -18,6 +18,7 @@ import { cropGroupOf, LIME_METHODS, limeRecommendation, nutrientRecommendation, 
 import { SOIL_CSV_MAX_ROWS, SoilTestCreateSchema, type SoilTestCreateValues } from '../../shared/schemas/soil-tests';
 import type { PrescriptionParameters } from '../../shared/domain/practice';
 import type { SessionUser } from '../../shared/schemas/auth';
+import { formatDate } from '../../shared/domain/clock';
 
 /** Default years between soil tests when the firm has not set `soilRetestYears` (common practice, no source). */
 export const DEFAULT_RETEST_YEARS = 3;
@@ -165,7 +166,7 @@ export async function applySoilTest(actor: SessionUser, soilTestId: number, ip: 
     if (fertStep) steps[fertStep.key] = { ...steps[fertStep.key], p2o5LbPerAcre: rec.nutrients.p2o5LbPerAcre, k2oLbPerAcre: rec.nutrients.k2oLbPerAcre };
     const parameters: PrescriptionParameters = { ...prescription.parameters, steps: JSON.parse(JSON.stringify(steps)) as PrescriptionParameters['steps'] };
     const computed = await computePrescriptionRecord({ firmId: actor.firmId, unit, practice, year: prescription.year, targetDate: prescription.targetDate ?? undefined, count: prescription.count ?? undefined, parameters });
-    const note = `Lime ${rec.lime.tonsPerAcre} t/acre and P2O5 ${rec.nutrients.p2o5LbPerAcre}, K2O ${rec.nutrients.k2oLbPerAcre} lb/acre from the soil test of ${soilTest.sampledOn} (${soilTest.lab}): lime by ${rec.lime.source}; P and K ${rec.nutrients.source}.`;
+    const note = `Lime ${rec.lime.tonsPerAcre} t/acre and P2O5 ${rec.nutrients.p2o5LbPerAcre}, K2O ${rec.nutrients.k2oLbPerAcre} lb/acre from the soil test of ${formatDate(soilTest.sampledOn)} (${soilTest.lab}): lime by ${rec.lime.source}; P and K ${rec.nutrients.source}.`;
     await prescription.update(
       { parameters, result: computed.result, schedule: computed.schedule, cautions: computed.cautions, summary: computed.summary, totalCents: computed.totalCents, notes: [prescription.notes, note].filter(Boolean).join('\n') },
       { transaction },

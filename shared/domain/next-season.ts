@@ -6,6 +6,7 @@
  * accepted or rejected by the consultant before anything is written.
  */
 import type { StepParameters } from './practice';
+import { formatDate } from './clock';
 
 export const SEASON_CHANGE_KINDS = ['reseed', 'shift-mix', 'lime', 'rotation'] as const;
 export type SeasonChangeKind = (typeof SEASON_CHANGE_KINDS)[number];
@@ -87,7 +88,7 @@ export function planNextSeason(season: number, units: readonly UnitEvidence[]): 
       plan.changes.push({ id: `${unit.unitId}-${kind}`, unitId: unit.unitId, unitName: unit.unitName, kind, reason, steps, decision: 'proposed' });
 
     if (unit.establishment && unit.establishment.status !== 'established' && p.seedStepKey) {
-      add('reseed', `${unit.establishment.status === 'failed' ? 'Failed' : 'Thin'} stand at the check of ${unit.establishment.checkedOn}: ${unit.establishment.reason} Sow ${p.practiceName.toLowerCase()} again at the full rate.`, {
+      add('reseed', `${unit.establishment.status === 'failed' ? 'Failed' : 'Thin'} stand at the check of ${formatDate(unit.establishment.checkedOn)}: ${unit.establishment.reason} Sow ${p.practiceName.toLowerCase()} again at the full rate.`, {
         [p.seedStepKey]: { seedRatesLbPerAcre: Object.fromEntries(p.components.map((c) => [c.materialKey, c.rateLbPerAcre])) },
       });
     }
@@ -113,7 +114,7 @@ export function planNextSeason(season: number, units: readonly UnitEvidence[]): 
       const steps: Record<string, StepParameters> = {};
       if (p.limeStepKey) steps[p.limeStepKey] = { limeTonsPerAcre: unit.soilTest.limeTonsPerAcre };
       if (p.fertilizerStepKey) steps[p.fertilizerStepKey] = { p2o5LbPerAcre: unit.soilTest.p2o5LbPerAcre, k2oLbPerAcre: unit.soilTest.k2oLbPerAcre };
-      add('lime', `Soil test of ${unit.soilTest.sampledOn}: lime ${unit.soilTest.limeTonsPerAcre} t/acre, P2O5 ${unit.soilTest.p2o5LbPerAcre} and K2O ${unit.soilTest.k2oLbPerAcre} lb/acre (${unit.soilTest.source}).`, steps);
+      add('lime', `Soil test of ${formatDate(unit.soilTest.sampledOn)}: lime ${unit.soilTest.limeTonsPerAcre} t/acre, P2O5 ${unit.soilTest.p2o5LbPerAcre} and K2O ${unit.soilTest.k2oLbPerAcre} lb/acre (${unit.soilTest.source}).`, steps);
     }
 
     if (p.family && unit.previousFamily === p.family) {
