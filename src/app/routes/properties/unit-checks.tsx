@@ -2,6 +2,7 @@ import { useParams } from 'react-router-dom';
 import { useCheckedUnit, useCreateUnitCheck, useUnitChecks } from '../../../features/checks/api/get-unit-checks';
 import { CheckForm } from '../../../features/checks/components/check-form';
 import { CheckList } from '../../../features/checks/components/check-list';
+import { SoilTestsCard } from '../../../features/checks/components/soil-tests-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { MissingRecord } from '../../../components/ui/missing-record';
@@ -62,6 +63,7 @@ export function UnitChecksPage() {
             <CheckList checks={checks.data} canDecide />
           )}
         </section>
+        <div className="flex flex-col gap-4">
         <Card title="Record a check">
           <CheckForm
             kinds={kindsFor(u.kind)}
@@ -73,6 +75,8 @@ export function UnitChecksPage() {
             }}
           />
         </Card>
+        <SoilTestsCard unitId={unitId} />
+        </div>
       </div>
     </div>
   );
