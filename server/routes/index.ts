@@ -25,6 +25,9 @@ import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRout
 import { filesRouter } from './files';
 import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
+import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
+import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
+import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -64,4 +67,12 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/files', router: filesRouter },
   { path: '/jobs', router: jobsRouter },
   { path: '/outbox', router: outboxRouter },
+  { path: '/units', router: unitChecksRouter },
+  { path: '/checks', router: checksRouter },
+  { path: '/properties', router: propertyPlotStatusesRouter },
+  { path: '/units', router: unitSoilTestsRouter },
+  { path: '/properties', router: propertySoilTestsRouter },
+  { path: '/soil-tests', router: soilTestsRouter },
+  { path: '/properties', router: propertySeasonsRouter },
+  { path: '/season-drafts', router: seasonDraftsRouter },
 ];

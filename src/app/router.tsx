@@ -72,6 +72,8 @@ const routes: RouteObject[] = [
         libraryRoutes,
         { path: paths.propertyPrescriptions(), ...page(() => import('./routes/properties/property-prescriptions'), (m) => m.PropertyPrescriptionsPage) },
         { path: paths.propertyResults(), ...page(() => import('./routes/properties/property-results'), (m) => m.PropertyResultsPage) },
+        { path: paths.unitChecks(), ...page(() => import('./routes/properties/unit-checks'), (m) => m.UnitChecksPage) },
+        { path: paths.nextSeason(), ...page(() => import('./routes/properties/next-season'), (m) => m.NextSeasonPage) },
         {
           // Preview as client: the portal's pages with the client's scope, writes off.
           path: paths.previewClient(),

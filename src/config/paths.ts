@@ -31,6 +31,10 @@ export const paths = {
   libraryRates: '/library/rates',
   propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   propertyResults: (id: number | string = ':id') => `/properties/${id}/results`,
+  /** Next season's plan of a property: the changes the evidence suggests, then the draft proposal. */
+  nextSeason: (id: number | string = ':id') => `/properties/${id}/next-season`,
+  /** A unit's page: its checks and the re-seeding they draft. */
+  unitChecks: (propertyId: number | string = ':id', unitId: number | string = ':unitId') => `/properties/${propertyId}/units/${unitId}`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   portal: '/portal',

@@ -10,6 +10,7 @@ import { SeasonStrip } from '../../../features/desk/components/season-strip';
 import { FirstSteps } from '../../../features/desk/components/first-steps';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatDay } from '../../../lib/firm-clock';
+import { RetestsDueCard } from '../../../features/checks/components/retests-due-card';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -123,6 +124,7 @@ export function DeskPage() {
       <Card title="The season">
         <SeasonStrip season={d.season} />
       </Card>
+      <RetestsDueCard />
       <div className="grid gap-4 lg:grid-cols-3">
         <Card title="Properties" className="lg:col-span-2" action={<Link to={paths.clients} className="text-sm text-moss-deep hover:underline">All clients</Link>}>
           {d.recentProperties.length === 0 ? (

@@ -11,6 +11,7 @@ import { KindSwatch } from '../../../features/plan-map/components/kind-swatch';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { ApiError } from '../../../lib/api-client';
 import { parseId } from '../../../lib/route-params';
+import { PlotChecksCard } from '../../../features/checks/components/plot-checks-card';
 
 /** /portal/progress: the first property's progress (the switcher moves between properties). */
 export function PortalProgressHomePage() {
@@ -69,6 +70,8 @@ export function PortalProgressPage() {
               </div>
             </div>
           </Card>
+
+          <PlotChecksCard propertyId={d.property.id} />
 
           <Card title="Place by place">
             <ul className="grid gap-3 sm:grid-cols-2">

@@ -41,6 +41,7 @@ import { isLargeAreaRefusal } from '../../../features/plan-map/lib/large-area-an
 import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
 import { useTasks } from '../../../features/schedule/api/get-tasks';
 import type { UnitWorkStatus } from '../../../../shared/domain/tasks';
+import { PlotStatusPanel } from '../../../features/checks/components/plot-status-panel';
 
 /** The first field message of a 422 answer, or the error's own message. */
 function errorText(err: unknown): string {
@@ -679,6 +680,7 @@ export function PlanMapPage() {
               }}
             />
           )}
+          <PlotStatusPanel propertyId={propertyId} />
         </aside>
       </div>
     </div>

@@ -1,0 +1,111 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { signedInAgent, propertyWithBrassicaPlot, type Agent } from '../support/test-app';
+import { makeFirm, PASSWORD } from '../support/factories';
+import { Firm, Prescription } from '../../server/models';
+import { SoilTest } from '../../server/models/soil-test';
+import { SoilTestDtoSchema } from '../../shared/schemas/soil-tests';
+
+let ctx: Awaited<ReturnType<typeof makeFirm>>;
+let consultant: Agent;
+let crew: Agent;
+let outsider: Agent;
+let propertyId: number;
+let plotId: number;
+
+const post = (agent: Agent, url: string, body: unknown) => agent.post(url).set('X-CSRF-Token', agent.csrf).send(body as object);
+
+beforeAll(async () => {
+  ctx = await makeFirm();
+  consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+  crew = await signedInAgent(ctx.users.crew.email, PASSWORD);
+  outsider = await signedInAgent((await makeFirm()).users.consultant.email, PASSWORD);
+  ({ propertyId, plotId } = await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id));
+});
+
+describe('a soil test by the University of Missouri ENM method (the default outside the south)', () => {
+  it('answers the lime from the lab’s ENM and the lime’s ENM per ton', async () => {
+    await Firm.update({ settings: {}, region: 'midwest' }, { where: { id: ctx.firm.id } });
+    const res = await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-10', lab: 'County lab', ph: 5.4, bufferMethod: 'woodruff', bufferPh: 6.6, enmLbPerAcre: 1600, pPpm: 20, kPpm: 110 });
+    expect(res.status).toBe(201);
+    const data = SoilTestDtoSchema.parse(res.body.data);
+    // 1,600 lb ENM ÷ 400 lb ENM/ton (starter library's spread lime) = 4 t/acre (University of Missouri)
+    expect(data.lime.tonsPerAcre).toBe(4);
+    expect(data.lime.method).toBe('missouri');
+    // Brassica plot: P (30 − 20) × 18 ÷ 4 + 40 = 85; K (150 − 110) × 8 ÷ 4 + 60 = 140 (rules from memory)
+    expect(data.nutrients).toMatchObject({ p2o5LbPerAcre: 85, k2oLbPerAcre: 140 });
+    expect(data.retestDue).toBe('2029-03-10'); // 3 years by default
+  });
+
+  it('writes the recommendation into the prescription with its source, still editable', async () => {
+    const made = await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-11', lab: 'County lab', ph: 5.4, enmLbPerAcre: 1200, pPpm: 20, kPpm: 110 });
+    const res = await post(consultant, `/api/soil-tests/${made.body.data.id}/apply`, {});
+    expect(res.status).toBe(200);
+    const prescription = await Prescription.findByPk(res.body.data.prescriptionId);
+    expect(prescription!.parameters.steps!.lime!.limeTonsPerAcre).toBe(3); // 1,200 ÷ 400 (MU Extension)
+    expect(prescription!.parameters.steps!.fertilize).toMatchObject({ p2o5LbPerAcre: 85, k2oLbPerAcre: 140 });
+    expect(prescription!.notes).toMatch(/from the soil test of Mar 11, 2026.*University of Missouri/);
+    const edit = await consultant.patch(`/api/prescriptions/${prescription!.id}`).set('X-CSRF-Token', consultant.csrf).send({ parameters: { steps: { lime: { limeTonsPerAcre: 2.5 } } } });
+    expect(edit.status).toBe(200);
+  });
+});
+
+describe('a soil test by the NCDA&CS method (firm setting)', () => {
+  it('reproduces the published worked example through the API', async () => {
+    await Firm.update({ settings: { limeMethod: 'ncdacs', soilRetestYears: 2 } }, { where: { id: ctx.firm.id } });
+    try {
+    // Brassica target pH 6.3 (from memory): acidity (6.6 − 6.3) × 4 = 1.2; × (6.3 − 5.0) ÷ (6.6 − 5.0) = 0.975 t/acre (NCDA&CS formula)
+    const res = await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-04-01', lab: 'State lab', ph: 5.0, bufferPh: 6.3, bufferMethod: 'mehlich' });
+    expect(res.status).toBe(201);
+    expect(res.body.data.lime.tonsPerAcre).toBe(0.98);
+    expect(res.body.data.retestDue).toBe('2028-04-01');
+    } finally {
+      await Firm.update({ settings: {} }, { where: { id: ctx.firm.id } });
+    }
+  });
+});
+
+describe('the lab CSV import by unit name', () => {
+  it('stores every row, or none when one row is wrong', async () => {
+    const good = 'unit,sampledOn,lab,ph,enmLbPerAcre,pPpm,kPpm\nNorth plot,2026-05-01,County lab,5.8,800,40,180\nnorth plot,2026-05-02,County lab,6.1,400,45,190\n';
+    const res = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv: good });
+    expect(res.status).toBe(201);
+    expect(res.body.data.map((d: { lime: { tonsPerAcre: number } }) => d.lime.tonsPerAcre)).toEqual([2, 1]); // 800 ÷ 400, 400 ÷ 400
+    const before = await SoilTest.count({ where: { unitId: plotId } });
+    const bad = 'unit,sampledOn,lab,ph,enmLbPerAcre\nNorth plot,2026-06-01,County lab,6.0,400\nSouth field,2026-06-01,County lab,6.0,400\n';
+    const refused = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv: bad });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error).toMatch(/row 3, unit: “South field” is not a unit/);
+    expect(await SoilTest.count({ where: { unitId: plotId } })).toBe(before);
+  });
+});
+
+describe('bad input: 422 naming the field, nothing saved', () => {
+  const cases: [string, unknown, RegExp][] = [
+    ['a pH outside 3–10', { sampledOn: '2026-03-10', lab: 'x', ph: 11 }, /ph must lie between 3 and 10/],
+    ['a buffer the state method does not use', { sampledOn: '2026-03-10', lab: 'x', ph: 5.5, bufferPh: 6.5, bufferMethod: 'smp', enmLbPerAcre: 800 }, /bufferMethod.*woodruff/i],
+    ['a Missouri test without the lab’s ENM below the target pH', { sampledOn: '2026-03-10', lab: 'x', ph: 5.5 }, /enmLbPerAcre/],
+    ['a buffer method without its buffer pH', { sampledOn: '2026-03-10', lab: 'x', ph: 5.5, bufferMethod: 'woodruff' }, /bufferPh/],
+  ];
+  for (const [label, body, message] of cases) {
+    it(`refuses ${label}`, async () => {
+      const before = await SoilTest.count({ where: { unitId: plotId } });
+      const res = await post(consultant, `/api/units/${plotId}/soil-tests`, body);
+      expect(res.status).toBe(422);
+      expect(res.body.error).toMatch(message);
+      expect(await SoilTest.count({ where: { unitId: plotId } })).toBe(before);
+    });
+  }
+});
+
+describe('who may see and write soil tests', () => {
+  it('keeps crew and other firms out, and lists retests due for the Desk', async () => {
+    expect((await post(crew, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-10', lab: 'x', ph: 6 })).status).toBe(403);
+    expect((await outsider.get(`/api/units/${plotId}/soil-tests`)).status).toBe(404);
+    const list = await consultant.get(`/api/units/${plotId}/soil-tests`).expect(200);
+    expect(list.body.data.length).toBeGreaterThanOrEqual(4);
+    await SoilTest.create({ firmId: ctx.firm.id, propertyId, unitId: plotId, sampledOn: '2019-04-01', lab: 'Old lab', ph: 6, bufferPh: null, bufferMethod: null, pPpm: null, kPpm: null, organicMatterPct: null, cec: null, enmLbPerAcre: null, cropGroup: 'brassica', recommendation: { lime: { method: 'missouri', targetPh: 6.3, tonsPerAcre: 0, working: '', source: '' }, nutrients: { p2o5LbPerAcre: 0, k2oLbPerAcre: 0, working: '', source: '' } }, retestDue: '2022-04-01', appliedPrescriptionId: null, createdById: null });
+    const due = await consultant.get('/api/soil-tests/retests-due').expect(200);
+    // The unit's latest test (2026) is not due, so the old one does not count.
+    expect(due.body.data.some((d: { unitId: number }) => d.unitId === plotId)).toBe(false);
+  });
+});
