@@ -21,6 +21,7 @@ import type { BBox, Geometry, LineString, MultiPolygon, Polygon, Position } from
 import { KIND_STYLES, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import { bboxOf, measureArea, measureLine } from '../../../../shared/domain/geometry';
 import { CARD, INK, MOSS_DEEP, OCHRE, SKY, offlineStyle } from './map-style';
+import { addBaseLayer } from './base-layer';
 import {
   UNIT_LAYERS,
   addPlanLayers,
@@ -113,6 +114,7 @@ export class PlanMapController {
   private readonly drawModes = new Map<string, TerraDrawPolygonMode | TerraDrawLineStringMode>();
   private pending: (() => void)[] = [];
   private destroyed = false;
+  private stopBaseLayer: (() => void) | null = null;
 
   constructor(container: HTMLElement, callbacks: PlanMapCallbacks, options: { preserveDrawingBuffer?: boolean } = {}) {
     this.callbacks = callbacks;
@@ -176,6 +178,8 @@ export class PlanMapController {
   private onLoad(): void {
     if (this.destroyed) return;
     addPlanLayers(this.map, { labels: true });
+    // State and county lines (offline) between the imagery and the plan.
+    this.stopBaseLayer = addBaseLayer(this.map, 'boundary-fill');
     this.draw = this.createDraw();
     this.draw.start();
     this.draw.setMode(MODE.select);
@@ -621,6 +625,7 @@ export class PlanMapController {
     }
     this.nameMarker?.remove();
     this.cursorLabel?.remove();
+    this.stopBaseLayer?.();
     this.map.remove();
   }
 }
