@@ -170,6 +170,11 @@ export class PlanMapController {
     this.callbacks = callbacks;
   }
 
+  /** Runs fn once the map's style and the plan layers are in (at once if they are): for layer components. */
+  whenMapReady(fn: () => void): void {
+    this.whenReady(fn);
+  }
+
   private whenReady(fn: () => void): void {
     if (this.ready) fn();
     else this.pending.push(fn);
