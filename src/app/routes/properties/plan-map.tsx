@@ -16,7 +16,7 @@ import { usePlanImport } from '../../../features/plan-map/hooks/use-plan-import'
 import { usePlanOverlays } from '../../../features/plan-map/hooks/use-plan-overlays';
 import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
 import { PlanMapHeader } from '../../../features/plan-map/components/plan-map-header';
-import { PlanMapLayers, PlanMapProvider } from '../../../features/plan-map/components/plan-map-layers';
+import { PlanMapLayers, PlanMapProvider } from '../../../components/map/plan-map-layers';
 import { PlaceSearch } from '../../../features/plan-map/components/place-search';
 import { DrawChips } from '../../../features/plan-map/components/draw-chips';
 import { DrawControls, DrawHint, MeasureReadout, drawsArea, drawsPoint } from '../../../features/plan-map/components/draw-status';

@@ -49,6 +49,7 @@ export function addBaseLayer(map: MapLibreMap, beforeId?: string): () => void {
     if (stopped || !map.getStyle()) return;
     map.addSource('base-map', {
       type: 'geojson',
+      attribution: 'State and county lines: U.S. Census Bureau',
       data: {
         type: 'FeatureCollection',
         features: [

@@ -183,6 +183,9 @@ export class PlanMapController {
   private onLoad(): void {
     if (this.destroyed) return;
     addPlanLayers(this.map, { labels: true });
+    // Credits: the base layer's source, and the imagery's when the firm turns it on.
+    this.attribution = new AttributionControl({ compact: true });
+    this.map.addControl(this.attribution, 'bottom-right');
     // State and county lines (offline) between the imagery and the plan.
     this.stopBaseLayer = addBaseLayer(this.map, 'boundary-fill');
     this.draw = this.createDraw();
@@ -569,10 +572,7 @@ export class PlanMapController {
       setBackgroundTiles(this.map, template, attribution);
       this.imagery.tiles = Boolean(template);
       this.applyImagery();
-      if (template && !this.attribution) {
-        this.attribution = new AttributionControl({ compact: true });
-        this.map.addControl(this.attribution, 'bottom-right');
-      }
+
     });
   }
 
