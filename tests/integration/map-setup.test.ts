@@ -16,6 +16,7 @@ import { PlaceSchema } from '../../shared/schemas/places';
 import { PUBLIC_IMAGERY } from '../../shared/domain/imagery';
 import { AuditEvent, Firm, Overlay, User } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
+import { DEMO_HOME_AREA, seedDemoMap } from '../../server/db/seeds/demo-map';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
 let owner: Agent;
@@ -91,6 +92,19 @@ describe('the firm’s home area', () => {
     expect(bad.body.error).toMatch(/west edge must lie west/);
     const notOwner = await consultant.patch('/api/firm/settings').set('X-CSRF-Token', consultant.csrf).send({ homeArea: { name: 'X', bbox: [-91, 43, -90, 44] } });
     expect(notOwner.status).toBe(403);
+  });
+
+  it('the demo seed sets Crawford County, WI, whose box holds the county’s own (us-atlas via /api/places)', async () => {
+    const [crawford] = (await consultant.get('/api/places').query({ q: 'Crawford County, WI' }).expect(200)).body.data;
+    const [w, s, e, n] = DEMO_HOME_AREA.bbox;
+    expect(w).toBeLessThanOrEqual(crawford.bbox[0]);
+    expect(s).toBeLessThanOrEqual(crawford.bbox[1]);
+    expect(e).toBeGreaterThanOrEqual(crawford.bbox[2]);
+    expect(n).toBeGreaterThanOrEqual(crawford.bbox[3]);
+    const other = await makeFirm();
+    const firm = (await Firm.findByPk(other.firm.id))!;
+    await sequelize.transaction((transaction) => seedDemoMap(firm, transaction));
+    expect((await Firm.findByPk(other.firm.id))!.settings).toMatchObject({ homeArea: DEMO_HOME_AREA });
   });
 
   it('can be given at sign-up', async () => {
