@@ -50,7 +50,7 @@ const isGeoTiff = (f: File) => /\.(tif|tiff)$/i.test(f.name);
 /**
  * The property's aerial photos: add one (GeoTIFF, or JPEG/PNG with world file and EPSG code) with
  * an upload progress bar and the limits stated first; per photo show/hide, opacity (saved on
- * release), print under the plan in documents, and delete.
+ * release) and delete.
  */
 export function OverlayPanel({
   overlays,
@@ -174,10 +174,7 @@ export function OverlayPanel({
                 </button>
               </div>
               <OverlaySlider overlay={o} onPreview={(v) => onPreview(o.id, v)} onCommit={(v) => onChange(o.id, { opacity: v })} />
-              <label className="flex items-center gap-1.5 text-slate">
-                <input type="checkbox" checked={o.inDocuments} onChange={(e) => onChange(o.id, { inDocuments: e.target.checked })} className="accent-moss" />
-                Print under the plan
-              </label>
+              {/* "Print under the plan" (inDocuments) is stored by the API; its checkbox returns when the plan PDF and proposal map draw photos. */}
             </li>
           ))}
         </ul>
