@@ -45,7 +45,7 @@ export async function signUpFirm(input: SignupInput, ip: string | null): Promise
         );
         return;
       }
-      const firm = await Firm.create({ name: input.firmName, slug: firmSlug(input.firmName), email: input.email, phone: null, address: null }, { transaction });
+      const firm = await Firm.create({ name: input.firmName, slug: firmSlug(input.firmName), email: input.email, phone: null, address: null, ...(input.homeArea ? { settings: { homeArea: input.homeArea } } : {}) }, { transaction });
       await installStarterLibrary(firm.id, transaction);
       const user = await User.create(
         { firmId: firm.id, clientId: null, role: 'owner', email: input.email, name: input.name, phone: null, passwordHash, active: true, emailVerified: false, lastSignInAt: null },

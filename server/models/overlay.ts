@@ -15,6 +15,8 @@ export class Overlay extends Model<InferAttributes<Overlay>, InferCreationAttrib
   /** [lon, lat] of the top-left, top-right, bottom-right and bottom-left corners. */
   declare corners: Corners;
   declare opacity: CreationOptional<number>;
+  declare visible: CreationOptional<boolean>;
+  declare inDocuments: CreationOptional<boolean>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -38,6 +40,8 @@ Overlay.init(
         return Number(this.getDataValue('opacity'));
       },
     },
+    visible: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+    inDocuments: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

@@ -1,13 +1,13 @@
 import type { Firm, Overlay } from '../models';
 import type { FirmDto, OverlayDto } from '../../shared/schemas/firm';
-import { DEFAULT_IDLE_TIMEOUT_HOURS } from '../../shared/schemas/firm';
+import { DEFAULT_IDLE_TIMEOUT_HOURS, type HomeArea } from '../../shared/schemas/firm';
 import { usableZone } from '../../shared/domain/clock';
 import { firmDefaults } from '../../shared/domain/firm-defaults';
 import { largeAreaThreshold } from '../../shared/domain/large-area';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
-  const s = firm.settings as { tileUrlTemplate?: string | null; tileAttribution?: string | null; taxRatePct?: number; idleTimeoutHours?: number };
+  const s = firm.settings as { tileUrlTemplate?: string | null; tileAttribution?: string | null; taxRatePct?: number; idleTimeoutHours?: number; homeArea?: HomeArea | null };
   return {
     id: firm.id,
     name: firm.name,
@@ -15,7 +15,7 @@ export function presentFirm(firm: Firm): FirmDto {
     phone: firm.phone,
     region: firm.region,
     timezone: usableZone(firm.timezone),
-    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS },
+    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, homeArea: s.homeArea ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS },
     address: firm.address,
     website: firm.website ?? null,
     licenceNumbers: firm.licenceNumbers ?? null,
@@ -34,6 +34,8 @@ export function presentOverlay(o: Overlay): OverlayDto {
     imageUrl: `/api/overlays/${o.id}/image`,
     corners: o.corners,
     opacity: o.opacity,
+    visible: o.visible,
+    inDocuments: o.inDocuments,
     byteSize: o.byteSize,
     createdAt: o.createdAt.toISOString(),
   };

@@ -1,20 +1,18 @@
 /** Georeferenced image overlays of a property (drone or purchased orthophotos). */
-import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
 import { singleUpload } from '../middlewares/upload';
 import { Overlay, Property, type Corners } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { OverlayCornersSchema, OverlayUpdateSchema } from '../../shared/schemas/firm';
+import { OverlayUploadFieldsSchema } from '../../shared/schemas/overlay';
 import { GEOMETRY_LIMITS } from '../../shared/limits';
 import { presentOverlay } from '../presenters/firm';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { runOverlayPrep } from '../services/geo-work/geo-pool';
-import { deleteFile, saveFile, sendStoredFile } from '../services/storage/storage';
-import { sequelize } from '../db/sequelize';
+import { sendStoredFile } from '../services/storage/storage';
 import { badRequest, unprocessable } from '../errors';
-import { recordAudit } from '../commands/audit-recorder';
 import { describeZodError } from '../middlewares/error-handler';
+import { addOverlay, deleteOverlay, updateOverlay } from '../commands/overlay-writer';
 
 const perProperty = defineRoutes('/properties');
 const r = defineRoutes('/overlays');
@@ -26,55 +24,41 @@ perProperty.get('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), as
   res.json({ data: overlays.map(presentOverlay) });
 });
 
-const UploadFieldsSchema = z.object({ name: z.string().trim().max(120).optional(), corners: z.string().optional() });
+/** The corners field (JSON text in a multipart form), checked by the shared schema. */
+function readCorners(text: string | undefined): Corners | null {
+  if (!text) return null;
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch {
+    throw unprocessable('corners: write them as JSON, e.g. [[-90.94,43.27],[-90.93,43.27],[-90.93,43.26],[-90.94,43.26]].');
+  }
+  const parsed = OverlayCornersSchema.safeParse(raw);
+  if (!parsed.success) throw unprocessable(describeZodError(parsed.error).message);
+  return parsed.data as Corners;
+}
 
 perProperty.post('/:id/overlays', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.overlayMaxBytes, 'image'), async (req, res) => {
-  const me = actor(req);
-  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
-  if (!req.file) throw badRequest('Attach the image in the form field “file” (GeoTIFF, or PNG/JPEG with its corners).');
-  const fields = UploadFieldsSchema.parse(req.body ?? {});
-  let corners: Corners | null = null;
-  if (fields.corners) {
-    let raw: unknown;
-    try {
-      raw = JSON.parse(fields.corners);
-    } catch {
-      throw unprocessable('corners: write them as JSON, e.g. [[-90.94,43.27],[-90.93,43.27],[-90.93,43.26],[-90.94,43.26]].');
-    }
-    const parsed = OverlayCornersSchema.safeParse(raw);
-    if (!parsed.success) throw unprocessable(describeZodError(parsed.error).message);
-    corners = parsed.data as Corners;
-  }
-  // Checked and converted in a worker thread: a large GeoTIFF never holds up other requests.
-  const answer = await runOverlayPrep({ bytes: req.file.buffer, corners });
-  const prepared = { ...answer, bytes: Buffer.from(answer.bytes.buffer, answer.bytes.byteOffset, answer.bytes.byteLength) };
-  const key = await saveFile('overlays', prepared.bytes, prepared.extension);
-  try {
-    const overlay = await sequelize.transaction(async (transaction) => {
-      const row = await Overlay.create(
-        { firmId: me.firmId, propertyId: property.id, name: fields.name || req.file!.originalname.slice(0, 120) || 'Image', storageKey: key, contentType: prepared.contentType, byteSize: prepared.bytes.length, corners: prepared.corners, createdById: me.id },
-        { transaction },
-      );
-      await recordAudit({ firmId: me.firmId, userId: me.id, action: 'overlay.added', subjectType: 'Property', subjectId: property.id, ip: req.ip ?? null }, transaction);
-      return row;
-    });
-    res.status(201).json({ data: presentOverlay(overlay) });
-  } catch (err) {
-    await deleteFile(key);
-    throw err;
-  }
+  if (!req.file) throw badRequest('Attach the image in the form field “file” (GeoTIFF, or PNG/JPEG with its world file or corners).');
+  const fields = OverlayUploadFieldsSchema.safeParse(req.body ?? {});
+  if (!fields.success) throw unprocessable(describeZodError(fields.error).message);
+  const { name, corners, worldFile, epsg } = fields.data;
+  const overlay = await addOverlay(
+    actor(req),
+    Number(req.params.id),
+    { bytes: req.file.buffer, fileName: req.file.originalname, name, corners: readCorners(corners), worldFile: worldFile && epsg !== undefined ? { text: worldFile, epsg } : null },
+    req.ip ?? null,
+  );
+  res.status(201).json({ data: presentOverlay(overlay) });
 });
 
 r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: OverlayUpdateSchema }), async (req, res) => {
-  const overlay = await findInFirm(Overlay, Number(req.params.id), actor(req).firmId, 'That image');
-  await overlay.update(req.body);
+  const overlay = await updateOverlay(actor(req), Number(req.params.id), req.body, req.ip ?? null);
   res.json({ data: presentOverlay(overlay) });
 });
 
 r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const overlay = await findInFirm(Overlay, Number(req.params.id), actor(req).firmId, 'That image');
-  await overlay.destroy();
-  await deleteFile(overlay.storageKey);
+  await deleteOverlay(actor(req), Number(req.params.id), req.ip ?? null);
   res.status(204).end();
 });
 

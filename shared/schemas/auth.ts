@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { HomeAreaSchema } from './firm';
 import { RecordIdSchema } from './common';
 import { LIMITS } from '../limits';
 
@@ -85,6 +86,8 @@ export const SignupSchema = z.object({
   name: z.string().trim().min(1, { message: 'enter your name' }).max(LIMITS.nameMax),
   email,
   password,
+  /** Where the firm works (optional; it can be set later in Settings). */
+  homeArea: HomeAreaSchema.optional(),
 });
 export type SignupInput = z.infer<typeof SignupSchema>;
 

@@ -1,15 +1,37 @@
 import { z } from 'zod';
 import { isTimeZone } from '../domain/clock';
 
-/** An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png (https only). */
+/**
+ * An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png (https only).
+ * A WMTS RESTful template (OGC 07-057r7, 10.2: {TileMatrix}/{TileRow}/{TileCol}) is taken too and
+ * stored as XYZ; its tile matrix set must be Google/Web Mercator (GoogleMapsCompatible).
+ */
 export const TileUrlTemplateSchema = z
   .string()
   .trim()
   .max(500)
+  .transform((v) => v.replace(/\{TileMatrix\}/gi, '{z}').replace(/\{TileRow\}/gi, '{y}').replace(/\{TileCol\}/gi, '{x}'))
   .refine((v) => /^https:\/\/[^\s/]+\//.test(v), { message: 'start the address with https:// and the server name (plain http is not allowed)' })
   .refine((v) => v.includes('{z}') && v.includes('{x}') && v.includes('{y}'), { message: 'the address must contain {z}, {x} and {y}' });
 
+/** [west, south, east, north] in degrees, west below east and south below north. */
+export const LonLatBoxSchema = z
+  .tuple([z.number().min(-180).max(180), z.number().min(-85).max(85), z.number().min(-180).max(180), z.number().min(-85).max(85)], { error: 'the area must be [west, south, east, north] in degrees' })
+  .refine(([w, s, e, n]) => w < e && s < n, { message: 'the area’s west edge must lie west of its east edge and its south edge south of its north edge' });
+
+/**
+ * Where the firm works: picked counties or a searched/drawn area, as a name and a box. A new
+ * property's map opens here.
+ */
+export const HomeAreaSchema = z.object({
+  name: z.string().trim().min(1, { message: 'name the home area, such as “Crawford County, WI”' }).max(300),
+  bbox: LonLatBoxSchema,
+});
+export type HomeArea = z.infer<typeof HomeAreaSchema>;
+
 export const FirmSettingsUpdateSchema = z.object({
+  /** Where a new property's map opens; null clears it. */
+  homeArea: HomeAreaSchema.nullable().optional(),
   tileUrlTemplate: z.union([TileUrlTemplateSchema, z.literal('').transform(() => null), z.null()]).optional(),
   tileAttribution: z.string().trim().max(200).nullish(),
   taxRatePct: z.number().min(0).max(30).optional(),
@@ -81,7 +103,7 @@ export const FirmSchema = z.object({
   region: z.string(),
   /** IANA time zone: the firm's "today" and the times on its documents. */
   timezone: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), homeArea: HomeAreaSchema.nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number() }),
   address: z.string().nullable(),
   website: z.string().nullable(),
   licenceNumbers: z.string().nullable(),
@@ -103,6 +125,10 @@ export const OverlayCornersSchema = z
 export const OverlayUpdateSchema = z.object({
   name: z.string().trim().min(1).max(120).optional(),
   opacity: z.number().min(0).max(1).optional(),
+  /** Shown on the plan map (hidden overlays stay in the list). */
+  visible: z.boolean().optional(),
+  /** Printed under the plan in the plan PDF and the proposal map. */
+  inDocuments: z.boolean().optional(),
 });
 
 export const OverlaySchema = z.object({
@@ -112,6 +138,8 @@ export const OverlaySchema = z.object({
   imageUrl: z.string(),
   corners: z.array(z.tuple([z.number(), z.number()])).length(4),
   opacity: z.number(),
+  visible: z.boolean(),
+  inDocuments: z.boolean(),
   byteSize: z.number().int(),
   createdAt: z.string(),
 });

@@ -11,7 +11,7 @@ import { readGeoFile } from '../../server/services/geo-files';
 import { generateLargeKml } from '../support/geo-fixtures-large';
 import { freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
-import { load, median, timeRuns } from './support';
+import { load, median, percentile, timeRuns } from './support';
 
 type Loaded = Awaited<ReturnType<typeof load>>;
 import type { Polygon } from 'geojson';
@@ -119,6 +119,26 @@ async function growth(base: string) {
   }
 }
 
+/** GET /api/places over HTTP, one request at a time, interleaved with /api/health as its baseline (goal p50 ≤ 50 ms). */
+async function places(base: string, cookie: string) {
+  const queries = ['Crawford County, WI', 'viroqua', 'Prairie du Ch', 'CAÑON CITY', 'Madison, Wisconsin', 'spring', `43°15'55.8"N 90°56'16.8"W`, 'zzzz', 'Jefferson County', 'san'];
+  const found: number[] = [];
+  const health: number[] = [];
+  for (let round = 0; round < 25; round++) {
+    for (const q of queries) {
+      let t0 = performance.now();
+      const res = await fetch(`${base}/api/places?q=${encodeURIComponent(q)}`, { headers: { cookie } });
+      await res.arrayBuffer();
+      if (!res.ok) throw new Error(`places ${q}: ${res.status}`);
+      if (round >= 3) found.push(performance.now() - t0);
+      t0 = performance.now();
+      await (await fetch(`${base}/api/health`)).arrayBuffer();
+      if (round >= 3) health.push(performance.now() - t0);
+    }
+  }
+  results['GET /api/places p50, signed in, one at a time (goal ≤ 50 ms)'] = `${median(found).toFixed(1)} ms (p95 ${percentile(found, 95).toFixed(1)} ms; /api/health interleaved ${median(health).toFixed(1)} ms; ratio ${(median(found) / median(health)).toFixed(2)})`;
+}
+
 async function http() {
   startTestCluster();
   const databaseUrl = await freshDatabase('browseline_bench');
@@ -164,6 +184,7 @@ async function http() {
     results['GET units with If-None-Match (304), signed in'] = `${rps(rounds.notModified).toFixed(0)} req/s (p50 ${p50(rounds.notModified).toFixed(1)} ms), failed ${failed(rounds.notModified)}`;
     results['throughput ratio units ÷ health (goal ≥ 0.5; 0.26–0.35 before)'] = (rps(rounds.units) / health).toFixed(2);
     results['throughput ratio units 304 ÷ health (goal ≥ 0.8)'] = (rps(rounds.notModified) / health).toFixed(2);
+    await places(base, cookie);
     if (withGrowth) await growth(base);
   } finally {
     server.kill('SIGTERM');

@@ -70,6 +70,8 @@ export async function importGeoFile(task: ImportTask): Promise<ImportAnswer> {
 export interface OverlayTask {
   bytes: Uint8Array;
   corners: Corners | null;
+  /** A JPEG/PNG's world file text and the EPSG code of its coordinates. */
+  worldFile?: { text: string; epsg: number } | null;
 }
 
 export type OverlayAnswer =
@@ -80,7 +82,7 @@ export type OverlayAnswer =
 export async function prepareOverlayImage(task: OverlayTask): Promise<OverlayAnswer> {
   try {
     collectSoon();
-    const prepared = await prepareOverlay(Buffer.from(task.bytes.buffer, task.bytes.byteOffset, task.bytes.byteLength), task.corners);
+    const prepared = await prepareOverlay(Buffer.from(task.bytes.buffer, task.bytes.byteOffset, task.bytes.byteLength), task.corners, task.worldFile ?? null);
     return { ok: true, bytes: new Uint8Array(prepared.bytes), contentType: prepared.contentType, extension: prepared.extension, corners: prepared.corners };
   } catch (error) {
     return failure(error);

@@ -9,6 +9,8 @@ import proj4 from 'proj4';
 import { AppError, unprocessable, unsupportedMedia } from '../../errors';
 import type { Corners } from '../../models';
 import { GEOMETRY_LIMITS } from '../../../shared/limits';
+import { parseWorldFile, worldFileCorners } from '../../../shared/domain/world-file';
+import { epsgEntry } from '../geo-files/crs';
 
 export type ImageKind = 'png' | 'jpeg' | 'tiff';
 
@@ -77,7 +79,36 @@ export function projectionFor(epsg: number): string | null {
   if (epsg >= 32601 && epsg <= 32660) return `+proj=utm +zone=${epsg - 32600} +datum=WGS84 +units=m +no_defs`;
   if (epsg >= 32701 && epsg <= 32760) return `+proj=utm +zone=${epsg - 32700} +south +datum=WGS84 +units=m +no_defs`;
   if (epsg >= 26901 && epsg <= 26923) return `+proj=utm +zone=${epsg - 26900} +ellps=GRS80 +towgs84=0,0,0 +units=m +no_defs`;
+  // Anything else the EPSG registry (epsg-index) defines: state plane, national grids, other datums.
+  const entry = Number.isInteger(epsg) && epsg > 0 ? epsgEntry(epsg) : null;
+  if (entry?.proj4) return entry.kind === 'CRS-GEOGCRS' ? 'EPSG:4326' : entry.proj4;
   return null;
+}
+
+/** The unknown-projection sentence (422). */
+function unknownProjection(epsg: number, what: string): AppError {
+  return unprocessable(`The ${what} is in EPSG:${epsg}, a coordinate system Browseline does not know. Reproject it to WGS84 (EPSG:4326), Web Mercator (EPSG:3857) or UTM and upload it again.`);
+}
+
+/** Projected corners to lon/lat, each checked to fall on the map. */
+function cornersToLonLat(def: string, projected: [number, number][], what: string): Corners {
+  let converter: ((p: [number, number]) => [number, number]) | null = null;
+  if (def !== 'EPSG:4326') {
+    try {
+      const c = proj4(def, 'EPSG:4326');
+      converter = (p) => c.forward(p) as [number, number];
+    } catch {
+      throw unprocessable(`The ${what}’s coordinate system could not be set up for conversion. Reproject it to WGS84 (EPSG:4326) or UTM and upload it again.`);
+    }
+  }
+  const corners = projected.map((p) => {
+    const [lon, lat] = converter ? converter(p) : p;
+    return [Math.round(lon * 1e7) / 1e7, Math.round(lat * 1e7) / 1e7] as [number, number];
+  }) as Corners;
+  for (const [lon, lat] of corners) {
+    if (!(Math.abs(lon) <= 180 && Math.abs(lat) <= 85)) throw unprocessable(`The ${what}’s corners fall outside the map. Check the coordinate system (EPSG code) it was exported in.`);
+  }
+  return corners;
 }
 
 export interface PreparedOverlay {
@@ -101,24 +132,22 @@ export async function prepareGeoTiff(bytes: Buffer): Promise<PreparedOverlay> {
   const bits = image.getBitsPerSample();
   checkTiffSize(width, height, image.getSamplesPerPixel(), typeof bits === 'number' ? bits : 8);
   let bbox: number[];
+  const noGeoreference = () =>
+    unprocessable('The TIFF has no georeference (no tie points or transform). Export it as a GeoTIFF, or upload a PNG/JPEG with its world file (.jgw) or corner coordinates.');
+  // Without tie points or a transform, geotiff answers a box in pixels: refuse before using it.
+  const directory = image.getFileDirectory() as { hasTag?: (tag: string) => boolean };
+  if (directory.hasTag && !directory.hasTag('ModelTiepoint') && !directory.hasTag('ModelTransformation')) throw noGeoreference();
   try {
     bbox = image.getBoundingBox();
   } catch {
-    throw unprocessable('The TIFF has no georeference (no tie points or transform). Export it as a GeoTIFF, or upload a PNG/JPEG with its corner coordinates.');
+    throw noGeoreference();
   }
   const keys = (image.getGeoKeys() ?? {}) as Record<string, number | undefined>;
   const epsg = keys.ProjectedCSTypeGeoKey ?? keys.GeographicTypeGeoKey ?? 4326;
   const def = projectionFor(epsg);
-  if (!def) throw unprocessable(`The GeoTIFF is in EPSG:${epsg}, which Browseline does not convert. Reproject it to WGS84 (EPSG:4326), Web Mercator (EPSG:3857) or UTM and upload it again.`);
-  const toLonLat = (x: number, y: number): [number, number] => {
-    const [lon, lat] = def === 'EPSG:4326' ? [x, y] : proj4(def, 'EPSG:4326', [x, y]);
-    return [Math.round(lon * 1e7) / 1e7, Math.round(lat * 1e7) / 1e7];
-  };
-  const [minX, minY, maxX, maxY] = bbox;
-  const corners: Corners = [toLonLat(minX, maxY), toLonLat(maxX, maxY), toLonLat(maxX, minY), toLonLat(minX, minY)];
-  for (const [lon, lat] of corners) {
-    if (!(Math.abs(lon) <= 180 && Math.abs(lat) <= 85)) throw unprocessable('The GeoTIFF’s corners fall outside the map. Check its coordinate system.');
-  }
+  if (!def) throw unknownProjection(epsg, 'GeoTIFF');
+  const [minX, minY, maxX, maxY] = bbox as [number, number, number, number];
+  const corners = cornersToLonLat(def, [[minX, maxY], [maxX, maxY], [maxX, minY], [minX, minY]], 'GeoTIFF');
   const rgb = (await image.readRGB({ interleave: true, enableAlpha: true })) as unknown as ArrayLike<number> & { width: number; height: number };
   const channels = rgb.length / (width * height);
   let max = 0;
@@ -130,13 +159,30 @@ export async function prepareGeoTiff(bytes: Buffer): Promise<PreparedOverlay> {
   return { bytes: Buffer.from(png), contentType: 'image/png', extension: 'png', corners };
 }
 
-/** A PNG or JPEG with corners given by the consultant; anything else is refused with 415. */
-export async function prepareOverlay(bytes: Buffer, corners: Corners | null): Promise<PreparedOverlay> {
+/** A JPEG or PNG's world file with the EPSG code its coordinates are in. */
+export interface WorldFileInput {
+  text: string;
+  epsg: number;
+}
+
+/**
+ * A GeoTIFF (its own georeference), or a PNG or JPEG with its world file and EPSG code or with
+ * corners given by the consultant; anything else is refused with 415.
+ */
+export async function prepareOverlay(bytes: Buffer, corners: Corners | null, worldFile: WorldFileInput | null = null): Promise<PreparedOverlay> {
   const kind = sniffImage(bytes);
   if (!kind) throw unsupportedMedia('That file is not a GeoTIFF, PNG or JPEG image. Export the orthophoto as one of those.');
   if (kind === 'tiff') return prepareGeoTiff(bytes);
   const size = imageDimensions(bytes, kind);
   if (size && size.width * size.height > MAX_PIXELS) throw imageTooLarge(size.width, size.height, '');
+  if (worldFile) {
+    if (!size) throw unprocessable(`The ${kind.toUpperCase()} header gives no image size, so its world file cannot place it. Export the image again.`);
+    const wf = parseWorldFile(worldFile.text);
+    if ('error' in wf) throw unprocessable(`worldFile: ${wf.error}`, [{ path: 'worldFile', message: wf.error }]);
+    const def = projectionFor(worldFile.epsg);
+    if (!def) throw unknownProjection(worldFile.epsg, 'world file');
+    corners = cornersToLonLat(def, worldFileCorners(wf, size.width, size.height), 'image');
+  }
   if (!corners) throw unprocessable('corners: a PNG or JPEG carries no location. Give the longitude and latitude of its four corners (top-left, top-right, bottom-right, bottom-left).', [{ path: 'corners', message: 'required for PNG and JPEG' }]);
   return kind === 'png' ? { bytes, contentType: 'image/png', extension: 'png', corners } : { bytes, contentType: 'image/jpeg', extension: 'jpg', corners };
 }

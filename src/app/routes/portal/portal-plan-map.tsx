@@ -11,6 +11,7 @@ import { kindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds'
 import type { PortalPropertyDetail } from '../../../../shared/schemas/portal';
 import { offlineStyle } from '../../../features/plan-map/lib/map-style';
 import { addPlanLayers, setBoundaryData, setUnitData } from '../../../features/plan-map/lib/plan-layers';
+import { addBaseLayer } from '../../../features/plan-map/lib/base-layer';
 import { kindsPresent, unitsToCollections, type MapUnit } from '../../../features/plan-map/lib/unit-features';
 import { LegendList } from '../../../features/plan-map/components/legend-list';
 import '../../../features/plan-map/lib/maplibre-worker';
@@ -38,6 +39,7 @@ export default function PortalPlanMap({ detail }: { detail: PortalPropertyDetail
     map.once('load', () => {
       if (!map) return;
       addPlanLayers(map, { labels: true });
+      addBaseLayer(map, 'boundary-fill');
       setBoundaryData(map, boundary, box as [number, number, number, number] | null);
       setUnitData(map, unitsToCollections(units));
       if (box) map.fitBounds(new LngLatBounds([box[0], box[1]], [box[2], box[3]]), { padding: 24, animate: false, maxZoom: 18 });

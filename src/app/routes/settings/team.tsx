@@ -15,6 +15,7 @@ import { paths } from '../../../config/paths';
 import { FirmProfileForm } from '../../../features/firm/components/firm-profile-form';
 import { JobsCard } from '../../../features/jobs/components/jobs-card';
 import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
+import { MapSettingsCard } from './map-settings-card';
 import { UndeliveredMailCard } from '../../../features/outbox/components/undelivered-mail-card';
 
 const ROLE_LABEL: Record<string, string> = { owner: 'Owner', consultant: 'Consultant', crew: 'Crew', client: 'Client contact' };
@@ -93,6 +94,7 @@ export function TeamPage() {
           <FirmSettingsForm />
         </Card>
       ) : null}
+      {isOwner ? <MapSettingsCard /> : null}
       {isOwner ? <UndeliveredMailCard /> : null}
       <Card title="Invite someone">
         <InviteForm isOwner={isOwner} />

@@ -1,7 +1,6 @@
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { TileUrlTemplateSchema } from '../../../../shared/schemas/firm';
 import { useFirm, useUpdateFirmSettings } from '../api/firm';
 import { TextField } from '../../../components/ui/text-field';
 import { SelectField } from '../../../components/ui/select-field';
@@ -11,20 +10,18 @@ import { ErrorPanel, Loading } from '../../../components/ui/card';
 import { useToast } from '../../../components/ui/toast';
 
 const FormSchema = z.object({
-  tileUrlTemplate: z.union([z.literal(''), TileUrlTemplateSchema]),
-  tileAttribution: z.string().trim().max(200),
   taxRatePct: z.coerce.number({ message: 'enter the rate as a number' }).min(0, { message: 'cannot be negative' }).max(30, { message: 'above 30 % looks like a typing slip' }),
   timezone: z.string().refine(isTimeZone, { message: 'choose the firm’s time zone from the list' }),
   idleTimeoutHours: z.coerce.number({ message: 'enter the hours as a number' }).min(0.25, { message: 'at least a quarter of an hour' }).max(168, { message: 'at most 168 hours (a week)' }),
 });
 
-/** The owner's firm settings: imagery tile service, the default sales-tax rate, the firm's time zone and the idle sign-out time. */
+/** The owner's firm settings (imagery and home area are in the Maps card): the default sales-tax rate, the firm's time zone and the idle sign-out time. */
 export function FirmSettingsForm() {
   const firm = useFirm();
   if (firm.isPending) return <Loading />;
   if (firm.isError) return <ErrorPanel error={firm.error} />;
   const s = firm.data.settings;
-  return <FirmSettingsFields defaults={{ tileUrlTemplate: s.tileUrlTemplate ?? '', tileAttribution: s.tileAttribution ?? '', taxRatePct: s.taxRatePct, timezone: firm.data.timezone, idleTimeoutHours: s.idleTimeoutHours }} />;
+  return <FirmSettingsFields defaults={{ taxRatePct: s.taxRatePct, timezone: firm.data.timezone, idleTimeoutHours: s.idleTimeoutHours }} />;
 }
 
 function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema> }) {
@@ -35,21 +32,12 @@ function FirmSettingsFields({ defaults }: { defaults: z.input<typeof FormSchema>
   const zone = form.watch('timezone');
   const submit = form.handleSubmit((v) =>
     update.mutate(
-      { tileUrlTemplate: v.tileUrlTemplate === '' ? null : v.tileUrlTemplate, tileAttribution: v.tileAttribution || null, taxRatePct: v.taxRatePct, timezone: v.timezone, idleTimeoutHours: v.idleTimeoutHours },
+      { taxRatePct: v.taxRatePct, timezone: v.timezone, idleTimeoutHours: v.idleTimeoutHours },
       { onSuccess: () => toast('success', 'Firm settings saved.'), onError: (e) => toast('error', e.message) },
     ),
   );
   return (
     <form onSubmit={submit} noValidate className="grid gap-3 md:grid-cols-2">
-      <TextField
-        className="md:col-span-2"
-        label="Imagery tile service (XYZ address)"
-        placeholder="https://tiles.example.com/{z}/{x}/{y}.jpg"
-        hint="Optional, https only. When set, plan maps show this imagery under the plan. Leave empty for the plain offline background."
-        error={form.formState.errors.tileUrlTemplate?.message}
-        {...form.register('tileUrlTemplate')}
-      />
-      <TextField label="Imagery credit line" placeholder="Imagery © your provider" error={form.formState.errors.tileAttribution?.message} {...form.register('tileAttribution')} />
       <TextField label="Sales tax rate (%)" inputMode="decimal" hint="The default on new proposals; each proposal can change it." error={form.formState.errors.taxRatePct?.message} {...form.register('taxRatePct')} />
       <SelectField
         label="Time zone"

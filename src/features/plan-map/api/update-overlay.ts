@@ -3,17 +3,20 @@ import { api } from '../../../lib/api-client';
 import type { OverlayDto } from './get-overlays';
 import { planMapKeys } from './keys';
 
-/** PATCH /api/overlays/:id {opacity?, name?}. */
-export async function updateOverlay(overlayId: number, input: { opacity?: number; name?: string }): Promise<OverlayDto> {
+/** What can change on an overlay: its name, opacity, whether the map shows it, whether documents print it. */
+export type OverlayUpdateInput = { opacity?: number; name?: string; visible?: boolean; inDocuments?: boolean };
+
+/** PATCH /api/overlays/:id. */
+export async function updateOverlay(overlayId: number, input: OverlayUpdateInput): Promise<OverlayDto> {
   const body = await api.patch<{ data: OverlayDto }>(`/api/overlays/${overlayId}`, input);
   return body.data;
 }
 
-/** Saves an overlay's opacity (the map already shows it). */
+/** Saves an overlay's change (the map already shows an opacity change). */
 export function useUpdateOverlay(propertyId: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ overlayId, input }: { overlayId: number; input: { opacity?: number; name?: string } }) => updateOverlay(overlayId, input),
+    mutationFn: ({ overlayId, input }: { overlayId: number; input: OverlayUpdateInput }) => updateOverlay(overlayId, input),
     onSuccess: (overlay) =>
       qc.setQueryData<OverlayDto[]>(planMapKeys.overlays(propertyId), (old) => (old ?? []).map((o) => (o.id === overlay.id ? overlay : o))),
   });

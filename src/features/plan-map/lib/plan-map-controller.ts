@@ -21,6 +21,7 @@ import type { BBox, Geometry, LineString, MultiPolygon, Polygon, Position } from
 import { KIND_STYLES, type KindFamily, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import { bboxOf, measureArea, measureLine } from '../../../../shared/domain/geometry';
 import { CARD, INK, MOSS_DEEP, OCHRE, SKY, offlineStyle } from './map-style';
+import { addBaseLayer } from './base-layer';
 import {
   UNIT_LAYERS,
   addPlanLayers,
@@ -113,6 +114,7 @@ export class PlanMapController {
   private readonly drawModes = new Map<string, TerraDrawPolygonMode | TerraDrawLineStringMode>();
   private pending: (() => void)[] = [];
   private destroyed = false;
+  private stopBaseLayer: (() => void) | null = null;
 
   constructor(container: HTMLElement, callbacks: PlanMapCallbacks, options: { preserveDrawingBuffer?: boolean } = {}) {
     this.callbacks = callbacks;
@@ -168,6 +170,11 @@ export class PlanMapController {
     this.callbacks = callbacks;
   }
 
+  /** Runs fn once the map's style and the plan layers are in (at once if they are): for layer components. */
+  whenMapReady(fn: () => void): void {
+    this.whenReady(fn);
+  }
+
   private whenReady(fn: () => void): void {
     if (this.ready) fn();
     else this.pending.push(fn);
@@ -176,6 +183,11 @@ export class PlanMapController {
   private onLoad(): void {
     if (this.destroyed) return;
     addPlanLayers(this.map, { labels: true });
+    // Credits: the base layer's source, and the imagery's when the firm turns it on.
+    this.attribution = new AttributionControl({ compact: true });
+    this.map.addControl(this.attribution, 'bottom-right');
+    // State and county lines (offline) between the imagery and the plan.
+    this.stopBaseLayer = addBaseLayer(this.map, 'boundary-fill');
     this.draw = this.createDraw();
     this.draw.start();
     this.draw.setMode(MODE.select);
@@ -560,10 +572,7 @@ export class PlanMapController {
       setBackgroundTiles(this.map, template, attribution);
       this.imagery.tiles = Boolean(template);
       this.applyImagery();
-      if (template && !this.attribution) {
-        this.attribution = new AttributionControl({ compact: true });
-        this.map.addControl(this.attribution, 'bottom-right');
-      }
+
     });
   }
 
@@ -621,6 +630,7 @@ export class PlanMapController {
     }
     this.nameMarker?.remove();
     this.cursorLabel?.remove();
+    this.stopBaseLayer?.();
     this.map.remove();
   }
 }
