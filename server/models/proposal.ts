@@ -1,3 +1,4 @@
+import type { LineCategory } from '../../shared/schemas/proposal';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import type { OrderDiscount, PlanSnapshot } from '../../shared/domain/proposal-totals';
@@ -93,7 +94,7 @@ export class ProposalLine extends Model<InferAttributes<ProposalLine>, InferCrea
   declare unitId: number | null;
   declare prescriptionId: number | null;
   declare groupLabel: string;
-  declare category: 'materials' | 'labor' | 'equipment' | 'fees';
+  declare category: LineCategory;
   declare description: string;
   declare quantity: string;
   declare unit: string;

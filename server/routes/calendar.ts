@@ -1,6 +1,6 @@
 /** Calendar feeds: a signed-in worker makes, lists and revokes their private feed URLs; calendar apps read the feed by its secret token. */
 import { defineRoutes } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { CalendarFeed } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { actor } from '../policies/firm-scope';
@@ -26,13 +26,13 @@ feeds.post('/', WORKERS, async (req, res) => {
   res.status(201).json({ data: dto(feed, url) });
 });
 
-feeds.delete('/:id', WORKERS, validate({ params: IdParamsSchema }), async (req, res) => {
+feeds.delete('/:id', WORKERS, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const feed = await CalendarFeed.findOne({ where: { id: Number(req.params.id), userId: me.id, firmId: me.firmId, revokedAt: null } });
+  const feed = await CalendarFeed.findOne({ where: { id: params.id, userId: me.id, firmId: me.firmId, revokedAt: null } });
   if (!feed) throw notFound('That calendar feed');
   await feed.update({ revokedAt: new Date() });
   res.status(204).end();
-});
+}));
 
 /** The feed itself: public, but only to whoever holds the unguessable token (192 random bits). */
 publicFeed.get('/:file', 'public', async (req, res) => {

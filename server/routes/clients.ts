@@ -1,8 +1,7 @@
 /** Clients of the firm. */
-import type { z } from 'zod';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { Client, User } from '../models';
 import { presentTeamMember } from '../presenters/user';
 import { sequelize } from '../db/sequelize';
@@ -24,46 +23,45 @@ async function clientStats(firmId: number, clientIds?: number[]): Promise<Map<nu
 }
 const NONE = { propertyCount: 0, totalAcres: 0 };
 
-r.get('/', STAFF, validate({ query: ClientListQuerySchema }), async (req, res) => {
+r.get('/', STAFF, ...typed({ query: ClientListQuerySchema }, async ({ query }, req, res) => {
   const { firmId } = actor(req);
-  const query = req.validQuery as z.infer<typeof ClientListQuerySchema>;
   const { q } = query;
   const where: WhereOptions = q ? { firmId, [Op.or]: [{ name: { [Op.iLike]: `%${q}%` } }, { email: { [Op.iLike]: `%${q}%` } }] } : { firmId };
   const { rows: clients, count } = await Client.findAndCountAll({ where, order: [['name', 'ASC'], ['id', 'ASC']], limit: query.limit, offset: query.offset });
   const stats = await clientStats(firmId, clients.map((c) => c.id));
   res.json({ data: clients.map((c) => presentClient(c, stats.get(c.id) ?? NONE)), page: pageOf(query, count) });
-});
+}));
 
-r.post('/', STAFF, validate({ body: ClientCreateSchema }), async (req, res) => {
+r.post('/', STAFF, ...typed({ body: ClientCreateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
   const client = await sequelize.transaction(async (transaction) => {
-    const created = await Client.create({ firmId: me.firmId, name: req.body.name, email: req.body.email ?? null, phone: req.body.phone ?? null, address: req.body.address ?? null, notes: req.body.notes ?? null }, { transaction });
+    const created = await Client.create({ firmId: me.firmId, name: body.name, email: body.email ?? null, phone: body.phone ?? null, address: body.address ?? null, notes: body.notes ?? null }, { transaction });
     await recordAudit({ firmId: me.firmId, userId: me.id, action: 'client.created', subjectType: 'Client', subjectId: created.id, ip: req.ip ?? null }, transaction);
     return created;
   });
   res.status(201).json({ data: presentClient(client, NONE) });
-});
+}));
 
-r.get('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
-  const client = await findInFirm(Client, Number(req.params.id), firmId, 'That client');
+  const client = await findInFirm(Client, params.id, firmId, 'That client');
   const stats = await clientStats(firmId, [client.id]);
   res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
-});
+}));
 
-r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ClientUpdateSchema }), async (req, res) => {
+r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: ClientUpdateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const client = await findInFirm(Client, Number(req.params.id), me.firmId, 'That client');
-  await client.update(req.body);
+  const client = await findInFirm(Client, params.id, me.firmId, 'That client');
+  await client.update(body);
   const stats = await clientStats(me.firmId, [client.id]);
   res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
-});
+}));
 
-r.get('/:id/contacts', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id/contacts', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
-  const client = await findInFirm(Client, Number(req.params.id), firmId, 'That client');
+  const client = await findInFirm(Client, params.id, firmId, 'That client');
   const contacts = await User.findAll({ where: { firmId, clientId: client.id, role: 'client' }, order: [['name', 'ASC']] });
   res.json({ data: contacts.map(presentTeamMember) });
-});
+}));
 
 export const clientsRouter = r.router;

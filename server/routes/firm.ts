@@ -1,6 +1,6 @@
 /** The firm's own settings. */
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { Firm } from '../models';
 import { FirmProfileUpdateSchema, FirmSettingsUpdateSchema } from '../../shared/schemas/firm';
 import { singleUpload } from '../middlewares/upload';
@@ -24,20 +24,20 @@ r.get('/', STAFF, async (req, res) => {
   res.json({ data: presentFirm(firm) });
 });
 
-r.patch('/settings', OWNER, validate({ body: FirmSettingsUpdateSchema }), async (req, res) => {
+r.patch('/settings', OWNER, ...typed({ body: FirmSettingsUpdateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
   const firm = await sequelize.transaction(async (transaction) => {
     const row = await Firm.findByPk(me.firmId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!row) throw notFound('Your firm');
-    const { timezone, ...rest } = req.body;
+    const { timezone, ...rest } = body;
     const settings = { ...row.settings };
     for (const [key, value] of Object.entries(rest)) if (value !== undefined) settings[key] = value;
     await row.update({ settings, ...(timezone !== undefined ? { timezone } : {}) }, { transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.settings-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(req.body) }, ip: req.ip ?? null }, transaction);
+    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.settings-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(body) }, ip: req.ip ?? null }, transaction);
     return row;
   });
   res.json({ data: presentFirm(firm) });
-});
+}));
 
 /** The logo's upload, its size limit answered with the same sentence as the content checks. */
 const logoUpload: RequestHandler = (req, res, next) =>
@@ -47,9 +47,8 @@ const logoUpload: RequestHandler = (req, res, next) =>
   });
 
 /** The profile: what documents and e-mails print, and the defaults of new proposals and invoices. */
-r.patch('/', OWNER, validate({ body: FirmProfileUpdateSchema }), async (req, res) => {
+r.patch('/', OWNER, ...typed({ body: FirmProfileUpdateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
-  const body = req.body as ReturnType<typeof FirmProfileUpdateSchema.parse>;
   const firm = await sequelize.transaction(async (transaction) => {
     const row = await Firm.findByPk(me.firmId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!row) throw notFound('Your firm');
@@ -60,7 +59,7 @@ r.patch('/', OWNER, validate({ body: FirmProfileUpdateSchema }), async (req, res
     return row;
   });
   res.json({ data: presentFirm(firm) });
-});
+}));
 
 r.post('/logo', OWNER, logoUpload, async (req, res) => {
   const me = actor(req);

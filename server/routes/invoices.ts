@@ -2,13 +2,13 @@
 import type { Request } from 'express';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
 import { Invoice, Task } from '../models';
 import { sequelize } from '../db/sequelize';
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
-import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type BillableTaskDto, type InvoiceListQuery, type ReceivablesDto } from '../../shared/schemas/invoice';
+import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type BillableTaskDto, type ReceivablesDto } from '../../shared/schemas/invoice';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { addManualLine, createInvoice, removeManualLine, sendInvoice, updateInvoice, voidInvoice } from '../commands/invoice-writer';
 import { refundPayment, startCheckout } from '../commands/payment-recorder';
@@ -29,9 +29,9 @@ async function readable(req: Request): Promise<Invoice> {
   return invoice;
 }
 
-r.get('/', STAFF_AND_CLIENT, validate({ query: InvoiceListQuerySchema }), async (req, res) => {
+r.get('/', STAFF_AND_CLIENT, ...typed({ query: InvoiceListQuerySchema }, async ({ query }, req, res) => {
   const me = actor(req);
-  const q = req.validQuery as InvoiceListQuery;
+  const q = query;
   const where: Record<string | symbol, unknown> = { firmId: me.firmId };
   if (me.role === 'client') Object.assign(where, { clientId: me.clientId, status: { [Op.ne]: 'draft' } });
   else if (q.clientId) where.clientId = q.clientId;
@@ -43,7 +43,7 @@ r.get('/', STAFF_AND_CLIENT, validate({ query: InvoiceListQuerySchema }), async 
   }
   const [total, data] = await Promise.all([Invoice.count({ where: where as WhereOptions }), listInvoiceRows(where as WhereOptions, todayInZone(me.firmTimezone), q)]);
   res.json({ data, page: pageOf(q, total) });
-});
+}));
 
 r.get('/receivables', STAFF, async (req, res) => {
   const { firmId, firmTimezone } = actor(req);
@@ -66,60 +66,60 @@ r.get('/receivables', STAFF, async (req, res) => {
   res.json({ data: answer });
 });
 
-r.get('/billable-tasks', STAFF, validate({ query: BillableTasksQuerySchema }), async (req, res) => {
+r.get('/billable-tasks', STAFF, ...typed({ query: BillableTasksQuerySchema }, async ({ query }, req, res) => {
   const { firmId } = actor(req);
-  const { proposalId } = req.validQuery as { proposalId: number };
+  const { proposalId } = query;
   const tasks = await Task.findAll({ where: { firmId, proposalId, status: 'done', invoiceId: null }, order: [['position', 'ASC'], ['id', 'ASC']] });
   res.json({ data: tasks.map((t): BillableTaskDto => ({ id: t.id, name: t.name, unitName: t.unitName, doneOn: t.doneOn, costCents: t.costCents })) });
-});
+}));
 
-r.post('/', STAFF, validate({ body: InvoiceCreateSchema }), async (req, res) => {
-  const { invoice, created } = await createInvoice(actor(req), req.body, req.ip ?? null);
+r.post('/', STAFF, ...typed({ body: InvoiceCreateSchema }, async ({ body }, req, res) => {
+  const { invoice, created } = await createInvoice(actor(req), body, req.ip ?? null);
   res.status(created ? 201 : 200).json({ data: await readInvoice(invoice) });
-});
+}));
 
-r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   res.json({ data: await readInvoice(await readable(req)) });
-});
+}));
 
-r.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   const invoice = await readable(req);
   const pdf = await renderInvoicePdfFor(invoice);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="${invoice.number}.pdf"`);
   res.send(pdf);
-});
+}));
 
-r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: InvoiceUpdateSchema }), async (req, res) => {
-  res.json({ data: await readInvoice(await updateInvoice(actor(req), Number(req.params.id), req.body, req.ip ?? null)) });
-});
+r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: InvoiceUpdateSchema }, async ({ params, body }, req, res) => {
+  res.json({ data: await readInvoice(await updateInvoice(actor(req), params.id, body, req.ip ?? null)) });
+}));
 
-r.post('/:id/lines', STAFF, validate({ params: IdParamsSchema, body: ManualLineSchema }), async (req, res) => {
-  res.status(201).json({ data: await readInvoice(await addManualLine(actor(req), Number(req.params.id), req.body, req.ip ?? null)) });
-});
+r.post('/:id/lines', STAFF, ...typed({ params: IdParamsSchema, body: ManualLineSchema }, async ({ params, body }, req, res) => {
+  res.status(201).json({ data: await readInvoice(await addManualLine(actor(req), params.id, body, req.ip ?? null)) });
+}));
 
-r.delete('/:id/lines/:lineId', STAFF, validate({ params: LineParamsSchema }), async (req, res) => {
-  res.json({ data: await readInvoice(await removeManualLine(actor(req), Number(req.params.id), Number(req.params.lineId), req.ip ?? null)) });
-});
+r.delete('/:id/lines/:lineId', STAFF, ...typed({ params: LineParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readInvoice(await removeManualLine(actor(req), params.id, params.lineId, req.ip ?? null)) });
+}));
 
-r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const { invoice, job } = await sendInvoice(actor(req), Number(req.params.id), req.ip ?? null);
+r.post('/:id/send', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const { invoice, job } = await sendInvoice(actor(req), params.id, req.ip ?? null);
   // The PDF and e-mail are a job; a quick one is finished before the answer, which names it either way.
   const settled = await waitForJob(job.id);
   res.json({ data: await readInvoice(invoice), job: presentJob(settled ?? job) });
-});
+}));
 
-r.post('/:id/void', STAFF, validate({ params: IdParamsSchema, body: VoidSchema }), async (req, res) => {
-  res.json({ data: await readInvoice(await voidInvoice(actor(req), Number(req.params.id), req.body.reason, req.ip ?? null)) });
-});
+r.post('/:id/void', STAFF, ...typed({ params: IdParamsSchema, body: VoidSchema }, async ({ params, body }, req, res) => {
+  res.json({ data: await readInvoice(await voidInvoice(actor(req), params.id, body.reason, req.ip ?? null)) });
+}));
 
-r.post('/:id/refunds', OWNER, validate({ params: IdParamsSchema, body: RefundSchema }), async (req, res) => {
-  res.json({ data: await readInvoice(await refundPayment(actor(req), Number(req.params.id), req.body, req.ip ?? null)) });
-});
+r.post('/:id/refunds', OWNER, ...typed({ params: IdParamsSchema, body: RefundSchema }, async ({ params, body }, req, res) => {
+  res.json({ data: await readInvoice(await refundPayment(actor(req), params.id, body, req.ip ?? null)) });
+}));
 
-r.post('/:id/checkout', ['client'], validate({ params: IdParamsSchema, body: CheckoutSchema }), async (req, res) => {
-  const { url, amountCents } = await startCheckout(actor(req), Number(req.params.id), req.body);
+r.post('/:id/checkout', ['client'], ...typed({ params: IdParamsSchema, body: CheckoutSchema }, async ({ params, body }, req, res) => {
+  const { url, amountCents } = await startCheckout(actor(req), params.id, body);
   res.json({ data: { url, amountCents } });
-});
+}));
 
 export const invoicesRouter = r.router;

@@ -3,13 +3,13 @@
  * the page that started it) and the retry button. Staff only; always scoped to the firm.
  */
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { actor } from '../policies/firm-scope';
 import { BackgroundJob } from '../models';
 import { conflict, notFound } from '../errors';
 import { presentJob } from '../presenters/job';
 import { retryJob } from '../services/jobs/job-queue';
-import { JobIdParamsSchema, JobListQuerySchema, type JobListQuery } from '../../shared/schemas/job';
+import { JobIdParamsSchema, JobListQuerySchema } from '../../shared/schemas/job';
 
 const r = defineRoutes('/jobs');
 
@@ -19,21 +19,20 @@ async function jobInFirm(id: string, firmId: number): Promise<BackgroundJob> {
   return job;
 }
 
-r.get('/', STAFF, validate({ query: JobListQuerySchema }), async (req, res) => {
-  const query = req.validQuery as JobListQuery;
+r.get('/', STAFF, ...typed({ query: JobListQuerySchema }, async ({ query }, req, res) => {
   const jobs = await BackgroundJob.findAll({ where: { firmId: actor(req).firmId, ...(query.status ? { status: query.status } : {}) }, order: [['createdAt', 'DESC']], limit: query.limit });
   res.json({ data: jobs.map(presentJob) });
-});
+}));
 
-r.get('/:id', STAFF, validate({ params: JobIdParamsSchema }), async (req, res) => {
+r.get('/:id', STAFF, ...typed({ params: JobIdParamsSchema }, async ({ params }, req, res) => {
   res.setHeader('Cache-Control', 'no-store');
-  res.json({ data: presentJob(await jobInFirm(String(req.params.id), actor(req).firmId)) });
-});
+  res.json({ data: presentJob(await jobInFirm(String(params.id), actor(req).firmId)) });
+}));
 
-r.post('/:id/retry', STAFF, validate({ params: JobIdParamsSchema }), async (req, res) => {
-  const job = await jobInFirm(String(req.params.id), actor(req).firmId);
+r.post('/:id/retry', STAFF, ...typed({ params: JobIdParamsSchema }, async ({ params }, req, res) => {
+  const job = await jobInFirm(String(params.id), actor(req).firmId);
   if (job.status !== 'failed') throw conflict(`This job is ${job.status}; only a failed job can be retried.`);
   res.json({ data: presentJob(await retryJob(job)) });
-});
+}));
 
 export const jobsRouter = r.router;

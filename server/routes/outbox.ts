@@ -1,7 +1,7 @@
 /** The owner's view of mail that could not be delivered, and resending it. */
 import { Op } from 'sequelize';
 import { defineRoutes, OWNER } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import type { UndeliveredMailDto } from '../../shared/schemas/outbox';
 import { OutboxMessage } from '../models';
@@ -34,13 +34,13 @@ r.get('/undelivered', OWNER, async (req, res) => {
   res.json({ data: rows.map(present) });
 });
 
-r.post('/:id/resend', OWNER, validate({ params: IdParamsSchema }), async (req, res) => {
+r.post('/:id/resend', OWNER, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const message = await resendMessage(me.firmId, Number(req.params.id));
+  const message = await resendMessage(me.firmId, params.id);
   if (!message) throw notFound('That message');
   if (message.status === 'sent') throw conflict('That message was delivered already; nothing to resend.');
   await recordAudit({ firmId: me.firmId, userId: me.id, action: 'mail.resent', subjectType: 'OutboxMessage', subjectId: message.id, ip: req.ip ?? null });
   res.json({ data: present(message) });
-});
+}));
 
 export const outboxRouter = r.router;

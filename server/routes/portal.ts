@@ -6,7 +6,7 @@
 import type { Request } from 'express';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { Client, Firm, Property } from '../models';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { forbidden } from '../errors';
@@ -56,21 +56,21 @@ r.get('/properties', ['client'], async (req, res) => {
   res.json({ data: await readPortalProperties(ownScope(req)) });
 });
 
-r.get('/properties/:id', ['client'], validate({ params: PropertyParamsSchema }), async (req, res) => {
-  res.json({ data: await readPortalProperty(ownScope(req), Number(req.params.id)) });
-});
+r.get('/properties/:id', ['client'], ...typed({ params: PropertyParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readPortalProperty(ownScope(req), params.id) });
+}));
 
-r.get('/preview/:clientId/properties', STAFF, validate({ params: PreviewParamsSchema }), async (req, res) => {
+r.get('/preview/:clientId/properties', STAFF, ...typed({ params: PreviewParamsSchema }, async (_input, req, res) => {
   res.json({ data: await readPortalProperties(await previewScope(req)) });
-});
+}));
 
-r.get('/preview/:clientId/properties/:id', STAFF, validate({ params: PreviewPropertyParamsSchema }), async (req, res) => {
-  res.json({ data: await readPortalProperty(await previewScope(req), Number(req.params.id)) });
-});
+r.get('/preview/:clientId/properties/:id', STAFF, ...typed({ params: PreviewPropertyParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readPortalProperty(await previewScope(req), params.id) });
+}));
 
-r.get('/preview/:clientId/files', STAFF, validate({ params: PreviewParamsSchema }), async (req, res) => {
+r.get('/preview/:clientId/files', STAFF, ...typed({ params: PreviewParamsSchema }, async (_input, req, res) => {
   const scope = await previewScope(req);
   res.json({ data: await clientVisibleFiles(scope.firmId, scope.clientId) });
-});
+}));
 
 export const portalRouter = r.router;

@@ -1,6 +1,6 @@
 /** Prescriptions: the treatment written for a unit. */
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { Practice, Prescription, Property, Unit } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { PrescriptionCreateSchema, PrescriptionUpdateSchema } from '../../shared/schemas/library';
@@ -24,42 +24,42 @@ async function presentAll(rows: Prescription[]) {
   return rows.map((p) => presentPrescription(p, practiceName.get(p.practiceId) ?? '', unitName.get(p.unitId)));
 }
 
-perUnit.get('/:id/prescriptions', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+perUnit.get('/:id/prescriptions', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
-  const unit = await findInFirm(Unit, Number(req.params.id), firmId, 'That unit');
+  const unit = await findInFirm(Unit, params.id, firmId, 'That unit');
   const rows = await Prescription.findAll({ where: { unitId: unit.id, firmId }, order: [['id', 'ASC']] });
   res.json({ data: await presentAll(rows) });
-});
+}));
 
-perUnit.post('/:id/prescriptions', STAFF, validate({ params: IdParamsSchema, body: PrescriptionCreateSchema }), async (req, res) => {
-  const row = await createPrescription(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+perUnit.post('/:id/prescriptions', STAFF, ...typed({ params: IdParamsSchema, body: PrescriptionCreateSchema }, async ({ params, body }, req, res) => {
+  const row = await createPrescription(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: (await presentAll([row]))[0] });
-});
+}));
 
-perProperty.get('/:id/prescriptions', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/prescriptions', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
-  const property = await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+  const property = await findInFirm(Property, params.id, firmId, 'That property');
   const rows = await Prescription.findAll({ where: { propertyId: property.id, firmId }, order: [['unitId', 'ASC'], ['id', 'ASC']] });
   res.json({ data: await presentAll(rows) });
-});
+}));
 
-r.get('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const row = await findInFirm(Prescription, Number(req.params.id), actor(req).firmId, 'That prescription');
+r.get('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const row = await findInFirm(Prescription, params.id, actor(req).firmId, 'That prescription');
   res.json({ data: (await presentAll([row]))[0] });
-});
+}));
 
-r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: PrescriptionUpdateSchema }), async (req, res) => {
-  const row = await updatePrescription(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: PrescriptionUpdateSchema }, async ({ params, body }, req, res) => {
+  const row = await updatePrescription(actor(req), params.id, body, req.ip ?? null);
   res.json({ data: (await presentAll([row]))[0] });
-});
+}));
 
-r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+r.delete('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const row = await findInFirm(Prescription, Number(req.params.id), me.firmId, 'That prescription');
+  const row = await findInFirm(Prescription, params.id, me.firmId, 'That prescription');
   await row.destroy();
   await recordAudit({ firmId: me.firmId, userId: me.id, action: 'prescription.deleted', subjectType: 'Unit', subjectId: row.unitId, ip: req.ip ?? null });
   res.status(204).end();
-});
+}));
 
 export const unitPrescriptionsRouter = perUnit.router;
 export const propertyPrescriptionsRouter = perProperty.router;

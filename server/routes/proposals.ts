@@ -1,9 +1,9 @@
 /** Proposals: drafted from a plan's prescriptions, sent, and approved or declined by the landowner. */
 import type { Request } from 'express';
 import { Op, type WhereOptions } from 'sequelize';
-import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
 import { Client, Property, Proposal } from '../models';
@@ -74,9 +74,8 @@ perProperty.post('/:id/proposals', STAFF, validate({ params: IdParamsSchema, bod
   res.status(201).json({ data: await readProposal(proposal) });
 });
 
-r.get('/', STAFF_AND_CLIENT, validate({ query: ProposalListQuerySchema }), async (req, res) => {
+r.get('/', STAFF_AND_CLIENT, ...typed({ query: ProposalListQuerySchema }, async ({ query }, req, res) => {
   const me = actor(req);
-  const query = req.validQuery as z.infer<typeof ProposalListQuerySchema>;
   const { status, propertyId } = query;
   const where: Record<string | symbol, unknown> = { firmId: me.firmId };
   if (me.role === 'client') Object.assign(where, { clientId: me.clientId, status: { [Op.ne]: 'draft' } });
@@ -90,59 +89,59 @@ r.get('/', STAFF_AND_CLIENT, validate({ query: ProposalListQuerySchema }), async
   }
   const [total, data] = await Promise.all([Proposal.count({ where: where as WhereOptions }), listRows(where as WhereOptions, today, query)]);
   res.json({ data, page: pageOf(query, total) });
-});
+}));
 
-r.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   const proposal = await readable(req);
   if (actor(req).role === 'client' && !proposal.firstViewedAt) await proposal.update({ firstViewedAt: new Date() });
   res.json({ data: await readProposal(proposal) });
-});
+}));
 
-r.get('/:id/versions', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id/versions', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
-  const proposal = await findInFirm(Proposal, Number(req.params.id), firmId, 'That proposal');
+  const proposal = await findInFirm(Proposal, params.id, firmId, 'That proposal');
   res.json({ data: await listRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }, todayInZone(actor(req).firmTimezone)) });
-});
+}));
 
-r.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   const proposal = await readable(req);
   const pdf = await renderProposalPdfFor(proposal);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="${proposal.number}-v${proposal.version}.pdf"`);
   res.send(pdf);
-});
+}));
 
-r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: ProposalUpdateSchema }), async (req, res) => {
-  const proposal = await updateProposal(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: ProposalUpdateSchema }, async ({ params, body }, req, res) => {
+  const proposal = await updateProposal(actor(req), params.id, body, req.ip ?? null);
   res.json({ data: await readProposal(proposal) });
-});
+}));
 
-r.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const { proposal, job } = await sendProposal(actor(req), Number(req.params.id), req.ip ?? null);
+r.post('/:id/send', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const { proposal, job } = await sendProposal(actor(req), params.id, req.ip ?? null);
   // The PDF and e-mail are a job; a quick one is finished before the answer, which names it either way.
   const settled = await waitForJob(job.id);
   res.json({ data: await readProposal(proposal), job: presentJob(settled ?? job) });
-});
+}));
 
-r.post('/:id/revise', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const proposal = await reviseProposal(actor(req), Number(req.params.id), req.ip ?? null);
+r.post('/:id/revise', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const proposal = await reviseProposal(actor(req), params.id, req.ip ?? null);
   res.status(201).json({ data: await readProposal(proposal) });
-});
+}));
 
-r.post('/:id/withdraw', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const proposal = await withdrawProposal(actor(req), Number(req.params.id), req.ip ?? null);
+r.post('/:id/withdraw', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const proposal = await withdrawProposal(actor(req), params.id, req.ip ?? null);
   res.json({ data: await readProposal(proposal) });
-});
+}));
 
-r.post('/:id/approve', ['client'], validate({ params: IdParamsSchema, body: ApproveSchema }), async (req, res) => {
-  const proposal = await approveProposal(actor(req), Number(req.params.id), req.body, ctx(req));
+r.post('/:id/approve', ['client'], ...typed({ params: IdParamsSchema, body: ApproveSchema }, async ({ params, body }, req, res) => {
+  const proposal = await approveProposal(actor(req), params.id, body, ctx(req));
   res.json({ data: await readProposal(proposal) });
-});
+}));
 
-r.post('/:id/decline', ['client'], validate({ params: IdParamsSchema, body: DeclineSchema }), async (req, res) => {
-  const proposal = await declineProposal(actor(req), Number(req.params.id), req.body.reason, ctx(req));
+r.post('/:id/decline', ['client'], ...typed({ params: IdParamsSchema, body: DeclineSchema }, async ({ params, body }, req, res) => {
+  const proposal = await declineProposal(actor(req), params.id, body.reason, ctx(req));
   res.json({ data: await readProposal(proposal) });
-});
+}));
 
 export const propertyProposalsRouter = perProperty.router;
 export const proposalsRouter = r.router;

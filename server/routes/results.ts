@@ -1,8 +1,7 @@
 /** Results: camera surveys, harvest records, the season summary and the season report. */
 import type { Request } from 'express';
-import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
 import { CameraSurvey, HarvestRecord, Property, SeasonReport, SharedFile, Unit } from '../models';
@@ -49,42 +48,42 @@ async function harvestAnswer(record: HarvestRecord) {
 
 // ---- per property ----
 
-perProperty.get('/:id/results', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/results', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   const property = await propertyOf(req);
   res.json({ data: await readResults(actor(req), property) });
-});
+}));
 
-perProperty.get('/:id/surveys', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/surveys', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   res.json({ data: await listSurveys(await propertyOf(req)) });
-});
+}));
 
-perProperty.post('/:id/surveys', STAFF, validate({ params: IdParamsSchema, body: SurveyCreateSchema }), async (req, res) => {
-  const { survey, property } = await createSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+perProperty.post('/:id/surveys', STAFF, ...typed({ params: IdParamsSchema, body: SurveyCreateSchema }, async ({ params, body }, req, res) => {
+  const { survey, property } = await createSurvey(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: await readSurvey(survey, property) });
-});
+}));
 
-perProperty.get('/:id/harvests', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/harvests', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   res.json({ data: await listHarvests(await propertyOf(req)) });
-});
+}));
 
-perProperty.post('/:id/harvests', STAFF, validate({ params: IdParamsSchema, body: HarvestCreateSchema }), async (req, res) => {
-  const record = await createHarvest(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+perProperty.post('/:id/harvests', STAFF, ...typed({ params: IdParamsSchema, body: HarvestCreateSchema }, async ({ params, body }, req, res) => {
+  const record = await createHarvest(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: await harvestAnswer(record) });
-});
+}));
 
-perProperty.get('/:id/seasons/:season', STAFF_AND_CLIENT, validate({ params: SeasonParamsSchema }), async (req, res) => {
+perProperty.get('/:id/seasons/:season', STAFF_AND_CLIENT, ...typed({ params: SeasonParamsSchema }, async ({ params }, req, res) => {
   const property = await propertyOf(req);
-  const { photos, ...summary } = await readSeasonSummary(property, Number(req.params.season));
+  const { photos, ...summary } = await readSeasonSummary(property, params.season);
   res.json({ data: { ...summary, photoCount: photos.length } });
-});
+}));
 
-perProperty.get('/:id/season-reports', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/season-reports', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   res.json({ data: await listSeasonReports(actor(req), await propertyOf(req)) });
-});
+}));
 
-perProperty.post('/:id/season-reports', STAFF, validate({ params: IdParamsSchema, body: SeasonReportCreateSchema }), async (req, res) => {
+perProperty.post('/:id/season-reports', STAFF, ...typed({ params: IdParamsSchema, body: SeasonReportCreateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const job = await requestSeasonReport(me, Number(req.params.id), req.body as z.output<typeof SeasonReportCreateSchema>, req.ip ?? null);
+  const job = await requestSeasonReport(me, params.id, body, req.ip ?? null);
   // Made by a background job: a quick one answers 201 with the report as before; a slow one 202 with
   // the job, which the page polls at GET /api/jobs/:id.
   const settled = (await waitForJob(job.id)) ?? job;
@@ -93,71 +92,71 @@ perProperty.post('/:id/season-reports', STAFF, validate({ params: IdParamsSchema
   if (!report) return res.status(202).json({ data: null, job: presentJob(settled) });
   const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
   res.status(201).json({ data: presentSeasonReport(report, file?.byteSize ?? 0), job: presentJob(settled) });
-});
+}));
 
 // ---- surveys ----
 
-surveys.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+surveys.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   const { record, property } = await readableRecord<CameraSurvey>(req, CameraSurvey, 'That survey');
   res.json({ data: await readSurvey(record, property) });
-});
+}));
 
-surveys.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: SurveyUpdateSchema }), async (req, res) => {
-  const { survey, property } = await updateSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+surveys.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: SurveyUpdateSchema }, async ({ params, body }, req, res) => {
+  const { survey, property } = await updateSurvey(actor(req), params.id, body, req.ip ?? null);
   res.json({ data: await readSurvey(survey, property) });
-});
+}));
 
-surveys.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  await deleteSurvey(actor(req), Number(req.params.id), req.ip ?? null);
+surveys.delete('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  await deleteSurvey(actor(req), params.id, req.ip ?? null);
   res.status(204).end();
-});
+}));
 
 // ---- harvest records ----
 
-harvests.get('/:id', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+harvests.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   const { record } = await readableRecord<HarvestRecord>(req, HarvestRecord, 'That harvest record');
   res.json({ data: await harvestAnswer(record) });
-});
+}));
 
-harvests.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: HarvestUpdateSchema }), async (req, res) => {
-  const record = await updateHarvest(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+harvests.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: HarvestUpdateSchema }, async ({ params, body }, req, res) => {
+  const record = await updateHarvest(actor(req), params.id, body, req.ip ?? null);
   res.json({ data: await harvestAnswer(record) });
-});
+}));
 
-harvests.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  await deleteHarvest(actor(req), Number(req.params.id), req.ip ?? null);
+harvests.delete('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  await deleteHarvest(actor(req), params.id, req.ip ?? null);
   res.status(204).end();
-});
+}));
 
 // ---- season reports ----
 
-reports.get('/:id/pdf', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
+reports.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const report = await findInFirm(SeasonReport, Number(req.params.id), me.firmId, 'That season report');
+  const report = await findInFirm(SeasonReport, params.id, me.firmId, 'That season report');
   if (me.role === 'client' && (report.clientId !== me.clientId || report.sentAt === null || report.withdrawnAt !== null)) throw notFound('That season report');
   const file = await SharedFile.findByPk(report.sharedFileId);
   if (!file) throw notFound('That season report’s PDF');
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="season-report-${report.season}.pdf"`);
   await sendStoredFile(res, file.storageKey);
-});
+}));
 
-reports.post('/:id/send', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const report = await sendSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+reports.post('/:id/send', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const report = await sendSeasonReport(actor(req), params.id, req.ip ?? null);
   const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
   res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
-});
+}));
 
-reports.post('/:id/withdraw', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const report = await withdrawSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+reports.post('/:id/withdraw', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const report = await withdrawSeasonReport(actor(req), params.id, req.ip ?? null);
   const file = await SharedFile.findByPk(report.sharedFileId, { attributes: ['byteSize'] });
   res.json({ data: presentSeasonReport(report, file?.byteSize ?? 0) });
-});
+}));
 
-reports.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  await deleteSeasonReport(actor(req), Number(req.params.id), req.ip ?? null);
+reports.delete('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  await deleteSeasonReport(actor(req), params.id, req.ip ?? null);
   res.status(204).end();
-});
+}));
 
 export const propertyResultsRouter = perProperty.router;
 export const surveysRouter = surveys.router;

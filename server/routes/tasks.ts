@@ -3,10 +3,11 @@ import type { Request } from 'express';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { arrayUpload } from '../middlewares/upload';
 import { Property, Task, TaskPhoto } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskCompleteSchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema, type TaskListQuery } from '../../shared/schemas/task';
+import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskCompleteSchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema } from '../../shared/schemas/task';
 import { PHOTO_LIMITS } from '../../shared/limits';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { assignTasks, completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
@@ -21,29 +22,29 @@ const photosRouter = defineRoutes('/task-photos');
 const perProperty = defineRoutes('/properties');
 const WORKERS = ['owner', 'consultant', 'crew'] as const;
 
-r.get('/', WORKERS, validate({ query: TaskListQuerySchema }), async (req, res) => {
-  res.json({ data: await listTasks(actor(req), req.validQuery as TaskListQuery) });
-});
+r.get('/', WORKERS, ...typed({ query: TaskListQuerySchema }, async ({ query }, req, res) => {
+  res.json({ data: await listTasks(actor(req), query) });
+}));
 
-r.get('/:id', WORKERS, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id', WORKERS, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const task = await Task.findOne({ where: { id: Number(req.params.id), firmId: me.firmId } });
+  const task = await Task.findOne({ where: { id: params.id, firmId: me.firmId } });
   // A crew member asking for someone else's task learns nothing about it.
   if (!task || (me.role === 'crew' && task.assigneeId !== me.id)) throw notFound('That task');
   res.json({ data: await readTask(me, task) });
-});
+}));
 
-r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: TaskUpdateSchema }), async (req, res) => {
-  const task = await updateTask(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: TaskUpdateSchema }, async ({ params, body }, req, res) => {
+  const task = await updateTask(actor(req), params.id, body, req.ip ?? null);
   res.json({ data: await readTask(actor(req), task) });
-});
+}));
 
 /** Several selected tasks to one crew member (or unassigned), all or nothing. */
-r.post('/assign', STAFF, validate({ body: TaskAssignSchema }), async (req, res) => {
+r.post('/assign', STAFF, ...typed({ body: TaskAssignSchema }, async ({ body }, req, res) => {
   const me = actor(req);
-  const tasks = await assignTasks(me, req.body, req.ip ?? null);
+  const tasks = await assignTasks(me, body, req.ip ?? null);
   res.json({ data: await Promise.all(tasks.map((t) => readTask(me, t))) });
-});
+}));
 
 function idempotencyKey(req: Request): string {
   const raw = req.get(IDEMPOTENCY_HEADER);
@@ -74,15 +75,15 @@ r.post(
   },
 );
 
-r.post('/:id/skip', WORKERS, validate({ params: IdParamsSchema, body: TaskSkipSchema }), async (req, res) => {
-  const task = await skipTask(actor(req), Number(req.params.id), req.body.reason, req.ip ?? null);
+r.post('/:id/skip', WORKERS, ...typed({ params: IdParamsSchema, body: TaskSkipSchema }, async ({ params, body }, req, res) => {
+  const task = await skipTask(actor(req), params.id, body.reason, req.ip ?? null);
   res.json({ data: await readTask(actor(req), task) });
-});
+}));
 
-r.post('/:id/reopen', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const task = await reopenTask(actor(req), Number(req.params.id), req.ip ?? null);
+r.post('/:id/reopen', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const task = await reopenTask(actor(req), params.id, req.ip ?? null);
   res.json({ data: await readTask(actor(req), task) });
-});
+}));
 
 /** A completion photo, for staff of the firm, the crew member of the task, and the client who owns the property. */
 photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {

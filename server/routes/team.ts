@@ -1,7 +1,7 @@
 /** The firm's people: list, invite, enable or disable. */
 import { z } from 'zod';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { User } from '../models';
 import { InviteCreateSchema } from '../../shared/schemas/auth';
 import { IdParamsSchema } from '../../shared/schemas/common';
@@ -18,20 +18,20 @@ r.get('/', STAFF, async (req, res) => {
   res.json({ data: users.map(presentTeamMember) });
 });
 
-r.post('/invitations', STAFF, validate({ body: InviteCreateSchema }), async (req, res) => {
-  const user = await sendInvitation(actor(req), req.body, req.ip ?? null);
+r.post('/invitations', STAFF, ...typed({ body: InviteCreateSchema }, async ({ body }, req, res) => {
+  const user = await sendInvitation(actor(req), body, req.ip ?? null);
   res.status(201).json({ data: presentTeamMember(user) });
-});
+}));
 
 const MemberPatchSchema = z.object({ active: z.boolean() });
 
-r.patch('/:id', OWNER, validate({ params: IdParamsSchema, body: MemberPatchSchema }), async (req, res) => {
+r.patch('/:id', OWNER, ...typed({ params: IdParamsSchema, body: MemberPatchSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const user = await findInFirm(User, Number(req.params.id), me.firmId, 'That person');
+  const user = await findInFirm(User, params.id, me.firmId, 'That person');
   if (user.id === me.id) throw forbidden('You cannot disable your own account.');
-  await user.update({ active: req.body.active });
-  await recordAudit({ firmId: me.firmId, userId: me.id, action: req.body.active ? 'user.enabled' : 'user.disabled', subjectType: 'User', subjectId: user.id, ip: req.ip ?? null });
+  await user.update({ active: body.active });
+  await recordAudit({ firmId: me.firmId, userId: me.id, action: body.active ? 'user.enabled' : 'user.disabled', subjectType: 'User', subjectId: user.id, ip: req.ip ?? null });
   res.json({ data: presentTeamMember(user) });
-});
+}));
 
 export const teamRouter = r.router;

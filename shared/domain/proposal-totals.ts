@@ -16,6 +16,7 @@
  * 6. total         = subtotal − discount + tax.
  * 7. deposit       = round-half-up(total × deposit percent); balance = total − deposit.
  */
+import type { ProposalTotalsFigures } from '../schemas/proposal-dto';
 import { DomainValidationError } from './errors';
 import {
   DECIMAL_SCALE,
@@ -73,15 +74,8 @@ export type PricedLine<L extends ProposalLineInput = ProposalLineInput> = L & {
 };
 
 /** The totals of a proposal; lines come back in the order given. */
-export interface ProposalTotals<L extends ProposalLineInput = ProposalLineInput> {
+export interface ProposalTotals<L extends ProposalLineInput = ProposalLineInput> extends ProposalTotalsFigures {
   lines: PricedLine<L>[];
-  subtotalCents: number;
-  discountCents: number;
-  taxableCents: number;
-  taxCents: number;
-  totalCents: number;
-  depositCents: number;
-  balanceCents: number;
 }
 
 /** Step 1, the one place a line amount is computed: round-half-up(quantity × unit price) on integers. */

@@ -11,7 +11,9 @@ import { requireCents, requireNumber, requireText } from './validation';
 
 export type RateBasis = 'per-acre' | 'per-hour' | 'per-each' | 'per-100-ft';
 export const RATE_BASES: readonly RateBasis[] = ['per-acre', 'per-hour', 'per-each', 'per-100-ft'];
-export type RateCategory = 'labor' | 'equipment' | 'fees';
+/** The line categories a service rate may have (a subset of LINE_CATEGORIES: materials are priced as materials). */
+export const RATE_CATEGORIES = ['labor', 'equipment', 'fees'] as const;
+export type RateCategory = (typeof RATE_CATEGORIES)[number];
 export type LineCategory = 'materials' | RateCategory;
 
 /** A firm's rate for labor, equipment or a fee. */
@@ -80,7 +82,7 @@ export const BASIS_UNITS: Record<RateBasis, string> = {
 export function validateServiceRate(rate: ServiceRate, field = 'rate'): void {
   requireText(`${field}.key`, rate.key, 'Rate key');
   requireText(`${field}.name`, rate.name, 'Rate name');
-  if (!['labor', 'equipment', 'fees'].includes(rate.category)) {
+  if (!(RATE_CATEGORIES as readonly string[]).includes(rate.category)) {
     throw new DomainValidationError(`${field}.category`, `Rate category must be labor, equipment or fees (got ${JSON.stringify(rate.category)}).`);
   }
   if (!RATE_BASES.includes(rate.basis)) {

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { IdSchema, RecordIdSchema } from './common';
 import { parseDollarsToCents } from '../domain/money';
 import { PageQuerySchema } from './common';
-import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceKind, type InvoiceLineSource, type InvoiceStatus } from '../domain/invoicing';
+import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceLineSource } from '../domain/invoicing';
 
 const id = RecordIdSchema;
 
@@ -65,80 +65,81 @@ export const RefundSchema = z.object({
 });
 export type RefundInput = z.infer<typeof RefundSchema>;
 
-export interface InvoiceLineDto {
-  id: number;
-  position: number;
-  source: InvoiceLineSource;
-  taskId: number | null;
-  description: string;
-  quantity: string;
-  unit: string;
-  unitPriceCents: number;
-  amountCents: number;
-  taxable: boolean;
-}
+const cents = z.number().int();
+const nullableString = z.string().nullable();
 
-export interface InvoiceRefundDto {
-  id: number;
-  amountCents: number;
-  reason: string | null;
-  createdAt: string;
-}
+export const InvoiceLineDtoSchema = z.object({
+  id: z.number().int(),
+  position: z.number().int(),
+  source: z.custom<InvoiceLineSource>((v) => typeof v === 'string'),
+  taskId: z.number().int().nullable(),
+  description: z.string(),
+  quantity: z.string(),
+  unit: z.string(),
+  unitPriceCents: cents,
+  amountCents: cents,
+  taxable: z.boolean(),
+});
+export type InvoiceLineDto = z.infer<typeof InvoiceLineDtoSchema>;
 
-export interface InvoicePaymentDto {
-  id: number;
-  amountCents: number;
-  refundedCents: number;
-  receivedAt: string;
-  refunds: InvoiceRefundDto[];
-}
+export const InvoiceRefundDtoSchema = z.object({ id: z.number().int(), amountCents: cents, reason: nullableString, createdAt: z.string() });
+export type InvoiceRefundDto = z.infer<typeof InvoiceRefundDtoSchema>;
 
-export interface InvoiceRowDto {
-  id: number;
-  number: string;
-  kind: InvoiceKind;
-  status: InvoiceStatus;
-  clientId: number;
-  clientName: string;
-  propertyId: number | null;
-  propertyName: string;
-  proposalId: number | null;
-  proposalNumber: string | null;
-  issuedOn: string | null;
-  dueOn: string | null;
-  totalCents: number;
-  amountPaidCents: number;
-  amountRefundedCents: number;
-  balanceCents: number;
+export const InvoicePaymentDtoSchema = z.object({ id: z.number().int(), amountCents: cents, refundedCents: cents, receivedAt: z.string(), refunds: z.array(InvoiceRefundDtoSchema) });
+export type InvoicePaymentDto = z.infer<typeof InvoicePaymentDtoSchema>;
+
+/** A row of the invoice list. */
+export const InvoiceRowDtoSchema = z.object({
+  id: z.number().int(),
+  number: z.string(),
+  kind: z.enum(INVOICE_KINDS),
+  status: z.enum(INVOICE_STATUSES),
+  clientId: z.number().int(),
+  clientName: z.string(),
+  propertyId: z.number().int().nullable(),
+  propertyName: z.string(),
+  proposalId: z.number().int().nullable(),
+  proposalNumber: nullableString,
+  issuedOn: nullableString,
+  dueOn: nullableString,
+  totalCents: cents,
+  amountPaidCents: cents,
+  amountRefundedCents: cents,
+  balanceCents: cents,
   /** Days past the due date while open (0 when not overdue). */
-  daysOverdue: number;
-  updatedAt: string;
-}
+  daysOverdue: z.number().int(),
+  updatedAt: z.string(),
+});
+export type InvoiceRowDto = z.infer<typeof InvoiceRowDtoSchema>;
 
-export interface InvoiceDto extends InvoiceRowDto {
-  currency: string;
-  taxRatePct: number;
-  termsDays: number;
-  notes: string | null;
-  subtotalCents: number;
-  taxCents: number;
-  billedCents: number;
-  sentAt: string | null;
-  paidAt: string | null;
-  voidedAt: string | null;
-  voidReason: string | null;
-  lines: InvoiceLineDto[];
-  payments: InvoicePaymentDto[];
-}
+/** An invoice with its lines and payments. */
+export const InvoiceDtoSchema = InvoiceRowDtoSchema.extend({
+  currency: z.string(),
+  taxRatePct: z.number(),
+  termsDays: z.number().int(),
+  notes: nullableString,
+  subtotalCents: cents,
+  taxCents: cents,
+  billedCents: cents,
+  sentAt: nullableString,
+  paidAt: nullableString,
+  voidedAt: nullableString,
+  voidReason: nullableString,
+  lines: z.array(InvoiceLineDtoSchema),
+  payments: z.array(InvoicePaymentDtoSchema),
+});
+export type InvoiceDto = z.infer<typeof InvoiceDtoSchema>;
 
-export interface ReceivablesDto {
-  asOf: string;
-  buckets: { key: AgeingBucketKey; label: string; amountCents: number; count: number }[];
-  outstandingCents: number;
-  overdueCents: number;
-  paidThisMonthCents: number;
-  draftCount: number;
-}
+/** What the firm is owed, by age. */
+export const ReceivablesDtoSchema = z.object({
+  asOf: z.string(),
+  buckets: z.array(z.object({ key: z.custom<AgeingBucketKey>((v) => typeof v === 'string'), label: z.string(), amountCents: cents, count: z.number().int() })),
+  outstandingCents: cents,
+  overdueCents: cents,
+  paidThisMonthCents: cents,
+  draftCount: z.number().int(),
+});
+export type ReceivablesDto = z.infer<typeof ReceivablesDtoSchema>;
 
 /** The manual-line form: the same rules as ManualLineSchema, with the price typed in dollars ("65.00"). */
 export const ManualLineFormSchema = ManualLineSchema.omit({ unitPriceCents: true }).extend({

@@ -2,6 +2,7 @@
  * The practice library over the API: materials (flat, with a `kind`), service rates, practices,
  * and prescriptions. Materials convert to the domain's MaterialDefinition (shared/domain/practice.ts).
  */
+import { RATE_CATEGORIES } from '../domain/service-rates';
 import { z } from 'zod';
 import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
@@ -84,7 +85,7 @@ export type MaterialDto = MaterialDefinition & { id: number; kind: MaterialKind;
 
 export const RateCreateSchema = z.object({
   name,
-  category: z.enum(['labor', 'equipment', 'fees']),
+  category: z.enum(RATE_CATEGORIES),
   basis: z.enum(['per-acre', 'per-hour', 'per-each', 'per-100-ft']),
   unitPriceCents: cents('Price'),
   minimumCents: cents('Minimum charge').optional(),

@@ -11,6 +11,11 @@ const decimalQuantity = z
   .transform((v) => String(v).trim())
   .refine((v) => /^\d+(\.\d{1,4})?$/.test(v), { message: 'quantity must be a positive number with at most 4 decimals' });
 
+/** What a proposal or invoice line prices: the one list of line categories. */
+export const LINE_CATEGORIES = ['materials', 'labor', 'equipment', 'fees'] as const;
+export const LineCategorySchema = z.enum(LINE_CATEGORIES, { message: 'must be materials, labor, equipment or fees' });
+export type LineCategory = z.infer<typeof LineCategorySchema>;
+
 export const DiscountSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('none') }),
   z.object({ kind: z.literal('percent'), percent: pct('Discount', 100) }),
@@ -22,7 +27,7 @@ export const ProposalLineInputSchema = z.object({
   groupLabel: z.string().trim().min(1).max(120),
   unitId: RecordIdSchema.nullish(),
   prescriptionId: RecordIdSchema.nullish(),
-  category: z.enum(['materials', 'labor', 'equipment', 'fees']),
+  category: LineCategorySchema,
   description: z.string().trim().min(1, { message: 'describe the line' }).max(300),
   quantity: decimalQuantity,
   unit: z.string().trim().min(1).max(40),

@@ -1,7 +1,7 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
 import { IdSchema, IsoDateSchema, PageLimitSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
-import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskStatus, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
+import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
 
 /**
@@ -92,61 +92,67 @@ export const TaskSkipSchema = z.object({ reason: z.string().trim().min(3, { mess
 export { IDEMPOTENCY_HEADER } from '../domain/tasks';
 export const IdempotencyKeySchema = z.string().trim().min(8, { message: 'must be at least 8 characters' }).max(200).regex(/^[A-Za-z0-9_.:-]+$/, { message: 'may hold letters, digits and - _ . : only' });
 
-export interface TaskPhotoDto {
-  id: number;
-  url: string;
-  takenAt: string | null;
-  latitude: number | null;
-  longitude: number | null;
-  createdAt: string;
-}
+export const TaskPhotoDtoSchema = z.object({
+  id: z.number().int(),
+  url: z.string(),
+  takenAt: z.string().nullable(),
+  latitude: z.number().nullable(),
+  longitude: z.number().nullable(),
+  createdAt: z.string(),
+});
+export type TaskPhotoDto = z.infer<typeof TaskPhotoDtoSchema>;
+
+const objects = <T>() => z.array(z.custom<T>((v) => typeof v === 'object' && v !== null));
+const nullableString = z.string().nullable();
 
 /** A task as the API answers it. Crew members get no cost (costCents is null for them). */
-export interface TaskDto {
-  id: number;
-  propertyId: number;
-  propertyName: string;
-  unitId: number | null;
-  unitName: string;
-  unitKind: string | null;
-  prescriptionId: number | null;
-  proposalId: number | null;
-  stepKey: string;
-  name: string;
-  kind: string;
-  practiceName: string;
-  dependsOn: string[];
-  earliest: string;
-  latest: string;
-  startDate: string | null;
-  endDate: string | null;
-  status: TaskStatus;
-  assigneeId: number | null;
-  assigneeName: string | null;
-  quantities: TaskQuantity[];
-  cautions: Caution[];
-  costCents: number | null;
-  doneOn: string | null;
-  completedAt: string | null;
-  completedByName: string | null;
-  notes: string | null;
-  hours: number | null;
-  quantitiesUsed: TaskQuantityUsed[];
-  skipReason: string | null;
-  invoiceId: number | null;
-  photos: TaskPhotoDto[];
-  bucket: FieldBucket;
+export const TaskDtoSchema = z.object({
+  id: z.number().int(),
+  propertyId: z.number().int(),
+  propertyName: z.string(),
+  unitId: z.number().int().nullable(),
+  unitName: z.string(),
+  unitKind: nullableString,
+  prescriptionId: z.number().int().nullable(),
+  proposalId: z.number().int().nullable(),
+  stepKey: z.string(),
+  name: z.string(),
+  kind: z.string(),
+  practiceName: z.string(),
+  dependsOn: z.array(z.string()),
+  earliest: z.string(),
+  latest: z.string(),
+  startDate: nullableString,
+  endDate: nullableString,
+  status: z.enum(TASK_STATUSES),
+  assigneeId: z.number().int().nullable(),
+  assigneeName: nullableString,
+  quantities: objects<TaskQuantity>(),
+  cautions: objects<Caution>(),
+  costCents: z.number().int().nullable(),
+  doneOn: nullableString,
+  completedAt: nullableString,
+  completedByName: nullableString,
+  notes: nullableString,
+  hours: z.number().nullable(),
+  quantitiesUsed: objects<TaskQuantityUsed>(),
+  skipReason: nullableString,
+  invoiceId: z.number().int().nullable(),
+  photos: z.array(TaskPhotoDtoSchema),
+  bucket: z.custom<FieldBucket>((v) => typeof v === 'string'),
   /** [lon, lat] of a point inside the unit, for the phone's maps app. */
-  location: [number, number] | null;
-  warnings: TaskWarning[];
-}
+  location: z.tuple([z.number(), z.number()]).nullable(),
+  warnings: objects<TaskWarning>(),
+});
+export type TaskDto = z.infer<typeof TaskDtoSchema>;
 
-export interface TaskListDto {
-  tasks: TaskDto[];
-  warnings: TaskWarning[];
+export const TaskListDtoSchema = z.object({
+  tasks: z.array(TaskDtoSchema),
+  warnings: objects<TaskWarning>(),
   /** The tasks matching the filter in all (`tasks` holds `limit` of them from `offset`). */
-  page?: PageDto;
-}
+  page: z.custom<PageDto>((v) => typeof v === 'object' && v !== null).optional(),
+});
+export type TaskListDto = z.infer<typeof TaskListDtoSchema>;
 
 export interface UnitProgressDto extends Progress {
   unitId: number;

@@ -2,11 +2,13 @@
 import type { Geometry, MultiPolygon, Polygon } from 'geojson';
 import type { UnitKind } from '../../shared/domain/unit-kinds';
 import type { LetterheadFirm } from './firm-block';
+import type { LineCategory } from '../../shared/schemas/proposal';
+import type { ProposalTotalsFigures } from '../../shared/schemas/proposal-dto';
 
 export interface ProposalDocumentLine {
   id: number;
   groupLabel: string;
-  category: 'materials' | 'labor' | 'equipment' | 'fees';
+  category: LineCategory;
   description: string;
   /** Decimal string with up to 4 places, e.g. "2.3700". */
   quantity: string;
@@ -41,14 +43,7 @@ export interface ProposalDocumentInput {
   /** One group per unit with work: its plain-language prescription summaries. */
   groups: { label: string; kind?: UnitKind | null; acres?: number | null; lengthFt?: number | null; summaries: string[] }[];
   lines: ProposalDocumentLine[];
-  totals: {
-    subtotalCents: number;
-    discountCents: number;
-    taxableCents: number;
-    taxCents: number;
-    totalCents: number;
-    depositCents: number;
-    balanceCents: number;
+  totals: ProposalTotalsFigures & {
     taxRatePct: number;
     depositPct: number;
     /** "10% discount" or "Discount" */

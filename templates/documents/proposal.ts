@@ -11,6 +11,8 @@
  * totals agree with one another (included lines add up to the subtotal, and so on) and refuses
  * input that does not, so a PDF can never show figures that contradict each other.
  */
+import { LineCategorySchema } from '../../shared/schemas/proposal';
+import { ProposalTotalsFiguresSchema } from '../../shared/schemas/proposal-dto';
 import type { Geometry, MultiPolygon, Polygon } from 'geojson';
 import type { Column, Content, CustomTableLayout, TableCell, TDocumentDefinitions, Watermark } from 'pdfmake/interfaces';
 import { z } from 'zod';
@@ -79,7 +81,7 @@ const LineSchema = z
   .object({
     id: z.number().int(),
     groupLabel: z.string().max(120),
-    category: z.enum(['materials', 'labor', 'equipment', 'fees'], { message: 'must be materials, labor, equipment or fees' }),
+    category: LineCategorySchema,
     description: text(500),
     quantity: z.string().regex(/^\d{1,12}(\.\d{1,4})?$/, { message: 'must be a decimal such as "2.3700" (at most 4 places)' }),
     unit: z.string().max(40),
@@ -128,14 +130,7 @@ const ProposalDocumentInputSchema = z.object({
     )
     .max(200, { message: 'at most 200 groups' }),
   lines: z.array(LineSchema).max(1000, { message: 'a proposal has at most 1,000 lines' }),
-  totals: z.object({
-    subtotalCents: cents,
-    discountCents: cents,
-    taxableCents: cents,
-    taxCents: cents,
-    totalCents: cents,
-    depositCents: cents,
-    balanceCents: cents,
+  totals: ProposalTotalsFiguresSchema.extend({
     taxRatePct: percent(30),
     depositPct: percent(100),
     discountLabel: z.string().trim().max(60).optional(),

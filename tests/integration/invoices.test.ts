@@ -2,6 +2,8 @@
 // webhooks, and the local payments fake driven by the app's real `stripe` SDK calls. A small proxy
 // between the app and the fake can drop answers, to show that a retry after an outage charges once.
 import crypto from 'node:crypto';
+import { InvoiceDtoSchema, InvoiceRowDtoSchema } from '../../shared/schemas/invoice';
+import { z } from 'zod';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { execFileSync } from 'node:child_process';
@@ -73,7 +75,7 @@ function makeProxy(): http.Server {
 async function getInvoice(agent: Agent, id: number): Promise<InvoiceDto> {
   const res = await agent.get(`/api/invoices/${id}`);
   expect(res.status).toBe(200);
-  return res.body.data;
+  return InvoiceDtoSchema.parse(res.body.data);
 }
 
 /** Opens the payment page as the client and pays it on the fake with the test card; waits for every webhook. */
@@ -136,7 +138,7 @@ describe('deposit invoice', () => {
   it('is drafted in the approval’s transaction, numbered per firm, for the proposal’s deposit to the cent', async () => {
     const res = await send(consultant, 'post', '/api/invoices', { proposalId: proposal.id, kind: 'deposit' });
     expect(res.status).toBe(200); // the draft made at approval, not a new one
-    const inv: InvoiceDto = res.body.data;
+    const inv: InvoiceDto = InvoiceDtoSchema.parse(res.body.data);
     depositId = inv.id;
     expect(inv.status).toBe('draft');
     expect(inv.number).toMatch(/^INV-\d{4}-0001$/); // the firm's first invoice
@@ -303,7 +305,7 @@ describe('progress and final invoices', () => {
     await Task.create({ ...base, stepKey: 'seed', name: 'Broadcast seed', status: 'planned', costCents: 9_000 });
     const res = await send(consultant, 'post', '/api/invoices', { proposalId: proposal.id, kind: 'progress' });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    const inv: InvoiceDto = res.body.data;
+    const inv: InvoiceDto = InvoiceDtoSchema.parse(res.body.data);
     expect(inv.lines.filter((l) => l.source === 'task').map((l) => l.taskId)).toEqual([done.id]);
     // 30 % deposit credited pro rata: 12000 × 30 % = 3600 (arithmetic, no source)
     expect(inv.lines.find((l) => l.source === 'deposit-credit')?.amountCents).toBe(-3_600);
@@ -431,7 +433,7 @@ describe('void invoices and other clients', () => {
     const neighbour = await makeClient(ctx.firm.id);
     const other = await signedInAgent((await makeUser(ctx.firm.id, 'client', neighbour.id)).email, PASSWORD);
     expect((await other.get('/api/invoices')).body.data).toEqual([]);
-    const mine = (await client.get('/api/invoices')).body.data;
+    const mine = z.array(InvoiceRowDtoSchema).parse((await client.get('/api/invoices')).body.data);
     expect(mine.length).toBeGreaterThan(0);
     expect((await other.get(`/api/invoices/${mine[0].id}`)).status).toBe(404);
     expect((await send(other, 'post', `/api/invoices/${mine[0].id}/checkout`)).status).toBe(404);

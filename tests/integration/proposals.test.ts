@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { ProposalDtoSchema } from '../../shared/schemas/proposal-dto';
 import crypto from 'node:crypto';
 import { execFileSync } from 'node:child_process';
 import { capturedMailTo, capturedMessage, signedInAgent, type Agent } from '../support/test-app';
@@ -39,7 +40,7 @@ function recompute(p: { lines: { id: number; quantity: string; unitPriceCents: n
 async function draft(): Promise<{ id: number } & Record<string, never>> {
   const res = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, { taxRatePct: 5.5, depositPct: 30 });
   expect(res.status).toBe(201);
-  return res.body.data;
+  return ProposalDtoSchema.parse(res.body.data) as unknown as { id: number } & Record<string, never>;
 }
 
 beforeAll(async () => {
@@ -75,6 +76,7 @@ describe('drafting and editing', () => {
     lines.push({ groupLabel: 'Extras', unitId: null, prescriptionId: null, category: 'materials', description: 'Two trail cameras', quantity: '2', unit: 'each', unitPriceCents: 18999, taxable: true, optional: true });
     const res = await send(consultant, 'patch', `/api/proposals/${p.id}`, { lines, discount: { kind: 'percent', percent: 5 }, taxRatePct: 7.25 });
     expect(res.status).toBe(200);
+    ProposalDtoSchema.parse(res.body.data);
     const data = res.body.data;
     const option = data.lines.find((l: { description: string }) => l.description === 'Two trail cameras');
     expect(option).toMatchObject({ optional: true, included: false, amountCents: 37998 });
@@ -126,6 +128,7 @@ describe('sending, approval and versions', () => {
 
     const approved = await client.post(`/api/proposals/${p.id}/approve`).set('X-CSRF-Token', client.csrf).set('User-Agent', 'Browseline test browser').send({ signedName: 'Pat Landowner' });
     expect(approved.status).toBe(200);
+    ProposalDtoSchema.parse(approved.body.data);
     const data = approved.body.data;
     expect(data.status).toBe('approved');
     expect(data.approval.signedName).toBe('Pat Landowner');
@@ -199,7 +202,7 @@ describe('sending, approval and versions', () => {
 
   it('prints the same totals in the PDF as the API answers', async () => {
     const p = await draft();
-    const data = (await consultant.get(`/api/proposals/${p.id}`)).body.data;
+    const data = ProposalDtoSchema.parse((await consultant.get(`/api/proposals/${p.id}`)).body.data);
     const text = await pdfText(consultant, `/api/proposals/${p.id}/pdf`);
     for (const cents of [data.subtotalCents, data.taxCents, data.totalCents, data.depositCents]) expect(text).toContain(formatCents(cents));
     expect(text).toMatch(/Page 1 of \d/);

@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
+import { TaskDtoSchema, TaskListDtoSchema } from '../../shared/schemas/task';
 import fs from 'node:fs';
 import path from 'node:path';
 import crypto from 'node:crypto';
@@ -34,7 +35,7 @@ function complete(agent: Agent, taskId: number, fields: Record<string, string>, 
 async function tasksOf(agent: Agent, query = ''): Promise<{ id: number; name: string; stepKey: string; unitId: number; status: string; assigneeId: number | null; costCents: number | null; quantities: { label: string; amount: number; rateText: string }[]; cautions: { id: string }[]; dependsOn: string[]; location: [number, number] | null; earliest: string; latest: string }[]> {
   const res = await agent.get(`/api/tasks${query}`);
   expect(res.status).toBe(200);
-  return res.body.data.tasks;
+  return TaskListDtoSchema.parse(res.body.data).tasks as unknown as Awaited<ReturnType<typeof tasksOf>>;
 }
 
 beforeAll(async () => {
@@ -84,7 +85,7 @@ describe('tasks from an approved proposal', () => {
     const [task] = await tasksOf(consultant, `?propertyId=${propertyId}`);
     const moved = await send(consultant, 'patch', `/api/tasks/${task.id}`, { assigneeId: ctx.users.crew.id, startDate: task.earliest });
     expect(moved.status).toBe(200);
-    expect(moved.body.data).toMatchObject({ status: 'scheduled', assigneeId: ctx.users.crew.id, startDate: task.earliest, endDate: task.earliest });
+    expect(TaskDtoSchema.parse(moved.body.data)).toMatchObject({ status: 'scheduled', assigneeId: ctx.users.crew.id, startDate: task.earliest, endDate: task.earliest });
     const backwards = await send(consultant, 'patch', `/api/tasks/${task.id}`, { startDate: '2026-09-10', endDate: '2026-09-01' });
     expect(backwards.status).toBe(422);
     expect((await send(consultant, 'patch', `/api/tasks/${task.id}`, { startDate: '2026-02-30' })).status).toBe(422);

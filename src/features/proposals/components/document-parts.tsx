@@ -1,4 +1,5 @@
 /** The parts of a proposal as a document, shared by the consultant's read-only view and the portal. */
+import type { ProposalTotalsFigures } from '../../../../shared/schemas/proposal-dto';
 import type { ReactNode } from 'react';
 import { formatCents } from '../../../../shared/domain/money';
 import type { OrderDiscount } from '../../../../shared/domain/proposal-totals';
@@ -156,16 +157,8 @@ export function LineItemsByUnit({
   );
 }
 
-/** The totals a proposal shows (all in cents). */
-export interface TotalsFigures {
-  subtotalCents: number;
-  discountCents: number;
-  taxableCents: number;
-  taxCents: number;
-  totalCents: number;
-  depositCents: number;
-  balanceCents: number;
-}
+/** The totals a proposal shows (all in cents): the one shape in shared/schemas/proposal-dto.ts. */
+export type TotalsFigures = ProposalTotalsFigures;
 
 function Row({ label, value, strong = false, note, figure }: { label: ReactNode; value: string; strong?: boolean; note?: ReactNode; figure: string }) {
   return (

@@ -3,6 +3,7 @@
  * PATCH body it becomes, and its live totals by the same rule the server prices with
  * (shared/domain/proposal-totals.ts). Pure: no React, no fetching.
  */
+import { LINE_CATEGORIES } from '../../../../shared/schemas/proposal';
 import { DomainValidationError } from '../../../../shared/domain/errors';
 import { parseDollarsToCents } from '../../../../shared/domain/money';
 import { MAX_TAX_RATE_PCT, lineAmountCents, proposalTotals, type OrderDiscount, type ProposalLineInput, type ProposalTotals } from '../../../../shared/domain/proposal-totals';
@@ -11,7 +12,7 @@ import type { LineCategory, ProposalDto, ProposalLineDto } from '../../../../sha
 
 export type DiscountKind = OrderDiscount['kind'];
 
-export const LINE_CATEGORIES: readonly LineCategory[] = ['materials', 'labor', 'equipment', 'fees'];
+export { LINE_CATEGORIES };
 export const CATEGORY_LABELS: Record<LineCategory, string> = { materials: 'Materials', labor: 'Labor', equipment: 'Equipment', fees: 'Fees' };
 
 /** Text limits of a line, as in ProposalLineInputSchema (shared/schemas/proposal.ts). */
