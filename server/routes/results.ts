@@ -22,6 +22,8 @@ import { deleteSeasonReport, requestSeasonReport, sendSeasonReport, withdrawSeas
 import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
 import { presentHarvest, presentSeasonReport } from '../presenters/results';
 import { sendStoredFile } from '../services/storage/storage';
+import { isFromPhotos, SurveyFromPhotosSchema } from '../../shared/schemas/cameras';
+import { createSurveyFromPhotos } from '../commands/photo-survey-maker';
 
 const perProperty = defineRoutes('/properties');
 const surveys = defineRoutes('/surveys');
@@ -58,8 +60,11 @@ perProperty.get('/:id/surveys', STAFF_AND_CLIENT, validate({ params: IdParamsSch
   res.json({ data: await listSurveys(await propertyOf(req)) });
 });
 
-perProperty.post('/:id/surveys', STAFF, validate({ params: IdParamsSchema, body: SurveyCreateSchema }), async (req, res) => {
-  const { survey, property } = await createSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+perProperty.post('/:id/surveys', STAFF, validate({ params: IdParamsSchema }), (req, res, next) => validate({ body: isFromPhotos(req.body) ? SurveyFromPhotosSchema : SurveyCreateSchema })(req, res, next), async (req, res) => {
+  // Typed tallies, or `fromPhotos: { deploymentIds, from, to }` to tally the tagged photos.
+  const { survey, property } = isFromPhotos(req.body)
+    ? await createSurveyFromPhotos(actor(req), Number(req.params.id), req.body, req.ip ?? null)
+    : await createSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
   res.status(201).json({ data: await readSurvey(survey, property) });
 });
 

@@ -159,7 +159,7 @@ export const TWILIGHT_WINDOW_MINUTES = 60;
 export function sunTimes(instant: Date, lat: number, lon: number): { sunrise: Date | null; sunset: Date | null } {
   // suncalc takes any instant of the day and computes for the solar day at that longitude.
   const t = SunCalc.getTimes(instant, lat, lon);
-  const valid = (d: Date) => (d instanceof Date && !Number.isNaN(d.getTime()) ? d : null);
+  const valid = (d: Date | null) => (d instanceof Date && !Number.isNaN(d.getTime()) ? d : null);
   return { sunrise: valid(t.sunrise), sunset: valid(t.sunset) };
 }
 
