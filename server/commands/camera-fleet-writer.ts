@@ -115,10 +115,11 @@ export async function updateDeployment(actor: SessionUser, id: number, values: O
 async function retimePhotos(deployment: CameraDeployment, transaction: Transaction): Promise<void> {
   const { zone } = await cameraSettings(deployment.firmId, transaction);
   const now = new Date();
-  const photos = await CameraPhoto.findAll({ where: { deploymentId: deployment.id, cameraTime: { [Op.ne]: null } }, attributes: ['id', 'cameraTime', 'flags'], transaction });
+  const photos = await CameraPhoto.findAll({ where: { deploymentId: deployment.id, cameraTime: { [Op.ne]: null } }, attributes: ['id', 'cameraTime', 'cameraOffset', 'flags'], transaction });
   for (const photo of photos) {
-    const takenAt = correctedPhotoTime(photo.cameraTime!, zone, deployment.clockOffsetSeconds);
-    const flags = [...photo.flags.filter((f) => f !== 'time-out-of-range'), ...photoTimeFlags(takenAt, deployment, now)];
+    const takenAt = correctedPhotoTime(photo.cameraTime!, photo.cameraOffset, zone, deployment.clockOffsetSeconds);
+    if (!takenAt) continue;
+    const flags = [...photo.flags.filter((f) => f !== 'time-out-of-range' && f !== 'no-time'), ...photoTimeFlags(takenAt, deployment, now)];
     await CameraPhoto.update({ takenAt, flags }, { where: { id: photo.id }, transaction });
   }
 }

@@ -13,13 +13,15 @@ import { cameraSettings } from '../queries/camera-fleet';
 import { enqueueJob } from '../services/jobs/job-queue';
 import { deleteFile, saveFile } from '../services/storage/storage';
 import { correctedPhotoTime } from '../../shared/domain/camera-events';
-import { zonedReading } from '../../shared/domain/clock';
+import { formatDate, zonedReading } from '../../shared/domain/clock';
+import type { InspectedPhoto } from '../services/photos';
 import type { CardPhotoReading } from '../services/cameras/card-photo';
 import type { CardUploadResult, CameraPhotoTagInput } from '../../shared/schemas/cameras';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { presentCameraPhoto } from '../presenters/camera';
 
 const DAY_MS = 86_400_000;
+const nameOf = (p: InspectedPhoto) => (p.originalName ? `“${p.originalName}”` : 'A photo');
 
 /**
  * Flags a photo whose true time cannot be right: after now (a clock in 2099) or more than a day
@@ -47,7 +49,7 @@ export async function addCardPhotos(actor: SessionUser, deploymentId: number, re
       continue;
     }
     if (seen.has(r.photo.sha256)) {
-      skips.push({ name: r.photo.name, reason: 'duplicate', message: `${r.photo.name ? `“${r.photo.name}”` : 'A photo'} was sent twice in this batch; it was added once.` });
+      skips.push({ name: r.photo.originalName, reason: 'duplicate', message: `${nameOf(r.photo)} was sent twice in this batch; it was added once.` });
       continue;
     }
     seen.add(r.photo.sha256);
@@ -59,7 +61,7 @@ export async function addCardPhotos(actor: SessionUser, deploymentId: number, re
   const have = new Set(existing.map((e) => e.sha256));
   const toAdd = fresh.filter((p) => {
     if (!have.has(p.sha256)) return true;
-    skips.push({ name: p.name, reason: 'duplicate', message: `${p.name ? `“${p.name}”` : 'A photo'} is already on this deployment (same content); it was skipped.` });
+    skips.push({ name: p.originalName, reason: 'duplicate', message: `${nameOf(p)} is already on this deployment (same content); it was skipped.` });
     return false;
   });
 
@@ -72,33 +74,34 @@ export async function addCardPhotos(actor: SessionUser, deploymentId: number, re
       const rows: CameraPhoto[] = [];
       for (const [i, p] of toAdd.entries()) {
         const flags: string[] = [];
-        let takenAt: Date | null = null;
-        const label = p.name ? `“${p.name}”` : 'A photo';
-        if (p.cameraTime) {
-          takenAt = correctedPhotoTime(p.cameraTime, zone, deployment.clockOffsetSeconds);
-          flags.push(...photoTimeFlags(takenAt, deployment, now));
-          if (flags.length) flagged.push({ name: p.name, message: `${label} says it was taken ${zonedReading(takenAt, zone).date}, outside the days this camera ran; it is kept but left out of the events. Set the deployment’s clock offset if the camera’s clock was wrong.` });
-        } else {
-          flags.push('no-time');
-          flagged.push({ name: p.name, message: `${label} carries no capture time (EXIF DateTimeOriginal); it is kept for review but left out of the events.` });
+        const label = nameOf(p);
+        const { takenAtLocal, takenAtOffset, problems } = p.exif;
+        const takenAt = takenAtLocal ? correctedPhotoTime(takenAtLocal, takenAtOffset, zone, deployment.clockOffsetSeconds) : null;
+        for (const problem of problems) {
+          flags.push(problem.tag === 'GPS' ? 'gps-unusable' : 'no-time');
+          flagged.push({ name: p.originalName, message: `${label}: ${problem.message.replace(/ Use the phone’s position or tap the map\.$/, ' The camera site’s position is used instead.').replace(/,? or give the time yourself\.$/, '. It is kept for review but left out of the events.')}` });
         }
-        if (p.latitude === 0 && p.longitude === 0) {
-          flags.push('gps-zero');
-          flagged.push({ name: p.name, message: `${label} has GPS at 0, 0 (a camera without a fix); the camera site’s position is used instead.` });
+        if (takenAt) {
+          const out = photoTimeFlags(takenAt, deployment, now);
+          flags.push(...out);
+          if (out.length) flagged.push({ name: p.originalName, message: `${label} says it was taken ${formatDate(zonedReading(takenAt, zone).date)}, outside the days this camera ran; it is kept but left out of the events. Set the deployment’s clock offset if the camera’s clock was wrong.` });
+        } else if (!flags.includes('no-time')) {
+          flags.push('no-time');
+          flagged.push({ name: p.originalName, message: `${label} carries no capture time (EXIF DateTimeOriginal); it is kept for review but left out of the events.` });
         }
         // ON CONFLICT: the same photo sent at the same moment by another request is added once.
         const [inserted] = await sequelize.query<{ id: number }>(
-          `INSERT INTO camera_photos (firm_id, deployment_id, property_id, sha256, storage_key, content_type, byte_size, original_name, camera_time, taken_at, flags)
-           VALUES (:firmId, :deploymentId, :propertyId, :sha256, :key, :contentType, :byteSize, :name, :cameraTime, :takenAt, :flags::jsonb)
+          `INSERT INTO camera_photos (firm_id, deployment_id, property_id, sha256, storage_key, content_type, byte_size, original_name, camera_time, camera_offset, taken_at, flags)
+           VALUES (:firmId, :deploymentId, :propertyId, :sha256, :key, :contentType, :byteSize, :name, :cameraTime, :cameraOffset, :takenAt, :flags::jsonb)
            ON CONFLICT (deployment_id, sha256) DO NOTHING RETURNING id`,
           {
-            replacements: { firmId: actor.firmId, deploymentId, propertyId: deployment.propertyId, sha256: p.sha256, key: keys[i], contentType: p.contentType, byteSize: p.bytes.length, name: p.name, cameraTime: p.cameraTime, takenAt, flags: JSON.stringify(flags) },
+            replacements: { firmId: actor.firmId, deploymentId, propertyId: deployment.propertyId, sha256: p.sha256, key: keys[i], contentType: p.contentType, byteSize: p.byteSize, name: p.originalName, cameraTime: p.exifRead.takenAtLocal, cameraOffset: p.exifRead.takenAtOffset, takenAt, flags: JSON.stringify(flags) },
             type: QueryTypes.SELECT,
             transaction,
           },
         );
         if (!inserted) {
-          skips.push({ name: p.name, reason: 'duplicate', message: `${label} is already on this deployment (same content); it was skipped.` });
+          skips.push({ name: p.originalName, reason: 'duplicate', message: `${label} is already on this deployment (same content); it was skipped.` });
           continue;
         }
         const row = await CameraPhoto.findByPk(inserted.id, { transaction });

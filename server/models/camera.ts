@@ -137,6 +137,8 @@ export class CameraPhoto extends Model<InferAttributes<CameraPhoto>, InferCreati
   declare originalName: string | null;
   /** The camera's own clock reading "YYYY-MM-DDTHH:MM:SS" (EXIF DateTimeOriginal). */
   declare cameraTime: string | null;
+  /** The UTC offset the camera wrote with its time (EXIF OffsetTimeOriginal), if any. */
+  declare cameraOffset: string | null;
   /** The true time: the camera's reading in the firm's zone plus the deployment's clock offset. */
   declare takenAt: Date | null;
   declare tag: CameraTag | null;
@@ -162,6 +164,7 @@ CameraPhoto.init(
     byteSize: { type: DataTypes.INTEGER, allowNull: false },
     originalName: DataTypes.TEXT,
     cameraTime: DataTypes.TEXT,
+    cameraOffset: DataTypes.TEXT,
     takenAt: DataTypes.DATE,
     tag: DataTypes.TEXT,
     buckId: DataTypes.INTEGER,

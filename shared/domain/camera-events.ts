@@ -15,6 +15,7 @@
 import * as SunCalc from 'suncalc';
 import { DomainValidationError } from './errors';
 import { zonedReading } from './clock';
+import { exifInstant } from './photo-exif';
 
 /** Tags a reviewer gives a camera photo. */
 export const CAMERA_TAGS = ['buck', 'doe', 'fawn', 'other-species', 'person', 'empty'] as const;
@@ -40,41 +41,13 @@ export function eventKindOf(tag: CameraTag | null): EventKind | null {
   return tag === 'person' ? 'person' : 'other-species';
 }
 
-/** Reads an EXIF date-time "YYYY:MM:DD HH:MM:SS" (also with dashes or a T) into "YYYY-MM-DDTHH:MM:SS", or null. */
-export function parseExifDateTime(raw: unknown): string | null {
-  if (typeof raw !== 'string') return null;
-  const m = /^(\d{4})[:-](\d{2})[:-](\d{2})[ T](\d{2}):(\d{2}):(\d{2})/.exec(raw.trim());
-  if (!m) return null;
-  const [y, mo, d, h, mi, s] = m.slice(1).map(Number);
-  const check = new Date(Date.UTC(y, mo - 1, d, h, mi, s));
-  if (check.getUTCFullYear() !== y || check.getUTCMonth() !== mo - 1 || check.getUTCDate() !== d || h > 23 || mi > 59 || s > 59) return null;
-  return `${m[1]}-${m[2]}-${m[3]}T${m[4]}:${m[5]}:${m[6]}`;
-}
-
 /**
- * The instant a wall clock in `zone` showed `local` ("YYYY-MM-DDTHH:MM:SS"). In the hour repeated
- * when clocks fall back, the first (daylight) reading is taken; in the hour skipped in spring, the
- * reading is read with the offset in force before the change.
+ * The true time of a photo: the camera's reading (EXIF DateTimeOriginal, with its offset when the
+ * camera wrote one, else in the firm's zone), corrected by the deployment's clock offset (seconds to add).
  */
-export function zonedLocalToInstant(local: string, zone: string): Date {
-  const m = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2}):(\d{2})$/.exec(local);
-  if (!m) throw new DomainValidationError('time', `"${local}" is not a date and time.`);
-  const asUtc = Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3]), Number(m[4]), Number(m[5]), Number(m[6]));
-  const offsetAt = (instant: number) => {
-    const r = zonedReading(new Date(instant), zone);
-    const [y, mo, d] = r.date.split('-').map(Number);
-    const shown = Date.UTC(y, mo - 1, d, r.hour, r.minute, new Date(instant).getUTCSeconds());
-    return shown - instant;
-  };
-  // Two rounds find the offset in force at the instant (the zone's offset can change in between).
-  const first = asUtc - offsetAt(asUtc - 12 * 3_600_000);
-  const second = asUtc - offsetAt(first);
-  return new Date(offsetAt(second) === offsetAt(first) ? Math.min(first, second) : first);
-}
-
-/** The true time of a photo: its camera's reading in the firm's zone, corrected by the deployment's clock offset (seconds to add). */
-export function correctedPhotoTime(cameraLocal: string, zone: string, clockOffsetSeconds: number): Date {
-  return new Date(zonedLocalToInstant(cameraLocal, zone).getTime() + clockOffsetSeconds * 1000);
+export function correctedPhotoTime(cameraLocal: string, cameraOffset: string | null, zone: string, clockOffsetSeconds: number): Date | null {
+  const instant = exifInstant(cameraLocal, cameraOffset, zone);
+  return instant ? new Date(instant.getTime() + clockOffsetSeconds * 1000) : null;
 }
 
 /** A photo as the event grouping reads it. */

@@ -72,6 +72,7 @@ export const up: MigrationFn = async ({ context: qi }) => {
       byte_size INTEGER NOT NULL,
       original_name TEXT,
       camera_time TEXT,
+      camera_offset TEXT,
       taken_at TIMESTAMPTZ,
       tag TEXT CHECK (tag IN ('buck','doe','fawn','other-species','person','empty')),
       buck_id INTEGER REFERENCES bucks(id) ON DELETE SET NULL,

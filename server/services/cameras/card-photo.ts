@@ -1,62 +1,22 @@
 /**
- * Reads one photo of a camera card: its type from the bytes, its pixel size from the header (before
- * anything is decoded), its SHA-256 and the camera clock's EXIF DateTimeOriginal as written (no
- * zone: the firm's zone and the deployment's clock offset are applied by the caller).
+ * Reads one photo of a camera card through the shared photo intake (type by content, size, pixels
+ * from the header, EXIF judged, SHA-256). A refusal becomes a skip with its sentence, so one bad
+ * file never loses the rest of the batch.
  */
-import crypto from 'node:crypto';
-import exifr from 'exifr';
-import { fileTypeFromBuffer } from 'file-type';
-import { readImageSize } from '../../../shared/domain/image-size';
-import { parseExifDateTime } from '../../../shared/domain/camera-events';
+import { AppError } from '../../errors';
+import { inspectPhoto, type InspectedPhoto } from '../photos';
 import { CARD_LIMITS, type SkipReason } from '../../../shared/schemas/cameras';
 
-/** Types a card photo may be, by content. */
-export const CARD_PHOTO_TYPES: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/heic': 'heic' };
+export type CardPhotoReading = { ok: true; photo: InspectedPhoto } | { ok: false; name: string | null; reason: SkipReason; message: string };
 
-export interface CardPhoto {
-  bytes: Buffer;
-  name: string | null;
-  sha256: string;
-  contentType: string;
-  extension: string;
-  /** EXIF DateTimeOriginal "YYYY-MM-DDTHH:MM:SS", or null when missing or garbled. */
-  cameraTime: string | null;
-  latitude: number | null;
-  longitude: number | null;
-}
-
-export type CardPhotoReading = { ok: true; photo: CardPhoto } | { ok: false; name: string | null; sha256: string; reason: SkipReason; message: string };
-
-/** The SHA-256 of a photo's bytes, as hex. */
-export const sha256Of = (bytes: Buffer): string => crypto.createHash('sha256').update(bytes).digest('hex');
-
-async function readExif(bytes: Buffer): Promise<{ cameraTime: string | null; latitude: number | null; longitude: number | null }> {
-  try {
-    const raw = (await exifr.parse(bytes, { tiff: true, exif: true, gps: true, xmp: false, icc: false, iptc: false, reviveValues: false })) as Record<string, unknown> | undefined;
-    const gps = (await exifr.gps(bytes).catch(() => undefined)) as { latitude?: number; longitude?: number } | undefined;
-    const lat = typeof gps?.latitude === 'number' && Number.isFinite(gps.latitude) ? gps.latitude : null;
-    const lon = typeof gps?.longitude === 'number' && Number.isFinite(gps.longitude) ? gps.longitude : null;
-    return { cameraTime: parseExifDateTime(raw?.DateTimeOriginal ?? raw?.CreateDate ?? raw?.DateTime), latitude: lat, longitude: lon };
-  } catch {
-    return { cameraTime: null, latitude: null, longitude: null };
-  }
-}
+const REASONS: Record<number, SkipReason> = { 413: 'too-large', 415: 'not-a-photo', 422: 'too-many-pixels' };
 
 /** Checks one uploaded file and reads what the card upload needs; a refusal says why in a sentence. */
-export async function readCardPhoto(bytes: Buffer, name: string | null): Promise<CardPhotoReading> {
-  const sha256 = sha256Of(bytes);
-  const label = name ? `“${name}”` : 'A file';
-  const type = await fileTypeFromBuffer(bytes);
-  if (!type || !(type.mime in CARD_PHOTO_TYPES)) {
-    return { ok: false, name, sha256, reason: 'not-a-photo', message: `${label} is not a JPEG, PNG or HEIC photo${type ? ` (it looks like ${type.ext.toUpperCase()})` : ''}; it was skipped. Upload the card’s picture files.` };
+export async function readCardPhoto(bytes: Buffer, name: string | null, now = new Date()): Promise<CardPhotoReading> {
+  try {
+    return { ok: true, photo: await inspectPhoto({ bytes, originalName: name }, { maxBytes: CARD_LIMITS.maxBytes, maxPixels: CARD_LIMITS.maxPixels }, now) };
+  } catch (err) {
+    if (err instanceof AppError && REASONS[err.status]) return { ok: false, name, reason: REASONS[err.status], message: `${err.message} It was skipped.` };
+    throw err;
   }
-  if (bytes.length > CARD_LIMITS.maxBytes) {
-    return { ok: false, name, sha256, reason: 'too-large', message: `${label} is larger than ${CARD_LIMITS.maxBytes / 1024 / 1024} MB; it was skipped.` };
-  }
-  const size = type.mime === 'image/heic' ? null : readImageSize(bytes);
-  if (size && size.width * size.height > CARD_LIMITS.maxPixels) {
-    return { ok: false, name, sha256, reason: 'too-many-pixels', message: `${label} is ${size.width} × ${size.height} pixels, more than the ${CARD_LIMITS.maxPixels / 1_000_000} megapixels a card photo may have; it was skipped.` };
-  }
-  const exif = await readExif(bytes);
-  return { ok: true, photo: { bytes, name, sha256, contentType: type.mime, extension: CARD_PHOTO_TYPES[type.mime], ...exif } };
 }

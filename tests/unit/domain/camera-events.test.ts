@@ -5,12 +5,10 @@ import {
   correctedPhotoTime,
   eventsPer100CameraNights,
   groupEvents,
-  parseExifDateTime,
   sunRelation,
   sunTimes,
   surveyAreaAcres,
   talliesFromPhotos,
-  zonedLocalToInstant,
   type TaggedPhoto,
 } from '../../../shared/domain/camera-events';
 
@@ -61,23 +59,19 @@ describe('sun times (suncalc) against NOAA', () => {
 });
 
 describe('photo times from the camera clock', () => {
-  it('reads EXIF DateTimeOriginal and refuses garbled values', () => {
-    expect(parseExifDateTime('2026:10:05 06:30:15')).toBe('2026-10-05T06:30:15');
-    expect(parseExifDateTime('2026:02:30 06:30:15')).toBeNull();
-    expect(parseExifDateTime('0000:00:00 00:00:00')).toBeNull();
-    expect(parseExifDateTime(undefined)).toBeNull();
-  });
-
   // US daylight time ends 2026-11-01 at 2:00 AM (15 U.S.C. § 260a): Central is UTC−5 before, UTC−6 after.
   it('reads the camera clock in the firm’s zone, across daylight time', () => {
-    expect(zonedLocalToInstant('2026-10-05T06:30:00', 'America/Chicago').toISOString()).toBe('2026-10-05T11:30:00.000Z');
-    expect(zonedLocalToInstant('2026-12-05T06:30:00', 'America/Chicago').toISOString()).toBe('2026-12-05T12:30:00.000Z');
-    expect(zonedLocalToInstant('2026-11-01T01:30:00', 'America/Chicago').toISOString()).toBe('2026-11-01T06:30:00.000Z');
-    expect(zonedLocalToInstant('2026-07-01T23:59:59', 'UTC').toISOString()).toBe('2026-07-01T23:59:59.000Z');
+    expect(correctedPhotoTime('2026-10-05T06:30:00', null, 'America/Chicago', 0)?.toISOString()).toBe('2026-10-05T11:30:00.000Z');
+    expect(correctedPhotoTime('2026-12-05T06:30:00', null, 'America/Chicago', 0)?.toISOString()).toBe('2026-12-05T12:30:00.000Z');
+    expect(correctedPhotoTime('2026-07-01T23:59:59', null, 'UTC', 0)?.toISOString()).toBe('2026-07-01T23:59:59.000Z');
+  });
+
+  it('uses the offset the camera wrote when there is one', () => {
+    expect(correctedPhotoTime('2026-10-05T06:30:00', '-07:00', 'America/Chicago', 0)?.toISOString()).toBe('2026-10-05T13:30:00.000Z');
   });
 
   it('adds the deployment’s clock offset (a camera 1 h 5 min slow)', () => {
-    expect(correctedPhotoTime('2026-10-05T05:25:00', 'America/Chicago', 3900).toISOString()).toBe('2026-10-05T11:30:00.000Z');
+    expect(correctedPhotoTime('2026-10-05T05:25:00', null, 'America/Chicago', 3900)?.toISOString()).toBe('2026-10-05T11:30:00.000Z');
   });
 });
 
