@@ -316,3 +316,26 @@ describe('a card of photos, its review and its numbers', () => {
     expect(staff.body.data.find((b: { name: string }) => b.name === 'Split G2').photoCount).toBe(2);
   });
 });
+
+describe('the firm’s camera settings', () => {
+  it('a shorter event gap splits the card into more events; a longer pull interval takes a camera off the due list', async () => {
+    const owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
+    const cam = await send(consultant, 'post', '/api/cameras', { label: 'Cam settings' });
+    const dep = await send(consultant, 'post', `/api/cameras/${cam.body.data.id}/deployments`, { unitId: siteB, startedOn: '2026-11-20', mode: 'photo' });
+    const files: [string, Buffer][] = [
+      ['A.JPG', await shot(201, '2026:11:21 07:00:00')],
+      ['B.JPG', await shot(202, '2026:11:21 07:20:00')],
+    ];
+    const up = await upload(consultant, dep.body.data.id, files);
+    for (const p of up.body.data.photos) await send(consultant, 'patch', `/api/camera-photos/${p.id}`, { tag: 'doe' });
+    const before = await consultant.get(`/api/deployments/${dep.body.data.id}/events`);
+    expect(before.body.data.eventCount).toBe(1); // 20 minutes apart, gap 30
+    expect((await send(owner, 'patch', '/api/firm/settings', { eventGapMinutes: 10 })).status).toBe(200);
+    const after = await consultant.get(`/api/deployments/${dep.body.data.id}/events`);
+    expect(after.body.data).toMatchObject({ eventCount: 2, gapMinutes: 10 });
+    expect((await send(owner, 'patch', '/api/firm/settings', { cardPullIntervalDays: 365 })).status).toBe(200);
+    expect((await consultant.get('/api/deployments/due')).body.data).toEqual([]);
+    expect((await send(owner, 'patch', '/api/firm/settings', { eventGapMinutes: 0 })).status).toBe(422);
+    await send(owner, 'patch', '/api/firm/settings', { eventGapMinutes: 30, cardPullIntervalDays: 21 });
+  });
+});
