@@ -72,6 +72,7 @@ const routes: RouteObject[] = [
         libraryRoutes,
         { path: paths.propertyPrescriptions(), ...page(() => import('./routes/properties/property-prescriptions'), (m) => m.PropertyPrescriptionsPage) },
         { path: paths.propertyResults(), ...page(() => import('./routes/properties/property-results'), (m) => m.PropertyResultsPage) },
+        { path: paths.propertyCameras(), ...page(() => import('./routes/properties/property-cameras'), (m) => m.PropertyCamerasPage) },
         {
           // Preview as client: the portal's pages with the client's scope, writes off.
           path: paths.previewClient(),

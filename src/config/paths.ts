@@ -31,6 +31,7 @@ export const paths = {
   libraryRates: '/library/rates',
   propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   propertyResults: (id: number | string = ':id') => `/properties/${id}/results`,
+  propertyCameras: (id: number | string = ':id') => `/properties/${id}/cameras`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   portal: '/portal',

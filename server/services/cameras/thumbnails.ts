@@ -13,7 +13,7 @@ export async function makeCameraThumbnails(data: { photoIds: number[] }, job: Jo
   for (const [i, id] of ids.entries()) {
     const photo = await CameraPhoto.findByPk(id, { attributes: ['id', 'storageKey', 'thumbnailKey', 'contentType', 'originalName'] });
     if (!photo || photo.thumbnailKey) continue;
-    let thumb: Buffer | null = null;
+    let thumb: Buffer | null;
     try {
       thumb = await makeThumbnail({ bytes: await readFile(photo.storageKey), contentType: photo.contentType, originalName: photo.originalName });
     } catch {

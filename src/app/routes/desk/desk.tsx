@@ -9,6 +9,7 @@ import { SeasonStrip } from '../../../features/desk/components/season-strip';
 import { FirstSteps } from '../../../features/desk/components/first-steps';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatDay } from '../../../lib/firm-clock';
+import { DuePullsCard } from '../../../features/cameras/components/due-pulls-card';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -62,6 +63,7 @@ export function DeskPage() {
           </ul>
         </section>
       ) : null}
+      <DuePullsCard linkTo={paths.propertyCameras} />
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Waiting on landowners" action={<Link to={paths.proposals} className="text-sm text-moss-deep hover:underline">All proposals</Link>}>
           {d.waiting.length === 0 ? (

@@ -9,6 +9,10 @@ import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock';
+import { lazy, Suspense } from 'react';
+
+// Loaded after the sheet shows: the field sheet's first load is at its 150 KB budget.
+const DuePullsCard = lazy(() => import('../../../features/cameras/components/due-pulls-card').then((m) => ({ default: m.DuePullsCard })));
 
 /** The assigned tasks grouped Overdue, This week, Coming up. */
 function TaskBuckets({ me }: { me: { id: number; role: string } }) {
@@ -85,6 +89,9 @@ export function FieldHomePage() {
       <OfflineNotice updatedAt={tasks.dataUpdatedAt || home.dataUpdatedAt} refreshFailed={tasks.isRefetchError || home.isRefetchError} />
       <QueueNotice />
       <TaskBuckets me={me.data} />
+      <Suspense fallback={null}>
+        <DuePullsCard />
+      </Suspense>
       <Card title="Who to call">
         <ul className="flex flex-col gap-3">
           {home.data.contacts.map((c) => (
