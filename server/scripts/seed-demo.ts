@@ -5,6 +5,7 @@ import { seedDemo } from '../db/seeds/demo';
 import { seedDemoPrescriptions } from '../db/seeds/demo-prescriptions';
 import { seedDemoSchedule } from '../db/seeds/demo-schedule';
 import { seedDemoPortal } from '../db/seeds/demo-portal';
+import { seedDemoCameras } from '../db/seeds/demo-cameras';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
@@ -15,6 +16,7 @@ try {
   await seedDemoPrescriptions(firm);
   await seedDemoSchedule(firm);
   await seedDemoPortal(firm);
+  await seedDemoCameras(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {
   console.error((err as Error).message);
