@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import type { BuckDto, CameraPhotoDto } from '../../../../shared/schemas/cameras';
-import { formatTime, formatDay } from '../../../lib/firm-clock';
+import { formatTime } from '../../../lib/firm-clock';
 import { useDeploymentPhotos, useTagPhoto } from '../api/cameras';
 import { reviewAction, TAG_KEYS, TAG_LABELS } from '../lib/review-keys';
 import { useToast } from '../../../components/ui/toast';
@@ -15,7 +15,13 @@ export function ReviewGrid({ deploymentId, bucks }: { deploymentId: number; buck
   const photos = useDeploymentPhotos(deploymentId);
   const tag = useTagPhoto(deploymentId);
   const toast = useToast();
-  const [at, setAt] = useState(0);
+  const [at, setAtState] = useState(0);
+  // The selection is also kept in a ref so quick key presses (before React renders) each act on the next photo.
+  const atRef = useRef(0);
+  const setAt = (next: number | ((i: number) => number)) => {
+    atRef.current = typeof next === 'function' ? next(atRef.current) : next;
+    setAtState(atRef.current);
+  };
   const grid = useRef<HTMLDivElement>(null);
   const list: CameraPhotoDto[] = photos.data ?? [];
 
@@ -27,7 +33,7 @@ export function ReviewGrid({ deploymentId, bucks }: { deploymentId: number; buck
     const action = reviewAction(e.key, COLUMNS);
     if (!action || list.length === 0) return;
     e.preventDefault();
-    const photo = list[at];
+    const photo = list[atRef.current];
     if (action.kind === 'move') setAt((i) => Math.max(0, Math.min(list.length - 1, i + action.by)));
     else if (action.kind === 'tag') {
       tag.mutate({ id: photo.id, input: { tag: action.tag } }, { onError: (err) => toast('error', err.message) });
@@ -73,7 +79,7 @@ export function ReviewGrid({ deploymentId, bucks }: { deploymentId: number; buck
               className={`flex flex-col gap-1 rounded border p-1 text-xs ${i === at ? 'border-moss ring-2 ring-moss' : 'border-rule'}`}
             >
               <img src={p.thumbnailUrl ?? p.url} alt={p.originalName ?? `Photo ${p.id}`} loading="lazy" className="aspect-[4/3] w-full rounded bg-rule object-cover" />
-              <span className="text-slate">{p.takenAt ? `${formatDay(p.takenAt)} ${formatTime(p.takenAt)}` : 'no time'}</span>
+              <span className="text-slate">{p.takenAt ? formatTime(p.takenAt) : 'no time'}</span>
               <span className={p.tag ? 'font-semibold text-ink' : 'text-slate'}>
                 {p.tag ? TAG_LABELS[p.tag] : 'Untagged'}
                 {buck ? ` · ${buck.name}` : ''}
