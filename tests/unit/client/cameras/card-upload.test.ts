@@ -16,7 +16,11 @@ function fakeServer(failOnCall: number | null = null) {
         calls += 1;
         if (calls === failOnCall) throw new Error('Browseline cannot be reached.');
         let added = 0;
-        for (const f of files) if (!stored.has(`h-${f}`)) (stored.add(`h-${f}`), added++);
+        for (const f of files) {
+          if (stored.has(`h-${f}`)) continue;
+          stored.add(`h-${f}`);
+          added++;
+        }
         return { added, skipped: files.length - added, photos: [], skips: [], flagged: [] };
       },
     },
