@@ -70,6 +70,10 @@ describe('a camera card from the field to a survey', () => {
     const tags = () => grid.getByRole('gridcell').evaluateAll((cells) => cells.map((c) => c.getAttribute('data-tag')));
     await poll(tags).toEqual(['buck', 'buck', 'buck', 'doe', 'doe', 'fawn']);
     await poll(() => grid.getByRole('gridcell').first().textContent()).toContain('Split brow');
+    // S on the first photo shows it to the landowner among the roster's best.
+    for (let i = 0; i < 5; i++) await page.keyboard.press('ArrowLeft');
+    await page.keyboard.press('s');
+    await poll(() => grid.getByRole('gridcell').first().textContent()).toContain('shown to the landowner');
     await poll(() => page.getByTestId('event-count').textContent()).toBe('5'); // the two photos 10 minutes apart are one event
     await screenshot(page, 'cameras-review');
 

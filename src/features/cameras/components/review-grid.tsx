@@ -38,6 +38,9 @@ export function ReviewGrid({ deploymentId, bucks }: { deploymentId: number; buck
     else if (action.kind === 'tag') {
       tag.mutate({ id: photo.id, input: { tag: action.tag } }, { onError: (err) => toast('error', err.message) });
       setAt((i) => Math.min(list.length - 1, i + 1));
+    } else if (action.kind === 'feature') {
+      if (!photo.tag || photo.tag === 'person') return toast('error', 'Tag the photo first; a photo of a person is never shown to the landowner.');
+      tag.mutate({ id: photo.id, input: { tag: photo.tag, buckId: photo.buckId, featured: !photo.featured } }, { onError: (err) => toast('error', err.message) });
     } else if (action.kind === 'buck') {
       const buck = bucks[action.index];
       if (!buck) return;
@@ -52,7 +55,7 @@ export function ReviewGrid({ deploymentId, bucks }: { deploymentId: number; buck
   return (
     <div className="flex flex-col gap-2">
       <p className="text-sm text-slate" id={`keys-${deploymentId}`}>
-        Click the grid, then: {Object.entries(TAG_KEYS).map(([k, t]) => `${k.toUpperCase()} ${TAG_LABELS[t].toLowerCase()}`).join(' · ')} · 1–{Math.max(1, Math.min(9, bucks.length))} a buck from the roster ·
+        Click the grid, then: {Object.entries(TAG_KEYS).map(([k, t]) => `${k.toUpperCase()} ${TAG_LABELS[t].toLowerCase()}`).join(' · ')} · 1–{Math.max(1, Math.min(9, bucks.length))} a buck from the roster · S show it to the landowner ·
         arrows to move. {tagged} of {list.length} tagged.
       </p>
       <div
@@ -83,6 +86,7 @@ export function ReviewGrid({ deploymentId, bucks }: { deploymentId: number; buck
               <span className={p.tag ? 'font-semibold text-ink' : 'text-slate'}>
                 {p.tag ? TAG_LABELS[p.tag] : 'Untagged'}
                 {buck ? ` · ${buck.name}` : ''}
+                {p.featured ? ' · shown to the landowner' : ''}
               </span>
             </div>
           );

@@ -60,6 +60,7 @@ describe('review keys', () => {
     expect(reviewAction('O', 4)).toEqual({ kind: 'tag', tag: 'other-species' });
     expect(reviewAction('2', 4)).toEqual({ kind: 'buck', index: 1 });
     expect(reviewAction('ArrowDown', 4)).toEqual({ kind: 'move', by: 4 });
+    expect(reviewAction('s', 4)).toEqual({ kind: 'feature' });
     expect(reviewAction('x', 4)).toBeNull();
   });
 });
