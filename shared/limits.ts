@@ -42,6 +42,12 @@ export const GEOMETRY_LIMITS = {
 export const PHOTO_LIMITS = {
   maxBytes: 15 * 1024 * 1024,
   perCompletion: 8,
+  /** Pixels of one photo (width × height), read from its header before anything decodes it: a 100-megapixel phone photo passes. */
+  maxPixels: 100_000_000,
+  /** The longer side of a thumbnail, in pixels. */
+  thumbnailPx: 480,
+  /** Photos on one field observation. */
+  perObservation: 8,
 } as const;
 
 /** The firm's logo: PNG or JPEG, checked by size and pixels before it is kept. */

@@ -16,6 +16,7 @@ import { CalendarFeed, Task, TaskPhoto } from './task';
 import { SharedFile } from './shared-file';
 import { Invoice, InvoiceLine, InvoicePayment, InvoiceRefund } from './invoice';
 import { CameraSurvey, HarvestRecord, SeasonReport } from './results';
+import { Buck, Camera, CameraDeployment, CameraPhoto, CardPull } from './camera';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -41,6 +42,7 @@ Invoice.hasMany(InvoicePayment, { foreignKey: 'invoiceId', as: 'payments' });
 
 SeasonReport.belongsTo(SharedFile, { foreignKey: 'sharedFileId', as: 'file' });
 
+export { Buck, Camera, CameraDeployment, CameraPhoto, CardPull };
 export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport, BackgroundJob };
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';

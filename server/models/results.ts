@@ -21,6 +21,10 @@ export class CameraSurvey extends Model<InferAttributes<CameraSurvey>, InferCrea
   declare cameraUnitIds: CreationOptional<number[]>;
   declare cameraCount: number;
   declare notes: string | null;
+  /** Acres the density refers to (a survey from photos: the area its cameras cover); null: the property. */
+  declare areaAcres: CreationOptional<number | null>;
+  /** The deployments and dates a survey was tallied from, when made from tagged photos. */
+  declare fromPhotos: CreationOptional<{ deploymentIds: number[]; from: string; to: string } | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -43,6 +47,14 @@ CameraSurvey.init(
     cameraUnitIds: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     cameraCount: { type: DataTypes.INTEGER, allowNull: false },
     notes: DataTypes.TEXT,
+    areaAcres: {
+      type: DataTypes.DECIMAL(14, 4),
+      get(this: Model) {
+        const v = this.getDataValue('areaAcres') as unknown;
+        return v === null || v === undefined ? null : Number(v);
+      },
+    },
+    fromPhotos: DataTypes.JSONB,
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

@@ -9,14 +9,16 @@ const MS_PER_DAY = 86_400_000;
 /** A survey with its estimates computed from the property's current acreage (null without an area). */
 export function presentSurvey(survey: CameraSurvey, propertyAcres: number | null, cameraSites: readonly CameraSiteDto[]): SurveyDto {
   const siteName = new Map(cameraSites.map((c) => [c.id, c.name]));
+  // A survey from photos states the area its cameras cover; a typed survey speaks for the property.
+  const areaAcres = survey.areaAcres ?? propertyAcres;
   const result =
-    propertyAcres !== null && propertyAcres > 0
+    areaAcres !== null && areaAcres > 0
       ? cameraSurveyEstimates({
           buckPhotos: survey.buckPhotos,
           uniqueBucks: survey.uniqueBucks,
           doePhotos: survey.doePhotos,
           fawnPhotos: survey.fawnPhotos,
-          propertyAcres,
+          propertyAcres: areaAcres,
           cameraCount: survey.cameraCount,
           startDate: survey.startDate,
           endDate: survey.endDate,
@@ -39,6 +41,8 @@ export function presentSurvey(survey: CameraSurvey, propertyAcres: number | null
     cameras: survey.cameraUnitIds.map((id) => ({ id, name: siteName.get(id) ?? 'Camera site removed from the plan' })),
     cameraCount: survey.cameraCount,
     notes: survey.notes,
+    areaAcres: areaAcres !== null && areaAcres > 0 ? areaAcres : null,
+    fromPhotos: survey.fromPhotos ?? null,
     estimates: result?.estimates ?? null,
     display: result?.display ?? null,
     surveyDays: result?.surveyDays ?? surveyDays,

@@ -28,6 +28,7 @@ import { outboxRouter } from './outbox';
 import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
+import { cameraRouters } from './cameras';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -75,4 +76,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/soil-tests', router: soilTestsRouter },
   { path: '/properties', router: propertySeasonsRouter },
   { path: '/season-drafts', router: seasonDraftsRouter },
+  ...cameraRouters,
 ];

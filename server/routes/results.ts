@@ -2,6 +2,7 @@
 import type { Request } from 'express';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
+import { validate } from '../middlewares/validate';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
 import { CameraSurvey, HarvestRecord, Property, SeasonReport, SharedFile, Unit } from '../models';
@@ -21,6 +22,8 @@ import { deleteSeasonReport, requestSeasonReport, sendSeasonReport, withdrawSeas
 import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
 import { presentHarvest, presentSeasonReport } from '../presenters/results';
 import { sendStoredFile } from '../services/storage/storage';
+import { isFromPhotos, SurveyFromPhotosSchema } from '../../shared/schemas/cameras';
+import { createSurveyFromPhotos } from '../commands/photo-survey-maker';
 
 const perProperty = defineRoutes('/properties');
 const surveys = defineRoutes('/surveys');
@@ -57,10 +60,13 @@ perProperty.get('/:id/surveys', STAFF_AND_CLIENT, ...typed({ params: IdParamsSch
   res.json({ data: await listSurveys(await propertyOf(req)) });
 }));
 
-perProperty.post('/:id/surveys', STAFF, ...typed({ params: IdParamsSchema, body: SurveyCreateSchema }, async ({ params, body }, req, res) => {
-  const { survey, property } = await createSurvey(actor(req), params.id, body, req.ip ?? null);
+perProperty.post('/:id/surveys', STAFF, validate({ params: IdParamsSchema }), (req, res, next) => validate({ body: isFromPhotos(req.body) ? SurveyFromPhotosSchema : SurveyCreateSchema })(req, res, next), async (req, res) => {
+  // Typed tallies, or `fromPhotos: { deploymentIds, from, to }` to tally the tagged photos.
+  const { survey, property } = isFromPhotos(req.body)
+    ? await createSurveyFromPhotos(actor(req), Number(req.params.id), req.body, req.ip ?? null)
+    : await createSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
   res.status(201).json({ data: await readSurvey(survey, property) });
-}));
+});
 
 perProperty.get('/:id/harvests', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
   res.json({ data: await listHarvests(await propertyOf(req)) });

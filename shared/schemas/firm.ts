@@ -40,6 +40,10 @@ export const FirmSettingsUpdateSchema = z.object({
   largeAreaAcres: z.number({ message: 'enter the acreage above which a boundary needs confirming' }).min(1).max(10_000_000).optional(),
   /** Hours without any request after which a session ends (besides the 14-day limit from sign-in). */
   idleTimeoutHours: z.number({ message: 'give the idle time in hours' }).min(0.25, { message: 'must be at least a quarter of an hour' }).max(168, { message: 'must be at most 168 hours (a week)' }).optional(),
+  /** Days after the last card pull (or the day a camera was set) when its card is due (default 21). */
+  cardPullIntervalDays: z.number({ message: 'give the days between card pulls' }).int({ message: 'whole days between card pulls' }).min(1).max(365).optional(),
+  /** Minutes within which photos at one camera site form one independent event (default 30). */
+  eventGapMinutes: z.number({ message: 'give the event gap in minutes' }).int({ message: 'whole minutes' }).min(1).max(24 * 60).optional(),
 });
 
 /** The idle timeout of a firm that has not chosen one. */

@@ -189,6 +189,10 @@ export interface SurveyDto {
   cameras: CameraSiteDto[];
   cameraCount: number;
   notes: string | null;
+  /** Acres the density refers to: the area a photo survey's cameras cover, else the property's. */
+  areaAcres?: number | null;
+  /** The deployments and dates a survey was tallied from, when made from tagged photos. */
+  fromPhotos?: { deploymentIds: number[]; from: string; to: string } | null;
   /** Null only when the property has no measured area. */
   estimates: SurveyEstimates | null;
   display: SurveyEstimatesDisplay | null;

@@ -74,6 +74,7 @@ const routes: RouteObject[] = [
         { path: paths.propertyResults(), ...page(() => import('./routes/properties/property-results'), (m) => m.PropertyResultsPage) },
         { path: paths.unitChecks(), ...page(() => import('./routes/properties/unit-checks'), (m) => m.UnitChecksPage) },
         { path: paths.nextSeason(), ...page(() => import('./routes/properties/next-season'), (m) => m.NextSeasonPage) },
+        { path: paths.propertyCameras(), ...page(() => import('./routes/properties/property-cameras'), (m) => m.PropertyCamerasPage) },
         {
           // Preview as client: the portal's pages with the client's scope, writes off.
           path: paths.previewClient(),

@@ -35,6 +35,7 @@ export const paths = {
   nextSeason: (id: number | string = ':id') => `/properties/${id}/next-season`,
   /** A unit's page: its checks and the re-seeding they draft. */
   unitChecks: (propertyId: number | string = ':id', unitId: number | string = ':unitId') => `/properties/${propertyId}/units/${unitId}`,
+  propertyCameras: (id: number | string = ':id') => `/properties/${id}/cameras`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   portal: '/portal',

@@ -30,7 +30,7 @@ export interface JobContext {
 export type JobHandler = (data: Record<string, unknown>, context: JobContext) => Promise<void>;
 
 const SWEEP_QUEUE = 'storage-sweep';
-const KINDS: readonly JobKind[] = ['document-email', 'season-report'];
+const KINDS: readonly JobKind[] = ['document-email', 'season-report', 'camera-thumbnails'];
 const handlers = new Map<JobKind, JobHandler>();
 const workerIds = new Map<string, string>();
 let boss: PgBoss | null = null;

@@ -16,7 +16,7 @@ import { StoredFileMissing, type Storage } from './storage-types';
 export type { Storage, StoredObject } from './storage-types';
 
 const KEY = /^[a-z0-9-]+\/[a-f0-9]{32}(\.[a-z0-9]{1,8})?$/;
-const CONTENT_TYPES: Record<string, string> = { pdf: 'application/pdf', png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', webp: 'image/webp', tif: 'image/tiff', tiff: 'image/tiff', csv: 'text/csv', txt: 'text/plain' };
+const CONTENT_TYPES: Record<string, string> = { pdf: 'application/pdf', png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', webp: 'image/webp', heic: 'image/heic', tif: 'image/tiff', tiff: 'image/tiff', csv: 'text/csv', txt: 'text/plain' };
 
 let current: Storage | null = null;
 

@@ -11,6 +11,7 @@ import { FirstSteps } from '../../../features/desk/components/first-steps';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatDay } from '../../../lib/firm-clock';
 import { RetestsDueCard } from '../../../features/checks/components/retests-due-card';
+import { DuePullsCard } from '../../../features/cameras/components/due-pulls-card';
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -65,6 +66,7 @@ export function DeskPage() {
           </ul>
         </section>
       ) : null}
+      <DuePullsCard linkTo={paths.propertyCameras} />
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Waiting on landowners" action={<Link to={paths.proposals} className="text-sm text-moss-deep hover:underline">All proposals</Link>}>
           {d.waiting.length === 0 ? (

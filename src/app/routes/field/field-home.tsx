@@ -9,6 +9,10 @@ import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock';
+import { lazy, Suspense } from 'react';
+
+// Loaded after the sheet shows: the field sheet's first load is at its 150 KB budget.
+const DuePullsCard = lazy(() => import('../../../features/cameras/components/due-pulls-card').then((m) => ({ default: m.DuePullsCard })));
 
 // Below the fold and rarely used: its code loads after the sheet shows (kept in the offline shell).
 const CalendarFeedsCard = lazy(() => import('../../../features/field/components/calendar-feeds-card').then((m) => ({ default: m.CalendarFeedsCard })));
@@ -88,6 +92,9 @@ export function FieldHomePage() {
       <OfflineNotice updatedAt={tasks.dataUpdatedAt || home.dataUpdatedAt} refreshFailed={tasks.isRefetchError || home.isRefetchError} />
       <QueueNotice />
       <TaskBuckets me={me.data} />
+      <Suspense fallback={null}>
+        <DuePullsCard />
+      </Suspense>
       <Card title="Who to call">
         <ul className="flex flex-col gap-3">
           {home.data.contacts.map((c) => (

@@ -12,6 +12,7 @@ import { ApiError } from '../../../lib/api-client';
 import { formatAcres } from '../../../lib/format';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
+import { PortalBuckPhotos } from '../../../features/cameras/components/portal-buck-photos';
 
 /** The landowner's choice of property for results (one property goes straight to its results). */
 export function PortalResultsPage() {
@@ -74,6 +75,7 @@ export function PortalPropertyResultsPage() {
           Camera surveys
         </h2>
         {latest ? <SurveyEstimatesCard survey={latest} cautions={r.cautions} /> : <EmptyState title="No camera survey yet">Your consultant adds each survey’s figures here.</EmptyState>}
+        <PortalBuckPhotos propertyId={id} />
         {r.surveyTrend.length > 0 ? (
           <Card title="Season over season">
             <div className="grid gap-6 md:grid-cols-2">

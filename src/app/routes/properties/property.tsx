@@ -110,6 +110,9 @@ export function PropertyPage() {
             <Link to={paths.propertyResults(p.id)} className={buttonClasses('secondary')}>
               Results
             </Link>
+            <Link to={paths.propertyCameras(p.id)} className={buttonClasses('secondary')}>
+              Cameras
+            </Link>
             <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>

@@ -1,0 +1,2 @@
+/** Shared photo intake: see photo-intake.ts. */
+export * from './photo-intake';

@@ -1,0 +1,26 @@
+import { describe, expect, it } from 'vitest';
+import { seedDemo } from '../../server/db/seeds/demo';
+import { seedDemoCameras } from '../../server/db/seeds/demo-cameras';
+import { Camera, CameraPhoto } from '../../server/models';
+import { signedInAgent } from '../support/test-app';
+import { DeploymentEventsDtoSchema, DuePullDtoSchema } from '../../shared/schemas/cameras';
+
+describe('the demo camera fleet', () => {
+  it('seeds cameras, a moved camera, a tagged card and a roster once; a card is due with its access route', async () => {
+    const firm = await seedDemo();
+    const written = await seedDemoCameras(firm);
+    expect(written === 0 || written === 18).toBe(true);
+    expect(await seedDemoCameras(firm)).toBe(0);
+    expect(await Camera.count({ where: { firmId: firm.id } })).toBe(3);
+    expect(await CameraPhoto.count({ where: { firmId: firm.id, tag: 'buck' } })).toBe(5);
+    const consultant = await signedInAgent('consultant@browseline.test', 'demo-browseline');
+    const due = (await consultant.get('/api/deployments/due')).body.data.map((d: unknown) => DuePullDtoSchema.parse(d));
+    expect(due.find((d: { cameraLabel: string }) => d.cameraLabel === 'Cam 1')).toMatchObject({ daysSince: 26, unitName: 'Camera 2 — hollow' });
+    const photo = await CameraPhoto.findOne({ where: { firmId: firm.id } });
+    const events = DeploymentEventsDtoSchema.parse((await consultant.get(`/api/deployments/${photo!.deploymentId}/events`)).body.data);
+    expect(events.eventCount).toBeGreaterThan(5);
+    expect(events.cameraNights).toBe(14);
+    const roster = await consultant.get(`/api/properties/${photo!.propertyId}/bucks`);
+    expect(roster.body.data.map((b: { name: string }) => b.name)).toEqual(['Split brow', 'Wide eight']);
+  });
+});
