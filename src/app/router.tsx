@@ -55,7 +55,7 @@ const routes: RouteObject[] = [
   gate(['owner', 'consultant', 'crew', 'client'], [{ path: paths.changePassword, ...page(() => import('./routes/account/change-password'), (m) => m.ChangePasswordPage) }]),
   gate(STAFF, [
     {
-      ...page(() => import('../components/layouts/consultant-layout'), (m) => m.ConsultantLayout),
+      ...page(() => import('./consultant-shell'), (m) => m.ConsultantShell),
       children: [
         { path: paths.desk, loader: deskLoader, ...page(() => import('./routes/desk/desk'), (m) => m.DeskPage) },
         { path: paths.clients, ...page(() => import('./routes/clients/clients'), (m) => m.ClientsPage) },
