@@ -26,6 +26,7 @@ import { filesRouter } from './files';
 import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
 import { searchRouter } from './search';
+import { firmExportsRouter } from './firm-exports';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -66,4 +67,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/jobs', router: jobsRouter },
   { path: '/outbox', router: outboxRouter },
   { path: '/search', router: searchRouter },
+  { path: '/firm-exports', router: firmExportsRouter },
 ];

@@ -16,6 +16,7 @@ import * as m0024 from './0024-geo-imports';
 import * as m0026 from './0026-firm-profile';
 import * as m0027 from './0027-signup';
 import * as m0085 from './0085-search-trigram';
+import * as m0086 from './0086-firm-exports';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -35,4 +36,5 @@ export const migrations = [
   { name: '0026-firm-profile', ...m0026 },
   { name: '0027-signup', ...m0027 },
   { name: '0085-search-trigram', ...m0085 },
+  { name: '0086-firm-exports', ...m0086 },
 ];
