@@ -44,11 +44,12 @@ function unzip(bytes: Buffer): Promise<Map<string, Buffer>> {
   });
 }
 
-const binary = (res: import('node:http').IncomingMessage, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
+const rawBody = (agent: Agent, url: string) =>
+  agent.get(url).buffer(true).parse((r, cb) => {
+    const chunks: Buffer[] = [];
+    r.on('data', (c: Buffer) => chunks.push(c));
+    r.on('end', () => cb(null, Buffer.concat(chunks)));
+  });
 
 beforeAll(async () => {
   ctx = await makeFirm();
@@ -88,7 +89,7 @@ describe('the whole-firm export', () => {
     expect(mail!.toAddress).toBe(ctx.users.owner.email);
     expect(mail!.textBody).toMatch(/\/settings\/export/);
 
-    const res = await owner.get(ready.downloadUrl!).buffer(true).parse(binary);
+    const res = await rawBody(owner, ready.downloadUrl!);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/zip');
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="firm-[a-f0-9]+-export-\d{4}-\d{2}-\d{2}\.zip"$/);
