@@ -58,3 +58,16 @@ export function documentFirm(firm: Firm): DocumentFirm {
 export function emailFirmContact(firm: Firm | null | undefined): string[] {
   return firm ? firmContactLines(firm) : [];
 }
+
+/**
+ * Whether the firm has chosen where it works. The home area is kept in `firms.settings.homeArea`
+ * (any non-empty value: counties picked, or a bounding box); until it is set, the Desk's first steps
+ * keep it open.
+ */
+export function hasHomeArea(firm: Pick<Firm, 'settings'>): boolean {
+  const value = (firm.settings ?? {}).homeArea;
+  if (value === null || value === undefined) return false;
+  if (Array.isArray(value)) return value.length > 0;
+  if (typeof value === 'object') return Object.keys(value as object).length > 0;
+  return Boolean(value);
+}

@@ -33,7 +33,7 @@ export function DeskPage() {
         <h1 className="text-2xl font-bold">Desk</h1>
         <p className="text-slate">Good to see you, {firstName}. Here is {d.firm.name} this week.</p>
       </div>
-      <FirstSteps clients={d.counts.clients} />
+      <FirstSteps steps={d.firstSteps} />
       <div className="grid grid-cols-2 gap-3 lg:grid-cols-4">
         <Figure label="Clients" value={String(d.counts.clients)} />
         <Figure label="Properties" value={String(d.counts.properties)} />
