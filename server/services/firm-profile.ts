@@ -51,7 +51,8 @@ export function settingsFromProfile(input: Partial<FirmDefaults>): StoredSetting
 
 /** What a document prints about the firm now; a sent document keeps this in its snapshot. */
 export function documentFirm(firm: Firm): DocumentFirm {
-  return { name: firm.name, phone: firm.phone, email: firm.email, address: firm.address, website: firm.website ?? null, licenceNumbers: firm.licenceNumbers ?? null, logoKey: firm.logoKey ?? null };
+  const { areaUnit, lengthUnit } = firmDefaults(firm);
+  return { name: firm.name, phone: firm.phone, email: firm.email, address: firm.address, website: firm.website ?? null, licenceNumbers: firm.licenceNumbers ?? null, logoKey: firm.logoKey ?? null, areaUnit, lengthUnit };
 }
 
 /** The contact lines a client-facing e-mail prints under the firm's sign-off (none when the firm is unknown). */
