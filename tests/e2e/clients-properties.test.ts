@@ -120,7 +120,7 @@ describe('the consultant keeps clients and properties', () => {
 
     await page.getByRole('button', { name: 'New property' }).click();
     const propertyForm = page.getByRole('form', { name: 'New property' });
-    await expect.poll(() => propertyForm.getByText(/open the property’s plan map to draw it or import it/).count()).toBe(1);
+    await expect.poll(() => propertyForm.getByText(/saving opens the property’s plan map, where you draw it or import it/).count()).toBe(1);
     await propertyForm.getByLabel('Property name').fill(propertyName);
     await propertyForm.getByLabel('County').fill('Crawford');
     await propertyForm.getByLabel('State').fill('WI');
