@@ -49,6 +49,8 @@ export const config = {
   },
   /** Sign-ups per IP address per window. */
   signupRateLimit: { windowMs: int(env.SIGNUP_RATE_WINDOW_MS, 60 * 60 * 1000), max: int(env.SIGNUP_RATE_MAX, 5) },
+  /** A sign-up answers no sooner than this after it arrives, so a used address takes as long as a new one. */
+  signupAnswerFloorMs: int(env.SIGNUP_ANSWER_FLOOR_MS, 1000),
   uploadsDir: path.resolve(env.UPLOADS_DIR ?? path.join(projectRoot, '.data', 'uploads')),
   /** Where files live: 'disk' (UPLOADS_DIR, one machine) or 's3' (object storage shared by every instance). */
   storage: {

@@ -7,6 +7,8 @@ import { Practice, Prescription, Property, Task, Unit } from '../models';
 import { practiceWindow, REGIONS, type Region } from '../../shared/domain/planting-windows';
 import { todayInZone } from '../services/clock';
 import { Op } from 'sequelize';
+import { firstSteps } from '../../shared/domain/first-steps';
+import { hasHomeArea } from '../services/firm-profile';
 
 /** The Desk summary of a firm; "today" is the calendar date in the firm's time zone. */
 export async function readDesk(firmId: number, firmTimezone: string | null | undefined): Promise<DeskSummary> {
@@ -83,5 +85,6 @@ export async function readDesk(firmId: number, firmTimezone: string | null | und
     activity: activity.map((a) => ({ id: a.id, action: a.action, actorName: a.actor_name, subjectType: a.subject_type, subjectId: a.subject_id, createdAt: new Date(a.created_at).toISOString() })),
     depositDrafts: depositDrafts.map((d) => ({ id: d.id, number: d.number, clientName: d.client_name, propertyName: d.property_name, proposalId: d.proposal_id, proposalNumber: d.proposal_number, totalCents: d.total_cents, approvedAt: d.decided_at ? new Date(d.decided_at).toISOString() : null })),
     moneyIn: moneyIn.map((m) => ({ id: m.id, invoiceId: m.invoice_id, number: m.number, clientName: m.client_name, amountCents: m.amount_cents, receivedAt: new Date(m.received_at).toISOString(), paidInFull: m.status === 'paid' })),
+    firstSteps: firm ? firstSteps({ homeAreaSet: hasHomeArea(firm), address: firm.address, phone: firm.phone, email: firm.email, website: firm.website, logoKey: firm.logoKey, clients: Number(c.clients) }) : null,
   };
 }

@@ -29,6 +29,8 @@ import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './ch
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 import { cameraRouters } from './cameras';
+import { searchRouter } from './search';
+import { firmExportsRouter } from './firm-exports';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -77,4 +79,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertySeasonsRouter },
   { path: '/season-drafts', router: seasonDraftsRouter },
   ...cameraRouters,
+  { path: '/search', router: searchRouter },
+  { path: '/firm-exports', router: firmExportsRouter },
 ];

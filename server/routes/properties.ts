@@ -27,6 +27,8 @@ import { z } from 'zod';
 import { Firm, Proposal } from '../models';
 import { renderPlanSummaryPdf } from '../services/documents/render-documents';
 import { todayInZone } from '../services/clock';
+import { documentFirm } from '../services/firm-profile';
+import { letterheadFirm } from '../services/documents/firm-letterhead';
 
 const r = defineRoutes('/properties');
 
@@ -164,7 +166,7 @@ r.get('/:id/plan.pdf', STAFF, validate({ params: IdParamsSchema }), async (req, 
   if (!property.boundary || !property.acres) throw unprocessable('Draw or import the property boundary before printing its plan.');
   const [firm, client, units] = await Promise.all([Firm.findByPk(firmId), Client.findByPk(property.clientId), plan.units()]);
   const pdf = await renderPlanSummaryPdf({
-    firm: { name: firm!.name, phone: firm!.phone ?? undefined, email: firm!.email ?? undefined },
+    firm: await letterheadFirm(documentFirm(firm!)),
     client: { name: client!.name },
     property: {
       name: property.name,

@@ -7,6 +7,7 @@ import { SignupSchema } from '../../shared/schemas/auth';
 import { tooManyRequests } from '../errors';
 import { config } from '../config';
 import { signUpFirm } from '../commands/firm-signup';
+import { performance } from 'node:perf_hooks';
 
 const r = defineRoutes('/signup');
 
@@ -23,8 +24,17 @@ const signupLimiter = rateLimit({
 /** The same answer whether the address is new or already has an account. */
 export const SIGNUP_ANSWER = 'Check your e-mail: we sent a link to confirm the address. Open it, then sign in with the password you chose.';
 
+/** Waits until `floorMs` have passed since `startedAt`, so every answer takes the same time. */
+async function evenOut(startedAt: number, floorMs: number): Promise<void> {
+  const left = startedAt + floorMs - performance.now();
+  if (left > 0) await new Promise((resolve) => setTimeout(resolve, left));
+}
+
 r.post('/', 'public', signupLimiter, validate({ body: SignupSchema }), async (req, res) => {
+  const startedAt = performance.now();
   await signUpFirm(req.body, req.ip ?? null);
+  // A new address makes a firm and its library; a used one only queues a note. The floor hides the difference.
+  await evenOut(startedAt, config.signupAnswerFloorMs);
   res.status(202).json({ data: { message: SIGNUP_ANSWER } });
 });
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { FIRST_STEP_KEYS } from '../domain/first-steps';
 
 export const DeskSummarySchema = z.object({
   firm: z.object({ name: z.string(), region: z.string() }),
@@ -15,6 +16,8 @@ export const DeskSummarySchema = z.object({
   depositDrafts: z.array(z.object({ id: z.number().int(), number: z.string(), clientName: z.string(), propertyName: z.string().nullable(), proposalId: z.number().int().nullable(), proposalNumber: z.string().nullable(), totalCents: z.number().int(), approvedAt: z.string().nullable() })),
   /** Payments received in the last fourteen days, newest first. */
   moneyIn: z.array(z.object({ id: z.number().int(), invoiceId: z.number().int(), number: z.string(), clientName: z.string(), amountCents: z.number().int(), receivedAt: z.string(), paidInFull: z.boolean() })),
+  /** A new firm's first steps (home area, profile, first client), each ticked off by its data; null once all are done. */
+  firstSteps: z.array(z.object({ key: z.enum(FIRST_STEP_KEYS), done: z.boolean() })).nullable(),
 });
 export type DeskSummary = z.infer<typeof DeskSummarySchema>;
 

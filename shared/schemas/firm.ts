@@ -97,6 +97,9 @@ export interface DocumentFirm {
   licenceNumbers?: string | null;
   /** Storage key of the logo file as it was; logo files are never overwritten. */
   logoKey?: string | null;
+  /** The units figures print in, as the profile stood (snapshots from before print acres and feet). */
+  areaUnit?: (typeof AREA_UNITS)[number] | null;
+  lengthUnit?: (typeof LENGTH_UNITS)[number] | null;
 }
 
 export const FirmSchema = z.object({

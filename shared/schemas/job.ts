@@ -1,7 +1,7 @@
 /** Background jobs as the API shows them (GET /api/jobs, GET /api/jobs/:id) and their query. */
 import { z } from 'zod';
 
-export const JOB_KINDS = ['document-email', 'season-report', 'camera-thumbnails'] as const;
+export const JOB_KINDS = ['document-email', 'season-report', 'camera-thumbnails', 'firm-export'] as const;
 export type JobKind = (typeof JOB_KINDS)[number];
 
 export const JOB_STATUSES = ['queued', 'running', 'retrying', 'failed', 'done'] as const;

@@ -69,6 +69,7 @@ const routes: RouteObject[] = [
         { path: paths.invoice(), ...page(() => import('./routes/invoices/invoice'), (m) => m.InvoicePage) },
         { path: paths.team, ...page(() => import('./routes/settings/team'), (m) => m.TeamPage) },
         { path: paths.mail, ...page(() => import('./routes/settings/mail'), (m) => m.MailPage) },
+        { path: paths.firmExport, ...page(() => import('./routes/settings/firm-export'), (m) => m.FirmExportPage) },
         libraryRoutes,
         { path: paths.propertyPrescriptions(), ...page(() => import('./routes/properties/property-prescriptions'), (m) => m.PropertyPrescriptionsPage) },
         { path: paths.propertyResults(), ...page(() => import('./routes/properties/property-results'), (m) => m.PropertyResultsPage) },

@@ -24,6 +24,8 @@ export const paths = {
   changePassword: '/account/password',
   team: '/settings/team',
   mail: '/settings/mail',
+  /** The link in the export-ready e-mail: keep this path. */
+  firmExport: '/settings/export',
   library: '/library',
   libraryPractices: '/library/practices',
   practice: (id: number | string = ':id') => `/library/practices/${id}`,

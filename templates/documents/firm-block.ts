@@ -12,6 +12,9 @@ export interface LetterheadFirm {
   website?: string | null;
   licenceNumbers?: string | null;
   logo?: string | null;
+  /** The units the firm shows areas and lengths in (acres and feet when unset). */
+  areaUnit?: 'acres' | 'hectares' | null;
+  lengthUnit?: 'feet' | 'metres' | null;
 }
 
 /** The letterhead's left column: the logo (at most 1.6 × 0.7 in) above the firm's name and contact lines. */

@@ -9,9 +9,9 @@ import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interface
 import { z } from 'zod';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatLatLon } from '../../shared/domain/geometry';
-import { formatAcres } from '../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
-import { FEET_PER_MILE } from '../../shared/units';
+import { FEET_PER_MILE, formatArea, formatLength as formatLengthIn, DEFAULT_DISPLAY_UNITS, type DisplayUnits } from '../../shared/units';
+import { firmBlock } from './firm-block';
 import { kindSwatchSvg, renderPlanMap } from './kit/map-svg';
 import {
   cautionBox,
@@ -34,7 +34,17 @@ const name = (max: number) => z.string().trim().min(1, { message: 'must not be e
 const measure = z.number().finite().nonnegative({ message: 'must be zero or more' });
 
 export const PlanSummaryInputSchema = z.object({
-  firm: z.object({ name: name(120), phone: z.string().max(40).optional(), email: z.string().max(120).optional() }),
+  firm: z.object({
+    name: name(120),
+    phone: z.string().max(40).nullish(),
+    email: z.string().max(254).nullish(),
+    address: z.string().max(300).nullish(),
+    website: z.string().max(200).nullish(),
+    licenceNumbers: z.string().max(300).nullish(),
+    logo: z.string().startsWith('data:image/').nullish(),
+    areaUnit: z.enum(['acres', 'hectares']).nullish(),
+    lengthUnit: z.enum(['feet', 'metres']).nullish(),
+  }),
   client: z.object({ name: name(120) }),
   property: z.object({
     name: name(120),
@@ -68,6 +78,8 @@ type SummaryUnit = PlanSummaryData['units'][number];
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
 const MAP_HEIGHT_PT = 430;
+/** Height a letterhead (logo and contact lines) takes from the map, so the summary stays on two pages. */
+const LETTERHEAD_HEIGHT_PT = 90;
 
 const DEFERS = 'This plan defers to local codes, state wildlife rules and licensed practice; check them before work begins.';
 
@@ -134,16 +146,16 @@ function unitOrder(a: SummaryUnit, b: SummaryUnit): number {
   return byKind !== 0 ? byKind : a.name.localeCompare(b.name, 'en-US', { numeric: true });
 }
 
-function sizeText(unit: SummaryUnit): string {
+function sizeText(unit: SummaryUnit, du: DisplayUnits): string {
   const family = KIND_STYLES[unit.kind].family;
-  if (family === 'area') return unit.acres == null ? '—' : formatAcres(unit.acres);
-  if (family === 'line') return unit.lengthFt == null ? '—' : formatLength(unit.lengthFt);
+  if (family === 'area') return unit.acres == null ? '—' : formatArea(unit.acres, du.areaUnit);
+  if (family === 'line') return unit.lengthFt == null ? '—' : formatLengthIn(unit.lengthFt, du.lengthUnit);
   if (unit.geometry.type === 'Point') return formatLatLon(unit.geometry.coordinates[0], unit.geometry.coordinates[1]);
   if (unit.geometry.type === 'MultiPoint') return `${unit.geometry.coordinates.length} points`;
   return '—';
 }
 
-function unitsTable(units: readonly SummaryUnit[], propertyAcres: number): Content {
+function unitsTable(units: readonly SummaryUnit[], propertyAcres: number, du: DisplayUnits): Content {
   const header: TableCell[] = [
     { text: '' },
     { text: 'Unit', style: 'tableHeader' },
@@ -157,7 +169,7 @@ function unitsTable(units: readonly SummaryUnit[], propertyAcres: number): Conte
       kindSwatch(u.kind),
       { text: u.name, style: 'tableCell' },
       { text: style.label, style: 'tableCell', color: DOC_COLORS.slate },
-      { text: sizeText(u), style: 'tableCell', alignment: 'right' },
+      { text: sizeText(u, du), style: 'tableCell', alignment: 'right' },
       {
         text: style.family === 'area' && u.acres != null ? formatShare(u.acres, propertyAcres) : '',
         style: 'tableCell',
@@ -172,7 +184,7 @@ function unitsTable(units: readonly SummaryUnit[], propertyAcres: number): Conte
   };
 }
 
-function acresByKindTable(units: readonly SummaryUnit[], propertyAcres: number): Content | null {
+function acresByKindTable(units: readonly SummaryUnit[], propertyAcres: number, du: DisplayUnits): Content | null {
   const totals = new Map<UnitKind, number>();
   for (const u of units) {
     if (KIND_STYLES[u.kind].family === 'area' && u.acres != null) totals.set(u.kind, (totals.get(u.kind) ?? 0) + u.acres);
@@ -181,7 +193,7 @@ function acresByKindTable(units: readonly SummaryUnit[], propertyAcres: number):
   const rows: TableCell[][] = UNIT_KINDS.filter((k) => totals.has(k)).map((k) => [
     kindSwatch(k),
     { text: KIND_STYLES[k].label, style: 'tableCell' },
-    { text: formatAcres(totals.get(k)!), style: 'tableCell', alignment: 'right' },
+    { text: formatArea(totals.get(k)!, du.areaUnit), style: 'tableCell', alignment: 'right' },
     { text: formatShare(totals.get(k)!, propertyAcres), style: 'tableCell', alignment: 'right', color: DOC_COLORS.slate },
   ]);
   return {
@@ -214,17 +226,20 @@ export function planSummaryDocument(input: PlanSummaryInput): TDocumentDefinitio
   const data = parseInput(input);
   const { firm, client, property } = data;
   const preparedOn = formatDate(data.preparedOn);
+  const hasLetterhead = Boolean(firm.logo || firm.address || firm.licenceNumbers);
   const map = renderPlanMap({
     boundary: property.boundary,
     units: data.units.map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry })),
     widthPt: CONTENT_WIDTH_PT,
-    heightPt: MAP_HEIGHT_PT,
+    heightPt: hasLetterhead ? MAP_HEIGHT_PT - LETTERHEAD_HEIGHT_PT : MAP_HEIGHT_PT,
   });
   const centre = map.layout.projection;
   const locality = property.locality?.trim() || `Near ${formatLatLon(centre.lon0, centre.lat0)}`;
   const kinds = new Set(data.units.map((u) => u.kind));
   const contact = [firm.phone, firm.email].filter(Boolean).join(' · ');
-  const byKind = acresByKindTable(data.units, property.acres);
+  // The firm's units (acres and feet unless its profile chose hectares or metres).
+  const du: DisplayUnits = { areaUnit: firm.areaUnit ?? DEFAULT_DISPLAY_UNITS.areaUnit, lengthUnit: firm.lengthUnit ?? DEFAULT_DISPLAY_UNITS.lengthUnit };
+  const byKind = acresByKindTable(data.units, property.acres, du);
 
   const facts = keyValueTable(
     [
@@ -238,12 +253,15 @@ export function planSummaryDocument(input: PlanSummaryInput): TDocumentDefinitio
   );
   const acreage: Content = {
     stack: [
-      { text: formatAcres(property.acres), font: FONT_HEADING, bold: true, fontSize: 18, color: DOC_COLORS.mossDeep, alignment: 'right' },
+      { text: formatArea(property.acres, du.areaUnit), font: FONT_HEADING, bold: true, fontSize: 18, color: DOC_COLORS.mossDeep, alignment: 'right' },
       { text: 'total property area', style: 'small', alignment: 'right' },
     ],
   };
 
   const content: Content[] = [
+    // The firm's letterhead from its profile (logo, name, address, phone · e-mail · website, licence
+    // numbers) once the profile has more than a name; the map gives up the height it takes.
+    ...(hasLetterhead ? [{ columns: [firmBlock(firm)], margin: [0, 0, 0, 10] } as Content] : []),
     { text: 'PLAN SUMMARY', fontSize: 8, bold: true, color: DOC_COLORS.moss, characterSpacing: 1.2, margin: [0, 0, 0, 3] },
     { text: property.name, style: 'title' },
     { text: `Prepared for ${client.name} by ${firm.name}`, style: 'subtitle' },
@@ -258,7 +276,7 @@ export function planSummaryDocument(input: PlanSummaryInput): TDocumentDefinitio
       margin: [0, 4, 0, 0],
     },
     { text: 'Units', style: 'h2' },
-    data.units.length > 0 ? unitsTable(data.units, property.acres) : { text: 'No units are drawn on this plan yet.', style: 'muted' },
+    data.units.length > 0 ? unitsTable(data.units, property.acres, du) : { text: 'No units are drawn on this plan yet.', style: 'muted' },
     ...(byKind ? [byKind] : []),
     cautionBox('Before the work begins', planCautions(kinds, data.cautions ?? [])),
   ];

@@ -20,7 +20,6 @@ import { DomainValidationError } from '../../shared/domain/errors';
 import { formatLatLon } from '../../shared/domain/geometry';
 import { formatCents } from '../../shared/domain/money';
 import { formatDate, formatMoment, isTimeZone } from '../../shared/domain/clock';
-import { formatAcres } from '../../shared/domain/plan-checks';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
 import { kindSwatchSvg, renderPlanMap } from './kit/map-svg';
 import {
@@ -31,7 +30,7 @@ import {
   pageFrame,
   ruledTableLayout,
 } from './kit/layout';
-import { formatLength } from './plan-summary';
+import { formatArea, formatLength, DEFAULT_DISPLAY_UNITS, type DisplayUnits } from '../../shared/units';
 import type { ProposalDocumentInput } from './proposal-input';
 import { firmBlock } from './firm-block';
 
@@ -94,7 +93,7 @@ const LineSchema = z
   .refine((line) => line.optional || line.included, { message: 'is a required line, so it must be included', path: ['included'] });
 
 const ProposalDocumentInputSchema = z.object({
-  firm: z.object({ name: text(120), phone: optionalText(40), email: optionalText(254), address: optionalText(300), website: optionalText(200), licenceNumbers: optionalText(300), logo: z.string().startsWith('data:image/').nullish() }),
+  firm: z.object({ name: text(120), phone: optionalText(40), email: optionalText(254), address: optionalText(300), website: optionalText(200), licenceNumbers: optionalText(300), logo: z.string().startsWith('data:image/').nullish(), areaUnit: z.enum(['acres', 'hectares']).nullish(), lengthUnit: z.enum(['feet', 'metres']).nullish() }),
   client: z.object({ name: text(120) }),
   property: z.object({
     name: text(120),
@@ -247,10 +246,15 @@ function swatch(kind: UnitKind | null | undefined, marginTopPt = 1.5): Column {
   return { svg: kindSwatchSvg(kind, 16, 10), width: 16, margin: [0, marginTopPt, 0, 0] };
 }
 
-function sizeOf(group: Pick<DocGroup, 'kind' | 'acres' | 'lengthFt'>): string {
+/** The firm's units as the document's firm carries them (acres and feet when it chose none). */
+function unitsOf(data: DocData): DisplayUnits {
+  return { areaUnit: data.firm.areaUnit ?? DEFAULT_DISPLAY_UNITS.areaUnit, lengthUnit: data.firm.lengthUnit ?? DEFAULT_DISPLAY_UNITS.lengthUnit };
+}
+
+function sizeOf(group: Pick<DocGroup, 'kind' | 'acres' | 'lengthFt'>, units: DisplayUnits): string {
   const family = group.kind ? KIND_STYLES[group.kind].family : null;
-  if (family !== 'line' && group.acres != null) return formatAcres(group.acres);
-  if (family !== 'area' && group.lengthFt != null) return formatLength(group.lengthFt);
+  if (family !== 'line' && group.acres != null) return formatArea(group.acres, units.areaUnit);
+  if (family !== 'area' && group.lengthFt != null) return formatLength(group.lengthFt, units.lengthUnit);
   return '';
 }
 
@@ -382,7 +386,7 @@ function headline(data: DocData, locality: string, preparedOn: string, validUnti
   );
   const figures: Content = {
     stack: [
-      { text: formatAcres(data.property.acres), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.mossDeep, alignment: 'right' },
+      { text: formatArea(data.property.acres, unitsOf(data).areaUnit), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.mossDeep, alignment: 'right' },
       { text: 'total property area', style: 'small', alignment: 'right', margin: [0, 0, 0, 6] },
       { text: money(data.totals.totalCents), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.ink, alignment: 'right' },
       {
@@ -437,11 +441,11 @@ function mapPlacement(data: DocData, hasBanner: boolean): { heightPt: number; on
   return { heightPt: Math.floor(Math.min(MAP_MAX_HEIGHT_PT, available)), onPage1: true };
 }
 
-function workSection(groups: readonly DocGroup[]): Content[] {
+function workSection(groups: readonly DocGroup[], units: DisplayUnits): Content[] {
   if (groups.length === 0) return [];
   const blocks: Content[] = groups.map((g) => {
     const kindLabel = g.kind ? KIND_STYLES[g.kind].label : '';
-    const size = sizeOf(g);
+    const size = sizeOf(g, units);
     return {
       unbreakable: true,
       margin: [0, 0, 0, 10],
@@ -507,7 +511,7 @@ function lineRow(line: DocLine, money: (c: number) => string): TableCell[] {
   ];
 }
 
-function linesTable(groups: readonly LineGroup[], money: (c: number) => string): Content {
+function linesTable(groups: readonly LineGroup[], money: (c: number) => string, units: DisplayUnits): Content {
   const header: TableCell[] = [
     { text: 'Description', style: 'tableHeader' },
     { text: 'Quantity', style: 'tableHeader', alignment: 'right' },
@@ -518,7 +522,7 @@ function linesTable(groups: readonly LineGroup[], money: (c: number) => string):
   const groupRows = new Set<number>();
   groups.forEach((g, index) => {
     groupRows.add(body.length);
-    const size = g.group ? sizeOf(g.group) : '';
+    const size = g.group ? sizeOf(g.group, units) : '';
     body.push([
       {
         // pdfmake passes a node's id to the page-break rule; its typings know ids on ToC nodes only.
@@ -645,7 +649,7 @@ function priceSection(data: DocData, money: (c: number) => string): Content[] {
   if (grouped.length === 0) {
     out.push({ text: 'No priced lines yet.', style: 'muted' });
   } else {
-    out.push(linesTable(grouped, money));
+    out.push(linesTable(grouped, money, unitsOf(data)));
   }
   // The note on options stays with the totals it explains, never alone at the top of a page.
   const note: Content[] = hasOptions
@@ -826,7 +830,7 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
     headline(data, locality, preparedOn, validUntil),
     ...(intro.length > 0 ? [{ stack: intro, margin: [0, 0, 0, 12] } as Content] : []),
     ...(placement.onPage1 ? [mapBlock] : []),
-    ...workSection(data.groups),
+    ...workSection(data.groups, unitsOf(data)),
     ...(placement.onPage1 ? [] : [{ ...mapBlock, margin: [0, 8, 0, 0] } as Content]),
     ...priceSection(data, money),
     ...termsSection(proposal.terms),

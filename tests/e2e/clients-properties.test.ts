@@ -61,13 +61,15 @@ describe('the consultant keeps clients and properties', () => {
     await page.getByRole('button', { name: 'clear the search' }).click();
     await expect.poll(async () => (await rowNames(page)).length).toBeGreaterThanOrEqual(3);
 
-    // The top bar's search lands on the clients table with ?q=.
+    // The top bar's search lists matching records of every kind, a typo forgiven; choosing one opens it.
     await page.goto(`${baseUrl}/desk`);
-    await page.locator('#global-search').fill('bluestem');
-    await page.locator('#global-search').press('Enter');
-    await page.waitForURL(`${baseUrl}/clients?q=bluestem`);
-    await expect.poll(() => rowNames(page)).toEqual(['Bluestem Ridge Hunting Club']);
+    await page.locator('#global-search').fill('blustem ridge hunting');
+    const option = page.getByRole('listbox', { name: 'Search results' }).getByRole('option').filter({ hasText: 'Bluestem Ridge Hunting Club' }).first();
+    await option.waitFor();
     await screenshot(page, 'clients-search');
+    await option.click();
+    await page.waitForURL(/\/clients\/\d+$/);
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toContain('Bluestem Ridge Hunting Club');
     watch.assertClean();
     await context.close();
   });
@@ -118,7 +120,7 @@ describe('the consultant keeps clients and properties', () => {
 
     await page.getByRole('button', { name: 'New property' }).click();
     const propertyForm = page.getByRole('form', { name: 'New property' });
-    await expect.poll(() => propertyForm.getByText(/open the property’s plan map to draw it or import it/).count()).toBe(1);
+    await expect.poll(() => propertyForm.getByText(/saving opens the property’s plan map, where you draw it or import it/).count()).toBe(1);
     await propertyForm.getByLabel('Property name').fill(propertyName);
     await propertyForm.getByLabel('County').fill('Crawford');
     await propertyForm.getByLabel('State').fill('WI');
@@ -126,6 +128,10 @@ describe('the consultant keeps clients and properties', () => {
     await propertyForm.getByLabel('Objectives').fill('Hold deer through the late season on the south slope.');
     await screenshot(page, 'client-new-property');
     await propertyForm.getByRole('button', { name: 'Add property' }).click();
+    // "Add property" lands on the new property's plan map.
+    await page.waitForURL(/\/properties\/\d+\/map$/);
+    await page.goBack();
+    await page.waitForURL(/\/clients\/\d+$/);
     await expect.poll(() => rowNames(page)).toEqual([propertyName]);
     expect(await page.getByRole('link', { name: `Plan map of ${propertyName}` }).getAttribute('href')).toMatch(/^\/properties\/\d+\/map$/);
     await screenshot(page, 'client-page');

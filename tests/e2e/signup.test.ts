@@ -66,7 +66,7 @@ describe('a new firm sets itself up', () => {
     // An empty Desk with its first steps, and none of another firm's records.
     const steps = page.getByRole('list', { name: 'First steps' });
     await steps.waitFor(WAIT);
-    expect(await steps.getByRole('listitem').count()).toBe(2);
+    expect(await steps.getByRole('listitem').count()).toBe(3);
     await poll(() => page.getByText('No properties yet').count()).toBe(1);
     await screenshot(page, 'signup-desk-first-steps');
 
@@ -107,10 +107,8 @@ describe('a new firm sets itself up', () => {
     await propertyForm.getByLabel('County').fill('Crawford');
     await propertyForm.getByLabel('State').fill('WI');
     await propertyForm.getByRole('button', { name: 'Add property' }).click();
-    await poll(() => page.getByRole('link', { name: 'Plan map of Kinney Ridge' }).count()).toBe(1);
 
-    // Find a town by name on the property's plan map: the map flies there.
-    await page.getByRole('link', { name: 'Plan map of Kinney Ridge' }).click();
+    // "Add property" lands on the new property's plan map; find a town by name there: the map flies there.
     await page.waitForURL(/\/properties\/\d+\/map$/, WAIT);
     const search = page.getByRole('combobox', { name: 'Find a place' });
     await search.waitFor(WAIT);
@@ -128,10 +126,12 @@ describe('a new firm sets itself up', () => {
     })).toBe(true);
     await screenshot(page, 'signup-place-found');
 
-    // The first steps are done: the Desk no longer lists them.
+    // The profile and first-client steps ticked themselves off; only the home area may still be open.
     await page.goto(`${baseUrl}/desk`);
     await poll(() => page.getByText('Kinney Ridge').count()).toBeGreaterThan(0);
-    expect(await page.getByRole('list', { name: 'First steps' }).count()).toBe(0);
+    const open = page.getByRole('list', { name: 'First steps' }).locator('li[data-done="false"]');
+    expect(await open.count()).toBeLessThanOrEqual(1);
+    if ((await open.count()) === 1) expect(await open.textContent()).toContain('Choose where you work');
     watch.assertClean();
     await context.close();
   });

@@ -246,4 +246,23 @@ describe('documents and e-mails print the profile; a sent one keeps it', () => {
     expect(plain).toContain('608-555-0142  ·  office@driftless-habitat.example  ·  driftless-habitat.example');
     expect(plain).toContain('WI DATCP pesticide applicator #84-1123');
   });
+  it('the plan summary prints the letterhead too, and plan and proposal PDFs show areas in the firm’s unit', async () => {
+    // PROFILE chose hectares and metres: 1 acre = 0.40468564224 ha (NIST Handbook 44, Appendix C).
+    const plan = pdfText((await binary(consultant, `/api/properties/${propertyId}/plan.pdf`)).body);
+    expect(plan).toContain('Driftless Habitat Works');
+    expect(plan).toContain('PO Box 214');
+    expect(plan).toContain('WI DATCP pesticide applicator #84-1123');
+    expect(plan).toMatch(/\d+\.\d+ ha\b/);
+    expect(plan).not.toMatch(/\d+\.\d+ acres?\b/);
+    const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, {});
+    const proposal = pdfText((await binary(consultant, `/api/proposals/${draft.body.data.id}/pdf`)).body);
+    // The property's area and the work's sizes in hectares; priced quantities stay in the unit their price is per (acre).
+    expect(proposal).toMatch(/\d+\.\d+ ha\b/);
+    expect(proposal).toMatch(/\d+\.\d+ acres\s+\$\d+\.\d{2}/);
+    // Back to acres: the same figures print in acres.
+    await send(owner, 'patch', '/api/firm', { areaUnit: 'acres' }).expect(200);
+    const again = pdfText((await binary(consultant, `/api/properties/${propertyId}/plan.pdf`)).body);
+    expect(again).toMatch(/\d+\.\d+ acres\b/);
+    await send(owner, 'patch', '/api/firm', PROFILE).expect(200);
+  });
 });

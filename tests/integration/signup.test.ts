@@ -6,6 +6,7 @@ import { makeFirm, PASSWORD } from '../support/factories';
 import { sequelize } from '../../server/db/sequelize';
 import { AuthToken, Client, Firm, Material, OutboxMessage, Practice, Property, User } from '../../server/models';
 import { config } from '../../server/config';
+import { DeskSummarySchema } from '../../shared/schemas/desk';
 
 const unique = () => crypto.randomBytes(5).toString('hex');
 const post = (agent: Agent, url: string, body: unknown) => agent.post(url).set('X-CSRF-Token', agent.csrf).send(body as object);
@@ -71,6 +72,8 @@ describe('POST /api/signup', () => {
     const used = await post(await anonymousAgent(), '/api/signup', { firmName: 'Someone Else', name: 'Other Person', email: users.consultant.email.toUpperCase(), password: 'another long password' });
     const fresh = await post(await anonymousAgent(), '/api/signup', { firmName: 'Someone New', name: 'New Person', email: `new-${unique()}@example.test`, password: 'another long password' });
     expect(used.status).toBe(fresh.status);
+    // Both answers wait for the same floor, so time does not tell them apart (medians in tests/bench/signup-timing.ts).
+    expect(config.signupAnswerFloorMs).toBeGreaterThanOrEqual(500);
     expect(used.body).toEqual(fresh.body);
     expect(Object.keys(used.headers).sort()).toEqual(Object.keys(fresh.headers).sort());
     expect(await Firm.count({ where: { name: 'Someone Else' } })).toBe(0);
@@ -111,6 +114,34 @@ describe('POST /api/signup', () => {
     expect(text).toMatch(/at least 10 characters/);
     expect((await post(agent, '/api/auth/verify-email', { token: 'x'.repeat(43) })).status).toBe(400);
     expect((await post(agent, '/api/auth/verify-email', { token: 42 })).status).toBe(422);
+  });
+
+  it('gives the new firm an empty Desk whose first steps (home area, profile, first client) tick themselves off', async () => {
+    const email = `steps-${unique()}@example.test`;
+    expect((await post(await anonymousAgent(), '/api/signup', { firmName: 'Kickapoo Valley Habitat', name: 'Rosa Lindqvist', email, password: 'a long enough password' })).status).toBe(202);
+    await post(await anonymousAgent(), '/api/auth/verify-email', { token: await linkTokenFor(email) });
+    const owner = await signedInAgent(email, 'a long enough password');
+    const desk = async () => DeskSummarySchema.parse((await owner.get('/api/desk').expect(200)).body.data);
+    const fresh = await desk();
+    expect(fresh.firstSteps).toEqual([
+      { key: 'home-area', done: false },
+      { key: 'profile', done: false },
+      { key: 'first-client', done: false },
+    ]);
+    expect(fresh.counts).toMatchObject({ clients: 0, properties: 0 });
+    expect(fresh.recentProperties).toEqual([]);
+    expect(fresh.waiting).toEqual([]);
+    expect(fresh.activity.every((a) => a.action.startsWith('firm.') || a.action.startsWith('user.'))).toBe(true);
+
+    expect((await owner.patch('/api/firm').set('X-CSRF-Token', owner.csrf).send({ address: '212 Main St, Viroqua, WI 54665', phone: '608-555-0144' })).status).toBe(200);
+    expect((await desk()).firstSteps?.find((s) => s.key === 'profile')?.done).toBe(true);
+    expect((await post(owner, '/api/clients', { name: 'Rockton Bottoms Trust' })).status).toBe(201);
+    expect((await desk()).firstSteps?.find((s) => s.key === 'first-client')?.done).toBe(true);
+    // The home area is chosen by the firm (kept in settings.homeArea): then the list is gone.
+    const me = (await User.findOne({ where: { email } }))!;
+    const firm = (await Firm.findByPk(me.firmId))!;
+    await firm.update({ settings: { ...firm.settings, homeArea: { counties: ['55123'] } } });
+    expect((await desk()).firstSteps).toBeNull();
   });
 
   it('is rate-limited per address: the next sign-up after the limit gets 429 with a sentence', async () => {

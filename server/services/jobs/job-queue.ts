@@ -1,6 +1,6 @@
 /**
  * Background work in PostgreSQL (pg-boss, in its own schema): PDFs for e-mails, season reports,
- * the hourly storage sweep. A job is handed over inside the transaction of the action behind it,
+ * whole-firm exports, the hourly storage sweep. A job is handed over inside the transaction of the action behind it,
  * retried with backoff, recorded in background_jobs for the firm to see (progress, last error,
  * retry), and its effect is written at most once (the row is locked and checked when finishing).
  * Workers run in the app process by default (JOB_WORKERS_IN_APP) or in `npm run worker`.
@@ -30,7 +30,7 @@ export interface JobContext {
 export type JobHandler = (data: Record<string, unknown>, context: JobContext) => Promise<void>;
 
 const SWEEP_QUEUE = 'storage-sweep';
-const KINDS: readonly JobKind[] = ['document-email', 'season-report', 'camera-thumbnails'];
+const KINDS: readonly JobKind[] = ['document-email', 'season-report', 'camera-thumbnails', 'firm-export'];
 const handlers = new Map<JobKind, JobHandler>();
 const workerIds = new Map<string, string>();
 let boss: PgBoss | null = null;

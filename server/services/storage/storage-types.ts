@@ -11,8 +11,8 @@ export interface StoredObject {
 /** Where uploaded and generated files live; every reader and writer of files goes through one of these. */
 export interface Storage {
   readonly kind: 'disk' | 's3';
-  /** Writes bytes under a key that does not exist yet. */
-  put(key: string, bytes: Buffer, contentType: string): Promise<void>;
+  /** Writes bytes (or a stream of them, never held whole in memory) under a key that does not exist yet. */
+  put(key: string, bytes: Buffer | Readable, contentType: string): Promise<void>;
   /** Reads a whole object; throws StoredFileMissing when there is none. */
   get(key: string): Promise<Buffer>;
   /** Opens an object as a stream with its size; throws StoredFileMissing when there is none. */

@@ -16,7 +16,7 @@ import { StoredFileMissing, type Storage } from './storage-types';
 export type { Storage, StoredObject } from './storage-types';
 
 const KEY = /^[a-z0-9-]+\/[a-f0-9]{32}(\.[a-z0-9]{1,8})?$/;
-const CONTENT_TYPES: Record<string, string> = { pdf: 'application/pdf', png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', webp: 'image/webp', heic: 'image/heic', tif: 'image/tiff', tiff: 'image/tiff', csv: 'text/csv', txt: 'text/plain' };
+const CONTENT_TYPES: Record<string, string> = { pdf: 'application/pdf', png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', webp: 'image/webp', heic: 'image/heic', tif: 'image/tiff', tiff: 'image/tiff', csv: 'text/csv', txt: 'text/plain', zip: 'application/zip' };
 
 let current: Storage | null = null;
 
@@ -61,6 +61,18 @@ export async function saveFile(folder: string, bytes: Buffer, extension: string)
   const key = checked(`${folder}/${crypto.randomBytes(16).toString('hex')}${extension ? `.${extension}` : ''}`);
   await storage().put(key, bytes, CONTENT_TYPES[extension] ?? 'application/octet-stream');
   return key;
+}
+
+/** Writes a stream under a new random key in a folder without holding it whole in memory; answers the key. */
+export async function saveStream(folder: string, stream: Readable, extension: string): Promise<string> {
+  const key = checked(`${folder}/${crypto.randomBytes(16).toString('hex')}${extension ? `.${extension}` : ''}`);
+  await storage().put(key, stream, CONTENT_TYPES[extension] ?? 'application/octet-stream');
+  return key;
+}
+
+/** Opens a stored file as a stream with its size; a missing one is a 404 AppError. */
+export async function openStoredFile(key: string): Promise<{ stream: Readable; byteSize: number }> {
+  return missingAs404(() => storage().open(checked(key)));
 }
 
 /** Reads a stored file whole; a missing one is a 404 AppError. */

@@ -1,6 +1,6 @@
-import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
-import { useState, type FormEvent } from 'react';
+import { NavLink, Outlet, useMatches } from 'react-router-dom';
 import { Brand } from '../../components/layouts/brand';
+import { HeaderSearch } from '../../features/search/components/header-search';
 import { UserMenu } from './user-menu';
 import { useMe } from '../../features/auth/api/get-me';
 import { paths } from '../../config/paths';
@@ -16,34 +16,17 @@ const PLACES = [
   { to: paths.team, label: 'Settings' },
 ];
 
-/** The consultant's shell: a slim top bar and a left column of places. */
+/** The consultant's shell: a slim top bar with the header search, and a left column of places. */
 export function ConsultantLayout() {
   const me = useMe();
-  const navigate = useNavigate();
-  const [q, setQ] = useState('');
   // A page whose route has `handle: { fullBleed: true }` (the plan map) fills the content area edge to edge.
   const fullBleed = useMatches().some((m) => (m.handle as { fullBleed?: boolean } | undefined)?.fullBleed);
-  const search = (e: FormEvent) => {
-    e.preventDefault();
-    navigate(`${paths.clients}?q=${encodeURIComponent(q)}`);
-  };
   return (
     <div className={`flex flex-col ${fullBleed ? 'h-screen' : 'min-h-screen'}`}>
       <header className="flex items-center gap-4 border-b border-rule bg-card px-4 py-2">
         <Brand />
         <span className="hidden border-l border-rule pl-4 text-sm text-slate md:inline">{me.data?.firmName}</span>
-        <form onSubmit={search} role="search" className="ml-auto hidden sm:block">
-          <label className="sr-only" htmlFor="global-search">
-            Search clients
-          </label>
-          <input
-            id="global-search"
-            value={q}
-            onChange={(e) => setQ(e.target.value)}
-            placeholder="Search clients…"
-            className="w-56 rounded border border-rule bg-paper px-3 py-1.5 text-sm focus:border-moss focus:outline-none"
-          />
-        </form>
+        <HeaderSearch />
         <UserMenu />
       </header>
       <div className={`flex flex-1 flex-col md:flex-row ${fullBleed ? 'min-h-0' : ''}`}>

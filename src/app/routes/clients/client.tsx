@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import type { ClientDto } from '../../../../shared/schemas/client';
 import type { PropertyDto } from '../../../../shared/schemas/property';
 import { useClient } from '../../../features/clients/api/get-client';
@@ -82,6 +82,8 @@ function ClientDetails({ client }: { client: ClientDto }) {
 function ClientProperties({ client }: { client: ClientDto }) {
   const properties = useProperties({ clientId: client.id });
   const [adding, setAdding] = useState(false);
+  // After "Add property" the consultant lands on the new property's plan map, where its boundary is drawn.
+  const navigate = useNavigate();
   return (
     <Card
       title="Properties"
@@ -97,7 +99,7 @@ function ClientProperties({ client }: { client: ClientDto }) {
         {adding ? (
           <div className="rounded border border-rule bg-paper/60 p-3">
             <h3 className="mb-2 text-sm font-bold">New property for {client.name}</h3>
-            <NewPropertyForm clientId={client.id} onCreated={() => setAdding(false)} onCancel={() => setAdding(false)} />
+            <NewPropertyForm clientId={client.id} onCreated={(p) => navigate(paths.planMap(p.id))} onCancel={() => setAdding(false)} />
           </div>
         ) : null}
         {properties.isPending ? (

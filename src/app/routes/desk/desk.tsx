@@ -1,7 +1,6 @@
 import { Link } from 'react-router-dom';
 import { useDesk } from '../../../features/desk/api/get-desk';
 import { useMe } from '../../../features/auth/api/get-me';
-import { useFirm } from '../../../features/firm/api/firm';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { formatAcres, formatRelative } from '../../../lib/format';
 import { describeAction } from '../../../features/desk/lib/action-words';
@@ -26,7 +25,6 @@ function Figure({ label, value }: { label: string; value: string }) {
 export function DeskPage() {
   const me = useMe();
   const desk = useDesk();
-  const firm = useFirm();
   if (desk.isPending) return <Loading />;
   if (desk.isError) return <ErrorPanel error={desk.error} />;
   const d = desk.data;
@@ -37,7 +35,7 @@ export function DeskPage() {
         <h1 className="text-2xl font-bold">Desk</h1>
         <p className="text-slate">Good to see you, {firstName}. Here is {d.firm.name} this week.</p>
       </div>
-      <FirstSteps clients={d.counts.clients} profileDone={Boolean(firm.data && (firm.data.address || firm.data.phone || firm.data.logoUrl))} />
+      <FirstSteps steps={d.firstSteps} />
       <div className="grid grid-cols-2 gap-3 lg:grid-cols-4">
         <Figure label="Clients" value={String(d.counts.clients)} />
         <Figure label="Properties" value={String(d.counts.properties)} />

@@ -119,7 +119,7 @@ export function PropertiesPage() {
           <NewPropertyFlow
             clients={clients.data ?? []}
             initialClientId={clientId}
-            onCreated={(p) => navigate(paths.property(p.id))}
+            onCreated={(p) => navigate(paths.planMap(p.id))}
             onCancel={() => setAdding(false)}
           />
         </Card>

@@ -83,6 +83,7 @@ export function TeamPage() {
       <div className="flex items-baseline justify-between">
         <h1 className="text-2xl font-bold">Settings · Team</h1>
         {isOwner ? <Link className="text-sm text-moss-deep hover:underline" to={paths.mail}>Captured mail (development)</Link> : null}
+        {isOwner ? <Link className="text-sm text-moss-deep hover:underline" to={paths.firmExport}>Export all your data</Link> : null}
       </div>
       {isOwner ? (
         <Card title="Firm profile">

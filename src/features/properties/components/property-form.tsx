@@ -63,7 +63,7 @@ export function NewPropertyForm({ clientId, onCreated, onCancel }: { clientId: n
   const submit = form.handleSubmit((values) =>
     create.mutate(values, {
       onSuccess: (property) => {
-        toast('success', `${property.name} added. Open its plan map to draw or import the boundary.`);
+        toast('success', `${property.name} added. Draw or import its boundary on the plan map.`);
         onCreated(property);
       },
       onError: (e) => toast('error', `The property was not added: ${e.message}`),
@@ -74,7 +74,7 @@ export function NewPropertyForm({ clientId, onCreated, onCancel }: { clientId: n
     <form onSubmit={submit} noValidate aria-label="New property" className="grid gap-3 sm:grid-cols-2">
       <PropertyFields field={field} errors={form.formState.errors} />
       <p className="rounded border-l-4 border-sky bg-sky/5 px-3 py-2 text-sm text-ink sm:col-span-2">
-        The boundary comes next: after saving, open the property’s plan map to draw it or import it from a GeoJSON, KML, GPX or zipped
+        The boundary comes next: saving opens the property’s plan map, where you draw it or import it from a GeoJSON, KML, GPX or zipped
         shapefile. Acres are measured from it.
       </p>
       <div className="flex flex-wrap gap-2 sm:col-span-2">
