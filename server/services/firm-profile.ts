@@ -3,6 +3,7 @@ import type { Firm } from '../models';
 import type { DocumentFirm } from '../../shared/schemas/firm';
 import { firmContactLines } from '../../shared/domain/firm-contact';
 
+import { firmDefaults } from '../../shared/domain/firm-defaults';
 export { firmDefaults, settingsFromProfile, type FirmDefaults } from '../../shared/domain/firm-defaults';
 
 /** What a document prints about the firm now; a sent document keeps this in its snapshot. */

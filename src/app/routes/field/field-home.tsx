@@ -9,7 +9,6 @@ import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock';
-import { lazy, Suspense } from 'react';
 
 // Loaded after the sheet shows: the field sheet's first load is at its 150 KB budget.
 const DuePullsCard = lazy(() => import('../../../features/cameras/components/due-pulls-card').then((m) => ({ default: m.DuePullsCard })));
