@@ -131,7 +131,7 @@ export function PlanMapPage() {
   const [colourBy, setColourBy] = useState<ColourBy>('kind');
   const progress = usePropertyProgress(propertyId, Number.isInteger(propertyId) && propertyId > 0);
   // In work-status mode the crew's photos with a position show as dots.
-  const doneTasks = useTasks({ propertyId, status: 'done' }, colourBy === 'status' && Number.isInteger(propertyId) && propertyId > 0);
+  const doneTasks = useTasks({ propertyId, status: 'done', limit: 500 }, colourBy === 'status' && Number.isInteger(propertyId) && propertyId > 0);
 
   const [controller, setController] = useState<PlanMapController | null>(null);
   const [selectedId, setSelectedId] = useState<number | null>(null);
