@@ -118,7 +118,7 @@ function InvoiceSummary({ summary, status }: { summary: InvoiceListSummaryDto; s
   const what = status ? `${INVOICE_STATUS_LABELS[status].toLowerCase()} ${summary.count === 1 ? 'invoice' : 'invoices'}` : summary.count === 1 ? 'invoice' : 'invoices';
   return (
     <p className="text-sm text-slate tabular-nums" aria-label="Invoice totals">
-      {summary.count.toLocaleString('en-US')} {what} · {formatCents(summary.totalCents)} invoiced
+      {summary.count.toLocaleString('en-US')} {what} · {formatCents(summary.totalCents)} in total
       {status === undefined || status === 'open' ? ` · ${formatCents(summary.balanceCents)} still owed on open invoices` : ''}
     </p>
   );
