@@ -12,7 +12,7 @@ import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceL
 import { actor, findInFirm } from '../policies/firm-scope';
 import { addManualLine, createInvoice, removeManualLine, sendInvoice, updateInvoice, voidInvoice } from '../commands/invoice-writer';
 import { refundPayment, startCheckout } from '../commands/payment-recorder';
-import { listInvoiceRows, readInvoice } from '../services/invoices/invoice-reader';
+import { listInvoiceRows, readInvoice, summarizeInvoices } from '../services/invoices/invoice-reader';
 import { renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
 import { notFound } from '../errors';
 import { todayInZone, usableZone } from '../services/clock';
@@ -38,11 +38,11 @@ r.get('/', STAFF_AND_CLIENT, ...typed({ query: InvoiceListQuerySchema }, async (
   if (q.propertyId) where.propertyId = q.propertyId;
   if (q.proposalId) where.proposalId = q.proposalId;
   if (q.status) {
-    if (me.role === 'client' && q.status === 'draft') return res.json({ data: [], page: pageOf(q, 0) });
+    if (me.role === 'client' && q.status === 'draft') return res.json({ data: [], page: pageOf(q, 0), summary: { count: 0, totalCents: 0, balanceCents: 0 } });
     where.status = q.status;
   }
-  const [total, data] = await Promise.all([Invoice.count({ where: where as WhereOptions }), listInvoiceRows(where as WhereOptions, todayInZone(me.firmTimezone), q)]);
-  res.json({ data, page: pageOf(q, total) });
+  const [summary, data] = await Promise.all([summarizeInvoices(where as WhereOptions), listInvoiceRows(where as WhereOptions, todayInZone(me.firmTimezone), q)]);
+  res.json({ data, page: pageOf(q, summary.count), summary });
 }));
 
 r.get('/receivables', STAFF, async (req, res) => {

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import { IdSchema, RecordIdSchema } from './common';
 import { parseDollarsToCents } from '../domain/money';
-import { PageQuerySchema } from './common';
+import { PageLimitSchema, PageQuerySchema, type PageDto } from './common';
 import { INVOICE_KINDS, INVOICE_STATUSES, type AgeingBucketKey, type InvoiceLineSource } from '../domain/invoicing';
 
 const id = RecordIdSchema;
@@ -16,12 +16,18 @@ export const InvoiceCreateSchema = z
   .refine((v) => v.kind === 'progress' || v.taskIds === undefined, { message: 'taskIds are only for progress invoices', path: ['taskIds'] });
 export type InvoiceCreateInput = z.infer<typeof InvoiceCreateSchema>;
 
+/**
+ * The invoice list's page when the address does not say: the 50 newest, so the list answers in about
+ * the same time however many invoices the firm holds; `page.total` and `summary` cover every match.
+ */
+export const INVOICE_PAGE = { defaultLimit: 50 } as const;
+
 export const InvoiceListQuerySchema = z.object({
   clientId: IdSchema.optional(),
   propertyId: IdSchema.optional(),
   proposalId: IdSchema.optional(),
   status: z.enum(INVOICE_STATUSES, { message: 'status must be draft, open, paid or void' }).optional(),
-}).extend(PageQuerySchema.shape);
+}).extend({ ...PageQuerySchema.shape, limit: PageLimitSchema.default(INVOICE_PAGE.defaultLimit) });
 export type InvoiceListQuery = z.infer<typeof InvoiceListQuerySchema>;
 
 export const InvoiceUpdateSchema = z.object({
@@ -111,6 +117,21 @@ export const InvoiceRowDtoSchema = z.object({
   updatedAt: z.string(),
 });
 export type InvoiceRowDto = z.infer<typeof InvoiceRowDtoSchema>;
+
+/** Money of every invoice the list's filter matches (not only the page), summed in the database. */
+export const InvoiceListSummarySchema = z.object({
+  count: z.number().int().min(0),
+  totalCents: z.number().int(),
+  balanceCents: z.number().int().min(0),
+});
+export type InvoiceListSummaryDto = z.infer<typeof InvoiceListSummarySchema>;
+
+/** GET /api/invoices: one page of rows, where it sits in the whole, and the whole's money. */
+export interface InvoiceListDto {
+  data: InvoiceRowDto[];
+  page: PageDto;
+  summary: InvoiceListSummaryDto;
+}
 
 /** An invoice with its lines and payments. */
 export const InvoiceDtoSchema = InvoiceRowDtoSchema.extend({

@@ -5,11 +5,13 @@ import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type
 import type { Caution } from '../domain/cautions';
 
 /**
- * The task list's page when the address does not say: a phone-sized page (about 80 KB of JSON, 8 KB
- * gzip), so a week or a timeline answers in about the same time however many tasks the firm holds;
- * the total says how many more there are ("Show more" asks for a longer page).
+ * The task list's page when the address does not say: 50 tasks (about 40 KB of JSON), so a
+ * consultant's week answers in about the same time however many tasks the firm holds; the total says
+ * how many more there are ("Show more" asks for a longer page). The schedule's timeline asks for
+ * `timelineLimit` a page explicitly (its bars need more of the twelve weeks at once); the field sheet
+ * asks for its whole list.
  */
-export const TASK_PAGE = { defaultLimit: 100 } as const;
+export const TASK_PAGE = { defaultLimit: 50, timelineLimit: 100 } as const;
 
 export const TaskListQuerySchema = z
   .object({

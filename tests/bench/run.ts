@@ -93,10 +93,10 @@ async function growth(base: string) {
     }),
   );
   const reads: { label: string; url: (side: (typeof sides)[number]) => string; who: 'staff' | 'client' }[] = [
-    { label: "consultant's task list (this week)", url: () => `/api/tasks?from=${day(0)}&to=${day(6)}`, who: 'staff' },
-    { label: 'schedule timeline (12 weeks)', url: () => `/api/tasks?from=${day(-28)}&to=${day(55)}`, who: 'staff' },
+    { label: "consultant's task list (this week, default page of 50)", url: () => `/api/tasks?from=${day(0)}&to=${day(6)}`, who: 'staff' },
+    { label: 'schedule timeline (12 weeks, its page of 100)', url: () => `/api/tasks?from=${day(-28)}&to=${day(55)}&limit=100`, who: 'staff' },
     { label: 'Desk', url: () => '/api/desk', who: 'staff' },
-    { label: 'invoices', url: () => '/api/invoices', who: 'staff' },
+    { label: 'invoices (default page: 50 newest, firm-wide totals)', url: () => '/api/invoices', who: 'staff' },
     { label: "portal's property read", url: (side) => `/api/portal/properties/${side.portalPropertyId}`, who: 'client' },
   ];
   const times = reads.map(() => [[], []] as [number[], number[]]);

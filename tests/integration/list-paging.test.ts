@@ -6,10 +6,11 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { makeFirm, makeProperty, PASSWORD } from '../support/factories';
 import { signedInAgent, type Agent } from '../support/test-app';
-import { Task, TaskPhoto, Unit } from '../../server/models';
+import { Invoice, Task, TaskPhoto, Unit } from '../../server/models';
 import { measureUnit } from '../../shared/domain/geometry';
 import { LIST_PAGE } from '../../shared/schemas/common';
 import { TASK_PAGE } from '../../shared/schemas/task';
+import { INVOICE_PAGE, InvoiceListSummarySchema } from '../../shared/schemas/invoice';
 import type { Polygon } from 'geojson';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
@@ -54,7 +55,8 @@ describe('paged lists', () => {
     const all = await consultant.get('/api/tasks').expect(200);
     // The task list's own phone-sized page when the address does not say (the other lists keep LIST_PAGE).
     expect(all.body.data.page).toEqual({ total: TASKS, limit: TASK_PAGE.defaultLimit, offset: 0 });
-    expect(TASK_PAGE.defaultLimit).toBeLessThan(LIST_PAGE.defaultLimit);
+    expect(TASK_PAGE.defaultLimit).toBe(50);
+    expect(TASK_PAGE.timelineLimit).toBeGreaterThan(TASK_PAGE.defaultLimit);
   });
 
   it('answers a listed task exactly as its own read does (names, point, photos)', async () => {
@@ -83,10 +85,51 @@ describe('paged lists', () => {
     expect(properties.body.page).toEqual({ total: 2, limit: 1, offset: 0 });
     const clients = await consultant.get('/api/clients').expect(200);
     expect(clients.body.page.total).toBe(clients.body.data.length);
-    for (const url of ['/api/proposals', '/api/invoices']) {
-      const res = await consultant.get(url).expect(200);
-      expect(res.body.page).toEqual({ total: 0, limit: LIST_PAGE.defaultLimit, offset: 0 });
-    }
+    const proposals = await consultant.get('/api/proposals').expect(200);
+    expect(proposals.body.page).toEqual({ total: 0, limit: LIST_PAGE.defaultLimit, offset: 0 });
+    const invoices = await consultant.get('/api/invoices').expect(200);
+    expect(invoices.body.page).toEqual({ total: 0, limit: INVOICE_PAGE.defaultLimit, offset: 0 });
+    expect(invoices.body.summary).toEqual({ count: 0, totalCents: 0, balanceCents: 0 });
+  });
+
+  it('answers the 50 newest invoices by default, with the count and money of every match summed apart from the page', async () => {
+    const firm = await makeFirm();
+    const owner = await signedInAgent(firm.users.consultant.email, PASSWORD);
+    const property = await makeProperty(firm.firm.id, firm.client.id);
+    const COUNT = INVOICE_PAGE.defaultLimit + 5;
+    // Open invoices of $100.00 with $30.00 paid each, one paid and one void invoice of $50.00 (made-up figures).
+    await Invoice.bulkCreate(
+      Array.from({ length: COUNT }, (_, i) => ({
+        firmId: firm.firm.id,
+        clientId: firm.client.id,
+        propertyId: property.id,
+        proposalId: null,
+        kind: 'final' as const,
+        number: `INV-PAGE-${String(i).padStart(4, '0')}`,
+        status: i === 0 ? ('paid' as const) : i === 1 ? ('void' as const) : ('open' as const),
+        totalCents: i < 2 ? 5_000 : 10_000,
+        amountPaidCents: i === 0 ? 5_000 : i === 1 ? 0 : 3_000,
+        billedCents: i < 2 ? 5_000 : 10_000,
+        subtotalCents: i < 2 ? 5_000 : 10_000,
+        issuedOn: '2026-10-01',
+        dueOn: '2026-10-31',
+        createdById: null,
+        createdAt: new Date(Date.UTC(2026, 9, 1, 0, i)),
+      })),
+    );
+    const first = await owner.get('/api/invoices').expect(200);
+    expect(first.body.data).toHaveLength(INVOICE_PAGE.defaultLimit);
+    expect(first.body.page).toEqual({ total: COUNT, limit: INVOICE_PAGE.defaultLimit, offset: 0 });
+    // Newest first: the last one made heads the page.
+    expect(first.body.data[0].number).toBe(`INV-PAGE-${String(COUNT - 1).padStart(4, '0')}`);
+    // Firm-wide: 53 × $100 + 2 × $50 invoiced; $70 owed on each of the 53 open ones (the void one owes nothing).
+    const summary = InvoiceListSummarySchema.parse(first.body.summary);
+    expect(summary).toEqual({ count: COUNT, totalCents: (COUNT - 2) * 10_000 + 2 * 5_000, balanceCents: (COUNT - 2) * 7_000 });
+    const rest = await owner.get(`/api/invoices?offset=${INVOICE_PAGE.defaultLimit}`).expect(200);
+    expect(rest.body.data).toHaveLength(5);
+    expect(rest.body.summary).toEqual(summary);
+    const paid = await owner.get('/api/invoices?status=paid').expect(200);
+    expect(paid.body.summary).toEqual({ count: 1, totalCents: 5_000, balanceCents: 0 });
   });
 
   it('refuses a page past the limit or a negative offset with a sentence', async () => {

@@ -1,8 +1,8 @@
 /** Reads invoices with the names they show (client, property, proposal). */
-import type { Transaction, WhereOptions } from 'sequelize';
+import { fn, literal, type Transaction, type WhereOptions } from 'sequelize';
 import { Client, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, Property, Proposal } from '../../models';
 import { presentInvoice, presentInvoiceRow, type InvoiceNames } from '../../presenters/invoice';
-import type { InvoiceDto, InvoiceRowDto } from '../../../shared/schemas/invoice';
+import type { InvoiceDto, InvoiceListSummaryDto, InvoiceRowDto } from '../../../shared/schemas/invoice';
 import { firmToday } from '../clock';
 
 async function namesFor(invoices: readonly Invoice[], transaction?: Transaction): Promise<(i: Invoice) => InvoiceNames> {
@@ -41,4 +41,22 @@ export async function listInvoiceRows(where: WhereOptions, today: string, page?:
   const rows = (await Invoice.findAll({ where, attributes: [...ROW_ATTRIBUTES], order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: page?.limit, offset: page?.offset, raw: true })) as unknown as Invoice[];
   const names = await namesFor(rows);
   return rows.map((i) => presentInvoiceRow(i, names(i), today));
+}
+
+/**
+ * The count and money of every invoice `where` matches, in one aggregate query (not from a page):
+ * `totalCents` sums the matching invoices' totals, `balanceCents` what is still owed on the open ones
+ * (each one's total less what was paid, never below zero, as a row shows it). The count is the page's total.
+ */
+export async function summarizeInvoices(where: WhereOptions): Promise<InvoiceListSummaryDto> {
+  const [row] = (await Invoice.findAll({
+    where,
+    attributes: [
+      [fn('count', literal('*')), 'count'],
+      [literal('COALESCE(SUM("total_cents"), 0)'), 'totalCents'],
+      [literal(`COALESCE(SUM(GREATEST(0, "total_cents" - "amount_paid_cents")) FILTER (WHERE "status" = 'open'), 0)`), 'balanceCents'],
+    ],
+    raw: true,
+  })) as unknown as { count: string; totalCents: string; balanceCents: string }[];
+  return { count: Number(row?.count ?? 0), totalCents: Number(row?.totalCents ?? 0), balanceCents: Number(row?.balanceCents ?? 0) };
 }

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { formatCents } from '../../../../shared/domain/money';
 import { useInvoices } from '../../../features/invoices/api/get-invoices';
+import { LIST_PAGE } from '../../../../shared/schemas/common';
 import { InvoiceStatusChip } from '../../../features/invoices/components/invoice-status-chip';
 import { EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { paths } from '../../../config/paths';
@@ -9,7 +10,8 @@ const KIND = { deposit: 'Deposit', progress: 'Progress', final: 'Final' } as con
 
 /** The landowner's invoices as documents: those to pay first. */
 export function PortalInvoicesPage() {
-  const invoices = useInvoices();
+  // All of the landowner's own invoices (the list's usual 500, not the staff screen's page of 50).
+  const invoices = useInvoices({ limit: LIST_PAGE.defaultLimit });
   if (invoices.isPending) return <Loading label="Loading your invoices…" />;
   if (invoices.isError) return <ErrorPanel error={invoices.error} onRetry={() => void invoices.refetch()} />;
   const toPay = invoices.data.filter((i) => i.status === 'open');

@@ -41,7 +41,7 @@ export function PlanMapPage() {
   const chipsRef = useRef<HTMLDivElement>(null);
   const valid = Number.isInteger(propertyId) && propertyId > 0;
   const progress = usePropertyProgress(propertyId, valid);
-  const doneTasks = useTasks({ propertyId, status: 'done' }, colourBy === 'status' && valid);
+  const doneTasks = useTasks({ propertyId, status: 'done', limit: 500 }, colourBy === 'status' && valid);
   const data = usePlanMapData(propertyId, colourBy, { unitStatuses: progress.data?.units, doneTasks: doneTasks.data?.tasks });
   const { property, units, plan, unitList, boundary, statuses } = data;
   const { tileTemplate } = useMapSync(controller, propertyId, data, colourBy, chipsRef);

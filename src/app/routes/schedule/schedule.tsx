@@ -94,7 +94,9 @@ export function SchedulePage() {
   const filterKey = JSON.stringify(filter);
   const [more, setMore] = useState<{ key: string; pages: number }>({ key: filterKey, pages: 1 });
   const pages = more.key === filterKey ? more.pages : 1;
-  const query = pages > 1 ? { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * TASK_PAGE.defaultLimit) } : filter;
+  // The week list's page is the list's default (50); the timeline asks for a longer one explicitly.
+  const pageSize = params.view === 'timeline' ? TASK_PAGE.timelineLimit : TASK_PAGE.defaultLimit;
+  const query = { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * pageSize) };
   const tasks = useTasks(query);
   const team = useTeam();
   const properties = useProperties();
@@ -192,7 +194,7 @@ export function SchedulePage() {
               <span className="tabular-nums">
                 Showing {list.length.toLocaleString('en-US')} of {tasks.data.page.total.toLocaleString('en-US')} tasks
               </span>
-              {query.limit === undefined || query.limit < LIST_PAGE.maxLimit ? (
+              {query.limit < LIST_PAGE.maxLimit ? (
                 <Button variant="secondary" size="sm" onClick={() => setMore({ key: filterKey, pages: pages + 1 })}>
                   Show more
                 </Button>
