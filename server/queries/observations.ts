@@ -1,7 +1,7 @@
 /** Reads of field observations: placement measures in PostGIS, the filtered list, and the counts by unit or month. */
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import type { PlacementMeasures } from '../../shared/domain/observations';
+import { OBSERVATION_KIND_STYLES, type ObservationKind, type PlacementMeasures } from '../../shared/domain/observations';
 import type { ObservationListQuery } from '../../shared/schemas/observation';
 
 /**
@@ -118,4 +118,10 @@ export async function countObservations(propertyId: number, by: 'unit' | 'month'
     { bind, type: QueryTypes.SELECT },
   );
   return rows.map((r) => ({ ...r, count: Number(r.count) }));
+}
+
+/** A property's observations as the exports write them (oldest first). */
+export async function observationsForExport(propertyId: number): Promise<{ id: number; kind: string; label: string; observedAt: string; position: [number, number]; unitName: string | null; notes: string | null }[]> {
+  const { rows } = await listObservations(propertyId, {}, 'UTC');
+  return rows.map((r) => ({ id: r.id, kind: r.kind, label: OBSERVATION_KIND_STYLES[r.kind as ObservationKind]?.label ?? r.kind, observedAt: new Date(r.observed_at).toISOString(), position: [Number(r.lon), Number(r.lat)], unitName: r.unit_name, notes: r.notes }));
 }

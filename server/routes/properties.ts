@@ -27,6 +27,7 @@ import { z } from 'zod';
 import { Firm, Proposal } from '../models';
 import { renderPlanSummaryPdf } from '../../templates/documents/plan-summary';
 import { todayInZone } from '../services/clock';
+import { observationsForExport } from '../queries/observations';
 
 const r = defineRoutes('/properties');
 
@@ -151,6 +152,7 @@ r.get('/:id/export', STAFF, validate({ params: IdParamsSchema, query: ExportQuer
     propertyName: plan.property.name,
     boundary: plan.property.boundary ?? undefined,
     units: units.map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres ?? undefined, lengthFt: u.lengthFt ?? undefined, notes: u.notes ?? undefined })),
+    observations: await observationsForExport(plan.property.id),
   } as Parameters<typeof writeGeoFile>[1]);
   res.setHeader('Content-Type', file.contentType);
   res.setHeader('Content-Disposition', `attachment; filename="${file.filename}"`);
