@@ -4,6 +4,7 @@ import { useMyTasks } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { TaskCard } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
+import { LogSignLauncher } from '../../../features/observations/components/log-sign-launcher';
 import { CalendarFeedsCard } from '../../../features/field/components/calendar-feeds-card';
 import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
@@ -84,6 +85,7 @@ export function FieldHomePage() {
       </div>
       <OfflineNotice updatedAt={tasks.dataUpdatedAt || home.dataUpdatedAt} refreshFailed={tasks.isRefetchError || home.isRefetchError} />
       <QueueNotice />
+      <LogSignLauncher userId={me.data.id} properties={[...new Map((tasks.data?.tasks ?? []).map((t) => [t.propertyId, { id: t.propertyId, name: t.propertyName }])).values()]} />
       <TaskBuckets me={me.data} />
       <Card title="Who to call">
         <ul className="flex flex-col gap-3">

@@ -24,6 +24,7 @@ import { useUpdatePropertyBoundary } from '../../../features/plan-map/api/update
 import { fetchImportGeometries, useImportFile, type ImportPreviewDto } from '../../../features/plan-map/api/import-file';
 import { usePlanUndo } from '../../../features/plan-map/hooks/use-plan-undo';
 import { PlanMapCanvas } from '../../../features/plan-map/components/plan-map-canvas';
+import { ObservationsLayer } from '../../../features/observations/components/observations-layer';
 import { PlaceSearch } from '../../../features/plan-map/components/place-search';
 import { DrawChips } from '../../../features/plan-map/components/draw-chips';
 import { PlanLedger } from '../../../features/plan-map/components/plan-ledger';
@@ -543,6 +544,7 @@ export function PlanMapPage() {
       <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
         <div className="relative min-h-[22rem] min-w-0 flex-1">
           <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
+          <ObservationsLayer map={controller?.map ?? null} propertyId={propertyId} />
           <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
             <div className="pointer-events-auto relative z-20 max-w-full">
               <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
