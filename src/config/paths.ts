@@ -33,6 +33,7 @@ export const paths = {
   propertyResults: (id: number | string = ':id') => `/properties/${id}/results`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
+  fieldLog: '/field/log',
   portal: '/portal',
   portalProposals: '/portal/proposals',
   portalResults: '/portal/results',

@@ -4,7 +4,8 @@ import { useMyTasks } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { TaskCard } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
-import { LogSignLauncher } from '../../../features/observations/components/log-sign-launcher';
+import { Link } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { CalendarFeedsCard } from '../../../features/field/components/calendar-feeds-card';
 import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
@@ -85,7 +86,9 @@ export function FieldHomePage() {
       </div>
       <OfflineNotice updatedAt={tasks.dataUpdatedAt || home.dataUpdatedAt} refreshFailed={tasks.isRefetchError || home.isRefetchError} />
       <QueueNotice />
-      <LogSignLauncher userId={me.data.id} properties={[...new Map((tasks.data?.tasks ?? []).map((t) => [t.propertyId, { id: t.propertyId, name: t.propertyName }])).values()]} />
+      <Link to={paths.fieldLog} className="rounded-md border border-moss bg-card px-4 py-3 text-center font-semibold text-moss-deep">
+        Log sign
+      </Link>
       <TaskBuckets me={me.data} />
       <Card title="Who to call">
         <ul className="flex flex-col gap-3">

@@ -12,9 +12,9 @@ import { OBSERVATION_KIND_STYLES } from '../../../../shared/domain/observations'
 
 const LogSignForm = lazy(() => import('./log-sign-form'));
 
-export function LogSignLauncher({ userId, properties, defaultPropertyId, mapPosition, onOpenChange }: { userId: number; properties: { id: number; name: string }[]; defaultPropertyId?: number; mapPosition?: { lon: number; lat: number } | null; onOpenChange?: (open: boolean) => void }) {
+export function LogSignLauncher({ userId, properties, defaultPropertyId, mapPosition, onOpenChange, startOpen = false }: { userId: number; properties: { id: number; name: string }[]; defaultPropertyId?: number; mapPosition?: { lon: number; lat: number } | null; onOpenChange?: (open: boolean) => void; startOpen?: boolean }) {
   const queue = useObservationQueue(userId);
-  const [open, setOpen] = useState(false);
+  const [open, setOpen] = useState(startOpen);
   const [note, setNote] = useState<string | null>(null);
   const toggle = (next: boolean) => {
     setOpen(next);
