@@ -230,3 +230,16 @@ describe('who may log and see', () => {
     expect((await log(stranger, { kind: 'rub', lon: '-90.937', lat: '43.266', positionSource: 'device' })).status).toBe(404);
   });
 });
+
+describe('the demo', () => {
+  it('seeds a few dozen observations of many kinds and months on Kettle Hollow Farm, each in a unit, once', async () => {
+    const { seedDemo } = await import('../../server/db/seeds/demo');
+    const firm = await seedDemo();
+    await seedDemo();
+    const rows = await Observation.findAll({ where: { firmId: firm.id } });
+    expect(rows.length).toBe(38);
+    expect(new Set(rows.map((r) => r.kind)).size).toBeGreaterThanOrEqual(10);
+    expect(new Set(rows.map((r) => r.observedAt.toISOString().slice(0, 7))).size).toBeGreaterThanOrEqual(8);
+    expect(rows.every((r) => r.unitId !== null)).toBe(true);
+  });
+});
