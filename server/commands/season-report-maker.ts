@@ -10,7 +10,7 @@ import { sequelize } from '../db/sequelize';
 import { findInFirm } from '../policies/firm-scope';
 import { conflict, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { firmToday } from '../services/clock';
+import { firmToday, usableZone } from '../services/clock';
 import { enqueueEmail } from '../services/mail/outbox';
 import { deleteFile, readFile, saveFile } from '../services/storage/storage';
 import { readSeasonSummary } from '../services/results/results-reader';
@@ -24,6 +24,9 @@ import { config } from '../config';
 import { logger } from '../logger';
 import { clientRecipients } from '../services/mail/client-recipients';
 import { enqueueJob, type JobContext } from '../services/jobs/job-queue';
+import { countObservations } from '../queries/observations';
+import { kindLabel, presentObservationSummary } from '../presenters/observation';
+import type { SeasonReportObservations } from '../../templates/documents/season-report';
 
 /** Photos larger than this are left out of the PDF (a report should stay small enough to e-mail). */
 const MAX_PHOTO_BYTES = 4 * 1024 * 1024;
@@ -43,6 +46,21 @@ async function photoDataUrls(photos: readonly TaskPhoto[], captions: ReadonlyMap
     }
   }
   return out;
+}
+
+/** The season's field observations counted by kind, unit and month. */
+async function seasonObservations(propertyId: number, from: string, to: string, zone: string): Promise<SeasonReportObservations> {
+  const [units, months] = await Promise.all([countObservations(propertyId, 'unit', { from, to }, zone), countObservations(propertyId, 'month', { from, to }, zone)]);
+  const byUnit = presentObservationSummary('unit', units);
+  const byMonth = presentObservationSummary('month', months);
+  const kinds = new Map<string, number>();
+  for (const c of units) kinds.set(c.kind, (kinds.get(c.kind) ?? 0) + c.count);
+  return {
+    total: byUnit.total,
+    byKind: [...kinds.entries()].sort((a, b) => b[1] - a[1]).map(([k, count]) => ({ label: kindLabel(k), count })),
+    byUnit: byUnit.rows.map((r) => ({ label: r.label, count: r.total })),
+    byMonth: byMonth.rows.map((r) => ({ label: r.label, count: r.total })),
+  };
 }
 
 /** The document input for one property and season. */
@@ -67,6 +85,7 @@ export async function seasonReportInput(property: Property, season: number, reco
     harvestTrend: summary.harvestTrend,
     recommendations,
     cautions: [CAUTIONS['deer-scent-baiting']],
+    observations: await seasonObservations(property.id, range.startsOn, range.endsOn, usableZone(firm?.timezone)),
   };
 }
 

@@ -17,6 +17,7 @@ import { SharedFile } from './shared-file';
 import { Invoice, InvoiceLine, InvoicePayment, InvoiceRefund } from './invoice';
 import { CameraSurvey, HarvestRecord, SeasonReport } from './results';
 import { Buck, Camera, CameraDeployment, CameraPhoto, CardPull } from './camera';
+import { Observation, ObservationPhoto } from './observation';
 
 Firm.hasMany(User, { foreignKey: 'firmId' });
 User.belongsTo(Firm, { foreignKey: 'firmId' });
@@ -41,9 +42,11 @@ Invoice.hasMany(InvoiceLine, { foreignKey: 'invoiceId', as: 'lines' });
 Invoice.hasMany(InvoicePayment, { foreignKey: 'invoiceId', as: 'payments' });
 
 SeasonReport.belongsTo(SharedFile, { foreignKey: 'sharedFileId', as: 'file' });
+Observation.hasMany(ObservationPhoto, { foreignKey: 'observationId', as: 'photos' });
 
 export { Buck, Camera, CameraDeployment, CameraPhoto, CardPull };
 export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport, BackgroundJob };
+export { Observation, ObservationPhoto };
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

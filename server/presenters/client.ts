@@ -11,6 +11,7 @@ export function presentClient(client: Client, stats: { propertyCount: number; to
     address: client.address,
     notes: client.notes,
     portalUploadsAllowed: client.portalUploadsAllowed,
+    portalObservationsAllowed: client.portalObservationsAllowed,
     propertyCount: stats.propertyCount,
     totalAcres: Math.round(stats.totalAcres * 100) / 100,
     createdAt: client.createdAt.toISOString(),

@@ -4,6 +4,7 @@ import { DEFAULT_IDLE_TIMEOUT_HOURS, type HomeArea } from '../../shared/schemas/
 import { usableZone } from '../../shared/domain/clock';
 import { firmDefaults } from '../../shared/domain/firm-defaults';
 import { largeAreaThreshold } from '../../shared/domain/large-area';
+import { observationSnapFt } from '../../shared/domain/observations';
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
@@ -15,7 +16,7 @@ export function presentFirm(firm: Firm): FirmDto {
     phone: firm.phone,
     region: firm.region,
     timezone: usableZone(firm.timezone),
-    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, homeArea: s.homeArea ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS },
+    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, homeArea: s.homeArea ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS, observationSnapFt: observationSnapFt(firm.settings) },
     address: firm.address,
     website: firm.website ?? null,
     licenceNumbers: firm.licenceNumbers ?? null,

@@ -31,6 +31,7 @@ import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 import { cameraRouters } from './cameras';
 import { searchRouter } from './search';
 import { firmExportsRouter } from './firm-exports';
+import { observationPhotosRouter, propertyObservationsRouter } from './observations';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -81,4 +82,6 @@ export const apiRouters: { path: string; router: Router }[] = [
   ...cameraRouters,
   { path: '/search', router: searchRouter },
   { path: '/firm-exports', router: firmExportsRouter },
+  { path: '/properties', router: propertyObservationsRouter },
+  { path: '/observation-photos', router: observationPhotosRouter },
 ];

@@ -29,6 +29,7 @@ import { renderPlanSummaryPdf } from '../services/documents/render-documents';
 import { todayInZone } from '../services/clock';
 import { documentFirm } from '../services/firm-profile';
 import { letterheadFirm } from '../services/documents/firm-letterhead';
+import { observationsForExport } from '../queries/observations';
 
 const r = defineRoutes('/properties');
 
@@ -153,6 +154,7 @@ r.get('/:id/export', STAFF, validate({ params: IdParamsSchema, query: ExportQuer
     propertyName: plan.property.name,
     boundary: plan.property.boundary ?? undefined,
     units: units.map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: u.geometry, acres: u.acres ?? undefined, lengthFt: u.lengthFt ?? undefined, notes: u.notes ?? undefined })),
+    observations: await observationsForExport(plan.property.id),
   } as Parameters<typeof writeGeoFile>[1]);
   res.setHeader('Content-Type', file.contentType);
   res.setHeader('Content-Disposition', `attachment; filename="${file.filename}"`);

@@ -16,6 +16,8 @@ export type ClientCreateInput = z.infer<typeof ClientCreateSchema>;
 export const ClientUpdateSchema = ClientCreateSchema.partial().extend({
   /** Whether the client's contacts may upload their own files in the portal. */
   portalUploadsAllowed: z.boolean().optional(),
+  /** Whether the client's contacts may log field observations on their own land in the portal. */
+  portalObservationsAllowed: z.boolean().optional(),
 });
 export type ClientUpdateInput = z.infer<typeof ClientUpdateSchema>;
 
@@ -27,6 +29,7 @@ export const ClientSchema = z.object({
   address: z.string().nullable(),
   notes: z.string().nullable(),
   portalUploadsAllowed: z.boolean(),
+  portalObservationsAllowed: z.boolean(),
   propertyCount: z.number().int(),
   totalAcres: z.number(),
   createdAt: z.string(),

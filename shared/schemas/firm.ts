@@ -38,6 +38,8 @@ export const FirmSettingsUpdateSchema = z.object({
   timezone: z.string().trim().refine(isTimeZone, { message: 'choose a time zone from the list, such as America/Chicago' }).optional(),
   /** Property size, acres, above which saving a boundary asks for a confirmation (default 20,000). */
   largeAreaAcres: z.number({ message: 'enter the acreage above which a boundary needs confirming' }).min(1).max(10_000_000).optional(),
+  /** Feet outside every unit within which an observation still goes to the nearest unit (default 50). */
+  observationSnapFt: z.number({ message: 'enter the distance in feet' }).min(0).max(5280, { message: 'must be at most 5,280 ft (a mile)' }).optional(),
   /** Hours without any request after which a session ends (besides the 14-day limit from sign-in). */
   idleTimeoutHours: z.number({ message: 'give the idle time in hours' }).min(0.25, { message: 'must be at least a quarter of an hour' }).max(168, { message: 'must be at most 168 hours (a week)' }).optional(),
   /** Days after the last card pull (or the day a camera was set) when its card is due (default 21). */
@@ -110,7 +112,7 @@ export const FirmSchema = z.object({
   region: z.string(),
   /** IANA time zone: the firm's "today" and the times on its documents. */
   timezone: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), homeArea: HomeAreaSchema.nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), homeArea: HomeAreaSchema.nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number(), observationSnapFt: z.number() }),
   address: z.string().nullable(),
   website: z.string().nullable(),
   licenceNumbers: z.string().nullable(),

@@ -18,7 +18,7 @@ export const PortalPropertyRowSchema = z.object({
 export type PortalPropertyRow = z.infer<typeof PortalPropertyRowSchema>;
 
 export const PortalPropertiesSchema = z.object({
-  client: z.object({ id: z.number().int(), name: z.string(), portalUploadsAllowed: z.boolean() }),
+  client: z.object({ id: z.number().int(), name: z.string(), portalUploadsAllowed: z.boolean(), portalObservationsAllowed: z.boolean().optional() }),
   firm: z.object({ name: z.string(), email: z.string().nullable(), phone: z.string().nullable() }),
   properties: z.array(PortalPropertyRowSchema),
 });

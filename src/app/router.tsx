@@ -101,6 +101,7 @@ const routes: RouteObject[] = [
           children: [
             { path: paths.field, loader: fieldHomeLoader, ...page(() => import('./routes/field/field-home'), (m) => m.FieldHomePage) },
             { path: paths.fieldTask(), loader: fieldTaskLoader, ...page(() => import('./routes/field/field-task'), (m) => m.FieldTaskPage) },
+            { path: paths.fieldLog, ...page(() => import('./routes/observations/field-log'), (m) => m.FieldLogPage) },
           ],
         },
       ],

@@ -40,6 +40,7 @@ export const paths = {
   propertyCameras: (id: number | string = ':id') => `/properties/${id}/cameras`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
+  fieldLog: '/field/log',
   portal: '/portal',
   portalProposals: '/portal/proposals',
   portalResults: '/portal/results',

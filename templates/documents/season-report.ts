@@ -52,6 +52,16 @@ export interface SeasonReportDocumentInput {
   harvestTrend: SeasonSummary[];
   recommendations: string | null;
   cautions: Caution[];
+  /** Field observations logged in the season: counts by kind and by unit (omitted: no section). */
+  observations?: SeasonReportObservations;
+}
+
+/** What the season report says about field observations. */
+export interface SeasonReportObservations {
+  total: number;
+  byKind: { label: string; count: number }[];
+  byUnit: { label: string; count: number }[];
+  byMonth: { label: string; count: number }[];
 }
 
 const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
@@ -224,6 +234,36 @@ function harvestSection(input: SeasonReportDocumentInput): Content[] {
   return out;
 }
 
+function observationsSection(input: SeasonReportDocumentInput): Content[] {
+  const o = input.observations;
+  if (!o) return [];
+  const out: Content[] = [{ text: 'Sign on the ground', style: 'h2' }];
+  if (o.total === 0) {
+    out.push({ text: 'No field observations were logged this season.', style: 'muted' });
+    return out;
+  }
+  out.push({ text: `${o.total} ${o.total === 1 ? 'observation was' : 'observations were'} logged on the property this season.`, margin: [0, 0, 0, 4] });
+  if (o.byMonth.length > 1) {
+    out.push(
+      chart(
+        barChartSvg({
+          title: 'Observations by month',
+          categories: o.byMonth.map((m) => m.label),
+          series: [{ label: 'Observations', color: BUCK_COLOR, values: o.byMonth.map((m) => m.count) }],
+          widthPt: CONTENT_WIDTH_PT,
+          heightPt: 130,
+          axisLabel: 'observations',
+          wholeTicks: true,
+        }),
+        130,
+      ),
+    );
+  }
+  out.push(table(['Kind of sign', 'Count'], o.byKind.map((k) => [k.label, `${k.count}`]), ['*', 60], [1]));
+  out.push(table(['Unit', 'Count'], o.byUnit.map((u) => [u.label, `${u.count}`]), ['*', 60], [1]));
+  return out;
+}
+
 /** The season report's document definition; throws DomainValidationError naming the field on bad input. */
 export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumentDefinitions {
   const preparedOn = formatReportDate(input.preparedOn, 'preparedOn');
@@ -245,6 +285,7 @@ export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumen
     ...workSection(input),
     ...surveySection(input),
     ...harvestSection(input),
+    ...observationsSection(input),
     { text: 'Recommendations for next season', style: 'h2' },
     ...(recommendations
       ? recommendations.split(/\n\s*\n/).map((p) => ({ text: p.trim(), margin: [0, 0, 0, 6] }) as Content)

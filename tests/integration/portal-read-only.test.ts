@@ -1,7 +1,7 @@
 /**
  * The portal is read-only, proven over every registered route: a signed-in client with a valid CSRF
  * token is refused every write except the few it owns (deciding its sent proposals, paying its
- * invoices, uploading where allowed, and its own session/password). The routes are enumerated at run
+ * invoices, uploading and logging field observations where allowed, and its own session/password). The routes are enumerated at run
  * time from the registry, so routes other branches add are covered without editing this file.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -14,6 +14,7 @@ const CLIENT_WRITES: { pattern: RegExp; why: string }[] = [
   { pattern: /^post \/proposals\/:id\/(approve|decline)$/, why: 'decide its own sent proposal' },
   { pattern: /^post \/invoices\/:id\/(checkout|pay)$/, why: 'pay its own invoice' },
   { pattern: /^post \/files$/, why: 'upload a file when its consultant allows it' },
+  { pattern: /^post \/properties\/:id\/observations$/, why: 'log a field observation on its own land when its consultant allows it' },
   { pattern: /^(post|put|patch) \/auth\/(logout|password.*|me.*)$/, why: 'its own session and password' },
 ];
 /** Public routes are nobody's writes: each is guarded by its own token, signature or credentials (sign-up by its rate limit and e-mail confirmation). */
@@ -46,7 +47,7 @@ describe('the client role is read-only', () => {
     const unexpected = clientWrites.filter((k) => !CLIENT_WRITES.some((a) => a.pattern.test(k)));
     expect(unexpected, `client-reachable writes missing from the allow-list: ${unexpected.join(', ')}`).toEqual([]);
     // The allow-list is not stale: the proposal decisions and the upload exist today.
-    expect(clientWrites).toEqual(expect.arrayContaining(['post /proposals/:id/approve', 'post /proposals/:id/decline', 'post /files']));
+    expect(clientWrites).toEqual(expect.arrayContaining(['post /proposals/:id/approve', 'post /proposals/:id/decline', 'post /files', 'post /properties/:id/observations']));
   });
 
   it('refuses every other write with a 4xx and a sentence, never a 2xx or a 500', async () => {

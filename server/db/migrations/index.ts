@@ -16,6 +16,7 @@ import * as m0024 from './0024-geo-imports';
 import * as m0026 from './0026-firm-profile';
 import * as m0027 from './0027-signup';
 import * as m0035 from './0035-overlay-visibility';
+import * as m0040 from './0040-observations';
 import * as m0050 from './0050-camera-fleet';
 import * as m0060 from './0060-unit-checks';
 import * as m0061 from './0061-soil-tests';
@@ -42,6 +43,7 @@ export const migrations = [
   { name: '0026-firm-profile', ...m0026 },
   { name: '0027-signup', ...m0027 },
   { name: '0035-overlay-visibility', ...m0035 },
+  { name: '0040-observations', ...m0040 },
   { name: '0050-camera-fleet', ...m0050 },
   { name: '0060-unit-checks', ...m0060 },
   { name: '0061-soil-tests', ...m0061 },

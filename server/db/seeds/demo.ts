@@ -9,6 +9,7 @@ import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
 import { seedDemoInvoices } from './demo-invoices';
 import { seedDemoResults } from './demo-results';
 import { seedDemoMap } from './demo-map';
+import { seedDemoObservations } from './demo-observations';
 
 /** Creates whatever part of the demo is missing; answers the firm. */
 export async function seedDemo(): Promise<Firm> {
@@ -58,6 +59,7 @@ export async function seedDemo(): Promise<Firm> {
     await seedDemoInvoices(firm, transaction);
     await seedDemoResults(firm, transaction);
     await seedDemoMap(firm, transaction);
+    await seedDemoObservations(firm, transaction);
     return firm;
   });
 }

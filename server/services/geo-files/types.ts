@@ -65,10 +65,25 @@ export interface ExportUnit {
   notes?: string | null;
 }
 
+/** A field observation in an export: a point with its kind and time. */
+export interface ExportObservation {
+  id: number;
+  kind: string;
+  /** The kind's label ("Scrape"). */
+  label: string;
+  /** ISO instant. */
+  observedAt: string;
+  position: [number, number];
+  unitName?: string | null;
+  notes?: string | null;
+}
+
 export interface PlanExport {
   propertyName: string;
   boundary?: AreaGeometry | null;
   units: ExportUnit[];
+  /** Field observations, written after the units (family "observation"). */
+  observations?: ExportObservation[];
 }
 
 export interface GeoFileOutput {

@@ -5,7 +5,7 @@ import { kindFamily } from '../../../shared/domain/unit-kinds';
 import { formatCoordinate } from './export-helpers';
 import type { ExportUnit, PlanExport } from './types';
 
-export const CSV_COLUMNS = ['id', 'name', 'kind', 'family', 'acres', 'lengthFt', 'centroidLat', 'centroidLon', 'notes'] as const;
+export const CSV_COLUMNS = ['id', 'name', 'kind', 'family', 'acres', 'lengthFt', 'centroidLat', 'centroidLon', 'notes', 'observedAt'] as const;
 
 /**
  * A text cell that a spreadsheet would run as a formula (starting with = + - @, tab or carriage
@@ -74,7 +74,7 @@ export function unitCentroid(unit: ExportUnit): [number, number] {
 const fixed = (value: number | null | undefined, decimals: number): string =>
   typeof value === 'number' && Number.isFinite(value) ? value.toFixed(decimals) : '';
 
-/** The units as CSV text: a header row, CRLF line ends, a UTF-8 byte-order mark for spreadsheets. */
+/** The units (then any observations) as CSV text: a header row, CRLF line ends, a UTF-8 byte-order mark for spreadsheets. */
 export function writeCsv(plan: PlanExport): string {
   const rows = [CSV_COLUMNS.join(',')];
   for (const unit of plan.units) {
@@ -91,8 +91,14 @@ export function writeCsv(plan: PlanExport): string {
         formatCoordinate(lat),
         formatCoordinate(lon),
         text(unit.notes ?? ''),
+        '',
       ].join(','),
     );
+  }
+  // Observations: one row each, family "observation", the position in the centroid columns.
+  for (const o of plan.observations ?? []) {
+    const text = (value: string) => csvField(guardFormula(value));
+    rows.push([text(`observation-${o.id}`), text(o.label), text(o.kind), 'observation', '', '', formatCoordinate(o.position[1]), formatCoordinate(o.position[0]), text(o.notes ?? ''), o.observedAt].join(','));
   }
   return `\uFEFF${rows.join('\r\n')}\r\n`;
 }

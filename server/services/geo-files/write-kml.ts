@@ -8,6 +8,8 @@ export const KML_NAMESPACE = 'http://www.opengis.net/kml/2.2';
 
 /** Boundary outline colour: our "ink" token (DESIGN.md). */
 const BOUNDARY_STROKE = '#1F2A24';
+/** Observation pins: a warm brown of the observation palette (shared/domain/observations.ts). */
+const OBSERVATION_COLOUR = '#8A5A2B';
 
 /** A #RRGGBB colour and an opacity as a KML colour, which is aabbggrr (KML 2.2 reference, <color>). */
 export function kmlColor(hex: string, opacity = 1): string {
@@ -91,6 +93,17 @@ export function writeKml(plan: PlanExport): string {
   for (const kind of kinds) {
     const units = plan.units.filter((u) => u.kind === kind);
     parts.push(`<Folder><name>${escapeXml(KIND_STYLES[kind].label)}</name>${units.map(placemark).join('\n')}</Folder>`);
+  }
+  const observations = plan.observations ?? [];
+  if (observations.length) {
+    parts.push(`<Style id="observation"><IconStyle><color>${kmlColor(OBSERVATION_COLOUR)}</color><scale>0.8</scale></IconStyle></Style>`);
+    const marks = observations.map(
+      (o) =>
+        `<Placemark><name>${escapeXml(o.label)}</name>${o.notes ? `<description>${escapeXml(o.notes)}</description>` : ''}<TimeStamp><when>${escapeXml(o.observedAt)}</when></TimeStamp>` +
+        `<styleUrl>#observation</styleUrl><ExtendedData>${data('id', o.id)}${data('kind', o.kind)}${o.unitName ? data('unit', o.unitName) : ''}</ExtendedData>` +
+        `<Point><coordinates>${coordinates([o.position])}</coordinates></Point></Placemark>`,
+    );
+    parts.push(`<Folder><name>Observations</name>${marks.join('\n')}</Folder>`);
   }
   parts.push('</Document>', '</kml>', '');
   return parts.join('\n');

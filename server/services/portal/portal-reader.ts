@@ -47,7 +47,7 @@ export async function readPortalProperties(scope: PortalScope): Promise<PortalPr
     Task.findAll({ where: { propertyId: ids.length ? ids : [0], firmId: scope.firmId }, attributes: ['propertyId', 'status', 'costCents', 'unitId'] }),
   ]);
   return {
-    client: { id: client.id, name: client.name, portalUploadsAllowed: client.portalUploadsAllowed },
+    client: { id: client.id, name: client.name, portalUploadsAllowed: client.portalUploadsAllowed, portalObservationsAllowed: client.portalObservationsAllowed },
     firm: { name: firm?.name ?? '', email: firm?.email ?? null, phone: firm?.phone ?? null },
     properties: properties.map((p) => {
       const own = tasks.filter((t) => t.propertyId === p.id);

@@ -190,7 +190,7 @@ describe('writeGeoFile and readGeoFile round trips', () => {
   it('CSV parses back (RFC 4180) to one row per unit with kinds and centroids', () => {
     const out = writeGeoFile('csv', PLAN);
     const rows = parseCsv(String(out.body).replace(/^\uFEFF/, ''));
-    expect(rows[0]).toEqual(['id', 'name', 'kind', 'family', 'acres', 'lengthFt', 'centroidLat', 'centroidLon', 'notes']);
+    expect(rows[0]).toEqual(['id', 'name', 'kind', 'family', 'acres', 'lengthFt', 'centroidLat', 'centroidLon', 'notes', 'observedAt']);
     expect(rows).toHaveLength(UNITS.length + 1);
     const row = (id: string) => {
       const r = rows.find((x) => x[0] === id);

@@ -41,4 +41,22 @@ describe('the season report says what there is', () => {
     expect(establishedText(0, [], 2)).toBe('2 tasks were finished this season; no unit has all of its work finished yet, so no acres are counted as established.');
     expect(establishedText(2.37, [{ name: 'Hollow plot', acresText: '2.37 acres' }], 2)).toBe('established this season: Hollow plot (2.37 acres).');
   });
+
+  it('prints a section on field observations: the total, by kind, by unit, and a chart by month', async () => {
+    const input: SeasonReportDocumentInput = {
+      ...onlyAHarvest(),
+      observations: {
+        total: 5,
+        byKind: [{ label: 'Scrape', count: 3 }, { label: 'Rub', count: 2 }],
+        byUnit: [{ label: 'Ridge plot', count: 4 }, { label: 'Outside every unit', count: 1 }],
+        byMonth: [{ label: 'Oct 2025', count: 2 }, { label: 'Nov 2025', count: 3 }],
+      },
+    };
+    const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: await renderSeasonReportPdf(input) }).toString();
+    expect(text).toContain('Sign on the ground');
+    expect(text).toContain('5 observations were logged on the property this season.');
+    expect(text).toMatch(/Scrape\s+3/);
+    expect(text).toMatch(/Ridge plot\s+4/);
+    expect(text).toContain('Observations by month');
+  });
 });

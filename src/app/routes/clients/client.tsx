@@ -18,6 +18,7 @@ import { MissingRecord } from '../../../components/ui/missing-record';
 import { parseId } from '../../../lib/route-params';
 import { ClientFiles } from '../../../features/files/components/client-files';
 import { PortalUploadsToggle } from '../../../features/clients/components/portal-uploads-toggle';
+import { PortalObservationsToggle } from '../../../features/clients/components/portal-observations-toggle';
 import { buttonClasses } from '../../../components/ui/button';
 
 const PROPERTY_COLUMNS: DataColumn<PropertyDto>[] = [
@@ -172,7 +173,7 @@ export function ClientPage() {
           <ClientContacts clientId={c.id} clientName={c.name} />
         </Card>
       </div>
-      <Card title="Files" action={<PortalUploadsToggle client={c} />}>
+      <Card title="Files" action={<div className="flex flex-col gap-1"><PortalUploadsToggle client={c} /><PortalObservationsToggle client={c} /></div>}>
         <ClientFilesWithProperties clientId={c.id} />
       </Card>
     </div>

@@ -5,6 +5,8 @@ import { useMyTasks } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { TaskCard } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
+import { Link } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { BUCKETS } from '../../../features/field/lib/task-text';
 import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { Card, CautionBox, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
@@ -90,6 +92,9 @@ export function FieldHomePage() {
       </div>
       <OfflineNotice updatedAt={tasks.dataUpdatedAt || home.dataUpdatedAt} refreshFailed={tasks.isRefetchError || home.isRefetchError} />
       <QueueNotice />
+      <Link to={paths.fieldLog} className="rounded-md border border-moss bg-card px-4 py-3 text-center font-semibold text-moss-deep">
+        Log sign
+      </Link>
       <TaskBuckets me={me.data} />
       <Suspense fallback={null}>
         <DuePullsCard />

@@ -13,6 +13,20 @@ import { formatAcres } from '../../../lib/format';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
 import { PortalBuckPhotos } from '../../../features/cameras/components/portal-buck-photos';
+import { PortalObservations } from '../../../features/observations/components/portal-observations';
+import { usePortalProperty } from '../../../features/portal/api/get-portal-property';
+import { usePortalProperties } from '../../../features/portal/api/get-portal-properties';
+import { useMe } from '../../../features/auth/api/get-me';
+import type { MultiPolygon, Polygon } from 'geojson';
+
+/** The observation map on the client's Results; "Log sign" when the consultant turned it on for this client. */
+function PortalResultsObservations({ propertyId, propertyName }: { propertyId: number; propertyName: string }) {
+  const home = usePortalProperties();
+  const me = useMe();
+  const detail = usePortalProperty(propertyId);
+  const canLog = me.data?.role === 'client' && Boolean(home.data?.client.portalObservationsAllowed);
+  return <PortalObservations propertyId={propertyId} propertyName={propertyName} boundary={(detail.data?.property.boundary ?? null) as Polygon | MultiPolygon | null} logAs={canLog ? me.data?.id : null} />;
+}
 
 /** The landowner's choice of property for results (one property goes straight to its results). */
 export function PortalResultsPage() {
@@ -85,6 +99,7 @@ export function PortalPropertyResultsPage() {
           </Card>
         ) : null}
       </section>
+      <PortalResultsObservations propertyId={r.property.id} propertyName={r.property.name} />
       <section aria-labelledby="portal-harvest" className="flex flex-col gap-3">
         <h2 id="portal-harvest" className="text-lg font-bold">
           Harvest

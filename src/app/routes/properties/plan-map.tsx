@@ -29,6 +29,7 @@ import type { PlanMapCallbacks, PlanMapController } from '../../../features/plan
 import type { ColourBy } from '../../../features/plan-map/lib/plan-layers';
 import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
 import { useTasks } from '../../../features/schedule/api/get-tasks';
+import { ObservationsLayer } from '../../../features/observations/components/observations-layer';
 import { PlotStatusPanel } from '../../../features/checks/components/plot-status-panel';
 
 /** The plan map: the consultant's drafting table for one property. */
@@ -107,7 +108,10 @@ export function PlanMapPage() {
               <div className="pointer-events-auto">
                 <OverlayPanel overlays={data.overlays.data ?? []} uploading={photos.progress} onUpload={photos.onUpload} onPreview={photos.onPreview} onChange={photos.onChange} onDelete={photos.onDelete} />
               </div>
-              <PlanMapLayers>{/* More map layers go here, one element each (see DEVELOPERS.md). */}</PlanMapLayers>
+              <PlanMapLayers>
+                {/* More map layers go here, one element each (see DEVELOPERS.md). */}
+                <ObservationsLayer map={controller?.map ?? null} propertyId={propertyId} />
+              </PlanMapLayers>
               <div className="pointer-events-auto">
                 <MapLegend kinds={data.legendKinds} hasBoundary={!!boundary} byStatus={colourBy === 'status'} />
               </div>

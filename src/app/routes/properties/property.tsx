@@ -7,6 +7,8 @@ import { EditPropertyForm, regionLabel } from '../../../features/properties/comp
 import { BoundaryPreview } from '../../../features/properties/components/boundary-preview';
 import { PropertyProposalsCard } from '../../../features/proposals/components/property-proposals-card';
 import { ProgressCard } from '../../../features/schedule/components/progress-card';
+import { ObservationsCard } from '../../../features/observations/components/observations-card';
+import { useMe } from '../../../features/auth/api/get-me';
 import { useClients } from '../../../features/clients/api/get-clients';
 import { Card, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -18,6 +20,13 @@ import { ApiError } from '../../../lib/api-client';
 import { formatAcres, formatDate, formatFeet, formatHectares, formatNumber } from '../../../lib/format';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
+
+/** Field observations of the property, logged under the signed-in person. */
+function PropertyObservations({ property }: { property: PropertyDto }) {
+  const me = useMe();
+  if (!me.data) return null;
+  return <ObservationsCard userId={me.data.id} propertyId={property.id} propertyName={property.name} boundary={property.boundary} />;
+}
 
 function Figure({ label, value, big = false }: { label: string; value: string; big?: boolean }) {
   return (
@@ -137,6 +146,8 @@ export function PropertyPage() {
       <PropertyProposalsCard propertyId={p.id} propertyName={p.name} />
 
       <ProgressCard propertyId={p.id} />
+
+      <PropertyObservations property={p} />
 
       <ConfirmDialog
         open={confirming}

@@ -1,0 +1,113 @@
+/** Field observations: log (multipart, idempotent), list, counts by unit or month, and their photos. */
+import type { Request } from 'express';
+import { defineRoutes } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { arrayUpload } from '../middlewares/upload';
+import { Firm, Observation, ObservationPhoto, Property } from '../models';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
+import { ObservationCreateSchema, ObservationListQuerySchema, ObservationSummaryQuerySchema, type ObservationListQuery, type ObservationSummaryQuery } from '../../shared/schemas/observation';
+import { PHOTO_LIMITS } from '../../shared/limits';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { logObservation, propertyForObservations, propertyToLogOn } from '../commands/observation-logger';
+import { countObservations, listObservations } from '../queries/observations';
+import { presentObservation, presentObservationSummary } from '../presenters/observation';
+import { inspectPhoto } from '../services/photos';
+import { usableZone } from '../services/clock';
+import { sendStoredFile } from '../services/storage/storage';
+import { badRequest, notFound, unprocessable } from '../errors';
+
+const perProperty = defineRoutes('/properties');
+const photos = defineRoutes('/observation-photos');
+/** Who logs: staff and crew; a client's contacts where the consultant allowed it (checked in the command). */
+const LOGGERS = ['owner', 'consultant', 'crew', 'client'] as const;
+const READERS = ['owner', 'consultant', 'crew', 'client'] as const;
+
+function idempotencyKey(req: Request): string {
+  const raw = req.get(IDEMPOTENCY_HEADER);
+  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per observation, reused when the same observation is sent again.`);
+  const parsed = IdempotencyKeySchema.safeParse(raw);
+  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
+  return parsed.data;
+}
+
+async function zoneOf(firmId: number): Promise<string> {
+  const firm = await Firm.findByPk(firmId, { attributes: ['timezone'] });
+  return usableZone(firm?.timezone);
+}
+
+async function answer(propertyId: number, id: number, zone: string) {
+  const { rows, photos: list } = await listObservations(propertyId, {}, zone, [id]);
+  if (!rows[0]) throw notFound('That observation');
+  return presentObservation(rows[0], list);
+}
+
+perProperty.post(
+  '/:id/observations',
+  LOGGERS,
+  validate({ params: IdParamsSchema }),
+  async (req, _res, next) => {
+    // Refuse before reading any file: no key, someone else's property, or logging not allowed stores nothing.
+    idempotencyKey(req);
+    await propertyToLogOn(actor(req), Number(req.params.id));
+    next();
+  },
+  arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perObservation, 'photo'),
+  validate({ body: ObservationCreateSchema }),
+  async (req, res) => {
+    const me = actor(req);
+    const propertyId = Number(req.params.id);
+    const files = (req.files as Express.Multer.File[] | undefined) ?? [];
+    const inspected = [];
+    for (const file of files) inspected.push(await inspectPhoto({ bytes: file.buffer, originalName: file.originalname || null }));
+    const { id, replayed } = await logObservation(me, propertyId, req.body, inspected, idempotencyKey(req), req.ip ?? null);
+    res.status(replayed ? 200 : 201).json({ data: await answer(propertyId, id, await zoneOf(me.firmId)), replayed });
+  },
+);
+
+perProperty.get('/:id/observations', READERS, validate({ params: IdParamsSchema, query: ObservationListQuerySchema }), async (req, res) => {
+  const me = actor(req);
+  const property = await propertyForObservations(me, Number(req.params.id));
+  const { rows, photos: list } = await listObservations(property.id, req.validQuery as ObservationListQuery, await zoneOf(me.firmId));
+  res.json({ data: rows.map((r) => presentObservation(r, list)) });
+});
+
+perProperty.get('/:id/observations/summary', READERS, validate({ params: IdParamsSchema, query: ObservationSummaryQuerySchema }), async (req, res) => {
+  const me = actor(req);
+  const property = await propertyForObservations(me, Number(req.params.id));
+  const query = req.validQuery as ObservationSummaryQuery;
+  res.json({ data: presentObservationSummary(query.by, await countObservations(property.id, query.by, query, await zoneOf(me.firmId))) });
+});
+
+async function photoFor(req: Request): Promise<ObservationPhoto> {
+  const me = actor(req);
+  const photo = await findInFirm(ObservationPhoto, Number(req.params.id), me.firmId, 'That photo');
+  const observation = await Observation.findByPk(photo.observationId, { attributes: ['id', 'propertyId'] });
+  if (!observation) throw notFound('That photo');
+  if (me.role === 'client') {
+    const property = await Property.findOne({ where: { id: observation.propertyId, firmId: me.firmId }, attributes: ['clientId'] });
+    if (!property || property.clientId !== me.clientId) throw notFound('That photo');
+  }
+  return photo;
+}
+
+/** An observation photo: the firm's staff and crew, and the client whose land it shows. */
+photos.get('/:id', READERS, validate({ params: IdParamsSchema }), async (req, res) => {
+  const photo = await photoFor(req);
+  res.setHeader('Content-Type', photo.contentType);
+  res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
+  res.setHeader('Content-Disposition', 'inline');
+  await sendStoredFile(res, photo.storageKey);
+});
+
+photos.get('/:id/thumbnail', READERS, validate({ params: IdParamsSchema }), async (req, res) => {
+  const photo = await photoFor(req);
+  if (!photo.thumbnailKey) throw notFound('A thumbnail of that photo');
+  res.setHeader('Content-Type', 'image/jpeg');
+  res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
+  res.setHeader('Content-Disposition', 'inline');
+  await sendStoredFile(res, photo.thumbnailKey);
+});
+
+export const propertyObservationsRouter = perProperty.router;
+export const observationPhotosRouter = photos.router;
