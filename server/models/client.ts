@@ -12,6 +12,8 @@ export class Client extends Model<InferAttributes<Client>, InferCreationAttribut
   declare notes: string | null;
   /** Whether the client's contacts may upload their own files in the portal. */
   declare portalUploadsAllowed: CreationOptional<boolean>;
+  /** The client's contacts may log sits and harvests in the portal. */
+  declare portalSitsAllowed: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -26,6 +28,7 @@ Client.init(
     address: DataTypes.TEXT,
     notes: DataTypes.TEXT,
     portalUploadsAllowed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    portalSitsAllowed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

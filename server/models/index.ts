@@ -42,6 +42,7 @@ Invoice.hasMany(InvoicePayment, { foreignKey: 'invoiceId', as: 'payments' });
 SeasonReport.belongsTo(SharedFile, { foreignKey: 'sharedFileId', as: 'file' });
 
 export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport, BackgroundJob };
+export { StandSite, WindRecord, Sit } from './hunting';
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

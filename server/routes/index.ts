@@ -25,6 +25,7 @@ import { harvestsRouter, propertyResultsRouter, seasonReportsRouter, surveysRout
 import { filesRouter } from './files';
 import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
+import { huntingRouter } from './hunting';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -64,4 +65,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/files', router: filesRouter },
   { path: '/jobs', router: jobsRouter },
   { path: '/outbox', router: outboxRouter },
+  { path: '', router: huntingRouter },
 ];

@@ -77,6 +77,8 @@ export interface WindJudgement {
   degrees: number;
   suitable: boolean;
   reasons: WindReason[];
+  /** The access routes to the stand that suit this wind (walk in by one of these). */
+  routeIds: number[];
 }
 
 /** A unit of the plan as the planner reads it. */
@@ -191,21 +193,13 @@ export function judgeStandWinds(stands: readonly StandInput[], units: readonly L
         .filter((u) => coneReaches(cone, u.geometry))
         .map((u) => ({ kind: u.kind as 'bedding-area' | 'sanctuary', unitId: u.id, name: u.name }));
       if (watched && approach && coneReaches(cone, approach)) reasons.push({ kind: 'approach-side', unitId: watched.id, name: watched.name });
-      if (myRoutes.length > 0 && myRoutes.every((r) => routeJudgements.get(r.id)!.get(from)!.length > 0)) {
+      const goodRoutes = myRoutes.filter((r) => routeJudgements.get(r.id)!.get(from)!.length === 0).map((r) => r.id);
+      if (myRoutes.length > 0 && goodRoutes.length === 0) {
         for (const r of myRoutes) reasons.push({ kind: 'route', unitId: r.id, name: r.name });
       }
-      return { from, degrees, suitable: reasons.length === 0, reasons };
+      return { from, degrees, suitable: reasons.length === 0, reasons, routeIds: goodRoutes };
     });
     return { unitId: stand.id, name: stand.name, winds, routeIds: myRoutes.map((r) => r.id) };
-  });
-}
-
-/** For one wind, the routes to a stand that suit it (no protected unit under their scent). */
-export function suitableRoutes(stand: StandWinds, from: WindName, units: readonly LayoutUnit[], s: HuntingSettings): number[] {
-  const byId = new Map(units.map((u) => [u.id, u]));
-  return stand.routeIds.filter((id) => {
-    const route = byId.get(id);
-    return route ? (judgeRoute(route, units, s).get(from) ?? []).length === 0 : false;
   });
 }
 

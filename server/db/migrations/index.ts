@@ -15,6 +15,7 @@ import * as m0019 from './0019-outbox-retry-window';
 import * as m0024 from './0024-geo-imports';
 import * as m0026 from './0026-firm-profile';
 import * as m0027 from './0027-signup';
+import * as m0070 from './0070-hunting-pressure';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -33,4 +34,5 @@ export const migrations = [
   { name: '0024-geo-imports', ...m0024 },
   { name: '0026-firm-profile', ...m0026 },
   { name: '0027-signup', ...m0027 },
+  { name: '0070-hunting-pressure', ...m0070 },
 ];
