@@ -2,7 +2,7 @@
 import { Op } from 'sequelize';
 import type { Point } from 'geojson';
 import type { SessionUser } from '../../shared/schemas/auth';
-import { Firm, Property, Sit, StandSite, Unit, WindRecord } from '../models';
+import { Client, Firm, Property, Sit, StandSite, Unit, WindRecord } from '../models';
 import { readableProperty } from '../services/results/results-reader';
 import { readUnitRows } from '../services/plan/plan-reader';
 import { stripCrs } from '../presenters/geojson';
@@ -16,6 +16,9 @@ import { HUNTING_CAUTIONS } from '../../shared/domain/hunting-cautions';
 import type { StandType } from '../../shared/domain/unit-kinds';
 import type { StandWindsRow, WindRecordDto } from '../../shared/schemas/hunting';
 import { presentWindRecord } from '../presenters/hunting';
+
+/** The kinds the planner's map draws. */
+const LAYOUT_KINDS: LayoutUnit['kind'][] = ['bedding-area', 'sanctuary', 'food-plot', 'access-route', 'stand-site'];
 
 export interface HuntingLayout {
   property: Property;
@@ -50,6 +53,8 @@ export function standWindsOf(layout: HuntingLayout): StandWinds[] {
 export async function readStandWinds(me: SessionUser, propertyId: number) {
   const layout = await readHuntingLayout(me, propertyId);
   const record = await WindRecord.findByPk(layout.property.id);
+  const client = me.role === 'client' && me.clientId ? await Client.findOne({ where: { id: me.clientId, firmId: me.firmId }, attributes: ['id', 'portalSitsAllowed'] }) : null;
+  const mayLogSits = me.role === 'owner' || me.role === 'consultant' || Boolean(client?.portalSitsAllowed);
   const rose = record ? (record.rose as { from: WindName; share: number }[]) : null;
   const details = new Map(layout.stands.map((s) => [s.id, s.detail]));
   const data: StandWindsRow[] = standWindsOf(layout).map((s) => {
@@ -68,7 +73,15 @@ export async function readStandWinds(me: SessionUser, propertyId: number) {
   });
   return {
     data,
-    meta: { settings: layout.settings, routeWarnings: accessRouteWarnings(layout.units, layout.settings), cautions: [...HUNTING_CAUTIONS], hasWindRecord: Boolean(record) },
+    meta: {
+      settings: layout.settings,
+      routeWarnings: accessRouteWarnings(layout.units, layout.settings),
+      cautions: [...HUNTING_CAUTIONS],
+      hasWindRecord: Boolean(record),
+      mayLogSits,
+      layout: layout.units.filter((u) => LAYOUT_KINDS.includes(u.kind)),
+      boundary: layout.property.boundary ? stripCrs(layout.property.boundary) : null,
+    },
   };
 }
 
@@ -117,4 +130,42 @@ export async function readSits(me: SessionUser, propertyId: number, limit = 200)
 /** Unit ids of a property by id, for checks. */
 export async function unitOfProperty(firmId: number, propertyId: number, unitId: number): Promise<Unit | null> {
   return Unit.findOne({ where: { id: unitId, propertyId, firmId } });
+}
+
+/** Stands sat more than the firm's weekly limit in the seven days up to today, on the properties the person may read. */
+export async function readPressureWarnings(me: SessionUser) {
+  const firm = await Firm.findByPk(me.firmId, { attributes: ['id', 'settings', 'timezone'] });
+  const settings = huntingSettings(firm?.settings);
+  const zone = usableZone(firm?.timezone);
+  const today = todayInZone(zone);
+  const propertyWhere = me.role === 'client' ? { firmId: me.firmId, clientId: me.clientId ?? -1 } : { firmId: me.firmId };
+  const properties = await Property.findAll({ where: propertyWhere, attributes: ['id', 'name'] });
+  if (properties.length === 0) return [];
+  const sits = await Sit.findAll({ where: { firmId: me.firmId, propertyId: properties.map((p) => p.id), startedAt: { [Op.gte]: new Date(Date.now() - 9 * 86400_000) } }, attributes: ['standUnitId', 'propertyId', 'startedAt', 'endedAt'] });
+  const standIds = [...new Set(sits.map((s) => s.standUnitId))];
+  if (standIds.length === 0) return [];
+  const stands = await Unit.findAll({ where: { id: standIds, firmId: me.firmId }, attributes: ['id', 'name', 'propertyId'] });
+  const rows = standPressure(
+    stands.map((s) => ({ unitId: s.id, name: s.name, winds: [] })),
+    sits.map((s) => ({ standUnitId: s.standUnitId, startedAt: s.startedAt, endedAt: s.endedAt, windFrom: null, bucks: 0, does: 0, fawns: 0 })),
+    today,
+    zone,
+    settings.maxSitsPerWeek,
+  );
+  const names = new Map(properties.map((p) => [p.id, p.name]));
+  const propertyOf = new Map(stands.map((s) => [s.id, s.propertyId]));
+  return rows
+    .filter((r) => r.overPressured)
+    .map((r) => {
+      const pid = propertyOf.get(r.unitId)!;
+      return {
+        propertyId: pid,
+        propertyName: names.get(pid) ?? '',
+        unitId: r.unitId,
+        name: r.name,
+        sitsThisWeek: r.sitsThisWeek,
+        maxSitsPerWeek: settings.maxSitsPerWeek,
+        message: `“${r.name}” was sat ${r.sitsThisWeek} times in the last 7 days (more than ${settings.maxSitsPerWeek}): rest it so deer do not learn to avoid it.`,
+      };
+    });
 }

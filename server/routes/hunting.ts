@@ -23,7 +23,7 @@ import {
 } from '../../shared/schemas/hunting';
 import { Firm, Unit } from '../models';
 import { readableProperty } from '../services/results/results-reader';
-import { propertyCenter, readHuntingLayout, readPressure, readSits, readStandWinds, readWindRecord, standWindsOf } from '../queries/hunting';
+import { propertyCenter, readHuntingLayout, readPressureWarnings, readPressure, readSits, readStandWinds, readWindRecord, standWindsOf } from '../queries/hunting';
 import { assertMayLogSits, createSit, saveWindRecord, setSitLogging, updateHuntingSettings, updateStandSite } from '../commands/hunting-writer';
 import { presentSit, presentWindRecord } from '../presenters/hunting';
 import { readWindFile } from '../services/wind/wind-file-reader';
@@ -128,6 +128,10 @@ r.get('/properties/:id/pressure', STAFF_AND_CLIENT, validate({ params: IdParamsS
   const q = PressureQuerySchema.parse(req.query);
   const { rows, season, maxSitsPerWeek } = await readPressure(actor(req), propertyId(req), q.season);
   res.json({ data: rows, meta: { season, maxSitsPerWeek } });
+});
+
+r.get('/pressure-warnings', STAFF_AND_CLIENT, async (req, res) => {
+  res.json({ data: await readPressureWarnings(actor(req)) });
 });
 
 r.get('/firm/hunting-settings', STAFF, async (req, res) => {

@@ -1,5 +1,6 @@
 /** Hunting pressure: stand sites, stand winds, the wind record, sits and pressure (requests and answers). */
 import { z } from 'zod';
+import type { Geometry } from 'geojson';
 import { STAND_TYPES } from '../domain/unit-kinds';
 import { WIND_NAMES, windSector, type WindName } from '../domain/stand-winds';
 import { LIMITS } from '../limits';
@@ -88,7 +89,17 @@ export const CautionSchema = z.object({ id: z.string(), title: z.string(), text:
 /** `GET /api/properties/:id/stand-winds`. */
 export const StandWindsAnswerSchema = z.object({
   data: z.array(StandWindsRowSchema),
-  meta: z.object({ settings: HuntingSettingsSchema, routeWarnings: z.array(RouteWarningSchema), cautions: z.array(CautionSchema), hasWindRecord: z.boolean() }),
+  meta: z.object({
+    settings: HuntingSettingsSchema,
+    routeWarnings: z.array(RouteWarningSchema),
+    cautions: z.array(CautionSchema),
+    hasWindRecord: z.boolean(),
+    /** Whether the reader may log sits (staff; a client's contacts when turned on). */
+    mayLogSits: z.boolean(),
+    /** The units the planner's map draws: bedding areas, sanctuaries, food plots, access routes and stands. */
+    layout: z.array(z.object({ id: z.number().int(), name: z.string(), kind: z.string(), geometry: z.custom<Geometry>() })),
+    boundary: z.custom<Geometry>().nullable(),
+  }),
 });
 export type StandWindsAnswer = z.infer<typeof StandWindsAnswerSchema>;
 
@@ -186,3 +197,14 @@ export const PressureAnswerSchema = z.object({ data: z.array(PressureRowSchema),
 export const PressureQuerySchema = z.object({ season: z.coerce.number().int().min(2000).max(2100).optional() });
 
 export const SitLoggingSchema = z.object({ allowed: z.boolean({ message: 'allowed must be true or false' }) }).strict();
+
+export const PressureWarningSchema = z.object({
+  propertyId: z.number().int(),
+  propertyName: z.string(),
+  unitId: z.number().int(),
+  name: z.string(),
+  sitsThisWeek: z.number().int(),
+  maxSitsPerWeek: z.number().int(),
+  message: z.string(),
+});
+export type PressureWarning = z.infer<typeof PressureWarningSchema>;

@@ -31,6 +31,7 @@ export const paths = {
   libraryRates: '/library/rates',
   propertyPrescriptions: (id: number | string = ':id') => `/properties/${id}/prescriptions`,
   propertyResults: (id: number | string = ':id') => `/properties/${id}/results`,
+  propertyStands: (id: number | string = ':id') => `/properties/${id}/stands`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   portal: '/portal',
@@ -38,6 +39,7 @@ export const paths = {
   portalResults: '/portal/results',
   /** The link in the season-report e-mail: keep this path. */
   portalPropertyResults: (id: number | string = ':id') => `/portal/properties/${id}/results`,
+  portalPropertyStands: (id: number | string = ':id') => `/portal/properties/${id}/stands`,
   /** The link in the proposal e-mail: keep this path. */
   portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
   portalInvoices: '/portal/invoices',

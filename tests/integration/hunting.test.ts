@@ -263,6 +263,9 @@ describe('pressure', () => {
     expect(row).toMatchObject({ sits: 3, hours: 6, deerPerHour: 0.67, sitsOnUnsuitableWind: 1, sitsThisWeek: 3, overPressured: true });
     expect(row.daysSinceLastSit).toBeLessThanOrEqual(1);
     expect(answer.meta.maxSitsPerWeek).toBe(2);
+    // The Desk and the portal read the same warning.
+    const warnings = await client.get('/api/pressure-warnings');
+    expect(warnings.body.data).toContainEqual(expect.objectContaining({ unitId: sid, propertyId: property.id, sitsThisWeek: 3 }));
     const owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
     const set = await send(owner, 'patch', '/api/firm/hunting-settings', { maxSitsPerWeek: 3 });
     expect(set.status).toBe(200);

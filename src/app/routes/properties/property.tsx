@@ -110,6 +110,7 @@ export function PropertyPage() {
             <Link to={paths.propertyResults(p.id)} className={buttonClasses('secondary')}>
               Results
             </Link>
+            <Link to={paths.propertyStands(p.id)} className={buttonClasses('secondary')}>Stands &amp; wind</Link>
             <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>
