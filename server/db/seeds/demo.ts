@@ -8,6 +8,7 @@ import { boundaryColumns } from '../../commands/property-writer';
 import { DEMO_PASSWORD, demoClients, demoFirm, demoStaff } from './demo-data';
 import { seedDemoInvoices } from './demo-invoices';
 import { seedDemoResults } from './demo-results';
+import { seedDemoHunting } from './demo-hunting';
 
 /** Creates whatever part of the demo is missing; answers the firm. */
 export async function seedDemo(): Promise<Firm> {
@@ -56,6 +57,7 @@ export async function seedDemo(): Promise<Firm> {
     }
     await seedDemoInvoices(firm, transaction);
     await seedDemoResults(firm, transaction);
+    await seedDemoHunting(firm, transaction);
     return firm;
   });
 }
