@@ -14,6 +14,8 @@ export class Client extends Model<InferAttributes<Client>, InferCreationAttribut
   declare portalUploadsAllowed: CreationOptional<boolean>;
   /** Whether the client's contacts may log field observations on their own land in the portal. */
   declare portalObservationsAllowed: CreationOptional<boolean>;
+  /** The client's contacts may log sits and harvests in the portal. */
+  declare portalSitsAllowed: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -29,6 +31,7 @@ Client.init(
     notes: DataTypes.TEXT,
     portalUploadsAllowed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     portalObservationsAllowed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    portalSitsAllowed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -47,6 +47,7 @@ Observation.hasMany(ObservationPhoto, { foreignKey: 'observationId', as: 'photos
 export { Buck, Camera, CameraDeployment, CameraPhoto, CardPull };
 export { Firm, Client, User, Property, AuthToken, OutboxMessage, AuditEvent, Unit, Overlay, Material, ServiceRateEntry, Practice, Prescription, Proposal, ProposalLine, ProposalApproval, Task, TaskPhoto, CalendarFeed, SharedFile, Invoice, InvoiceLine, InvoicePayment, InvoiceRefund, CameraSurvey, HarvestRecord, SeasonReport, BackgroundJob };
 export { Observation, ObservationPhoto };
+export { StandSite, WindRecord, Sit } from './hunting';
 export type { SharedFileCategory } from './shared-file';
 export type { ProposalStatus } from './proposal';
 export type { Corners } from './overlay';

@@ -32,6 +32,7 @@ import { cameraRouters } from './cameras';
 import { searchRouter } from './search';
 import { firmExportsRouter } from './firm-exports';
 import { observationPhotosRouter, propertyObservationsRouter } from './observations';
+import { huntingRouter } from './hunting';
 
 export const apiRouters: { path: string; router: Router }[] = [
   { path: '/health', router: healthRouter },
@@ -84,4 +85,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/firm-exports', router: firmExportsRouter },
   { path: '/properties', router: propertyObservationsRouter },
   { path: '/observation-photos', router: observationPhotosRouter },
+  { path: '', router: huntingRouter },
 ];

@@ -68,3 +68,9 @@ export function kindFamily(kind: UnitKind): KindFamily {
 export function isUnitKind(value: string): value is UnitKind {
   return (UNIT_KINDS as readonly string[]).includes(value);
 }
+
+/** Kinds of stand at a stand site (a tree stand is climbed and needs a full-body harness from the ground up). */
+export const STAND_TYPES = ['ladder', 'hang-on', 'climber', 'tripod', 'box-blind', 'ground-blind'] as const;
+export type StandType = (typeof STAND_TYPES)[number];
+/** Stand types climbed into a tree or onto a platform. */
+export const ELEVATED_STAND_TYPES: readonly StandType[] = ['ladder', 'hang-on', 'climber', 'tripod', 'box-blind'];

@@ -76,6 +76,7 @@ const routes: RouteObject[] = [
         { path: paths.unitChecks(), ...page(() => import('./routes/properties/unit-checks'), (m) => m.UnitChecksPage) },
         { path: paths.nextSeason(), ...page(() => import('./routes/properties/next-season'), (m) => m.NextSeasonPage) },
         { path: paths.propertyCameras(), ...page(() => import('./routes/properties/property-cameras'), (m) => m.PropertyCamerasPage) },
+        { path: paths.propertyStands(), ...page(() => import('./routes/properties/property-stands'), (m) => m.PropertyStandsPage) },
         {
           // Preview as client: the portal's pages with the client's scope, writes off.
           path: paths.previewClient(),
@@ -118,6 +119,7 @@ const routes: RouteObject[] = [
         { path: paths.portalInvoice(), ...page(() => import('./routes/portal/portal-invoice'), (m) => m.PortalInvoicePage) },
         { path: paths.portalResults, ...page(() => import('./routes/portal/portal-results'), (m) => m.PortalResultsPage) },
         { path: paths.portalPropertyResults(), ...page(() => import('./routes/portal/portal-results'), (m) => m.PortalPropertyResultsPage) },
+        { path: paths.portalPropertyStands(), ...page(() => import('./routes/portal/portal-stands'), (m) => m.PortalStandsPage) },
         { path: paths.portalProperty(), loader: portalPropertyLoader, ...page(() => import('./routes/portal/portal-property'), (m) => m.PortalPropertyPage) },
         { path: paths.portalPropertyProgress(), ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressPage) },
         { path: paths.portalProgress, ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressHomePage) },

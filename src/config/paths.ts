@@ -38,6 +38,7 @@ export const paths = {
   /** A unit's page: its checks and the re-seeding they draft. */
   unitChecks: (propertyId: number | string = ':id', unitId: number | string = ':unitId') => `/properties/${propertyId}/units/${unitId}`,
   propertyCameras: (id: number | string = ':id') => `/properties/${id}/cameras`,
+  propertyStands: (id: number | string = ':id') => `/properties/${id}/stands`,
   field: '/field',
   fieldTask: (id: number | string = ':id') => `/field/tasks/${id}`,
   fieldLog: '/field/log',
@@ -46,6 +47,7 @@ export const paths = {
   portalResults: '/portal/results',
   /** The link in the season-report e-mail: keep this path. */
   portalPropertyResults: (id: number | string = ':id') => `/portal/properties/${id}/results`,
+  portalPropertyStands: (id: number | string = ':id') => `/portal/properties/${id}/stands`,
   /** The link in the proposal e-mail: keep this path. */
   portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
   portalInvoices: '/portal/invoices',

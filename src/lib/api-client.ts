@@ -79,6 +79,7 @@ export const api = {
   patch: <T>(url: string, body?: unknown) => request<T>('PATCH', url, { body }),
   delete: <T>(url: string) => request<T>('DELETE', url),
   upload: <T>(url: string, form: FormData, headers?: Record<string, string>) => request<T>('POST', url, { form, headers }),
+  postWithHeaders: <T>(url: string, body: unknown, headers: Record<string, string>) => request<T>('POST', url, { body, headers }),
 };
 
 /** The `data` member of a successful answer. */

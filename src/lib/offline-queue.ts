@@ -160,3 +160,9 @@ export function memoryStore<T extends QueuedItem>(): OfflineStore<T> & { items: 
     },
   };
 }
+
+/** The same shapes under the names the completion and sit queues use. */
+export type QueueItem = QueuedItem;
+export type QueueStore<T extends QueuedItem> = OfflineStore<T>;
+/** Sends one item with its key; throws on any failure (an error with a `status`, 0 for the network). */
+export type SendItem<T extends QueuedItem> = (item: T) => Promise<{ replayed: boolean }>;

@@ -15,6 +15,7 @@ const CLIENT_WRITES: { pattern: RegExp; why: string }[] = [
   { pattern: /^post \/invoices\/:id\/(checkout|pay)$/, why: 'pay its own invoice' },
   { pattern: /^post \/files$/, why: 'upload a file when its consultant allows it' },
   { pattern: /^post \/properties\/:id\/observations$/, why: 'log a field observation on its own land when its consultant allows it' },
+  { pattern: /^post \/properties\/:id\/sits$/, why: 'log a sit on its own land when its consultant allows it' },
   { pattern: /^(post|put|patch) \/auth\/(logout|password.*|me.*)$/, why: 'its own session and password' },
 ];
 /** Public routes are nobody's writes: each is guarded by its own token, signature or credentials (sign-up by its rate limit and e-mail confirmation). */

@@ -10,6 +10,7 @@ import { seedDemoInvoices } from './demo-invoices';
 import { seedDemoResults } from './demo-results';
 import { seedDemoMap } from './demo-map';
 import { seedDemoObservations } from './demo-observations';
+import { seedDemoHunting } from './demo-hunting';
 
 /** Creates whatever part of the demo is missing; answers the firm. */
 export async function seedDemo(): Promise<Firm> {
@@ -60,6 +61,7 @@ export async function seedDemo(): Promise<Firm> {
     await seedDemoResults(firm, transaction);
     await seedDemoMap(firm, transaction);
     await seedDemoObservations(firm, transaction);
+    await seedDemoHunting(firm, transaction);
     return firm;
   });
 }

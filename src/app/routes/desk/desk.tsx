@@ -1,3 +1,4 @@
+import { PressureWarnings } from '../../../features/hunting/components/pressure-warnings';
 import { Link } from 'react-router-dom';
 import { useDesk } from '../../../features/desk/api/get-desk';
 import { useMe } from '../../../features/auth/api/get-me';
@@ -36,6 +37,7 @@ export function DeskPage() {
         <p className="text-slate">Good to see you, {firstName}. Here is {d.firm.name} this week.</p>
       </div>
       <FirstSteps steps={d.firstSteps} />
+      <PressureWarnings linkTo={paths.propertyStands} />
       <div className="grid grid-cols-2 gap-3 lg:grid-cols-4">
         <Figure label="Clients" value={String(d.counts.clients)} />
         <Figure label="Properties" value={String(d.counts.properties)} />

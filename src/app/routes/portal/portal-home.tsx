@@ -1,4 +1,6 @@
 import { Link } from 'react-router-dom';
+import { PressureWarnings } from '../../../features/hunting/components/pressure-warnings';
+import { paths } from '../../../config/paths';
 import { usePortalProperties } from '../../../features/portal/api/get-portal-properties';
 import { usePortalScope } from '../../../features/portal/api/portal-scope';
 import { ProgressRing } from '../../../features/portal/components/progress-ring';
@@ -18,6 +20,7 @@ export function PortalHomePage() {
   return (
     <div className="flex flex-col gap-5">
       <OfflineNotice updatedAt={home.dataUpdatedAt} refreshFailed={home.isRefetchError} />
+      {scope.readOnly ? null : <PressureWarnings linkTo={paths.portalPropertyStands} />}
       <div>
         <h1 className="text-2xl font-bold">Your land</h1>
         <p className="text-slate">

@@ -1,6 +1,7 @@
 import { OfflineNotice } from '../../../components/ui/offline-notice';
 import { lazy, Suspense } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { KIND_STYLES, isUnitKind, type UnitKind } from '../../../../shared/domain/unit-kinds';
 import type { PortalUnit } from '../../../../shared/schemas/portal';
 import { usePortalProperties } from '../../../features/portal/api/get-portal-properties';
@@ -114,6 +115,7 @@ export function PortalPropertyPage() {
         </Suspense>
       </Card>
 
+      {scope.readOnly ? null : <Link to={paths.portalPropertyStands(d.property.id)} className="text-sm font-semibold text-moss-deep underline">Stands &amp; wind: today’s wind, the sit log and pressure</Link>}
       <Card
         title="The plan, place by place"
         action={

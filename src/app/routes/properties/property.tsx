@@ -122,6 +122,7 @@ export function PropertyPage() {
             <Link to={paths.propertyCameras(p.id)} className={buttonClasses('secondary')}>
               Cameras
             </Link>
+            <Link to={paths.propertyStands(p.id)} className={buttonClasses('secondary')}>Stands &amp; wind</Link>
             <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>
