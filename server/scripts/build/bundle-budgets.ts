@@ -41,19 +41,19 @@ export const ROUTE_BUDGETS: RouteBudget[] = [
   {
     label: 'field sheet',
     entry: 'src/app.html',
-    modules: ['src/components/layouts/field-layout.tsx', 'src/app/routes/field/field-shell.tsx', 'src/app/routes/field/field-home.tsx'],
+    modules: ['src/app/layouts/field-layout.tsx', 'src/app/routes/field/field-shell.tsx', 'src/app/routes/field/field-home.tsx'],
     maxGzipBytes: 150 * KB,
     mapAllowed: false,
   },
   {
     label: 'field task',
     entry: 'src/app.html',
-    modules: ['src/components/layouts/field-layout.tsx', 'src/app/routes/field/field-shell.tsx', 'src/app/routes/field/field-task.tsx'],
+    modules: ['src/app/layouts/field-layout.tsx', 'src/app/routes/field/field-shell.tsx', 'src/app/routes/field/field-task.tsx'],
     maxGzipBytes: 150 * KB,
     mapAllowed: false,
   },
-  { label: 'portal home', entry: 'src/app.html', modules: ['src/components/layouts/portal-layout.tsx', 'src/app/routes/portal/portal-home.tsx'], maxGzipBytes: 150 * KB, mapAllowed: false },
-  { label: 'Desk', entry: 'src/app.html', modules: ['src/components/layouts/consultant-layout.tsx', 'src/app/routes/desk/desk.tsx'], maxGzipBytes: 250 * KB, mapAllowed: false },
+  { label: 'portal home', entry: 'src/app.html', modules: ['src/app/layouts/portal-layout.tsx', 'src/app/routes/portal/portal-home.tsx'], maxGzipBytes: 150 * KB, mapAllowed: false },
+  { label: 'Desk', entry: 'src/app.html', modules: ['src/app/layouts/consultant-layout.tsx', 'src/app/routes/desk/desk.tsx'], maxGzipBytes: 250 * KB, mapAllowed: false },
 ];
 
 /** Map libraries: their code belongs to the map pages only. */
@@ -91,14 +91,14 @@ export function indexHtmlFiles(html: string): string[] {
 
 /** Every page module of the field sheet and the portal: with the app entry, the app shell the service worker keeps for no signal. */
 export const OFFLINE_PAGES = [
-  'src/components/layouts/field-layout.tsx',
+  'src/app/layouts/field-layout.tsx',
   'src/app/routes/field/field-shell.tsx',
   'src/app/routes/field/field-home.tsx',
   'src/app/routes/field/field-task.tsx',
   'src/features/field/components/complete-form.tsx',
   'src/features/field/components/skip-form.tsx',
   'src/features/field/components/calendar-feeds-card.tsx',
-  'src/components/layouts/portal-layout.tsx',
+  'src/app/layouts/portal-layout.tsx',
   'src/app/routes/portal/portal-home.tsx',
   'src/app/routes/portal/portal-property.tsx',
   'src/app/routes/portal/portal-progress.tsx',
