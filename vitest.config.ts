@@ -10,6 +10,8 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/unit/**/*.test.{ts,tsx}'],
           environment: 'node',
+          // A first PDF render (fonts parsed) or a lint run with type information takes seconds on a busy 2-core machine.
+          testTimeout: 20000,
         },
       },
       {
