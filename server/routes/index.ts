@@ -27,6 +27,7 @@ import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
 import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
+import { sprayRecordsRouter } from './spray-records';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 
 export const apiRouters: { path: string; router: Router }[] = [
@@ -75,4 +76,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/soil-tests', router: soilTestsRouter },
   { path: '/properties', router: propertySeasonsRouter },
   { path: '/season-drafts', router: seasonDraftsRouter },
+  { path: '/spray-records', router: sprayRecordsRouter },
 ];

@@ -1,5 +1,6 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
+import { SprayApplicationSchema } from './spray-records';
 import { IdSchema, IsoDateSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskStatus, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
@@ -76,6 +77,8 @@ export const TaskCompleteSchema = z.object({
   notes: z.string().trim().max(4000).optional().transform((v) => (v ? v : null)),
   hours: z.union([z.literal(''), z.coerce.number().min(0, { message: 'must be zero or more' }).max(200, { message: 'must be at most 200 hours' })]).optional().transform((v) => (v === '' || v === undefined ? null : v)),
   quantitiesUsed: jsonField(z.array(QuantityUsedSchema).max(50)).optional(),
+  /** The spray record of a herbicide step (7 CFR Part 110 fields plus weather), as JSON text. */
+  spray: jsonField(SprayApplicationSchema).optional(),
 });
 export type TaskCompleteInput = z.output<typeof TaskCompleteSchema>;
 

@@ -18,6 +18,7 @@ import * as m0027 from './0027-signup';
 import * as m0060 from './0060-unit-checks';
 import * as m0061 from './0061-soil-tests';
 import * as m0062 from './0062-season-drafts';
+import * as m0063 from './0063-spray-records';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -39,4 +40,5 @@ export const migrations = [
   { name: '0060-unit-checks', ...m0060 },
   { name: '0061-soil-tests', ...m0061 },
   { name: '0062-season-drafts', ...m0062 },
+  { name: '0063-spray-records', ...m0063 },
 ];
