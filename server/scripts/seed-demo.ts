@@ -6,6 +6,7 @@ import { seedDemoPrescriptions } from '../db/seeds/demo-prescriptions';
 import { seedDemoSchedule } from '../db/seeds/demo-schedule';
 import { seedDemoPortal } from '../db/seeds/demo-portal';
 import { seedDemoChecks } from '../db/seeds/demo-checks';
+import { seedDemoSpray } from '../db/seeds/demo-spray';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
@@ -17,6 +18,7 @@ try {
   await seedDemoSchedule(firm);
   await seedDemoPortal(firm);
   await seedDemoChecks(firm);
+  await seedDemoSpray(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {
   console.error((err as Error).message);
