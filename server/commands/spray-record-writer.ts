@@ -9,15 +9,13 @@ import type { SessionUser } from '../../shared/schemas/auth';
 import type { SprayApplicationInput } from '../../shared/schemas/spray-records';
 import type { SprayMaterial } from '../../shared/domain/practice';
 import { centroidOf } from '../../shared/domain/geometry';
+import { isHerbicideTask } from '../../shared/domain/spray-records';
 import { unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 
 const isSpray = (d: { type: string }): d is SprayMaterial => d.type === 'herbicide' || d.type === 'adjuvant';
 
-/** True when the task is a herbicide step: a spray step, or one carrying the herbicide caution. */
-export function isHerbicideTask(task: Pick<Task, 'kind' | 'cautions'>): boolean {
-  return task.kind === 'spray' || (task.cautions ?? []).some((c) => c.id === 'herbicide');
-}
+export { isHerbicideTask };
 
 /**
  * Stores one spray record per product of a herbicide step's completion. A non-herbicide step with a

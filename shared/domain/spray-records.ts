@@ -23,6 +23,11 @@ export const SPRAY_RECORD_CAUTION =
   'Keep these records at least two years from each application (7 CFR 110.5) and show them to the state or USDA when asked. ' +
   'Your state may ask for more than this record holds; follow its rules and your licence.';
 
+/** True when a task is a herbicide step: a spray step, or one carrying the herbicide caution. */
+export function isHerbicideTask(task: { kind: string; cautions?: readonly { id: string }[] | null }): boolean {
+  return task.kind === 'spray' || (task.cautions ?? []).some((c) => c.id === 'herbicide');
+}
+
 /** One stored application of one product, as exports read it. */
 export interface SprayRecordRow {
   appliedOn: string;

@@ -1,6 +1,7 @@
 /** Spray records: what the crew enters when completing a herbicide step, the export query and the answer's shape. */
 import { z } from 'zod';
 import { IdSchema, IsoDateSchema } from './common';
+import { jsonField, TaskCompleteSchema } from './task';
 import { SPRAY_AMOUNT_UNITS, WIND_DIRECTIONS } from '../domain/spray-records';
 
 const text = (field: string, what: string, max: number) =>
@@ -27,7 +28,7 @@ export const SprayApplicationSchema = z.object({
   windDirection: z.enum(WIND_DIRECTIONS, { error: `windDirection must be one of ${WIND_DIRECTIONS.join(', ')}` }),
   airTempF: z.number({ error: 'airTempF: enter the air temperature in °F' }).min(-40, { message: 'airTempF: at least −40 °F' }).max(130, { message: 'airTempF: at most 130 °F' }),
   applicatorName: text('applicatorName', 'name the person who applied it', 120),
-  applicatorCertNo: z.string().trim().max(60, { message: 'applicatorCertNo: at most 60 characters' }).optional().transform((v) => (v ? v : null)),
+  applicatorCertNo: z.string().trim().max(60, { message: 'applicatorCertNo: at most 60 characters' }).nullish().transform((v) => (v ? v : null)),
 });
 export type SprayApplicationInput = z.output<typeof SprayApplicationSchema>;
 
@@ -69,3 +70,6 @@ export type SprayRecordDto = z.infer<typeof SprayRecordDtoSchema>;
 
 export const SprayRecordListSchema = z.object({ season: z.number(), caution: z.string(), records: z.array(SprayRecordDtoSchema) });
 export type SprayRecordList = z.infer<typeof SprayRecordListSchema>;
+
+/** A task completion's fields with a herbicide step's spray record as JSON text (the server's completion body). */
+export const TaskCompleteWithSpraySchema = TaskCompleteSchema.extend({ spray: jsonField(SprayApplicationSchema).optional() });

@@ -1,6 +1,6 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
-import { SprayApplicationSchema } from './spray-records';
+import type { SprayApplicationInput } from './spray-records';
 import { IdSchema, IsoDateSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskStatus, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
@@ -58,7 +58,7 @@ export const QuantityUsedSchema = z.object({
 });
 
 /** A JSON array in a multipart text field. */
-const jsonField = <T extends z.ZodType>(schema: T) =>
+export const jsonField = <T extends z.ZodType>(schema: T) =>
   z
     .string()
     .transform((text, ctx) => {
@@ -77,10 +77,8 @@ export const TaskCompleteSchema = z.object({
   notes: z.string().trim().max(4000).optional().transform((v) => (v ? v : null)),
   hours: z.union([z.literal(''), z.coerce.number().min(0, { message: 'must be zero or more' }).max(200, { message: 'must be at most 200 hours' })]).optional().transform((v) => (v === '' || v === undefined ? null : v)),
   quantitiesUsed: jsonField(z.array(QuantityUsedSchema).max(50)).optional(),
-  /** The spray record of a herbicide step (7 CFR Part 110 fields plus weather), as JSON text. */
-  spray: jsonField(SprayApplicationSchema).optional(),
 });
-export type TaskCompleteInput = z.output<typeof TaskCompleteSchema>;
+export type TaskCompleteInput = z.output<typeof TaskCompleteSchema> & { spray?: SprayApplicationInput };
 
 export const TaskSkipSchema = z.object({ reason: z.string().trim().min(3, { message: 'say why in a few words' }).max(1000) });
 

@@ -9,6 +9,7 @@
  * unit tests an in-memory map.
  */
 import type { TaskQuantityUsed } from '../../../../shared/domain/tasks';
+import type { SprayApplicationInput } from '../../../../shared/schemas/spray-records';
 
 /** A photo as it waits on the phone. */
 export interface QueuedPhoto {
@@ -24,6 +25,8 @@ export interface CompletionFields {
   /** Hours as typed; empty for none. */
   hours: string;
   quantitiesUsed: TaskQuantityUsed[];
+  /** A herbicide step's spray record (7 CFR Part 110 fields and weather). */
+  spray?: SprayApplicationInput;
 }
 
 /** A refusal the server gave for good: shown to the person until they dismiss it. */
@@ -187,6 +190,7 @@ export function completionForm(item: QueuedCompletion): FormData {
   if (item.fields.notes.trim()) form.append('notes', item.fields.notes.trim());
   if (item.fields.hours.trim()) form.append('hours', item.fields.hours.trim());
   form.append('quantitiesUsed', JSON.stringify(item.fields.quantitiesUsed));
+  if (item.fields.spray) form.append('spray', JSON.stringify(item.fields.spray));
   for (const photo of item.photos) form.append('photos', photo.blob, photo.name);
   return form;
 }
