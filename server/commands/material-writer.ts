@@ -31,6 +31,7 @@ export function toMaterialDefinition(input: MaterialCreateInput, key: string): M
         activeIngredient: input.activeIngredient,
         ...(input.lbAiPerGal !== undefined ? { lbAiPerGal: input.lbAiPerGal } : {}),
         restrictedUse: input.restrictedUse,
+        ...(input.epaRegNo ? { epaRegNo: input.epaRegNo } : {}),
         pricing: input.pricing,
         ...(input.rateLbAiPerAcre !== undefined ? { rateLbAiPerAcre: input.rateLbAiPerAcre } : {}),
         ...(input.carrierGpa !== undefined ? { carrierGpa: input.carrierGpa } : {}),

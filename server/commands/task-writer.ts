@@ -12,6 +12,7 @@ import { plannedOrScheduled, progressOf } from '../../shared/domain/tasks';
 import { addDays } from '../../shared/domain/planting-windows';
 import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
+import { recordSprayApplication } from './spray-record-writer';
 import { deleteFile, saveFile } from '../services/storage/storage';
 import type { InspectedPhoto } from '../services/tasks/photo-intake';
 import { enqueueEmail } from '../services/mail/outbox';
@@ -159,6 +160,7 @@ export async function completeTask(actor: SessionUser, id: number, input: TaskCo
         photos.map((p, i) => ({ firmId: task.firmId, taskId: task.id, storageKey: saved[i], originalName: p.originalName?.slice(0, 200) ?? null, contentType: p.contentType, byteSize: p.bytes.length, latitude: p.latitude, longitude: p.longitude, takenAt: p.takenAt, uploadedById: actor.id })),
         { transaction },
       );
+      await recordSprayApplication(actor, task, input.spray, input.doneOn, transaction, ip);
       await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'task.completed', subjectType: 'Task', subjectId: task.id, data: { doneOn: input.doneOn, photos: photos.length, idempotencyKey: key }, ip }, transaction);
       await notifyUnitDone(task, transaction);
       return { task, replayed: false };

@@ -27,6 +27,7 @@ import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
 import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
+import { sprayRecordsRouter } from './spray-records';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 import { cameraRouters } from './cameras';
 import { searchRouter } from './search';
@@ -86,4 +87,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertyObservationsRouter },
   { path: '/observation-photos', router: observationPhotosRouter },
   { path: '', router: huntingRouter },
+  { path: '/spray-records', router: sprayRecordsRouter },
 ];

@@ -7,8 +7,9 @@ import { typed } from '../middlewares/typed-route';
 import { arrayUpload } from '../middlewares/upload';
 import { Property, Task, TaskPhoto } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskCompleteSchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema } from '../../shared/schemas/task';
+import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema } from '../../shared/schemas/task';
 import { PHOTO_LIMITS } from '../../shared/limits';
+import { TaskCompleteWithSpraySchema } from '../../shared/schemas/spray-records';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { assignTasks, completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
 import { listTasks, readTask } from '../services/tasks/task-reader';
@@ -65,7 +66,7 @@ r.post(
     next();
   },
   arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perCompletion, 'photo'),
-  validate({ body: TaskCompleteSchema }),
+  validate({ body: TaskCompleteWithSpraySchema }),
   async (req, res) => {
     const files = (req.files as Express.Multer.File[] | undefined) ?? [];
     const photos = [];

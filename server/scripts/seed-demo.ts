@@ -7,6 +7,7 @@ import { seedDemoSchedule } from '../db/seeds/demo-schedule';
 import { seedDemoPortal } from '../db/seeds/demo-portal';
 import { seedDemoChecks } from '../db/seeds/demo-checks';
 import { seedDemoCameras } from '../db/seeds/demo-cameras';
+import { seedDemoSpray } from '../db/seeds/demo-spray';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
@@ -19,6 +20,7 @@ try {
   await seedDemoPortal(firm);
   await seedDemoChecks(firm);
   await seedDemoCameras(firm);
+  await seedDemoSpray(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {
   console.error((err as Error).message);

@@ -58,6 +58,8 @@ export interface SprayMaterial {
   lbAiPerGal?: number;
   /** Restricted-use products need a certified applicator. */
   restrictedUse: boolean;
+  /** EPA registration number from the label, e.g. "524-475" (spray records, 7 CFR 110.3). */
+  epaRegNo?: string;
   pricing: SprayProductPricing;
 }
 

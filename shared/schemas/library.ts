@@ -62,6 +62,8 @@ export const MaterialCreateSchema = z.discriminatedUnion('kind', [
     activeIngredient: z.string().trim().min(1, { message: 'enter the active ingredient and its concentration' }).max(200),
     lbAiPerGal: positive('Concentration', 12, 'lb a.i./gal').optional(),
     restrictedUse: z.boolean().default(false),
+    /** EPA Reg. No. from the label (spray records). */
+    epaRegNo: z.string().trim().regex(/^\d{1,7}-\d{1,7}(-\d{1,7})?$/, { message: 'epaRegNo: write the EPA Reg. No. as on the label, e.g. 524-475' }).optional(),
     adjuvant: z.boolean().default(false),
     /** Label rate the firm usually uses, lb a.i. per acre. */
     rateLbAiPerAcre: positive('Rate', 20, 'lb a.i./acre').optional(),

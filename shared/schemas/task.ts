@@ -1,5 +1,6 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
+import type { SprayApplicationInput } from './spray-records';
 import { IdSchema, IsoDateSchema, PageLimitSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
@@ -66,7 +67,7 @@ export const QuantityUsedSchema = z.object({
 });
 
 /** A JSON array in a multipart text field. */
-const jsonField = <T extends z.ZodType>(schema: T) =>
+export const jsonField = <T extends z.ZodType>(schema: T) =>
   z
     .string()
     .transform((text, ctx) => {
@@ -86,7 +87,7 @@ export const TaskCompleteSchema = z.object({
   hours: z.union([z.literal(''), z.coerce.number().min(0, { message: 'must be zero or more' }).max(200, { message: 'must be at most 200 hours' })]).optional().transform((v) => (v === '' || v === undefined ? null : v)),
   quantitiesUsed: jsonField(z.array(QuantityUsedSchema).max(50)).optional(),
 });
-export type TaskCompleteInput = z.output<typeof TaskCompleteSchema>;
+export type TaskCompleteInput = z.output<typeof TaskCompleteSchema> & { spray?: SprayApplicationInput };
 
 export const TaskSkipSchema = z.object({ reason: z.string().trim().min(3, { message: 'say why in a few words' }).max(1000) });
 

@@ -7,7 +7,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { request, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { request, type APIRequestContext, type Browser, type BrowserContext, type Locator, type Page } from 'playwright-core';
 import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { withGpsExif } from '../support/exif';
 import { todayIn } from '../../shared/domain/clock';
@@ -101,6 +101,20 @@ async function openTask(page: Page, task: ApiTask): Promise<void> {
   await poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(task.name);
 }
 
+/** A herbicide step asks for its spray record (7 CFR Part 110 fields and weather): fill it in. */
+async function fillSprayRecordIfAsked(page: Page, form: Locator): Promise<void> {
+  await form.getByLabel('Done on').waitFor(); // the form is loaded lazily
+  const record = form.getByRole('group', { name: 'Spray record' });
+  if ((await record.count()) === 0) return;
+  await record.getByLabel('Area treated (acres)').fill('0.5');
+  await record.getByLabel('Wind (mph)').fill('4');
+  await record.getByLabel('Wind from').selectOption('SW');
+  await record.getByLabel('Air temp (°F)').fill('72');
+  await record.getByLabel('Applicator’s name').fill('Sam Crew');
+  await record.scrollIntoViewIfNeeded();
+  await screenshot(page, 'field-spray-record-360');
+}
+
 /** No horizontal scrolling at the phone's width. */
 const fitsWidth = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth + 1);
 
@@ -127,6 +141,7 @@ describe('the crew’s field sheet on a phone', () => {
 
     await page.getByRole('button', { name: 'Mark done' }).click();
     const form = page.getByRole('form', { name: 'Mark done' });
+    await fillSprayRecordIfAsked(page, form);
     await form.getByLabel('Hours worked').fill('2.5');
     await form.getByLabel('Notes').fill('Broadcast before the rain; good seed-to-soil contact.');
     // A photo taken in the plot (its GPS position is read back and drawn on the unit map).
@@ -201,6 +216,7 @@ describe('the crew’s field sheet on a phone', () => {
     await context.setOffline(true);
     await page.getByRole('button', { name: 'Mark done' }).click();
     const form = page.getByRole('form', { name: 'Mark done' });
+    await fillSprayRecordIfAsked(page, form);
     await form.getByLabel('Notes').fill('No signal in the bottom; saved on the phone.');
     await form.getByLabel('Photos').setInputFiles({ name: 'offline.jpg', mimeType: 'image/jpeg', buffer: JPEG });
     await form.getByRole('button', { name: /Save/ }).click();
@@ -269,6 +285,7 @@ describe('the crew’s field sheet on a phone', () => {
     });
     await page.getByRole('button', { name: 'Mark done' }).click();
     const form = page.getByRole('form', { name: 'Mark done' });
+    await fillSprayRecordIfAsked(page, form);
     await form.getByLabel('Photos').setInputFiles({ name: 'lost-answer.jpg', mimeType: 'image/jpeg', buffer: JPEG });
     await form.getByRole('button', { name: /Save/ }).click();
     await poll(() => firstStatus).toBe(201);

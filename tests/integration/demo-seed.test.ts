@@ -5,6 +5,8 @@ import { seedDemoPrescriptions } from '../../server/db/seeds/demo-prescriptions'
 import { seedDemoSchedule } from '../../server/db/seeds/demo-schedule';
 import { Client, Invoice, Prescription, Property, Proposal, Task, TaskPhoto, Unit, User } from '../../server/models';
 import { testApp } from '../support/test-app';
+import { seedDemoSpray } from '../../server/db/seeds/demo-spray';
+import { SprayRecord } from '../../server/models/spray-record';
 
 const counts = async () => ({ users: await User.count(), clients: await Client.count(), properties: await Property.count(), units: await Unit.count(), prescriptions: await Prescription.count(), proposals: await Proposal.count(), tasks: await Task.count(), photos: await TaskPhoto.count(), invoices: await Invoice.count() });
 
@@ -40,5 +42,17 @@ describe('the demo seed', () => {
     } finally {
       process.env.NODE_ENV = before;
     }
+  });
+
+  it('finishes one herbicide step with its spray record, once', async () => {
+    const firm = await seedDemo();
+    await seedDemoPrescriptions(firm);
+    await seedDemoSchedule(firm);
+    const made = await seedDemoSpray(firm);
+    expect(made).toBeGreaterThanOrEqual(1);
+    expect(await seedDemoSpray(firm)).toBe(0);
+    const record = await SprayRecord.findOne({ where: { firmId: firm.id } });
+    expect(record).toMatchObject({ windDirection: 'SW', restrictedUse: false });
+    expect(record!.latitude).not.toBeNull();
   });
 });

@@ -257,7 +257,10 @@ describe('progress', () => {
     const plotTasks = await Task.findAll({ where: { unitId: plotUnitId } });
     for (const t of plotTasks.filter((t) => t.status !== 'done')) {
       await send(consultant, 'patch', `/api/tasks/${t.id}`, { assigneeId: ctx.users.crew.id }).expect(200);
-      expect((await complete(crew, t.id, { doneOn: '2026-06-20' })).status).toBe(201);
+      // A herbicide step is completed with its spray record (7 CFR Part 110 fields; tests/integration/spray-records.test.ts).
+      const herbicide = t.kind === 'spray' || t.cautions.some((c) => c.id === 'herbicide');
+      const spray = { products: t.quantities.filter((q) => q.key.startsWith('herb-')).map((q) => ({ materialKey: q.key, amount: q.amount, unit: 'gal' })), cropOrSite: 'Food plot', areaTreatedAcres: 1, windMph: 3, windDirection: 'W', airTempF: 70, applicatorName: 'Sam Crew' };
+      expect((await complete(crew, t.id, { doneOn: '2026-06-20', ...(herbicide ? { spray: JSON.stringify(spray) } : {}) })).status).toBe(201);
     }
     const res = await consultant.get(`/api/properties/${propertyId}/progress`).expect(200);
     const unit = res.body.data.units.find((u: { unitId: number }) => u.unitId === plotUnitId);

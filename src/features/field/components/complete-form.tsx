@@ -11,6 +11,8 @@ import { useCompletionQueue } from '../hooks/use-completion-queue';
 import { newCompletionKey } from '../lib/completion-queue';
 import { CompleteFormSchema, completeFormDefaults, completionFields, photoProblem, type CompleteFormInput, type CompleteFormOutput } from '../lib/complete-form';
 import { firmToday } from '../../../lib/firm-clock';
+import { isHerbicideTask } from '../../../../shared/domain/spray-records';
+import { SprayRecordFields } from './spray-record-fields';
 
 /** Photos picked for a completion, with previews. */
 function PhotoPicker({ files, onChange, error }: { files: File[]; onChange: (files: File[]) => void; error: string | null }) {
@@ -63,7 +65,8 @@ export function CompleteForm({ task, onCancel }: { task: FieldTask; onCancel: ()
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
   const today = useRef(firmToday()).current;
-  const form = useForm<CompleteFormInput, unknown, CompleteFormOutput>({ resolver: zodResolver(CompleteFormSchema), defaultValues: completeFormDefaults(task.quantities, today) });
+  const form = useForm<CompleteFormInput, unknown, CompleteFormOutput>({ resolver: zodResolver(CompleteFormSchema), defaultValues: completeFormDefaults(task.quantities, today, task) });
+  const herbicide = isHerbicideTask(task);
   const quantities = useFieldArray({ control: form.control, name: 'quantitiesUsed' });
   const errors = form.formState.errors;
   const photoError = photoProblem(photos);
@@ -116,6 +119,7 @@ export function CompleteForm({ task, onCancel }: { task: FieldTask; onCancel: ()
           ))}
         </fieldset>
       ) : null}
+      {herbicide ? <SprayRecordFields products={task.quantities.filter((q) => q.rateText !== '')} register={form.register} errors={errors} /> : null}
       <TextField label="Hours worked" type="number" inputMode="decimal" step="0.25" min={0} hint="Optional: your hours on this task." {...form.register('hours')} error={errors.hours?.message ? sentence(errors.hours.message) : undefined} />
       <TextAreaField label="Notes" rows={3} placeholder="Soil, weather, anything the consultant should know" {...form.register('notes')} error={errors.notes?.message ? sentence(errors.notes.message) : undefined} />
       <PhotoPicker files={photos} onChange={setPhotos} error={photoError} />

@@ -10,6 +10,7 @@
  */
 import type { TaskQuantityUsed } from '../../../../shared/domain/tasks';
 import { memoryStore as genericMemoryStore, type QueueStore as GenericQueueStore, type SendItem } from '../../../lib/offline-queue';
+import type { SprayApplicationInput } from '../../../../shared/schemas/spray-records';
 
 /** A photo as it waits on the phone. */
 export interface QueuedPhoto {
@@ -25,6 +26,8 @@ export interface CompletionFields {
   /** Hours as typed; empty for none. */
   hours: string;
   quantitiesUsed: TaskQuantityUsed[];
+  /** A herbicide step's spray record (7 CFR Part 110 fields and weather). */
+  spray?: SprayApplicationInput;
 }
 
 /** A refusal the server gave for good: shown to the person until they dismiss it. */
@@ -80,6 +83,7 @@ export function completionForm(item: QueuedCompletion): FormData {
   if (item.fields.notes.trim()) form.append('notes', item.fields.notes.trim());
   if (item.fields.hours.trim()) form.append('hours', item.fields.hours.trim());
   form.append('quantitiesUsed', JSON.stringify(item.fields.quantitiesUsed));
+  if (item.fields.spray) form.append('spray', JSON.stringify(item.fields.spray));
   for (const photo of item.photos) form.append('photos', photo.blob, photo.name);
   return form;
 }
