@@ -36,6 +36,8 @@ export const GEOMETRY_LIMITS = {
   overlayMaxPixels: 40_000_000,
   /** Bytes a GeoTIFF overlay's pixels may take once decoded (width × height × samples × bytes per sample). */
   overlayMaxDecodedBytes: 256 * 1024 * 1024,
+  /** Longest side, in pixels, of an aerial photo printed under the plan (a 7.4 in map at about 216 dpi). */
+  overlayPrintMaxSidePx: 1600,
 } as const;
 
 /** Completion photos from the field. */

@@ -2,7 +2,7 @@
  * Season reports: makes the PDF for a property's season (kept as a shared file of category
  * 'season-report', private to the firm until sent) and sends it to the landowner through the outbox.
  */
-import { emailFirmContact } from '../services/firm-profile';
+import { emailFirmContact, firmDefaults } from '../services/firm-profile';
 import { Op } from 'sequelize';
 import { Client, Firm, Property, SeasonReport, SharedFile, type BackgroundJob, type TaskPhoto } from '../models';
 import type { Transaction } from 'sequelize';
@@ -70,7 +70,7 @@ export async function seasonReportInput(property: Property, season: number, reco
   const captions = new Map(summary.work.map((w) => [w.taskId, `${w.name}, ${w.unitName}`]));
   const range = seasonRange(season);
   return {
-    firm: { name: firm?.name ?? '', phone: firm?.phone ?? null, email: firm?.email ?? null },
+    firm: { name: firm?.name ?? '', phone: firm?.phone ?? null, email: firm?.email ?? null, areaUnit: firm ? firmDefaults(firm).areaUnit : 'acres' },
     client: { name: client?.name ?? '' },
     property: { name: property.name, acres: property.acres, locality: [property.county && `${property.county} County`, property.state].filter(Boolean).join(', ') || null },
     season: { label: range.label, startsOn: range.startsOn, endsOn: range.endsOn },

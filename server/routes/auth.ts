@@ -18,7 +18,7 @@ import { recordAudit } from '../commands/audit-recorder';
 
 const r = defineRoutes('/auth');
 
-const publicUser = (u: SessionUser) => ({ id: u.id, email: u.email, name: u.name, role: u.role, firmId: u.firmId, firmName: u.firmName, firmTimezone: u.firmTimezone, clientId: u.clientId });
+const publicUser = (u: SessionUser) => ({ id: u.id, email: u.email, name: u.name, role: u.role, firmId: u.firmId, firmName: u.firmName, firmTimezone: u.firmTimezone, firmAreaUnit: u.firmAreaUnit, firmLengthUnit: u.firmLengthUnit, clientId: u.clientId });
 
 /** Signs the user in on a fresh session (passport regenerates it) and answers the user and CSRF token. */
 function signIn(req: Request, res: Response, next: NextFunction, user: SessionUser, status = 200) {

@@ -26,6 +26,7 @@ import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
 import { Firm, Proposal } from '../models';
 import { renderPlanSummaryPdf } from '../services/documents/render-documents';
+import { liveOverlaysForPrint } from '../services/documents/overlay-print';
 import { todayInZone } from '../services/clock';
 import { documentFirm } from '../services/firm-profile';
 import { letterheadFirm } from '../services/documents/firm-letterhead';
@@ -166,8 +167,9 @@ r.get('/:id/plan.pdf', STAFF, validate({ params: IdParamsSchema }), async (req, 
   const plan = await loadPlan(Number(req.params.id), firmId);
   const { property } = plan;
   if (!property.boundary || !property.acres) throw unprocessable('Draw or import the property boundary before printing its plan.');
-  const [firm, client, units] = await Promise.all([Firm.findByPk(firmId), Client.findByPk(property.clientId), plan.units()]);
+  const [firm, client, units, overlays] = await Promise.all([Firm.findByPk(firmId), Client.findByPk(property.clientId), plan.units(), liveOverlaysForPrint(property.id, firmId)]);
   const pdf = await renderPlanSummaryPdf({
+    overlays,
     firm: await letterheadFirm(documentFirm(firm!)),
     client: { name: client!.name },
     property: {

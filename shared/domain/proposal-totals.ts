@@ -258,6 +258,8 @@ export interface PlanSnapshot {
   };
   /** The firm's profile as printed when sent (name, contact lines, licence numbers, logo's storage key). Not hashed. */
   firm?: { name: string; phone?: string | null; email?: string | null; address?: string | null; website?: string | null; licenceNumbers?: string | null; logoKey?: string | null };
+  /** Aerial photos marked "print under the plan" when sent: a print-size copy kept under its own storage key. Not hashed. */
+  overlays?: { name: string; corners: [number, number][]; opacity: number; printKey: string }[];
 }
 
 /** The proposal fields the approval record covers. */

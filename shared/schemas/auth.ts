@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { HomeAreaSchema } from './firm';
+import { AREA_UNITS, HomeAreaSchema, LENGTH_UNITS } from './firm';
 import { RecordIdSchema } from './common';
 import { LIMITS } from '../limits';
 
@@ -29,6 +29,9 @@ export const SessionUserSchema = z.object({
   firmName: z.string(),
   /** The firm's IANA time zone: "today" and times are read in it on every screen. */
   firmTimezone: z.string(),
+  /** The firm's units for areas and lengths shown on every screen (acres and feet when absent). */
+  firmAreaUnit: z.enum(AREA_UNITS).optional(),
+  firmLengthUnit: z.enum(LENGTH_UNITS).optional(),
   clientId: z.number().int().nullable(),
 });
 export type SessionUser = z.infer<typeof SessionUserSchema>;

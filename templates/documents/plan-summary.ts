@@ -12,7 +12,7 @@ import { formatLatLon } from '../../shared/domain/geometry';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
 import { FEET_PER_MILE, formatArea, formatLength as formatLengthIn, DEFAULT_DISPLAY_UNITS, type DisplayUnits } from '../../shared/units';
 import { firmBlock } from './firm-block';
-import { kindSwatchSvg, renderPlanMap } from './kit/map-svg';
+import { kindSwatchSvg, PlanMapOverlaysSchema, renderPlanMap } from './kit/map-svg';
 import {
   cautionBox,
   DOC_COLORS,
@@ -68,6 +68,8 @@ export const PlanSummaryInputSchema = z.object({
       }),
     )
     .max(500, { message: 'a plan summary lists at most 500 units' }),
+  /** Aerial photos printed under the plan (the server downscales them for print). */
+  overlays: PlanMapOverlaysSchema.optional(),
   /** Extra cautions the consultant adds to the ones the planned kinds call for. */
   cautions: z.array(z.string().trim().min(1).max(400)).max(20).optional(),
 });
@@ -230,6 +232,7 @@ export function planSummaryDocument(input: PlanSummaryInput): TDocumentDefinitio
   const map = renderPlanMap({
     boundary: property.boundary,
     units: data.units.map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry })),
+    overlays: data.overlays,
     widthPt: CONTENT_WIDTH_PT,
     heightPt: hasLetterhead ? MAP_HEIGHT_PT - LETTERHEAD_HEIGHT_PT : MAP_HEIGHT_PT,
   });

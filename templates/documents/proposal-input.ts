@@ -2,6 +2,7 @@
 import type { Geometry, MultiPolygon, Polygon } from 'geojson';
 import type { UnitKind } from '../../shared/domain/unit-kinds';
 import type { LetterheadFirm } from './firm-block';
+import type { PlanMapOverlay } from './kit/map-svg';
 import type { LineCategory } from '../../shared/schemas/proposal';
 import type { ProposalTotalsFigures } from '../../shared/schemas/proposal-dto';
 
@@ -40,6 +41,8 @@ export interface ProposalDocumentInput {
     currency: string;
   };
   units: { name: string; kind: UnitKind; geometry: Geometry; acres?: number | null; lengthFt?: number | null }[];
+  /** Aerial photos printed under the plan in the map (downscaled data URLs with their corners). */
+  overlays?: PlanMapOverlay[];
   /** One group per unit with work: its plain-language prescription summaries. */
   groups: { label: string; kind?: UnitKind | null; acres?: number | null; lengthFt?: number | null; summaries: string[] }[];
   lines: ProposalDocumentLine[];

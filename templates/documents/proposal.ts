@@ -21,7 +21,7 @@ import { formatLatLon } from '../../shared/domain/geometry';
 import { formatCents } from '../../shared/domain/money';
 import { formatDate, formatMoment, isTimeZone } from '../../shared/domain/clock';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
-import { kindSwatchSvg, renderPlanMap } from './kit/map-svg';
+import { kindSwatchSvg, PlanMapOverlaysSchema, renderPlanMap } from './kit/map-svg';
 import {
   DOC_COLORS,
   FONT_HEADING,
@@ -117,6 +117,7 @@ const ProposalDocumentInputSchema = z.object({
   units: z
     .array(z.object({ name: text(120), kind, geometry: GeometrySchema, acres: measure.nullish(), lengthFt: measure.nullish() }))
     .max(500, { message: 'a proposal map shows at most 500 units' }),
+  overlays: PlanMapOverlaysSchema.optional(),
   groups: z
     .array(
       z.object({
@@ -810,6 +811,7 @@ export function proposalDocument(input: ProposalDocumentInput): TDocumentDefinit
   const map = renderPlanMap({
     boundary: property.boundary,
     units: data.units.map((u) => ({ name: u.name, kind: u.kind, geometry: u.geometry })),
+    overlays: data.overlays,
     widthPt: CONTENT_WIDTH_PT,
     heightPt: placement.heightPt,
   });

@@ -12,7 +12,7 @@ import type { Caution } from '../../shared/domain/cautions';
 import type { HarvestSummary, SeasonSummary, SurveyEstimatesDisplay, SurveyWarning } from '../../shared/domain/survey-estimates';
 import { establishedText, hasBars, type SurveyTrendRow } from '../../shared/domain/season-results';
 import { DomainValidationError } from '../../shared/domain/errors';
-import { formatAcres } from '../../shared/domain/plan-checks';
+import { formatArea, type AreaUnit } from '../../shared/units';
 import { AGE_CLASS_LABELS } from '../../shared/schemas/results';
 import { barChartSvg } from './kit/bar-chart-svg';
 import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, ruledTableLayout } from './kit/layout';
@@ -35,7 +35,8 @@ export interface SeasonReportSurvey {
 }
 
 export interface SeasonReportDocumentInput {
-  firm: { name: string; phone: string | null; email: string | null };
+  /** `areaUnit`: the firm's unit for areas (acres unless its profile chose hectares). */
+  firm: { name: string; phone: string | null; email: string | null; areaUnit?: AreaUnit | null };
   client: { name: string };
   property: { name: string; acres: number | null; locality: string | null };
   season: { label: string; startsOn: string; endsOn: string };
@@ -96,7 +97,7 @@ function workSection(input: SeasonReportDocumentInput): Content[] {
   }
   const established = establishedText(
     input.acresEstablished,
-    input.unitsEstablished.map((u) => ({ name: u.name, acresText: u.acres ? formatAcres(u.acres) : null })),
+    input.unitsEstablished.map((u) => ({ name: u.name, acresText: u.acres ? formatArea(u.acres, input.firm.areaUnit ?? 'acres') : null })),
     input.work.length,
   );
   if (input.unitsEstablished.length === 0 || input.acresEstablished <= 0) {
@@ -106,7 +107,7 @@ function workSection(input: SeasonReportDocumentInput): Content[] {
     out.push({
       margin: [0, 10, 0, 0],
       columns: [
-        { width: 'auto', text: formatAcres(input.acresEstablished), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.mossDeep },
+        { width: 'auto', text: formatArea(input.acresEstablished, input.firm.areaUnit ?? 'acres'), font: FONT_HEADING, bold: true, fontSize: 16, color: DOC_COLORS.mossDeep },
         { width: '*', margin: [10, 4, 0, 0], text: established },
       ],
     });
@@ -278,7 +279,7 @@ export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumen
     { text: `${input.property.name}: the ${input.season.label} season`, style: 'title' },
     { text: `Prepared for ${input.client.name} by ${input.firm.name}`, style: 'subtitle' },
     keyValueTable([
-      { label: 'Property', value: `${input.property.name}${input.property.acres ? `, ${formatAcres(input.property.acres)}` : ''}` },
+      { label: 'Property', value: `${input.property.name}${input.property.acres ? `, ${formatArea(input.property.acres, input.firm.areaUnit ?? 'acres')}` : ''}` },
       ...(input.property.locality ? [{ label: 'Location', value: input.property.locality }] : []),
       { label: 'Season', value: `${formatReportDate(input.season.startsOn, 'season.startsOn')} – ${formatReportDate(input.season.endsOn, 'season.endsOn')}` },
     ]),

@@ -23,9 +23,14 @@ declare module 'express-session' {
   }
 }
 
+/** The firm's display units from its settings (anything unknown reads as acres and feet). */
+function sessionUnits(area: unknown, length: unknown): Pick<SessionUser, 'firmAreaUnit' | 'firmLengthUnit'> {
+  return { firmAreaUnit: area === 'hectares' ? 'hectares' : 'acres', firmLengthUnit: length === 'metres' ? 'metres' : 'feet' };
+}
+
 /** The session view of a user. */
 export async function toSessionUser(user: User & { Firm?: Firm }): Promise<SessionUser> {
-  const firm = user.Firm ?? (await Firm.findByPk(user.firmId, { attributes: ['name', 'timezone'] }));
+  const firm = user.Firm ?? (await Firm.findByPk(user.firmId, { attributes: ['name', 'timezone', 'settings'] }));
   return {
     id: user.id,
     email: user.email,
@@ -34,6 +39,7 @@ export async function toSessionUser(user: User & { Firm?: Firm }): Promise<Sessi
     firmId: user.firmId,
     firmName: firm?.name ?? '',
     firmTimezone: usableZone(firm?.timezone),
+    ...sessionUnits(firm?.settings?.areaUnit, firm?.settings?.lengthUnit),
     clientId: user.clientId,
   };
 }
@@ -61,12 +67,12 @@ passport.serializeUser((user, done) => done(null, user.id));
  */
 export async function readSessionUser(id: number): Promise<SessionUser | null> {
   const rows = await sequelize.query<SessionUser>(
-    `SELECT u.id, u.email, u.name, u.role, u.firm_id AS "firmId", f.name AS "firmName", f.timezone AS "firmTimezone", u.client_id AS "clientId"
+    `SELECT u.id, u.email, u.name, u.role, u.firm_id AS "firmId", f.name AS "firmName", f.timezone AS "firmTimezone", f.settings->>'areaUnit' AS "firmAreaUnit", f.settings->>'lengthUnit' AS "firmLengthUnit", u.client_id AS "clientId"
      FROM users u JOIN firms f ON f.id = u.firm_id WHERE u.id = $1 AND u.active`,
     { bind: [id], type: QueryTypes.SELECT },
   );
   const user = rows[0];
-  return user ? { ...user, firmTimezone: usableZone(user.firmTimezone) } : null;
+  return user ? { ...user, firmTimezone: usableZone(user.firmTimezone), ...sessionUnits(user.firmAreaUnit, user.firmLengthUnit) } : null;
 }
 
 passport.deserializeUser((id: number, done) => {

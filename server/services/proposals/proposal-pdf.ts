@@ -14,6 +14,7 @@ import { todayIn } from '../../../shared/domain/clock';
 import type { PlanSnapshot } from '../../../shared/domain/proposal-totals';
 import { documentFirm } from '../firm-profile';
 import { letterheadFirm } from '../documents/firm-letterhead';
+import { frozenOverlaysForPrint, liveOverlaysForPrint } from '../documents/overlay-print';
 
 /** The plan a draft shows: the property's boundary and units as they stand now. */
 async function livePlan(proposal: Proposal, transaction?: Transaction): Promise<PlanSnapshot> {
@@ -37,6 +38,8 @@ export async function renderProposalPdfFor(proposal: Proposal, transaction?: Tra
   const { property } = plan;
   if (!property.boundary || !property.acres) throw unprocessable('Draw the property boundary before making the proposal’s PDF.');
   const zone = usableZone(firm?.timezone);
+  // A sent version prints the aerial photos kept when it was sent (none if sent before photos printed); a draft, those marked now.
+  const overlays = proposal.planSnapshot ? await frozenOverlaysForPrint(proposal.planSnapshot.overlays ?? []) : await liveOverlaysForPrint(proposal.propertyId, proposal.firmId);
   const input: ProposalDocumentInput = {
     // A sent version prints the firm as it was when sent; one sent before the profile was kept, and a draft, the firm now.
     firm: await letterheadFirm(plan.firm ?? documentFirm(firm!)),
@@ -54,6 +57,7 @@ export async function renderProposalPdfFor(proposal: Proposal, transaction?: Tra
       currency: dto.currency,
     },
     units: plan.units.map((u) => ({ name: u.name, kind: u.kind as ProposalDocumentInput['units'][number]['kind'], geometry: u.geometry as ProposalDocumentInput['units'][number]['geometry'], acres: u.acres, lengthFt: u.lengthFt })),
+    overlays,
     groups: dto.groups.map((g) => ({ label: g.label, kind: g.kind as ProposalDocumentInput['groups'][number]['kind'], acres: g.acres, lengthFt: g.lengthFt, summaries: g.summaries })),
     lines: dto.lines.map((l) => ({ id: l.id, groupLabel: l.groupLabel, category: l.category, description: l.description, quantity: String(l.quantity), unit: l.unit, unitPriceCents: l.unitPriceCents, amountCents: l.amountCents, taxable: l.taxable, optional: l.optional, included: l.included })),
     totals: {

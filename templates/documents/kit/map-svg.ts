@@ -20,6 +20,7 @@ import { fitsFamily, GeometryKindMismatchError } from '../../../shared/domain/ge
 import { isUnitKind, KIND_STYLES, kindFamily, UNIT_KINDS, type KindStyle, type UnitKind } from '../../../shared/domain/unit-kinds';
 import { FEET_PER_MILE, METRES_PER_FOOT } from '../../../shared/units';
 import { DOC_COLORS, FONT_BODY, FONT_HEADING } from './look';
+import { z } from 'zod';
 
 export interface PlanMapUnit {
   name: string;
@@ -27,9 +28,35 @@ export interface PlanMapUnit {
   geometry: Geometry;
 }
 
+/**
+ * An aerial photo printed under the plan: the image (a data URL, already downscaled for print by the
+ * server), its [lon, lat] corners top-left, top-right, bottom-right, bottom-left, its opacity, and the
+ * credit line printed in the frame's corner.
+ */
+export interface PlanMapOverlay {
+  image: string;
+  corners: readonly (readonly [number, number])[];
+  opacity: number;
+  credit: string;
+}
+
+/** The overlays a document input may carry (checked by the plan summary and proposal templates). */
+export const PlanMapOverlaysSchema = z
+  .array(
+    z.object({
+      image: z.string().startsWith('data:image/', { message: 'must be a data:image/ URL' }),
+      corners: z.array(z.tuple([z.number().min(-180).max(180), z.number().min(-85).max(85)])).length(4, { message: 'must be four [longitude, latitude] corners' }),
+      opacity: z.number().min(0).max(1),
+      credit: z.string().max(200),
+    }),
+  )
+  .max(8, { message: 'at most 8 aerial photos print under a plan' });
+
 export interface PlanMapInput {
   boundary?: Polygon | MultiPolygon | null;
   units: readonly PlanMapUnit[];
+  /** Aerial photos drawn under the plan, clipped to the map frame (they do not widen the map). */
+  overlays?: readonly PlanMapOverlay[];
   widthPt: number;
   heightPt: number;
   title?: string;
@@ -527,6 +554,9 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
   if (boundaryPath) {
     parts.push(`<path id="boundary-fill" d="${boundaryPath}" fill="${DOC_COLORS.card}" fill-rule="evenodd" stroke="none"/>`);
   }
+  // Aerial photos over the paper and under the plan, clipped to the frame.
+  const overlays = input.overlays ?? [];
+  if (overlays.length > 0) parts.push(overlaysSvg(overlays, frame, projection));
 
   // Areas, largest first so that small units stay on top.
   const areaUnits = units
@@ -720,6 +750,40 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
       labels,
     },
   };
+}
+
+/**
+ * The overlay images placed by their corners: an affine transform maps the unit square onto the
+ * projected top-left, top-right and bottom-left corners (the bottom-right follows; over a property
+ * the georeferenced quadrilateral is a parallelogram to well under a point). Clipped to the frame,
+ * with the credits in the frame's lower left corner.
+ */
+function overlaysSvg(overlays: readonly PlanMapOverlay[], frame: MapBox, projection: MapProjection): string {
+  const out: string[] = [
+    `<defs><clipPath id="map-frame-clip"><rect x="${fmt(frame.xPt)}" y="${fmt(frame.yPt)}" width="${fmt(frame.widthPt)}" height="${fmt(frame.heightPt)}"/></clipPath></defs>`,
+    '<g id="overlays" clip-path="url(#map-frame-clip)">',
+  ];
+  for (const o of overlays) {
+    if (o.corners.length !== 4 || !o.image.startsWith('data:image/')) continue;
+    const [tl, tr, , bl] = o.corners.map(([lon, lat]) => projection.project(lon, lat));
+    const m = [tr[0] - tl[0], tr[1] - tl[1], bl[0] - tl[0], bl[1] - tl[1], tl[0], tl[1]];
+    if (!m.every(Number.isFinite)) continue;
+    const opacity = Math.min(1, Math.max(0, o.opacity));
+    out.push(
+      `<image class="overlay" x="0" y="0" width="1" height="1" preserveAspectRatio="none" opacity="${opacity.toFixed(2)}" transform="matrix(${m.map((v) => v.toFixed(3)).join(' ')})" href="${escapeXml(o.image)}"/>`,
+    );
+  }
+  out.push('</g>');
+  const credit = `Aerial photo: ${overlays.map((o) => o.credit.trim()).filter(Boolean).join('; ')}`;
+  const size = 6.5;
+  const w = Math.min(labelWidthPt(credit, size) + 6, frame.widthPt - 8);
+  const x = frame.xPt + 4;
+  const y = frame.yPt + frame.heightPt - size * 1.25 - 6;
+  out.push(
+    `<g id="overlay-credit"><rect x="${fmt(x)}" y="${fmt(y)}" width="${fmt(w)}" height="${fmt(size * 1.25 + 2)}" rx="1.5" fill="${DOC_COLORS.card}" fill-opacity="0.85" stroke="none"/>` +
+      `<text x="${fmt(x + 3)}" y="${fmt(y + size + 1)}" font-size="${size}" fill="${DOC_COLORS.slate}">${escapeXml(credit)}</text></g>`,
+  );
+  return out.join('');
 }
 
 /** The plan map as an SVG document string for pdfmake's `svg` node. */

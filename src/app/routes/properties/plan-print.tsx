@@ -13,7 +13,7 @@ import { ShareBar } from '../../../features/plan-map/components/share-bar';
 import { renderPlanImage, type PlanImage } from '../../../features/plan-map/lib/plan-image';
 import { niceScaleBar } from '../../../features/plan-map/lib/scale-bar';
 import { groupByKind, kindsPresent, unitsToCollections } from '../../../features/plan-map/lib/unit-features';
-import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../../../features/plan-map/lib/measure-format';
+import { formatAcresShort, formatFeet, formatHectares, formatMiles, showsImperial } from '../../../features/plan-map/lib/measure-format';
 import { firmToday, formatDay } from '../../../lib/firm-clock';
 
 const IMAGE_W = 960;
@@ -146,7 +146,7 @@ export function PlanPrintPage() {
                     </span>
                   </td>
                   <td className="py-1 text-right tabular-nums">
-                    {u.acres !== null ? `${formatAcresShort(u.acres)} · ${formatHectares(u.hectares ?? 0)}` : u.lengthFt !== null ? `${formatFeet(u.lengthFt)} · ${formatMiles(u.lengthMi ?? 0)}` : '—'}
+                    {u.acres !== null ? `${formatAcresShort(u.acres)}${showsImperial() ? ` · ${formatHectares(u.hectares ?? 0)}` : ''}` : u.lengthFt !== null ? `${formatFeet(u.lengthFt)}${showsImperial() ? ` · ${formatMiles(u.lengthMi ?? 0)}` : ''}` : '—'}
                   </td>
                   <td className="py-1 pl-4 text-slate">{u.notes ?? ''}</td>
                 </tr>

@@ -18,6 +18,7 @@ import { MissingRecord } from '../../../components/ui/missing-record';
 import { useToast } from '../../../components/ui/toast';
 import { ApiError } from '../../../lib/api-client';
 import { formatAcres, formatDate, formatFeet, formatHectares, formatNumber } from '../../../lib/format';
+import { firmUnits } from '../../../lib/firm-units';
 import { parseId } from '../../../lib/route-params';
 import { paths } from '../../../config/paths';
 
@@ -46,7 +47,7 @@ function BoundaryCard({ property }: { property: PropertyDto }) {
         {hasBoundary ? (
           <dl className="grid grid-cols-2 gap-3">
             <Figure label="Area" value={formatAcres(property.acres)} big />
-            <Figure label="Hectares" value={formatHectares(property.hectares)} />
+            {firmUnits().areaUnit === 'acres' ? <Figure label="Hectares" value={formatHectares(property.hectares)} /> : null}
             <Figure label="Perimeter" value={formatFeet(property.perimeterFt)} />
             <Figure label="Plan units" value={formatNumber(property.unitCount)} />
           </dl>

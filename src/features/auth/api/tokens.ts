@@ -2,6 +2,7 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import { api, getData, setCsrfToken } from '../../../lib/api-client';
 import type { PasswordResetRequestInput, SessionUser, TokenPasswordInput } from '../../../../shared/schemas/auth';
 import { setFirmZone } from '../../../lib/firm-clock';
+import { setFirmUnits } from '../../../lib/firm-units';
 
 export interface InvitationInfo {
   name: string;
@@ -25,6 +26,7 @@ export function useAcceptInvitation() {
     onSuccess: (user) => {
       qc.clear();
       setFirmZone(user.firmTimezone);
+      setFirmUnits(user);
       qc.setQueryData(['auth', 'me'], user);
     },
   });

@@ -1,7 +1,7 @@
 import { KIND_STYLES } from '../../../../shared/domain/unit-kinds';
 import { Button } from '../../../components/ui/button';
 import type { DrawTarget, MeasureReading } from '../lib/plan-map-controller';
-import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../lib/measure-format';
+import { formatAcresShort, formatFeet, formatHectares, formatMiles, showsImperial } from '../lib/measure-format';
 
 /** The measure of the shape being drawn or measured, in words and figures. */
 export function MeasureReadout({ reading, onClear }: { reading: MeasureReading; onClear: () => void }) {
@@ -18,11 +18,11 @@ export function MeasureReadout({ reading, onClear }: { reading: MeasureReading; 
       <span className="text-slate">{what}</span>
       {reading.shape === 'line' ? (
         <span className="figure font-bold text-ink">
-          {formatFeet(reading.lengthFt)} · {formatMiles(reading.lengthMi)}
+          {formatFeet(reading.lengthFt)}{showsImperial() ? ` · ${formatMiles(reading.lengthMi)}` : ''}
         </span>
       ) : (
         <span className="figure font-bold text-ink">
-          {formatAcresShort(reading.acres)} · {formatHectares(reading.hectares)} · perimeter {formatFeet(reading.perimeterFt)}
+          {formatAcresShort(reading.acres)}{showsImperial() ? ` · ${formatHectares(reading.hectares)}` : ''} · perimeter {formatFeet(reading.perimeterFt)}
         </span>
       )}
       {!reading.drawing && reading.target.type === 'measure' ? (

@@ -174,7 +174,10 @@ export function OverlayPanel({
                 </button>
               </div>
               <OverlaySlider overlay={o} onPreview={(v) => onPreview(o.id, v)} onCommit={(v) => onChange(o.id, { opacity: v })} />
-              {/* "Print under the plan" (inDocuments) is stored by the API; its checkbox returns when the plan PDF and proposal map draw photos. */}
+              <label className="flex items-center gap-1.5 text-slate">
+                <input type="checkbox" checked={o.inDocuments} onChange={(e) => onChange(o.id, { inDocuments: e.target.checked })} className="accent-moss" />
+                Print under the plan (plan PDF, proposal map)
+              </label>
             </li>
           ))}
         </ul>

@@ -3,7 +3,7 @@ import type { PropertyDto } from '../../../../shared/schemas/property';
 import { paths } from '../../../config/paths';
 import { Button } from '../../../components/ui/button';
 import { ExportMenu } from './export-menu';
-import { formatAcresShort, formatHectares } from '../lib/measure-format';
+import { formatAcresShort, formatHectares, showsImperial } from '../lib/measure-format';
 import type { PlanEditing } from '../hooks/use-plan-editing';
 import type { usePlanImport } from '../hooks/use-plan-import';
 
@@ -52,7 +52,7 @@ export function PlanMapHeader({
       </div>
       {p?.acres ? (
         <p className="figure text-sm text-slate" data-testid="property-size">
-          <span className="text-lg font-bold text-ink">{formatAcresShort(p.acres)}</span> · {formatHectares(p.hectares ?? 0)}
+          <span className="text-lg font-bold text-ink">{formatAcresShort(p.acres)}</span>{showsImperial() ? ` · ${formatHectares(p.hectares ?? 0)}` : ''}
         </p>
       ) : null}
       <div className="ml-auto flex flex-wrap items-center gap-2">

@@ -7,7 +7,7 @@ import { KIND_STYLES, UNIT_KINDS } from '../../../../shared/domain/unit-kinds';
 import { centroidOf, formatLatLon } from '../../../../shared/domain/geometry';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
-import { formatAcresShort, formatFeet, formatHectares, formatMiles } from '../lib/measure-format';
+import { formatAcresShort, formatFeet, formatHectares, formatMiles, showsImperial } from '../lib/measure-format';
 import { isEditableGeometry } from '../lib/plan-map-controller';
 import { KindSwatch } from './kind-swatch';
 
@@ -82,14 +82,14 @@ export function UnitDetail({
       <dl className="grid grid-cols-2 gap-3 rounded border border-rule bg-paper/60 p-3" aria-label="Measures">
         {style.family === 'area' ? (
           <>
-            <Figure label="Acres" value={formatAcresShort(unit.acres ?? 0)} />
-            <Figure label="Hectares" value={formatHectares(unit.hectares ?? 0)} />
+            <Figure label={showsImperial() ? "Acres" : "Hectares"} value={formatAcresShort(unit.acres ?? 0)} />
+            {showsImperial() ? <Figure label="Hectares" value={formatHectares(unit.hectares ?? 0)} /> : null}
             <Figure label="Perimeter" value={formatFeet(unit.perimeterFt ?? 0)} />
           </>
         ) : style.family === 'line' ? (
           <>
             <Figure label="Length" value={formatFeet(unit.lengthFt ?? 0)} />
-            <Figure label="Miles" value={formatMiles(unit.lengthMi ?? 0)} />
+            {showsImperial() ? <Figure label="Miles" value={formatMiles(unit.lengthMi ?? 0)} /> : null}
           </>
         ) : where ? (
           <div className="col-span-2">
