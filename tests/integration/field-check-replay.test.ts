@@ -43,6 +43,7 @@ describe('field sheet checks through the offline queue', () => {
   it('offers checks on seeded units only', () => {
     expect(offersChecks({ unitId: plotId, unitKind: 'food-plot', kind: 'mow' })).toBe(true);
     expect(offersChecks({ unitId: 1, unitKind: 'timber', kind: 'chainsaw' })).toBe(false);
+    expect(offersChecks({ unitId: 1, unitKind: 'bedding-area', kind: 'inspect' })).toBe(false);
     expect(offersChecks({ unitId: null, unitKind: null, kind: 'seed' })).toBe(false);
   });
 
