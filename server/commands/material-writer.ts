@@ -35,6 +35,7 @@ export function toMaterialDefinition(input: MaterialCreateInput, key: string): M
         pricing: input.pricing,
         ...(input.rateLbAiPerAcre !== undefined ? { rateLbAiPerAcre: input.rateLbAiPerAcre } : {}),
         ...(input.carrierGpa !== undefined ? { carrierGpa: input.carrierGpa } : {}),
+        ...(input.plantBackDays !== undefined ? { plantBackDays: input.plantBackDays } : {}),
       };
       break;
     case 'other':

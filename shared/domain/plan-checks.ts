@@ -53,7 +53,9 @@ export type PlanWarningCode =
   | 'food-plot-share-low'
   | 'food-plot-share-high'
   | 'invalid-geometry'
-  | 'check-failed';
+  | 'check-failed'
+  | 'plant-back'
+  | 'rotation';
 
 export interface PlanWarning {
   code: PlanWarningCode;
@@ -397,4 +399,93 @@ function formatFeet(ft: number): string {
 
 function formatPct(pct: number): string {
   return `${pct < 10 ? pct.toFixed(1) : pct.toFixed(0)} %`;
+}
+
+/** One task of the plan as the season checks read it: its unit, step kind, date and materials. */
+export interface SeasonTaskInput {
+  unitId: string;
+  unitName: string;
+  /** Step kind: 'spray' carries herbicides, 'seed' and 'plant' sow the plot. */
+  kind: string;
+  name: string;
+  /** The day the work happens: done on, else its scheduled start, else its earliest day (YYYY-MM-DD). */
+  date: string;
+  /** Material keys the task applies. */
+  materialKeys: readonly string[];
+}
+
+/** A herbicide's plant-back interval from its label, days. */
+export interface PlantBackMaterial {
+  key: string;
+  name: string;
+  plantBackDays: number;
+}
+
+const SEEDING_KINDS = new Set(['seed', 'plant']);
+
+/** Whole days from `a` to `b` (ISO dates, UTC calendar days). */
+function daysBetween(a: string, b: string): number {
+  return Math.round((Date.parse(`${b}T00:00:00Z`) - Date.parse(`${a}T00:00:00Z`)) / 86_400_000);
+}
+
+/** `date` plus `days` calendar days, ISO. */
+function addDays(date: string, days: number): string {
+  return new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+}
+
+/**
+ * Plant-back warnings: a herbicide task whose date plus the product's plant-back interval (a field
+ * on the material, from its label) falls after a seeding planned on or after it on the same unit.
+ * A seeding before the spray is not its follow crop and is not checked. The label is the law: the
+ * message says to move the seeding or use a product whose label allows it.
+ */
+export function plantBackWarnings(tasks: readonly SeasonTaskInput[], herbicides: readonly PlantBackMaterial[]): PlanWarning[] {
+  const byKey = new Map(herbicides.map((h) => [h.key, h]));
+  const warnings: PlanWarning[] = [];
+  for (const spray of tasks) {
+    for (const key of spray.materialKeys) {
+      const herbicide = byKey.get(key);
+      if (!herbicide || herbicide.plantBackDays <= 0) continue;
+      const clear = addDays(spray.date, herbicide.plantBackDays);
+      for (const seeding of tasks) {
+        if (seeding.unitId !== spray.unitId || !SEEDING_KINDS.has(seeding.kind)) continue;
+        const gap = daysBetween(spray.date, seeding.date);
+        if (gap < 0 || gap >= herbicide.plantBackDays) continue;
+        warnings.push({
+          code: 'plant-back',
+          unitIds: [spray.unitId],
+          message: `${quote(spray.unitName)}: ${herbicide.name} sprayed ${spray.date} has a plant-back interval of ${herbicide.plantBackDays} days on its label, so "${seeding.name}" on ${seeding.date} is ${herbicide.plantBackDays - gap} days too early. Seed on or after ${clear}, or choose a product whose label allows this crop sooner; the label is the law and local rules may be stricter.`,
+        });
+      }
+    }
+  }
+  return warnings;
+}
+
+/** A unit's crop family per season (from the species its prescriptions sow; null when nothing is sown). */
+export interface RotationUnitInput {
+  unitId: string;
+  unitName: string;
+  seasons: readonly { year: number; family: string | null }[];
+}
+
+/**
+ * Rotation warnings: a plot that carries the same crop family in two consecutive seasons (common
+ * practice, no source: a family grown again builds up its pests and diseases). One warning per pair.
+ */
+export function rotationWarnings(units: readonly RotationUnitInput[]): PlanWarning[] {
+  const warnings: PlanWarning[] = [];
+  for (const unit of units) {
+    const byYear = new Map<number, string>();
+    for (const s of unit.seasons) if (s.family && !byYear.has(s.year)) byYear.set(s.year, s.family);
+    for (const [year, family] of [...byYear].sort((a, b) => a[0] - b[0])) {
+      if (byYear.get(year - 1) !== family) continue;
+      warnings.push({
+        code: 'rotation',
+        unitIds: [unit.unitId],
+        message: `${quote(unit.unitName)} carries ${family} crops in ${year - 1} and ${year}: rotate to another crop family in ${year} (common practice, no source).`,
+      });
+    }
+  }
+  return warnings;
 }

@@ -49,6 +49,9 @@ export interface FertilizerMaterial {
   bagPriceCents: number;
 }
 
+/** Longest plant-back interval accepted, days (labels give up to about 4 years for some residual herbicides). */
+export const PLANT_BACK_MAX_DAYS = 1500;
+
 export interface SprayMaterial {
   key: string;
   type: 'herbicide' | 'adjuvant';
@@ -60,6 +63,8 @@ export interface SprayMaterial {
   restrictedUse: boolean;
   /** EPA registration number from the label, e.g. "524-475" (spray records, 7 CFR 110.3). */
   epaRegNo?: string;
+  /** Days from application until the follow crop may be seeded, from the product's label (plant-back interval). */
+  plantBackDays?: number;
   pricing: SprayProductPricing;
 }
 
@@ -331,6 +336,9 @@ export function validateMaterialDefinition(material: MaterialDefinition, field =
     case 'adjuvant':
       requireText(`${field}.activeIngredient`, material.activeIngredient, 'Active ingredient');
       if (material.lbAiPerGal !== undefined) positive('lbAiPerGal', material.lbAiPerGal, 'Product concentration', 'lb a.i./gal', 12);
+      if (material.plantBackDays !== undefined && !(Number.isInteger(material.plantBackDays) && material.plantBackDays >= 0 && material.plantBackDays <= PLANT_BACK_MAX_DAYS)) {
+        throw new DomainValidationError(`${field}.plantBackDays`, `Plant-back interval (plantBackDays) must be a whole number of days from 0 to ${PLANT_BACK_MAX_DAYS}, as the label gives it (months × 30).`);
+      }
       validateSprayPricing(material.pricing, `${field}.pricing`);
       return;
     case 'item':

@@ -9,7 +9,7 @@ import { LIMITS } from '../limits';
 import { UNIT_KINDS } from '../domain/unit-kinds';
 import { WINDOW_KEYS } from '../domain/planting-windows';
 import { CAUTION_IDS } from '../domain/cautions';
-import type { MaterialDefinition, PracticeDefinition } from '../domain/practice';
+import { PLANT_BACK_MAX_DAYS, type MaterialDefinition, type PracticeDefinition } from '../domain/practice';
 
 const name = z.string().trim().min(1, { message: 'enter a name' }).max(LIMITS.nameMax);
 const cents = (label: string) => z.number({ message: `${label} must be a number of cents` }).int({ message: `${label} must be whole cents` }).min(0, { message: `${label} cannot be negative` }).max(100_000_000, { message: `${label} looks too large` });
@@ -41,6 +41,13 @@ const LimePricingSchema = z.discriminatedUnion('basis', [
   z.object({ basis: z.literal('bag'), bagSizeLb: positive('Bag size', 4000, 'lb'), bagPriceCents: cents('Bag price') }),
 ]);
 
+/** A label's plant-back interval in whole days ≥ 0; a label in months is entered as months × 30. */
+export const PlantBackDaysSchema = z
+  .number({ message: 'Plant-back interval (plantBackDays) must be a number of days, like 120; a label in months is months × 30' })
+  .int({ message: 'Plant-back interval (plantBackDays) must be a whole number of days; a label in months is months × 30' })
+  .min(0, { message: 'Plant-back interval (plantBackDays) cannot be negative: enter 0 days when the label allows seeding at once' })
+  .max(PLANT_BACK_MAX_DAYS, { message: `Plant-back interval (plantBackDays) above ${PLANT_BACK_MAX_DAYS} days is not plausible: enter it in days` });
+
 export const MaterialCreateSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('seed'),
@@ -69,6 +76,8 @@ export const MaterialCreateSchema = z.discriminatedUnion('kind', [
     rateLbAiPerAcre: positive('Rate', 20, 'lb a.i./acre').optional(),
     /** Spray volume (carrier), gallons per acre. */
     carrierGpa: positive('Carrier volume', 100, 'gal/acre').optional(),
+    /** Plant-back interval from the label: days from application until the follow crop may be seeded. */
+    plantBackDays: PlantBackDaysSchema.optional(),
     pricing: SprayPricingSchema,
   }),
   z.object({
@@ -83,7 +92,7 @@ export const MaterialCreateSchema = z.discriminatedUnion('kind', [
 export type MaterialCreateInput = z.infer<typeof MaterialCreateSchema>;
 
 /** A material over the API: its id, key and kind, and every field of its definition. */
-export type MaterialDto = MaterialDefinition & { id: number; kind: MaterialKind; rateLbPerAcre?: number; rateLbAiPerAcre?: number; carrierGpa?: number; archived: boolean; updatedAt: string };
+export type MaterialDto = MaterialDefinition & { id: number; kind: MaterialKind; plantBackDays?: number; rateLbPerAcre?: number; rateLbAiPerAcre?: number; carrierGpa?: number; archived: boolean; updatedAt: string };
 
 export const RateCreateSchema = z.object({
   name,

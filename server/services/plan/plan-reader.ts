@@ -10,7 +10,8 @@ import { Property } from '../../models';
 import { notFound } from '../../errors';
 import { buildId } from '../../build-id';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
-import { planWarnings, shareByKind } from '../../../shared/domain/plan-checks';
+import { planWarnings, shareByKind, type PlanWarning } from '../../../shared/domain/plan-checks';
+import { seasonPlanWarnings } from '../../queries/plan-season-checks';
 import type { PlanSummary } from '../../../shared/schemas/unit';
 import { stripCrs } from '../../presenters/geojson';
 import { GEOMETRY_LIMITS } from '../../../shared/limits';
@@ -89,8 +90,25 @@ export function unitsAnswer(propertyId: number, revision: number): Promise<Preco
   });
 }
 
-/** Share of the property by kind and the plan warnings. */
-export function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
+const presentWarning = (w: PlanWarning): PlanSummary['warnings'][number] => ({
+  code: w.code,
+  unitIds: w.unitIds.map(Number),
+  message: w.message,
+  ...(w.acres !== undefined ? { acres: w.acres } : {}),
+  ...(w.lengthFt !== undefined ? { lengthFt: w.lengthFt } : {}),
+});
+
+/**
+ * Share of the property by kind and the plan warnings: the map's (cached by revision) and the
+ * season's — plant-back intervals and rotation — read fresh, since tasks and prescriptions change
+ * without a new revision.
+ */
+export async function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
+  const [mapped, season] = await Promise.all([mapSummary(plan), seasonPlanWarnings(plan.property.id, plan.property.firmId)]);
+  return season.length ? { ...mapped, warnings: [...mapped.warnings, ...season.map(presentWarning)] } : mapped;
+}
+
+function mapSummary(plan: LoadedPlan): Promise<PlanSummary> {
   return remember(`summary:${plan.property.id}:${plan.revision}`, async () => {
     const units = await plan.units();
     const boundary = plan.property.boundary ? stripCrs(plan.property.boundary) : null;
@@ -102,13 +120,7 @@ export function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
       boundaryAcres,
       shareByKind: boundaryAcres ? shareByKind(boundaryAcres, planUnits) : [],
       // Stored shapes already passed PostGIS validation: skip the quadratic crossing pre-check on large ones.
-      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices }).map((w) => ({
-        code: w.code,
-        unitIds: w.unitIds.map(Number),
-        message: w.message,
-        ...(w.acres !== undefined ? { acres: w.acres } : {}),
-        ...(w.lengthFt !== undefined ? { lengthFt: w.lengthFt } : {}),
-      })),
+      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices }).map(presentWarning),
     };
   });
 }

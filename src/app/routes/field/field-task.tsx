@@ -16,12 +16,15 @@ import { QueueNotice } from '../../../features/field/components/queue-notice';
 import { Directions } from '../../../features/field/components/directions';
 import { plannedDates, windowText } from '../../../features/field/lib/task-text';
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
+import { offersChecks } from '../../../features/field/lib/check-offer';
+import { useMe } from '../../../features/auth/api/get-me';
 
 // The forms (and the shared zod schemas they check with) load after the page shows; the page asks for them at once.
 const loadCompleteForm = () => import('../../../features/field/components/complete-form');
 const loadSkipForm = () => import('../../../features/field/components/skip-form');
 const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
 const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
+const CheckForm = lazy(() => import('../../../features/field/components/check-form').then((m) => ({ default: m.CheckForm })));
 
 function BackLink() {
   return (
@@ -99,8 +102,9 @@ function RecordCard({ task }: { task: FieldTask }) {
 export function FieldTaskPage() {
   const id = parseId(useParams().id) ?? 0;
   const task = useTask(id);
+  const me = useMe();
   const queue = useCompletionQueue();
-  const [mode, setMode] = useState<'view' | 'done' | 'skip'>('view');
+  const [mode, setMode] = useState<'view' | 'done' | 'skip' | 'check'>('view');
   useEffect(() => {
     void loadCompleteForm().catch(() => undefined);
     void loadSkipForm().catch(() => undefined);
@@ -173,6 +177,18 @@ export function FieldTaskPage() {
             Skip with a reason
           </Button>
         </div>
+      ) : null}
+      {offersChecks(t) && mode === 'view' ? (
+        <Button variant="secondary" className="min-h-12" onClick={() => setMode('check')}>
+          Record an establishment or browse check
+        </Button>
+      ) : null}
+      {mode === 'check' ? (
+        <Card title="Check this plot">
+          <Suspense fallback={<Loading />}>
+            <CheckForm task={t} userId={me.data?.id ?? 0} onDone={() => setMode('view')} />
+          </Suspense>
+        </Card>
       ) : null}
       {open && mode === 'done' ? (
         <Card title="Mark done">

@@ -174,6 +174,7 @@ function HerbicideForm(props: KindFormProps) {
       <TextField label="Concentration, lb a.i./gal" inputMode="decimal" hint="Optional, from the label" error={errorOf(e, 'lbAiPerGal')} {...form.register('lbAiPerGal', num)} />
       <TextField label="Usual rate, lb a.i./acre" inputMode="decimal" hint="Optional" error={errorOf(e, 'rateLbAiPerAcre')} {...form.register('rateLbAiPerAcre', num)} />
       <TextField label="Carrier, gal/acre" inputMode="decimal" hint="Optional" error={errorOf(e, 'carrierGpa')} {...form.register('carrierGpa', num)} />
+      <TextField label="Plant-back interval, days" inputMode="numeric" hint="Optional, from the label (months × 30)" error={errorOf(e, 'plantBackDays')} {...form.register('plantBackDays', num)} />
       <SelectField label="Sold" error={errorOf(e, 'pricing.basis')} {...form.register('pricing.basis')}>
         <option value="container">In containers</option>
         <option value="per-gal">By the gallon</option>
