@@ -113,7 +113,7 @@ export function ObservationsLayer({ map, propertyId, zone = Intl.DateTimeFormat(
     });
   const present = OBSERVATION_KINDS.filter((k) => dated.some((d) => d.o.kind === k));
   return (
-    <section aria-label="Observations" data-observations-shown={shownOnMap ? shown.length : 0} className="pointer-events-auto absolute bottom-3 left-3 z-10 flex max-w-[22rem] flex-col gap-2 rounded border border-rule bg-card/95 p-2 text-xs shadow-sm">
+    <section aria-label="Observations" data-observations-shown={shownOnMap ? shown.length : 0} className="pointer-events-auto flex max-w-[22rem] flex-col gap-2 rounded border border-rule bg-card/95 p-2 text-xs shadow-sm">
       <div className="flex items-center justify-between gap-2">
         <label className="flex items-center gap-1 font-semibold">
           <input type="checkbox" checked={shownOnMap} onChange={(e) => setShownOnMap(e.target.checked)} /> Observations ({shown.length})
