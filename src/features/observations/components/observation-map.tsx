@@ -82,7 +82,7 @@ export default function ObservationMap({ propertyId, boundary, onTap, heightClas
 
   return (
     <div className={`relative w-full overflow-hidden rounded border border-rule ${heightClass}`}>
-      <div ref={ref} className="absolute inset-0" data-testid="observation-map" />
+      <div ref={ref} className="absolute inset-0 h-full w-full" data-testid="observation-map" />
       <div className="absolute bottom-3 left-3 z-10">
         <ObservationsLayer map={map} propertyId={propertyId} />
       </div>
