@@ -25,8 +25,8 @@ export function contentSecurityPolicy(tileOrigins: readonly string[] = []): stri
   ].join('; ');
 }
 
-/** Browser features the product never uses are switched off; the camera stays for the crew's photos. */
-export const PERMISSIONS_POLICY = 'accelerometer=(), autoplay=(), camera=(self), display-capture=(), geolocation=(), gyroscope=(), magnetometer=(), microphone=(), midi=(), payment=(), usb=(), interest-cohort=()';
+/** Browser features the product never uses are switched off; the camera (photos) and the position ("Log sign", "Use this phone’s position") stay for our own pages, never for a frame. */
+export const PERMISSIONS_POLICY = 'accelerometer=(), autoplay=(), camera=(self), display-capture=(), geolocation=(self), gyroscope=(), magnetometer=(), microphone=(), midi=(), payment=(), usb=(), interest-cohort=()';
 
 /** Middleware (after the session): sets the policy for the signed-in firm, or the strict one. */
 export async function firmContentSecurityPolicy(req: Request, res: Response, next: NextFunction): Promise<void> {

@@ -14,6 +14,9 @@ import { OutboxMessage, SharedFile, Task, TaskPhoto } from '../../server/models'
 import { createS3Storage } from '../../server/services/storage/s3-storage';
 import { saveFile, storage, useStorage, type Storage } from '../../server/services/storage/storage';
 import { sweepOrphanFiles } from '../../server/services/storage/orphan-sweeper';
+import { ObservationPhoto } from '../../server/models';
+import { makeJpeg } from '../support/photo-fixtures';
+import { OBSERVATION_PHOTO_FOLDERS } from '../../server/commands/observation-logger';
 
 let fake: S3Fake;
 let previous: Storage | null;
@@ -127,5 +130,35 @@ describe('STORAGE=s3', () => {
     // With the default hour of grace, a file saved just now is left alone (its row may be on its way).
     const young = await saveFile('photos', png(30), 'png');
     expect((await sweepOrphanFiles()).removed).not.toContain(young);
+  });
+
+  it('sweeps the observation photo and thumbnail folders too, keeping the files an observation points to', async () => {
+    // A scrape with a photo whose EXIF GPS is inside the factory's property boundary (lon −90.94…−90.93, lat 43.265…43.27).
+    const photo = await makeJpeg({ width: 640, height: 480, takenAt: '2026:10:14 07:31:05', latitude: 43.266, longitude: -90.937 });
+    const logged = await consultant
+      .post(`/api/properties/${propertyId}/observations`)
+      .set('X-CSRF-Token', consultant.csrf)
+      .set('Idempotency-Key', `sweep-${Date.now()}`)
+      .field('kind', 'scrape')
+      .attach('photos', photo, { filename: 'scrape.jpg', contentType: 'image/jpeg' });
+    expect(logged.status).toBe(201);
+    const row = await ObservationPhoto.findOne({ where: { observationId: logged.body.data.id } });
+    expect(row?.thumbnailKey).toBeTruthy();
+    const keptPhoto = row!.storageKey;
+    const keptThumb = row!.thumbnailKey!;
+    expect(keptPhoto.startsWith(`${OBSERVATION_PHOTO_FOLDERS.photos}/`)).toBe(true);
+    expect(keptThumb.startsWith(`${OBSERVATION_PHOTO_FOLDERS.thumbnails}/`)).toBe(true);
+    // What a lost transaction leaves behind in each folder.
+    const orphanPhoto = await saveFile(OBSERVATION_PHOTO_FOLDERS.photos, photo, 'jpg');
+    const orphanThumb = await saveFile(OBSERVATION_PHOTO_FOLDERS.thumbnails, png(40), 'png');
+
+    const { removed } = await sweepOrphanFiles({ graceMs: 0, now: new Date(Date.now() + 60 * 60 * 1000) });
+    expect(removed).toEqual(expect.arrayContaining([orphanPhoto, orphanThumb]));
+    expect(removed).not.toContain(keptPhoto);
+    expect(removed).not.toContain(keptThumb);
+    await expect(elsewhere.get(orphanPhoto)).rejects.toThrow(/missing/);
+    await expect(elsewhere.get(orphanThumb)).rejects.toThrow(/missing/);
+    expect((await elsewhere.get(keptPhoto)).length).toBeGreaterThan(0);
+    expect((await elsewhere.get(keptThumb)).length).toBeGreaterThan(0);
   });
 });

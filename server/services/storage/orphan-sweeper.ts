@@ -9,8 +9,8 @@ import { logger } from '../../logger';
 import { storage } from './storage';
 
 /** The folders Browseline writes and the tables whose storage_key points into them. */
-export const SWEPT_FOLDERS = ['files/', 'photos/', 'overlays/', 'exports/'] as const;
-const REFERENCES = `SELECT storage_key FROM shared_files UNION ALL SELECT storage_key FROM task_photos UNION ALL SELECT storage_key FROM overlays UNION ALL SELECT storage_key FROM camera_photos UNION ALL SELECT thumbnail_key FROM camera_photos WHERE thumbnail_key IS NOT NULL UNION ALL SELECT storage_key FROM firm_exports WHERE storage_key IS NOT NULL`;
+export const SWEPT_FOLDERS = ['files/', 'photos/', 'overlays/', 'exports/', 'observation-photos/', 'observation-thumbs/'] as const;
+const REFERENCES = `SELECT storage_key FROM shared_files UNION ALL SELECT storage_key FROM task_photos UNION ALL SELECT storage_key FROM overlays UNION ALL SELECT storage_key FROM camera_photos UNION ALL SELECT thumbnail_key FROM camera_photos WHERE thumbnail_key IS NOT NULL UNION ALL SELECT storage_key FROM firm_exports WHERE storage_key IS NOT NULL UNION ALL SELECT storage_key FROM observation_photos UNION ALL SELECT thumbnail_key FROM observation_photos WHERE thumbnail_key IS NOT NULL`;
 
 /** Deletes unreferenced files older than graceMs; answers how many were looked at and the keys removed. */
 export async function sweepOrphanFiles(options: { graceMs?: number; now?: Date } = {}): Promise<{ checked: number; removed: string[] }> {

@@ -82,8 +82,10 @@ export default function ObservationMap({ propertyId, boundary, onTap, heightClas
 
   return (
     <div className={`relative w-full overflow-hidden rounded border border-rule ${heightClass}`}>
-      <div ref={ref} className="absolute inset-0" data-testid="observation-map" />
-      <ObservationsLayer map={map} propertyId={propertyId} />
+      <div ref={ref} className="absolute inset-0 h-full w-full" data-testid="observation-map" />
+      <div className="absolute bottom-3 left-3 z-10">
+        <ObservationsLayer map={map} propertyId={propertyId} />
+      </div>
       {onTap ? <p className="pointer-events-none absolute right-2 top-2 rounded bg-card/90 px-2 py-0.5 text-xs text-slate">Tap the map to place a new sign</p> : null}
     </div>
   );

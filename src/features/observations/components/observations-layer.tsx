@@ -17,12 +17,11 @@ import { KindSymbol } from './kind-symbol';
 const SOURCE = 'observations';
 const CLUSTER_COLOUR = '#3F5B3A';
 
-/** Rasterises each kind's badge once per map (map.addImage; no sprite file). */
-async function addKindImages(map: MapLibreMap): Promise<void> {
+/** Rasterises each kind's badge once (no sprite file): image id → pixels at twice the display size. */
+async function drawKindImages(): Promise<Map<string, ImageData>> {
+  const drawn = new Map<string, ImageData>();
   await Promise.all(
     OBSERVATION_KINDS.map(async (kind) => {
-      const id = `observation-${kind}`;
-      if (map.hasImage(id)) return;
       const img = new Image(32, 32);
       img.src = `data:image/svg+xml;charset=utf-8,${encodeURIComponent(kindBadgeSvg(kind, OBSERVATION_KIND_STYLES[kind].colour, 32))}`;
       await img.decode();
@@ -32,9 +31,15 @@ async function addKindImages(map: MapLibreMap): Promise<void> {
       const ctx = canvas.getContext('2d');
       if (!ctx) return;
       ctx.drawImage(img, 0, 0, 64, 64);
-      if (!map.hasImage(id)) map.addImage(id, ctx.getImageData(0, 0, 64, 64), { pixelRatio: 2 });
+      drawn.set(`observation-${kind}`, ctx.getImageData(0, 0, 64, 64));
     }),
   );
+  return drawn;
+}
+
+/** Puts the drawn badges on the map (map.addImage), once per map. */
+function addKindImages(map: MapLibreMap, images: Map<string, ImageData>): void {
+  for (const [id, data] of images) if (!map.hasImage(id)) map.addImage(id, data, { pixelRatio: 2 });
 }
 
 function ensureLayers(map: MapLibreMap): void {
@@ -66,16 +71,30 @@ export function ObservationsLayer({ map, propertyId, zone = Intl.DateTimeFormat(
   useEffect(() => {
     if (!map) return;
     let cancelled = false;
-    const setUp = async () => {
-      await addKindImages(map);
-      if (cancelled) return;
-      ensureLayers(map);
+    let images: Map<string, ImageData> | null = null;
+    // The map may have fired 'load' already while isStyleLoaded() is still false (tiles or another
+    // layer's source loading): try at once, then again on each render event until the source is in.
+    const attempt = () => {
+      if (cancelled || !images) return;
+      try {
+        addKindImages(map, images);
+        ensureLayers(map);
+      } catch {
+        return; // "Style is not done loading": the next event tries again.
+      }
+      stop();
       setReady(true);
     };
-    if (map.isStyleLoaded()) void setUp();
-    else map.once('load', () => void setUp());
+    const events = ['load', 'styledata', 'idle'] as const;
+    const stop = () => events.forEach((e) => map.off(e, attempt));
+    events.forEach((e) => map.on(e, attempt));
+    void drawKindImages().then((drawn) => {
+      images = drawn;
+      attempt();
+    });
     return () => {
       cancelled = true;
+      stop();
     };
   }, [map]);
 
@@ -94,7 +113,7 @@ export function ObservationsLayer({ map, propertyId, zone = Intl.DateTimeFormat(
     });
   const present = OBSERVATION_KINDS.filter((k) => dated.some((d) => d.o.kind === k));
   return (
-    <section aria-label="Observations" data-observations-shown={shownOnMap ? shown.length : 0} className="pointer-events-auto absolute bottom-3 left-3 z-10 flex max-w-[22rem] flex-col gap-2 rounded border border-rule bg-card/95 p-2 text-xs shadow-sm">
+    <section aria-label="Observations" data-observations-shown={shownOnMap ? shown.length : 0} className="pointer-events-auto flex max-w-[22rem] flex-col gap-2 rounded border border-rule bg-card/95 p-2 text-xs shadow-sm">
       <div className="flex items-center justify-between gap-2">
         <label className="flex items-center gap-1 font-semibold">
           <input type="checkbox" checked={shownOnMap} onChange={(e) => setShownOnMap(e.target.checked)} /> Observations ({shown.length})
