@@ -7,7 +7,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, type Agent } from '../support/test-app';
 import { makeClient, makeFirm, makeProperty, PASSWORD } from '../support/factories';
-import { HarvestRecord } from '../../server/models';
+import { HarvestRecord, Sit } from '../../server/models';
 import { SitSchema } from '../../shared/schemas/hunting';
 import { buildSeasonPressure } from '../../server/queries/season-pressure';
 
@@ -115,5 +115,35 @@ describe('the season report’s pressure section', () => {
     expect(oak.deerPerHour).toBeCloseTo(1.2, 5);
     expect(section.totals).toMatchObject({ sits: 1, hours: 2.5, deerSeen: 3 });
     expect(section.sampledHarvests).toBe(1);
+  });
+});
+
+describe('identified bucks on a sit', () => {
+  it('takes buckIds from the property’s camera roster, and refuses a buck of another property saving nothing', async () => {
+    const buck = await send(consultant, 'post', `/api/properties/${propertyId}/bucks`, { name: 'Split G2' });
+    expect(buck.status, JSON.stringify(buck.body)).toBe(201);
+    const buckId = buck.body.data.id as number;
+    const elsewhere = await makeProperty(ctx.firm.id, ctx.client.id);
+    const stray = await send(consultant, 'post', `/api/properties/${elsewhere.id}/bucks`, { name: 'Drop tine' });
+    expect(stray.status).toBe(201);
+    const body = { standUnitId: standId, startedAt: '2025-11-16T12:00:00.000Z', endedAt: '2025-11-16T15:00:00.000Z', seen: { bucks: 1, does: 0, fawns: 0 } };
+    const post = (key: string, over: object) => consultant.post(`/api/properties/${propertyId}/sits`).set('X-CSRF-Token', consultant.csrf).set('Idempotency-Key', key).send({ ...body, ...over });
+
+    const ok = await post(`bucks-ok-${Date.now()}`, { buckIds: [buckId] });
+    expect(ok.status, JSON.stringify(ok.body)).toBe(201);
+    expect(SitSchema.parse(ok.body.data).buckIds).toEqual([buckId]);
+
+    const before = await Sit.count({ where: { propertyId } });
+    const refused = await post(`bucks-bad-${Date.now()}`, { buckIds: [buckId, stray.body.data.id] });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error).toMatch(/not a buck of this property’s camera roster/);
+    const twice = await post(`bucks-twice-${Date.now()}`, { buckIds: [buckId, buckId] });
+    expect(twice.status).toBe(422);
+    expect(twice.body.error).toMatch(/each buck once/);
+    expect(await Sit.count({ where: { propertyId } })).toBe(before);
+
+    // Without buckIds a sit still answers an empty list.
+    const none = await post(`bucks-none-${Date.now()}`, {});
+    expect(SitSchema.parse(none.body.data).buckIds).toEqual([]);
   });
 });
