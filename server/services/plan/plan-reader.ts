@@ -6,11 +6,12 @@
  */
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
-import { Property } from '../../models';
+import { Firm, Property } from '../../models';
 import { notFound } from '../../errors';
 import { buildId } from '../../build-id';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
 import { planWarnings, shareByKind } from '../../../shared/domain/plan-checks';
+import { huntingSettings } from '../../../shared/domain/stand-winds';
 import type { PlanSummary } from '../../../shared/schemas/unit';
 import { stripCrs } from '../../presenters/geojson';
 import { GEOMETRY_LIMITS } from '../../../shared/limits';
@@ -90,8 +91,10 @@ export function unitsAnswer(propertyId: number, revision: number): Promise<Preco
 }
 
 /** Share of the property by kind and the plan warnings. */
-export function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
-  return remember(`summary:${plan.property.id}:${plan.revision}`, async () => {
+export async function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
+  const firm = await Firm.findByPk(plan.property.firmId, { attributes: ['id', 'settings'] });
+  const { routeBufferYd } = huntingSettings(firm?.settings);
+  return remember(`summary:${plan.property.id}:${plan.revision}:${routeBufferYd}`, async () => {
     const units = await plan.units();
     const boundary = plan.property.boundary ? stripCrs(plan.property.boundary) : null;
     const planUnits = units.map((u) => ({ id: String(u.id), name: u.name, kind: u.kind, geometry: u.geometry }));
@@ -102,7 +105,7 @@ export function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
       boundaryAcres,
       shareByKind: boundaryAcres ? shareByKind(boundaryAcres, planUnits) : [],
       // Stored shapes already passed PostGIS validation: skip the quadratic crossing pre-check on large ones.
-      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices }).map((w) => ({
+      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices, routeBufferYd }).map((w) => ({
         code: w.code,
         unitIds: w.unitIds.map(Number),
         message: w.message,
