@@ -2,7 +2,8 @@
  * Hunting pressure in the browser: the consultant reads a stand's unsuitable winds with their reasons
  * on "Stands & wind"; a hunter of the family (a client contact, sit logging on in the demo) on a phone
  * picks today's wind, sees the stand it suggests with the route to walk in, loses the signal, logs the
- * sit, and once back online the sit reaches the server exactly once (the pressure answer counts it once).
+ * sit, and once back online the sit reaches the server exactly once (the pressure answer counts it once);
+ * then records the deer taken on that sit with the state's disease-sampling number.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
@@ -94,6 +95,19 @@ describe('stands, winds and the sit log', () => {
     await page.reload();
     await poll(() => page.getByRole('group', { name: 'Wind from' }).isVisible()).toBe(true);
     expect(await sitsBefore()).toBe(before + 1);
+
+    // The hunter then records the deer taken on that sit, with the state's disease-sampling number.
+    const harvest = page.getByRole('form', { name: 'Record a harvest' });
+    await harvest.getByLabel('Sex', { exact: true }).selectOption('female');
+    await harvest.getByLabel('Age class').selectOption('1.5');
+    await harvest.getByLabel('Stand', { exact: true }).selectOption({ label: pick!.stand.name });
+    await poll(() => harvest.getByLabel('Sit', { exact: true }).locator('option').count()).toBeGreaterThan(1);
+    await harvest.getByLabel('Sit', { exact: true }).selectOption({ index: 1 });
+    await harvest.getByLabel(/Disease-sampling number/).fill('WI-CWD 2026-0101');
+    await harvest.getByRole('button', { name: 'Save harvest' }).click();
+    await poll(() => harvest.getByRole('status').textContent()).toBe('Harvest recorded.');
+    const harvests = (await (await hunter.request.get(`/api/properties/${propertyId}/harvests`)).json()) as { data: { diseaseSampleNumber: string | null; standUnitId: number | null; sitId: number | null }[] };
+    expect(harvests.data.filter((h) => h.diseaseSampleNumber === 'WI-CWD 2026-0101')).toEqual([expect.objectContaining({ standUnitId: pick!.stand.unitId, sitId: expect.any(Number) })]);
     watch.assertClean();
     await hunter.request.dispose();
     await context.close();
