@@ -98,11 +98,11 @@ describe('stands, winds and the sit log', () => {
 
     // The hunter then records the deer taken on that sit, with the state's disease-sampling number.
     const harvest = page.getByRole('form', { name: 'Record a harvest' });
-    await harvest.getByLabel('Sex', { exact: true }).selectOption('female');
-    await harvest.getByLabel('Age class').selectOption('1.5');
-    await harvest.getByLabel('Stand', { exact: true }).selectOption({ label: pick!.stand.name });
-    await poll(() => harvest.getByLabel('Sit', { exact: true }).locator('option').count()).toBeGreaterThan(1);
-    await harvest.getByLabel('Sit', { exact: true }).selectOption({ index: 1 });
+    await harvest.getByLabel(/^Sex/).selectOption('female');
+    await harvest.getByLabel(/^Age class/).selectOption('1.5');
+    await harvest.getByLabel(/^Stand/).selectOption({ label: pick!.stand.name });
+    await poll(() => harvest.getByLabel(/^Sit/).locator('option').count()).toBeGreaterThan(1);
+    await harvest.getByLabel(/^Sit/).selectOption({ index: 1 });
     await harvest.getByLabel(/Disease-sampling number/).fill('WI-CWD 2026-0101');
     await harvest.getByRole('button', { name: 'Save harvest' }).click();
     await poll(() => harvest.getByRole('status').textContent()).toBe('Harvest recorded.');
