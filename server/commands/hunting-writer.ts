@@ -5,7 +5,7 @@
  */
 import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Client, Firm, Property, Sit, StandSite, Unit, WindRecord } from '../models';
+import { Buck, Client, Firm, Property, Sit, StandSite, Unit, WindRecord } from '../models';
 import { findInFirm } from '../policies/firm-scope';
 import { conflict, forbidden, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
@@ -85,6 +85,12 @@ export async function createSit(me: SessionUser, propertyId: number, values: Sit
       const stand = await Unit.findOne({ where: { id: values.standUnitId, firmId: me.firmId, propertyId: property.id }, transaction });
       if (!stand) throw unprocessable('standUnitId must be a stand site of this property.', { field: 'standUnitId' });
       if (stand.kind !== 'stand-site') throw unprocessable(`standUnitId: “${stand.name}” is a ${kindLabel(stand.kind)}, not a stand site.`, { field: 'standUnitId' });
+      const buckIds = values.buckIds ?? [];
+      if (buckIds.length) {
+        const known = await Buck.findAll({ where: { id: buckIds, firmId: me.firmId, propertyId: property.id }, attributes: ['id'], transaction });
+        const strays = buckIds.filter((id) => !known.some((b) => b.id === id));
+        if (strays.length) throw unprocessable(`buckIds: ${strays.join(', ')} ${strays.length === 1 ? 'is not a buck' : 'are not bucks'} of this property’s camera roster. Pick bucks from its roster.`, { field: 'buckIds' });
+      }
       const sit = await Sit.create(
         {
           firmId: me.firmId,
@@ -98,6 +104,7 @@ export async function createSit(me: SessionUser, propertyId: number, values: Sit
           does: values.seen.does,
           fawns: values.seen.fawns,
           notes: values.notes ? values.notes : null,
+          buckIds,
           loggedById: me.id,
           idempotencyKey: key,
         },

@@ -2,7 +2,7 @@
 import type { Transaction } from 'sequelize';
 import type { z } from 'zod';
 import { sequelize } from '../db/sequelize';
-import { CameraSurvey, HarvestRecord, Property, Unit } from '../models';
+import { CameraSurvey, HarvestRecord, Property, Sit, Unit } from '../models';
 import { findInFirm } from '../policies/firm-scope';
 import { unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
@@ -136,6 +136,22 @@ async function checkHarvest(firmId: number, propertyId: number, values: HarvestC
     const unit = await Unit.findOne({ where: { id: values.unitId, propertyId }, attributes: ['id'], transaction });
     if (!unit) throw unprocessable('unitId: that unit is not on this property’s plan. Pick a stand or plot of this property, or leave it empty and name the stand.', [{ path: 'unitId', message: 'not on this property' }]);
   }
+  if (values.standUnitId) {
+    const stand = await Unit.findOne({ where: { id: values.standUnitId, propertyId, kind: 'stand-site' }, attributes: ['id'], transaction });
+    if (!stand) throw unprocessable('standUnitId: that is not a stand site of this property. Pick one of its stands, or leave it empty.', [{ path: 'standUnitId', message: 'not a stand site of this property' }]);
+  }
+  if (values.sitId) {
+    const sit = await Sit.findOne({ where: { id: values.sitId, propertyId, firmId }, attributes: ['id', 'standUnitId'], transaction });
+    if (!sit) throw unprocessable('sitId: that sit was not logged on this property. Pick one of its sits, or leave it empty.', [{ path: 'sitId', message: 'not a sit of this property' }]);
+    if (values.standUnitId && sit.standUnitId !== values.standUnitId) throw unprocessable('sitId: that sit was at another stand. Pick the sit made at this stand, or change the stand.', [{ path: 'sitId', message: 'sit at another stand' }]);
+  }
+}
+
+/** The stand of a harvest: the one given, else the stand of its sit. */
+async function standOf(values: HarvestCreateValues, transaction: Transaction): Promise<number | null> {
+  if (values.standUnitId) return values.standUnitId;
+  if (!values.sitId) return null;
+  return (await Sit.findByPk(values.sitId, { attributes: ['standUnitId'], transaction }))?.standUnitId ?? null;
 }
 
 /** Records a harvested deer for a property. */
@@ -157,6 +173,9 @@ export async function createHarvest(actor: SessionUser, propertyId: number, valu
         stand: values.stand ?? null,
         hunter: values.hunter ?? null,
         notes: values.notes ?? null,
+        standUnitId: await standOf(values, transaction),
+        sitId: values.sitId ?? null,
+        diseaseSampleNumber: values.diseaseSampleNumber ?? null,
         createdById: actor.id,
       },
       { transaction },
@@ -180,6 +199,9 @@ export async function updateHarvest(actor: SessionUser, id: number, patch: z.out
       stand: record.stand,
       hunter: record.hunter,
       notes: record.notes,
+      standUnitId: record.standUnitId,
+      sitId: record.sitId,
+      diseaseSampleNumber: record.diseaseSampleNumber,
       ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)),
     });
     await checkHarvest(actor.firmId, record.propertyId, merged, transaction);
@@ -195,6 +217,9 @@ export async function updateHarvest(actor: SessionUser, id: number, patch: z.out
         stand: merged.stand ?? null,
         hunter: merged.hunter ?? null,
         notes: merged.notes ?? null,
+        standUnitId: await standOf(merged, transaction),
+        sitId: merged.sitId ?? null,
+        diseaseSampleNumber: merged.diseaseSampleNumber ?? null,
       },
       { transaction },
     );

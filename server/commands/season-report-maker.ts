@@ -25,6 +25,7 @@ import { logger } from '../logger';
 import { clientRecipients } from '../services/mail/client-recipients';
 import { enqueueJob, type JobContext } from '../services/jobs/job-queue';
 import { countObservations } from '../queries/observations';
+import { buildSeasonPressure } from '../queries/season-pressure';
 import { kindLabel, presentObservationSummary } from '../presenters/observation';
 import type { SeasonReportObservations } from '../../templates/documents/season-report';
 
@@ -86,6 +87,7 @@ export async function seasonReportInput(property: Property, season: number, reco
     recommendations,
     cautions: [CAUTIONS['deer-scent-baiting']],
     observations: await seasonObservations(property.id, range.startsOn, range.endsOn, usableZone(firm?.timezone)),
+    pressure: await buildSeasonPressure(property.firmId, property.id, season, transaction),
   };
 }
 

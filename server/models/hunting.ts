@@ -85,6 +85,8 @@ export class Sit extends Model<InferAttributes<Sit>, InferCreationAttributes<Sit
   declare does: number;
   declare fawns: number;
   declare notes: string | null;
+  /** Identified bucks of the property's camera roster seen on the sit. */
+  declare buckIds: CreationOptional<number[]>;
   declare loggedById: number | null;
   declare idempotencyKey: string;
   declare createdAt: CreationOptional<Date>;
@@ -105,6 +107,7 @@ Sit.init(
     does: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     fawns: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     notes: DataTypes.TEXT,
+    buckIds: { type: DataTypes.ARRAY(DataTypes.INTEGER), allowNull: false, defaultValue: [], field: 'buck_ids' },
     loggedById: DataTypes.INTEGER,
     idempotencyKey: { type: DataTypes.TEXT, allowNull: false },
     createdAt: DataTypes.DATE,

@@ -77,6 +77,9 @@ export class HarvestRecord extends Model<InferAttributes<HarvestRecord>, InferCr
   declare stand: string | null;
   declare hunter: string | null;
   declare notes: string | null;
+  declare standUnitId: CreationOptional<number | null>;
+  declare sitId: CreationOptional<number | null>;
+  declare diseaseSampleNumber: CreationOptional<string | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -103,6 +106,9 @@ HarvestRecord.init(
     stand: DataTypes.TEXT,
     hunter: DataTypes.TEXT,
     notes: DataTypes.TEXT,
+    standUnitId: { type: DataTypes.INTEGER, field: 'stand_unit_id' },
+    sitId: { type: DataTypes.INTEGER, field: 'sit_id' },
+    diseaseSampleNumber: { type: DataTypes.TEXT, field: 'disease_sample_number' },
     createdById: DataTypes.INTEGER,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

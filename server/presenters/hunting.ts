@@ -32,6 +32,7 @@ export function presentSit(s: Sit, stands: readonly StandWinds[]): SitDto {
     windMph: s.windMph,
     seen: { bucks: s.bucks, does: s.does, fawns: s.fawns },
     notes: s.notes,
+    buckIds: s.buckIds ?? [],
     windSuitable: stand ? suitsWind({ unitId: stand.unitId, name: stand.name, winds: stand.winds }, (s.windFrom as WindName | null) ?? null) : null,
     createdAt: s.createdAt.toISOString(),
   };

@@ -71,6 +71,10 @@ export function presentHarvest(record: HarvestRecord, unitNames: ReadonlyMap<num
     stand: record.stand,
     hunter: record.hunter,
     notes: record.notes,
+    standUnitId: record.standUnitId ?? null,
+    standName: record.standUnitId ? (unitNames.get(record.standUnitId) ?? null) : null,
+    sitId: record.sitId ?? null,
+    diseaseSampleNumber: record.diseaseSampleNumber ?? null,
     createdAt: record.createdAt.toISOString(),
   };
 }

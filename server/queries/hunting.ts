@@ -30,10 +30,14 @@ export interface HuntingLayout {
 
 /** The property (as the person may read it), its units and stand details, and the firm's planner settings. */
 export async function readHuntingLayout(me: SessionUser, propertyId: number): Promise<HuntingLayout> {
-  const property = await readableProperty(me, propertyId);
-  const [rows, firm] = await Promise.all([readUnitRows(property.id), Firm.findByPk(me.firmId, { attributes: ['id', 'settings', 'timezone'] })]);
+  return layoutOf(await readableProperty(me, propertyId));
+}
+
+/** The layout of a property already loaded through its firm (jobs and documents, which have no person's session). */
+export async function layoutOf(property: Property): Promise<HuntingLayout> {
+  const [rows, firm] = await Promise.all([readUnitRows(property.id), Firm.findByPk(property.firmId, { attributes: ['id', 'settings', 'timezone'] })]);
   const standIds = rows.filter((u) => u.kind === 'stand-site').map((u) => u.id);
-  const details = standIds.length ? await StandSite.findAll({ where: { firmId: me.firmId, unitId: standIds } }) : [];
+  const details = standIds.length ? await StandSite.findAll({ where: { firmId: property.firmId, unitId: standIds } }) : [];
   const units: LayoutUnit[] = rows.map((u) => ({ id: u.id, name: u.name, kind: u.kind, geometry: stripCrs(u.geometry) }));
   const byUnit = new Map(details.map((d) => [d.unitId, d]));
   const stands = units.filter((u) => u.kind === 'stand-site' && u.geometry.type === 'Point').map((u) => ({ ...u, detail: byUnit.get(u.id) ?? null }));

@@ -1,5 +1,5 @@
 /** Results: camera surveys, harvest records, the season summary and the season report. */
-import type { Request } from 'express';
+import type { NextFunction, Request, Response } from 'express';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
 import { validate } from '../middlewares/validate';
@@ -24,6 +24,7 @@ import { presentHarvest, presentSeasonReport } from '../presenters/results';
 import { sendStoredFile } from '../services/storage/storage';
 import { isFromPhotos, SurveyFromPhotosSchema } from '../../shared/schemas/cameras';
 import { createSurveyFromPhotos } from '../commands/photo-survey-maker';
+import { assertMayLogSits } from '../commands/hunting-writer';
 
 const perProperty = defineRoutes('/properties');
 const surveys = defineRoutes('/surveys');
@@ -45,8 +46,19 @@ async function readableRecord<M extends CameraSurvey | HarvestRecord>(req: Reque
 }
 
 async function harvestAnswer(record: HarvestRecord) {
-  const unit = record.unitId ? await Unit.findByPk(record.unitId, { attributes: ['id', 'name'] }) : null;
-  return presentHarvest(record, new Map(unit ? [[unit.id, unit.name]] : []));
+  const ids = [record.unitId, record.standUnitId].filter((id): id is number => typeof id === 'number');
+  const units = ids.length ? await Unit.findAll({ where: { id: ids }, attributes: ['id', 'name'] }) : [];
+  return presentHarvest(record, new Map(units.map((u) => [u.id, u.name])));
+}
+
+/** Harvests: staff, or a client's contacts when their consultant turned sit logging on (refused before the body is read). */
+async function mayRecordHarvest(req: Request, _res: Response, next: NextFunction) {
+  const me = actor(req);
+  if (me.role === 'client') {
+    await propertyOf(req);
+    await assertMayLogSits(me);
+  }
+  next();
 }
 
 // ---- per property ----
@@ -72,7 +84,7 @@ perProperty.get('/:id/harvests', STAFF_AND_CLIENT, ...typed({ params: IdParamsSc
   res.json({ data: await listHarvests(await propertyOf(req)) });
 }));
 
-perProperty.post('/:id/harvests', STAFF, ...typed({ params: IdParamsSchema, body: HarvestCreateSchema }, async ({ params, body }, req, res) => {
+perProperty.post('/:id/harvests', STAFF_AND_CLIENT, mayRecordHarvest, ...typed({ params: IdParamsSchema, body: HarvestCreateSchema }, async ({ params, body }, req, res) => {
   const record = await createHarvest(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: await harvestAnswer(record) });
 }));

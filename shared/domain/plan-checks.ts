@@ -28,6 +28,7 @@ import {
 import { findGeometryProblems } from './geometry-problems';
 import { AREA_KINDS, KIND_STYLES, kindFamily, type AreaKind, type UnitKind } from './unit-kinds';
 import { METRES_PER_FOOT, metresToFeet, sqMetresToAcres } from '../units';
+import { accessRouteWarnings, DEFAULT_HUNTING_SETTINGS, type RouteWarningCode } from './stand-winds';
 
 /** Smallest food plot, acres: NRCS CRP practice CP12 (wildlife food plot) job sheet. */
 export const FOOD_PLOT_MIN_ACRES = 0.25;
@@ -55,7 +56,8 @@ export type PlanWarningCode =
   | 'invalid-geometry'
   | 'check-failed'
   | 'plant-back'
-  | 'rotation';
+  | 'rotation'
+  | RouteWarningCode;
 
 export interface PlanWarning {
   code: PlanWarningCode;
@@ -82,6 +84,8 @@ export interface PlanCheckInput {
   maxVertices?: number;
   /** Above this many vertices the self-crossing pre-check is skipped (stored shapes passed PostGIS). */
   crossingCheckMaxVertices?: number;
+  /** Access routes closer than this to a bedding area or sanctuary are warned about (the firm's hunting setting; default 100 yd, common practice). */
+  routeBufferYd?: number;
 }
 
 /** Default vertex cap of the pre-check: turf `kinks` takes about 0.35 s at this size. */
@@ -117,6 +121,7 @@ export function planWarnings(input: PlanCheckInput): PlanWarning[] {
     }
   }
   const areaUnits: { unit: PlanUnit; box: BBox }[] = [];
+  const checkable: PlanUnit[] = [];
   const foodPlotIds: string[] = [];
   let foodPlotAcres = 0;
 
@@ -130,6 +135,7 @@ export function planWarnings(input: PlanCheckInput): PlanWarning[] {
       });
       continue;
     }
+    checkable.push(unit);
     try {
       const measure = measureUnit(unit.kind, unit.geometry);
       if (boundary) warnings.push(...boundaryWarnings(unit, boundary, measure.acres));
@@ -152,7 +158,20 @@ export function planWarnings(input: PlanCheckInput): PlanWarning[] {
     const share = foodPlotShareWarning(measureArea(boundary.geometry).acres, foodPlotAcres, foodPlotIds);
     if (share) warnings.push(share);
   }
+  warnings.push(...routeWarnings(checkable, input.routeBufferYd ?? DEFAULT_HUNTING_SETTINGS.routeBufferYd));
   return warnings;
+}
+
+/** The hunting planner's access-route checks (near bedding/sanctuary, across a food plot) as plan warnings. */
+function routeWarnings(units: readonly PlanUnit[], routeBufferYd: number): PlanWarning[] {
+  const relevant = units.filter((u) => ['access-route', 'bedding-area', 'sanctuary', 'food-plot'].includes(u.kind));
+  if (!relevant.some((u) => u.kind === 'access-route')) return [];
+  try {
+    const layout = relevant.map((u, i) => ({ id: i, name: u.name, kind: u.kind, geometry: u.geometry }));
+    return accessRouteWarnings(layout, { ...DEFAULT_HUNTING_SETTINGS, routeBufferYd }).map((w) => ({ code: w.code, unitIds: w.unitIds.map((i) => relevant[i]!.id), message: w.message }));
+  } catch (err) {
+    return [checkFailed(relevant.filter((u) => u.kind === 'access-route'), err)];
+  }
 }
 
 function boundaryWarnings(unit: PlanUnit, boundary: Feature<AreaGeometry>, unitAcres: number | null): PlanWarning[] {

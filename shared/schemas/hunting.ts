@@ -16,6 +16,8 @@ export const HUNTING_LIMITS = {
   deerSeenMax: 500,
   windMphMax: 150,
   standHeightFtMax: 60,
+  /** Most identified bucks one sit may name (more than any roster sees at once; common practice, no source). */
+  sitBucksMax: 20,
 } as const;
 
 export const WindNameSchema = z.enum(WIND_NAMES, { error: `the wind must be one of the 16 names: ${WIND_NAMES.join(', ')}` });
@@ -150,6 +152,12 @@ export const SitCreateSchema = z
       fawns: z.number().int().min(0).max(HUNTING_LIMITS.deerSeenMax),
     }),
     notes: z.string().trim().max(LIMITS.textMax).optional(),
+    /** Identified bucks from the property's camera roster (`GET /api/properties/:id/bucks`). */
+    buckIds: z
+      .array(RecordIdSchema, { error: 'buckIds: a list of buck ids from the camera roster' })
+      .max(HUNTING_LIMITS.sitBucksMax, { message: `buckIds: at most ${HUNTING_LIMITS.sitBucksMax} identified bucks per sit` })
+      .refine((ids) => new Set(ids).size === ids.length, { message: 'buckIds: each buck once' })
+      .optional(),
   })
   .superRefine((v, ctx) => {
     const ms = Date.parse(v.endedAt) - Date.parse(v.startedAt);
@@ -170,6 +178,7 @@ export const SitSchema = z.object({
   windMph: z.number().nullable(),
   seen: z.object({ bucks: z.number().int(), does: z.number().int(), fawns: z.number().int() }),
   notes: z.string().nullable(),
+  buckIds: z.array(z.number().int()),
   /** False when the stand does not suit the sit's wind; null without a wind. */
   windSuitable: z.boolean().nullable(),
   createdAt: z.string(),

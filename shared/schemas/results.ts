@@ -26,6 +26,9 @@ export const AGE_CLASS_LABELS: Record<(typeof AGE_CLASSES)[number], string> = {
   '5.5+': '5½ and older',
 };
 
+/** Longest state disease-sampling number accepted (tags and kit numbers are far shorter; common practice, no source). */
+export const DISEASE_SAMPLE_NUMBER_MAX = 40;
+
 /** Most photos one survey may tally per kind: far above any real survey, low enough to catch a typing slip. */
 export const MAX_SURVEY_PHOTOS = 1_000_000;
 /** Most identified bucks a survey may list. */
@@ -130,6 +133,18 @@ export const HarvestFieldsSchema = z.object({
   stand: optionalNote(LIMITS.nameMax),
   hunter: optionalNote(LIMITS.nameMax),
   notes: optionalNote(LIMITS.textMax),
+  /** The stand-site unit it was taken from (hunting pressure), if any. */
+  standUnitId: RecordIdSchema.nullish(),
+  /** The logged sit it was taken on, if any; must be a sit of this property (and of the stand, when both are given). */
+  sitId: RecordIdSchema.nullish(),
+  /** The state's disease-sampling (e.g. CWD) number, as the check station or kit gives it. */
+  diseaseSampleNumber: z
+    .string({ error: 'disease-sampling number: enter it as text, or leave it empty' })
+    .trim()
+    .max(DISEASE_SAMPLE_NUMBER_MAX, { message: `disease-sampling number: at most ${DISEASE_SAMPLE_NUMBER_MAX} characters` })
+    .regex(/^[A-Za-z0-9][A-Za-z0-9 ./#-]*$/, { message: 'disease-sampling number: letters, digits, spaces and - . / # only, as printed on the tag or kit' })
+    .nullish()
+    .or(z.literal('').transform(() => null)),
 });
 
 function checkHarvest(v: Partial<z.output<typeof HarvestFieldsSchema>>, ctx: z.RefinementCtx): void {
@@ -217,6 +232,10 @@ export interface HarvestDto {
   stand: string | null;
   hunter: string | null;
   notes: string | null;
+  standUnitId: number | null;
+  standName: string | null;
+  sitId: number | null;
+  diseaseSampleNumber: string | null;
   createdAt: string;
 }
 

@@ -55,6 +55,16 @@ export interface SeasonReportDocumentInput {
   cautions: Caution[];
   /** Field observations logged in the season: counts by kind and by unit (omitted: no section). */
   observations?: SeasonReportObservations;
+  /** Hunting pressure: sits and deer seen per stand (omitted, or no stands: no section). */
+  pressure?: SeasonReportPressure;
+}
+
+/** What the season report says about hunting pressure and sits. */
+export interface SeasonReportPressure {
+  stands: { name: string; sits: number; hours: number; deerSeen: number; deerPerHour: number | null; sitsOnUnsuitableWind: number; harvests: number }[];
+  totals: { sits: number; hours: number; deerSeen: number };
+  /** Harvests of the season that carry a state disease-sampling number. */
+  sampledHarvests: number;
 }
 
 /** What the season report says about field observations. */
@@ -265,6 +275,30 @@ function observationsSection(input: SeasonReportDocumentInput): Content[] {
   return out;
 }
 
+function pressureSection(input: SeasonReportDocumentInput): Content[] {
+  const p = input.pressure;
+  if (!p || p.stands.length === 0) return [];
+  const out: Content[] = [{ text: 'Hunting pressure and sits', style: 'h2' }];
+  if (p.totals.sits === 0) {
+    out.push({ text: 'No sits were logged this season.', style: 'muted' });
+    return out;
+  }
+  out.push({
+    text: `${p.totals.sits} ${p.totals.sits === 1 ? 'sit' : 'sits'} over ${one(p.totals.hours, 1)} hours were logged this season, with ${p.totals.deerSeen} deer seen. Stands sat often learn deer to avoid them; rest a stand between sits and sit it only on a wind that suits it.`,
+    margin: [0, 0, 0, 4],
+  });
+  out.push(
+    table(
+      ['Stand', 'Sits', 'Hours', 'Deer seen', 'Deer / hour', 'On a wrong wind', 'Harvests'],
+      p.stands.map((s) => [s.name, `${s.sits}`, one(s.hours, 1), `${s.deerSeen}`, s.deerPerHour === null ? '—' : one(s.deerPerHour, 2), `${s.sitsOnUnsuitableWind}`, `${s.harvests}`]),
+      ['*', 36, 40, 50, 56, 62, 50],
+      [1, 2, 3, 4, 5, 6],
+    ),
+  );
+  if (p.sampledHarvests > 0) out.push({ text: `${p.sampledHarvests} ${p.sampledHarvests === 1 ? 'harvest carries' : 'harvests carry'} a state disease-sampling number; results come from the state wildlife agency.`, style: 'muted' });
+  return out;
+}
+
 /** The season report's document definition; throws DomainValidationError naming the field on bad input. */
 export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumentDefinitions {
   const preparedOn = formatReportDate(input.preparedOn, 'preparedOn');
@@ -287,6 +321,7 @@ export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumen
     ...surveySection(input),
     ...harvestSection(input),
     ...observationsSection(input),
+    ...pressureSection(input),
     { text: 'Recommendations for next season', style: 'h2' },
     ...(recommendations
       ? recommendations.split(/\n\s*\n/).map((p) => ({ text: p.trim(), margin: [0, 0, 0, 6] }) as Content)

@@ -1,7 +1,7 @@
 /**
  * The portal is read-only, proven over every registered route: a signed-in client with a valid CSRF
  * token is refused every write except the few it owns (deciding its sent proposals, paying its
- * invoices, uploading and logging field observations where allowed, and its own session/password). The routes are enumerated at run
+ * invoices, uploading and logging field observations, sits and harvests where allowed, and its own session/password). The routes are enumerated at run
  * time from the registry, so routes other branches add are covered without editing this file.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -16,6 +16,7 @@ const CLIENT_WRITES: { pattern: RegExp; why: string }[] = [
   { pattern: /^post \/files$/, why: 'upload a file when its consultant allows it' },
   { pattern: /^post \/properties\/:id\/observations$/, why: 'log a field observation on its own land when its consultant allows it' },
   { pattern: /^post \/properties\/:id\/sits$/, why: 'log a sit on its own land when its consultant allows it' },
+  { pattern: /^post \/properties\/:id\/harvests$/, why: 'record a deer taken on its own land (stand, sit, disease-sampling number) when its consultant allows sit logging' },
   { pattern: /^(post|put|patch) \/auth\/(logout|password.*|me.*)$/, why: 'its own session and password' },
 ];
 /** Public routes are nobody's writes: each is guarded by its own token, signature or credentials (sign-up by its rate limit and e-mail confirmation). */

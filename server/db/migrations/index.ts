@@ -23,6 +23,7 @@ import * as m0061 from './0061-soil-tests';
 import * as m0062 from './0062-season-drafts';
 import * as m0063 from './0063-spray-records';
 import * as m0070 from './0070-hunting-pressure';
+import * as m0071 from './0071-sit-bucks';
 import * as m0080 from './0080-list-read-indexes';
 import * as m0085 from './0085-search-trigram';
 import * as m0086 from './0086-firm-exports';
@@ -53,6 +54,7 @@ export const migrations = [
   { name: '0062-season-drafts', ...m0062 },
   { name: '0063-spray-records', ...m0063 },
   { name: '0070-hunting-pressure', ...m0070 },
+  { name: '0071-sit-bucks', ...m0071 },
   { name: '0080-list-read-indexes', ...m0080 },
   { name: '0085-search-trigram', ...m0085 },
   { name: '0086-firm-exports', ...m0086 },

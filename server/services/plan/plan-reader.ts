@@ -6,12 +6,13 @@
  */
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
-import { Property } from '../../models';
+import { Firm, Property } from '../../models';
 import { notFound } from '../../errors';
 import { buildId } from '../../build-id';
 import { presentUnit, type UnitRow } from '../../presenters/unit';
 import { planWarnings, shareByKind, type PlanWarning } from '../../../shared/domain/plan-checks';
 import { seasonPlanWarnings } from '../../queries/plan-season-checks';
+import { huntingSettings } from '../../../shared/domain/stand-winds';
 import type { PlanSummary } from '../../../shared/schemas/unit';
 import { stripCrs } from '../../presenters/geojson';
 import { GEOMETRY_LIMITS } from '../../../shared/limits';
@@ -99,17 +100,19 @@ const presentWarning = (w: PlanWarning): PlanSummary['warnings'][number] => ({
 });
 
 /**
- * Share of the property by kind and the plan warnings: the map's (cached by revision) and the
- * season's — plant-back intervals and rotation — read fresh, since tasks and prescriptions change
- * without a new revision.
+ * Share of the property by kind and the plan warnings: the map's (cached by revision and the firm's
+ * route distance) and the season's — plant-back intervals and rotation — read fresh, since tasks and
+ * prescriptions change without a new revision.
  */
 export async function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
   const [mapped, season] = await Promise.all([mapSummary(plan), seasonPlanWarnings(plan.property.id, plan.property.firmId)]);
   return season.length ? { ...mapped, warnings: [...mapped.warnings, ...season.map(presentWarning)] } : mapped;
 }
 
-function mapSummary(plan: LoadedPlan): Promise<PlanSummary> {
-  return remember(`summary:${plan.property.id}:${plan.revision}`, async () => {
+async function mapSummary(plan: LoadedPlan): Promise<PlanSummary> {
+  const firm = await Firm.findByPk(plan.property.firmId, { attributes: ['id', 'settings'] });
+  const { routeBufferYd } = huntingSettings(firm?.settings);
+  return remember(`summary:${plan.property.id}:${plan.revision}:${routeBufferYd}`, async () => {
     const units = await plan.units();
     const boundary = plan.property.boundary ? stripCrs(plan.property.boundary) : null;
     const planUnits = units.map((u) => ({ id: String(u.id), name: u.name, kind: u.kind, geometry: u.geometry }));
@@ -120,7 +123,7 @@ function mapSummary(plan: LoadedPlan): Promise<PlanSummary> {
       boundaryAcres,
       shareByKind: boundaryAcres ? shareByKind(boundaryAcres, planUnits) : [],
       // Stored shapes already passed PostGIS validation: skip the quadratic crossing pre-check on large ones.
-      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices }).map(presentWarning),
+      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices, routeBufferYd }).map(presentWarning),
     };
   });
 }

@@ -16,6 +16,7 @@ import { StandDetailsForm } from './stand-details-form';
 import { SitForm } from './sit-form';
 import { PressureTable } from './pressure-table';
 import { WindRecordCard } from './wind-record-card';
+import { HarvestForm } from './harvest-form';
 import { Card, CautionBox, ErrorPanel, Loading, EmptyState } from '../../../components/ui/card';
 
 export function StandsPage({ propertyId, userId, canEdit }: { propertyId: number; userId: number; canEdit: boolean }) {
@@ -78,6 +79,12 @@ export function StandsPage({ propertyId, userId, canEdit }: { propertyId: number
             </p>
           ))}
           {sitStand !== null ? <SitForm key={sitStand} propertyId={propertyId} stands={answer.data} standId={sitStand} wind={wind} save={queue.save} /> : null}
+        </Card>
+      ) : null}
+
+      {canLogSits && answer.data.length ? (
+        <Card title="Record a harvest">
+          <HarvestForm propertyId={propertyId} stands={answer.data} />
         </Card>
       ) : null}
 
