@@ -2,15 +2,16 @@
 import type { MultiPolygon, Polygon } from 'geojson';
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db/sequelize';
-import { Client, Property } from '../models';
+import { Client, Property, Proposal } from '../models';
 import { measureArea, toMultiPolygon } from '../../shared/domain/geometry';
 import type { PropertyCreateInput, PropertyUpdateInput } from '../../shared/schemas/property';
 import type { SessionUser } from '../../shared/schemas/auth';
-import { notFound, unprocessable } from '../errors';
+import { conflict, notFound, unprocessable } from '../errors';
 import { CONFIRM_LARGE_AREA_FIELD, largeBoundaryMessage } from '../../shared/domain/large-area';
 import { firmLargeAreaAcres } from './unit-writer';
 import { assertValidInDatabase } from './geometry-validator';
 import { recordAudit } from './audit-recorder';
+import { findInFirm } from '../policies/firm-scope';
 
 /** The stored boundary columns for a boundary (or its absence). */
 export function boundaryColumns(geom: Polygon | MultiPolygon | null) {
@@ -77,5 +78,19 @@ export async function updateProperty(actor: SessionUser, propertyId: number, inp
     await property.update(changes, { transaction });
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: boundary !== undefined ? 'property.boundary-changed' : 'property.updated', subjectType: 'Property', subjectId: property.id, ip }, transaction);
     return property;
+  });
+}
+
+/**
+ * Deletes a property of the actor's firm with its audit record, in one transaction; refused (409)
+ * while it has sent or approved proposals, which must stay on record.
+ */
+export async function deleteProperty(actor: SessionUser, propertyId: number, ip: string | null): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    const property = await findInFirm(Property, propertyId, actor.firmId, 'That property', { transaction, lock: true });
+    const binding = await Proposal.count({ where: { propertyId: property.id, status: ['sent', 'approved'] }, transaction });
+    if (binding) throw conflict('This property has sent or approved proposals, which must stay on record. Withdraw the sent ones first; approved work cannot be deleted.');
+    await property.destroy({ transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'property.deleted', subjectType: 'Property', subjectId: property.id, data: { name: property.name }, ip }, transaction);
   });
 }

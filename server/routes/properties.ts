@@ -12,19 +12,18 @@ import { GEOMETRY_LIMITS } from '../../shared/limits';
 import { presentProperty } from '../presenters/property';
 import { presentUnit } from '../presenters/unit';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { createProperty, updateProperty } from '../commands/property-writer';
+import { createProperty, deleteProperty, updateProperty } from '../commands/property-writer';
 import { createUnits } from '../commands/unit-writer';
-import { recordAudit } from '../commands/audit-recorder';
 import { loadPlan, planEtagAt, planRevision, planSummary, unitsAnswer } from '../services/plan/plan-reader';
 import { etagMatches, sendPrecompressed } from '../services/http/precompressed';
 import { writeGeoFile, isExportFormat, EXPORT_FORMATS } from '../services/geo-files';
 import { runGeoImport } from '../services/geo-work/geo-pool';
 import { loadImportGeometries, storeImport } from '../services/geo-files/import-store';
 import { ImportFeaturesQuerySchema, ImportParamsSchema } from '../../shared/schemas/geo-import';
-import { badRequest, conflict, notFound, unprocessable } from '../errors';
+import { badRequest, notFound, unprocessable } from '../errors';
 import { stripCrs } from '../presenters/geojson';
 import { z } from 'zod';
-import { Firm, Proposal } from '../models';
+import { Firm } from '../models';
 import { renderPlanSummaryPdf } from '../services/documents/render-documents';
 import { liveOverlaysForPrint } from '../services/documents/overlay-print';
 import { todayInZone } from '../services/clock';
@@ -81,14 +80,7 @@ r.patch('/:id', STAFF, validate({ params: IdParamsSchema, body: PropertyUpdateSc
 });
 
 r.delete('/:id', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
-  const me = actor(req);
-  await sequelize.transaction(async (transaction) => {
-    const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property', { transaction, lock: true });
-    const binding = await Proposal.count({ where: { propertyId: property.id, status: ['sent', 'approved'] }, transaction });
-    if (binding) throw conflict('This property has sent or approved proposals, which must stay on record. Withdraw the sent ones first; approved work cannot be deleted.');
-    await property.destroy({ transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'property.deleted', subjectType: 'Property', subjectId: property.id, data: { name: property.name }, ip: req.ip ?? null }, transaction);
-  });
+  await deleteProperty(actor(req), Number(req.params.id), req.ip ?? null);
   res.status(204).end();
 });
 

@@ -2,7 +2,6 @@
 import type { Request } from 'express';
 import { Op, type WhereOptions } from 'sequelize';
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
 import { typed } from '../middlewares/typed-route';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
@@ -63,16 +62,16 @@ async function listRows(where: WhereOptions, today: string, page?: { limit: numb
   }));
 }
 
-perProperty.get('/:id/proposals', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/proposals', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
-  const property = await findInFirm(Property, Number(req.params.id), firmId, 'That property');
+  const property = await findInFirm(Property, params.id, firmId, 'That property');
   res.json({ data: await listRows({ firmId, propertyId: property.id }, todayInZone(actor(req).firmTimezone)) });
-});
+}));
 
-perProperty.post('/:id/proposals', STAFF, validate({ params: IdParamsSchema, body: ProposalCreateSchema }), async (req, res) => {
-  const proposal = await draftProposal(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+perProperty.post('/:id/proposals', STAFF, ...typed({ params: IdParamsSchema, body: ProposalCreateSchema }, async ({ params, body }, req, res) => {
+  const proposal = await draftProposal(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: await readProposal(proposal) });
-});
+}));
 
 r.get('/', STAFF_AND_CLIENT, ...typed({ query: ProposalListQuerySchema }, async ({ query }, req, res) => {
   const me = actor(req);

@@ -87,9 +87,9 @@ r.post('/:id/reopen', STAFF, ...typed({ params: IdParamsSchema }, async ({ param
 }));
 
 /** A completion photo, for staff of the firm, the crew member of the task, and the client who owns the property. */
-photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {
+photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const photo = await findInFirm(TaskPhoto, Number(req.params.id), me.firmId, 'That photo');
+  const photo = await findInFirm(TaskPhoto, params.id, me.firmId, 'That photo');
   const task = await Task.findByPk(photo.taskId, { attributes: ['id', 'assigneeId', 'propertyId'] });
   if (!task) throw notFound('That photo');
   if (me.role === 'crew' && task.assigneeId !== me.id) throw notFound('That photo');
@@ -101,21 +101,21 @@ photosRouter.get('/:id', ['owner', 'consultant', 'crew', 'client'], validate({ p
   res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
   res.setHeader('Content-Disposition', 'inline');
   await sendStoredFile(res, photo.storageKey);
-});
+}));
 
-perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], validate({ params: IdParamsSchema }), async (req, res) => {
+perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
+  const property = await findInFirm(Property, params.id, me.firmId, 'That property');
   if (me.role === 'client' && property.clientId !== me.clientId) throw notFound('That property');
   res.json({ data: await propertyProgress(property) });
-});
+}));
 
 const NotifySchema = z.object({ notifyClientOnUnitDone: z.boolean() }).strict();
-perProperty.patch('/:id/progress-settings', STAFF, validate({ params: IdParamsSchema, body: NotifySchema }), async (req, res) => {
-  const property = await findInFirm(Property, Number(req.params.id), actor(req).firmId, 'That property');
-  await property.update({ notifyClientOnUnitDone: req.body.notifyClientOnUnitDone });
+perProperty.patch('/:id/progress-settings', STAFF, ...typed({ params: IdParamsSchema, body: NotifySchema }, async ({ params, body }, req, res) => {
+  const property = await findInFirm(Property, params.id, actor(req).firmId, 'That property');
+  await property.update({ notifyClientOnUnitDone: body.notifyClientOnUnitDone });
   res.json({ data: { notifyClientOnUnitDone: property.notifyClientOnUnitDone } });
-});
+}));
 
 export const tasksRouter = r.router;
 export const taskPhotosRouter = photosRouter.router;

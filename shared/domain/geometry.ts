@@ -8,7 +8,7 @@
  * server's stored measures, the browser's live preview, exports and documents all come from here.
  * Results are returned unrounded: presentation rounds.
  */
-import { bbox, centerOfMass, feature, featureCollection } from '@turf/turf';
+import { bbox, feature, featureCollection } from '@turf/turf';
 import type {
   BBox,
   Geometry,
@@ -162,11 +162,8 @@ export function bboxOf(geometries: readonly Geometry[]): BBox | null {
   return box.some((v) => !Number.isFinite(v)) ? null : box;
 }
 
-/** Centre of a geometry as lon/lat: the area-weighted centroid for areas, the vertex mean otherwise. */
-export function centroidOf(geometry: Geometry): LonLat {
-  const [lon, lat] = centerOfMass(feature(geometry)).geometry.coordinates;
-  return { lon, lat };
-}
+/** The one centroid (area-weighted, holes and every part of a MultiPolygon counted): see `centroid.ts`. */
+export { centroidOf } from './centroid';
 
 /** The geometry as a MultiPolygon (PostGIS boundary columns refuse a bare Polygon). */
 export function toMultiPolygon(geom: AreaGeometry): MultiPolygon {

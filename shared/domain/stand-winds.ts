@@ -6,6 +6,7 @@
  * access routes lead to the stand, only when at least one of them is suitable for that wind too.
  */
 import type { Geometry, Point, Position } from 'geojson';
+import { centroidOf } from './centroid';
 import { destination, inverse, normalizeDeg } from './geodesic';
 import { coneReaches, METRES_PER_YARD, partsOf, pathToAreaM, pointToPathM, samplePath, type Cone } from './scent';
 import type { UnitKind } from './unit-kinds';
@@ -115,12 +116,11 @@ const coneFor = (apex: Position, fromDeg: number, s: HuntingSettings): Cone => (
 
 const PROTECTED: UnitKind[] = ['bedding-area', 'sanctuary'];
 
-/** A representative point of an area: the mean of its outer ring's corners. */
+/** A representative point of a unit: the shared centroid (area-weighted over all the parts of an area). */
 function areaCenter(geometry: Geometry): Position | null {
-  const ring = partsOf(geometry)[0]?.[0];
-  if (!ring || ring.length === 0) return null;
-  const pts = ring.length > 1 ? ring.slice(0, -1) : ring;
-  return [pts.reduce((s, p) => s + p[0]!, 0) / pts.length, pts.reduce((s, p) => s + p[1]!, 0) / pts.length];
+  if (!partsOf(geometry)[0]?.[0]?.length) return null;
+  const c = centroidOf(geometry);
+  return [c.lon, c.lat];
 }
 
 /**

@@ -10,7 +10,7 @@ import { queryClient } from '../lib/query-client';
 import { getMeQueryOptions } from '../features/auth/api/get-me';
 import { getFieldHomeQueryOptions } from '../features/field/api/get-field-home';
 import { getMyTasksQueryOptions } from '../features/field/api/get-my-tasks';
-import { getTaskQueryOptions } from '../features/field/api/get-task';
+import { getTaskQueryOptions } from '../lib/resources/task';
 import { getPortalPropertiesQueryOptions } from '../features/portal/api/get-portal-properties';
 import { getPortalPropertyQueryOptions } from '../features/portal/api/get-portal-property';
 import { OWN_SCOPE } from '../features/portal/api/portal-scope';

@@ -15,7 +15,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { generateLargeKml } from '../support/geo-fixtures-large';
-import { freshDatabase, startTestCluster } from '../support/test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
 import { shapefileBomb } from '../support/zip-bytes';
 import { tiffHeaderOnly } from '../support/tiff-bytes';
@@ -172,6 +172,7 @@ async function main() {
     }
   } finally {
     server.kill('SIGTERM');
+    await dropDatabase(databaseUrl);
   }
   console.log('\nGeo import benchmark');
   for (const [k, v] of Object.entries(results)) console.log(`  ${k}: ${v}`);

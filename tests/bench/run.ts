@@ -9,7 +9,7 @@ import { area as turfArea } from '@turf/turf';
 import { measureArea } from '../../shared/domain/geometry';
 import { readGeoFile } from '../../server/services/geo-files';
 import { generateLargeKml } from '../support/geo-fixtures-large';
-import { freshDatabase, startTestCluster } from '../support/test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
 import { load, median, percentile, timeRuns } from './support';
 
@@ -188,6 +188,7 @@ async function http() {
     if (withGrowth) await growth(base);
   } finally {
     server.kill('SIGTERM');
+    await dropDatabase(databaseUrl);
   }
 }
 

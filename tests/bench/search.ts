@@ -7,7 +7,7 @@
 import { execFileSync, spawn } from 'node:child_process';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { freshDatabase, startTestCluster } from '../support/test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
 import { median, percentile } from './support';
 
@@ -78,4 +78,5 @@ try {
   console.log(`  mean hits per 10× query: ${(hits / times.ten.length).toFixed(1)}`);
 } finally {
   server.kill('SIGTERM');
+  await dropDatabase(databaseUrl);
 }

@@ -7,7 +7,7 @@ import { execFileSync, spawn } from 'node:child_process';
 import path from 'node:path';
 import crypto from 'node:crypto';
 import { performance } from 'node:perf_hooks';
-import { freshDatabase, startTestCluster } from '../support/test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
 import { median, percentile } from './support';
 
@@ -60,4 +60,5 @@ try {
   console.log(`  ratio used ÷ new p50: ${(median(again) / median(fresh)).toFixed(2)} (goal 0.9–1.1)`);
 } finally {
   server.kill('SIGTERM');
+  await dropDatabase(databaseUrl);
 }

@@ -19,7 +19,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { freshDatabase, startTestCluster } from '../support/test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
 import { median } from './support';
 
@@ -176,6 +176,7 @@ async function main() {
   } finally {
     await browser.close();
     for (const t of targets) t.server?.kill('SIGTERM');
+    await dropDatabase(databaseUrl);
   }
 }
 

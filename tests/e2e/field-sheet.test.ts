@@ -12,8 +12,10 @@ import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../supp
 import { withGpsExif } from '../support/exif';
 import { todayIn } from '../../shared/domain/clock';
 import { expectNoAxeViolations } from '../support/axe';
+import { JOURNEY_PASSWORD, ownApprovedPlot } from '../support/journey-data';
 
 const baseUrl = inject('baseUrl');
+const mailUrl = inject('mailUrl');
 const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
 /** Waits for the page or the server to catch up (a sync, a refetch): up to 20 s, no fixed sleeps. */
 const poll = <T>(fn: () => Promise<T> | T, timeout = 20_000) => expect.poll(fn, { timeout, interval: 150 });
@@ -36,9 +38,10 @@ const apiAs = (email: string) => apiSignIn(baseUrl, email);
 let browser: Browser;
 let consultant: Awaited<ReturnType<typeof apiAs>>;
 let club: Awaited<ReturnType<typeof apiAs>>;
+let ownerEmail = '';
 let propertyId = 0;
 let crewId = 0;
-/** Three tasks on the Bluestem Ridge club plot, assigned to the demo crew member for today. */
+/** Three tasks on the journey's own club plot, assigned to the demo crew member for today. */
 let tasks: ApiTask[] = [];
 
 const write = (who: { request: APIRequestContext; csrf: string }, method: 'post' | 'patch', url: string, data: unknown = {}) => who.request[method](url, { data, headers: { 'X-CSRF-Token': who.csrf } });
@@ -53,22 +56,15 @@ const today = () => todayIn('America/Chicago', new Date());
 beforeAll(async () => {
   browser = await launchBrowser();
   consultant = await apiAs('consultant@browseline.test');
-  club = await apiAs('club@browseline.test');
-  // Demo data: Bluestem Ridge (club@'s land) has a fall brassica prescription on its Club plot; no other journey approves a proposal there.
-  const properties = (await (await consultant.request.get('/api/properties')).json()) as { data: { id: number; name: string }[] };
-  propertyId = properties.data.find((p) => p.name === 'Bluestem Ridge')!.id;
+  // The journey's own client, contact, plot and approved proposal: no other journey touches them.
+  const owned = await ownApprovedPlot(baseUrl, mailUrl, consultant, 'Field sheet');
+  propertyId = owned.propertyId;
+  club = owned.contact;
+  ownerEmail = owned.contact.email;
   const team = (await (await consultant.request.get('/api/team')).json()) as { data: { id: number; email: string }[] };
   crewId = team.data.find((m) => m.email === 'crew@browseline.test')!.id;
 
-  let list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
-  if (list.data.tasks.length === 0) {
-    const draft = await write(consultant, 'post', `/api/properties/${propertyId}/proposals`, { depositPct: 30 });
-    expect(draft.status()).toBe(201);
-    const proposalId = ((await draft.json()) as { data: { id: number } }).data.id;
-    expect((await write(consultant, 'post', `/api/proposals/${proposalId}/send`)).status()).toBe(200);
-    expect((await write(club, 'post', `/api/proposals/${proposalId}/approve`, { signedName: 'Marcus Feld' })).status()).toBe(200);
-    list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
-  }
+  const list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
   const open = list.data.tasks.filter((t) => t.status === 'planned' || t.status === 'scheduled');
   expect(open.length).toBeGreaterThanOrEqual(3);
   tasks = open.slice(0, 3);
@@ -132,7 +128,7 @@ describe('the crew’s field sheet on a phone', () => {
     const task = tasks[0];
     await openTask(page, task);
     const maps = page.getByRole('link', { name: /Open in maps/ });
-    // RFC 5870: geo:<latitude>,<longitude>; Bluestem Ridge lies near 43.55° N, 90.88° W (demo data).
+    // RFC 5870: geo:<latitude>,<longitude>; the journey's plot lies near 43.55° N, 90.88° W (demo data).
     expect(await maps.getAttribute('href')).toMatch(/^geo:43\.5\d*,-90\.8\d*/);
     await expect.poll(() => page.getByRole('img', { name: /Map of Club plot/ }).count()).toBe(1);
     expect(await page.getByText('$').count()).toBe(0);
@@ -196,7 +192,7 @@ describe('the crew’s field sheet on a phone', () => {
     // The landowner's progress page in the portal, on a phone: the crew's photo of this task.
     const landowner = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true });
     const owner = await landowner.newPage();
-    await signIn(owner, baseUrl, 'club@browseline.test');
+    await signIn(owner, baseUrl, ownerEmail, JOURNEY_PASSWORD);
     await owner.waitForURL(`${baseUrl}/portal`);
     await owner.goto(`${baseUrl}/portal/properties/${propertyId}/progress`);
     await poll(() => owner.getByRole('heading', { name: 'Progress', level: 1 }).count()).toBe(1);

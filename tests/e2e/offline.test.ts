@@ -8,8 +8,10 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { APIRequestContext, Browser, Page } from 'playwright-core';
 import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { ownApprovedPlot } from '../support/journey-data';
 
 const baseUrl = inject('baseUrl');
+const mailUrl = inject('mailUrl');
 /** Waits for the page or the server to catch up (a sync, a service worker install): up to 30 s, no fixed sleeps. */
 const poll = <T>(fn: () => Promise<T> | T, timeout = 30_000) => expect.poll(fn, { timeout, interval: 150 });
 
@@ -35,22 +37,14 @@ const taskById = async (id: number): Promise<ApiTask> => {
 beforeAll(async () => {
   browser = await launchBrowser();
   consultant = await apiSignIn(baseUrl, 'consultant@browseline.test');
-  const club = await apiSignIn(baseUrl, 'club@browseline.test');
-  // Demo data: Bluestem Ridge has a prescription on its Club plot; its proposal is approved here unless a journey did so already.
-  const properties = (await (await consultant.request.get('/api/properties')).json()) as { data: { id: number; name: string }[] };
-  propertyId = properties.data.find((p) => p.name === 'Bluestem Ridge')!.id;
+  // The journey's own client, contact, plot and approved proposal: no other journey touches them.
+  const owned = await ownApprovedPlot(baseUrl, mailUrl, consultant, 'Offline');
+  propertyId = owned.propertyId;
   const team = (await (await consultant.request.get('/api/team')).json()) as { data: { id: number; email: string }[] };
   const crewId = team.data.find((m) => m.email === 'crew@browseline.test')!.id;
-  let list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
-  if (list.data.tasks.length === 0) {
-    const draft = await write('post', `/api/properties/${propertyId}/proposals`, { depositPct: 30 });
-    const proposalId = ((await draft.json()) as { data: { id: number } }).data.id;
-    expect((await write('post', `/api/proposals/${proposalId}/send`)).status()).toBe(200);
-    expect((await club.request.post(`/api/proposals/${proposalId}/approve`, { data: { signedName: 'Marcus Feld' }, headers: { 'X-CSRF-Token': club.csrf } })).status()).toBe(200);
-    list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
-  }
-  await club.request.dispose();
-  // The last open task: the field-sheet journey takes the first three.
+  const list = (await (await consultant.request.get(`/api/tasks?propertyId=${propertyId}`)).json()) as { data: { tasks: ApiTask[] } };
+  await owned.contact.request.dispose();
+  // The last open task of the plot.
   const open = list.data.tasks.filter((t) => t.status === 'planned' || t.status === 'scheduled');
   task = open[open.length - 1];
   expect(task).toBeDefined();
@@ -167,7 +161,7 @@ describe('the app on a phone with no signal', () => {
     await page.waitForURL(`${baseUrl}/field`);
     await page.goto(`${baseUrl}/field/tasks/${task.id}`);
     const maps = page.getByRole('link', { name: /Open in maps/ });
-    // Apple's Map Links: daddr is the destination; Bluestem Ridge lies near 43.55° N, 90.88° W (demo data).
+    // Apple's Map Links: daddr is the destination; the journey's plot lies near 43.55° N, 90.88° W (demo data).
     await poll(() => maps.getAttribute('href')).toMatch(/^https:\/\/maps\.apple\.com\/\?daddr=43\.5\d*,-90\.8\d*&dirflg=d/);
     await page.getByRole('button', { name: 'Copy coordinates' }).click();
     await poll(() => page.getByText(/^Copied 43\.5\d{4}, -90\.8\d{4}$/).count()).toBe(1);

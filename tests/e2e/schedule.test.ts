@@ -7,8 +7,10 @@ import { DEMO_PASSWORD, launchBrowser, screenshot, signIn, watchPage } from '../
 import { withGpsExif } from '../support/exif';
 import { todayIn } from '../../shared/domain/clock';
 import { expectNoAxeViolations } from '../support/axe';
+import { ownApprovedPlot } from '../support/journey-data';
 
 const baseUrl = inject('baseUrl');
+const mailUrl = inject('mailUrl');
 const WAIT = { timeout: 15_000 };
 const JPEG = fs.readFileSync(path.resolve(import.meta.dirname, '../fixtures/photos/field-plot.jpg'));
 let browser: Browser;
@@ -55,27 +57,17 @@ let consultantApi: Awaited<ReturnType<typeof apiSession>>;
 beforeAll(async () => {
   browser = await launchBrowser();
   consultantApi = await apiSession('consultant@browseline.test');
-  const { request, csrf } = consultantApi;
-  // Demo seed: the club's Bluestem Ridge has a fall brassica prescription on "Club plot"; no other
-  // journey writes proposals for it. The consultant sends a proposal and the club approves it,
-  // which makes the tasks (through the API, as a person would, without depending on fixed ids).
-  const properties = await json<{ id: number; name: string }[]>(await request.get(`${baseUrl}/api/properties`));
-  const bluestem = properties.find((p) => p.name === 'Bluestem Ridge');
-  if (!bluestem) throw new Error('The demo property Bluestem Ridge is missing');
-  propertyId = bluestem.id;
-  propertyName = bluestem.name;
+  const { request } = consultantApi;
+  // The journey's own client, contact, plot and approved proposal (through the API, as a person
+  // would): no other journey touches them, so the plot's tasks are all planned and unassigned here.
+  const owned = await ownApprovedPlot(baseUrl, mailUrl, consultantApi, 'Schedule');
+  await owned.contact.request.dispose();
+  propertyId = owned.propertyId;
+  propertyName = owned.propertyName;
   const team = await json<{ id: number; email: string }[]>(await request.get(`${baseUrl}/api/team`));
   crewId = team.find((m) => m.email === 'crew@browseline.test')!.id;
 
-  let tasks = (await json<{ tasks: Task[] }>(await request.get(`${baseUrl}/api/tasks?propertyId=${propertyId}`))).tasks;
-  if (tasks.length === 0) {
-    const draft = await json<{ id: number }>(await request.post(`${baseUrl}/api/properties/${propertyId}/proposals`, { headers: { 'X-CSRF-Token': csrf }, data: { depositPct: 30 } }), 201);
-    await json(await request.post(`${baseUrl}/api/proposals/${draft.id}/send`, { headers: { 'X-CSRF-Token': csrf }, data: {} }));
-    const club = await apiSession('club@browseline.test');
-    await json(await club.request.post(`${baseUrl}/api/proposals/${draft.id}/approve`, { headers: { 'X-CSRF-Token': club.csrf }, data: { signedName: 'Marcus Feld' } }));
-    await club.context.close();
-    tasks = (await json<{ tasks: Task[] }>(await request.get(`${baseUrl}/api/tasks?propertyId=${propertyId}`))).tasks;
-  }
+  const tasks = (await json<{ tasks: Task[] }>(await request.get(`${baseUrl}/api/tasks?propertyId=${propertyId}`))).tasks;
   const open = tasks.filter((t) => t.status === 'planned' && t.assigneeId === null && t.unitName === 'Club plot').sort((a, b) => a.earliest.localeCompare(b.earliest));
   expect(open.length).toBeGreaterThan(1);
   task = open[0];
@@ -187,7 +179,7 @@ describe('the consultant’s schedule', () => {
     // The crew member marks the task done from the field (multipart, with an idempotency key).
     const crew = await apiSession('crew@browseline.test');
     const doneOn = todayIn('America/Chicago', new Date()); // the demo firm's today
-    const photo = withGpsExif(JPEG, 43.5494, -90.8785); // inside Club plot (demo seed geometry)
+    const photo = withGpsExif(JPEG, 43.5494, -90.8785); // inside the journey's Club plot
     const res = await crew.request.post(`${baseUrl}/api/tasks/${task.id}/complete`, {
       headers: { 'X-CSRF-Token': crew.csrf, 'Idempotency-Key': `e2e-${crypto.randomUUID()}` },
       multipart: { doneOn, notes: 'Disked and seeded; soil was mellow.', hours: '3.5', photos: { name: 'club-plot.jpg', mimeType: 'image/jpeg', buffer: photo } },

@@ -1,5 +1,5 @@
 /**
- * Browser journeys: a fresh database with the demo data, the local SMTP capture server and the real
+ * Browser journeys: a fresh database with the demo data (named for this run, dropped at the end), the local SMTP capture server and the real
  * server (production mode, serving the built client) on free loopback ports.
  */
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
@@ -7,7 +7,7 @@ import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
-import { freshDatabase, startTestCluster } from './test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from './test-db';
 import { startSmtpCapture } from '../../server/scripts/smtp-capture';
 
 const root = path.resolve(import.meta.dirname, '../..');
@@ -93,5 +93,6 @@ export default async function setup(project: TestProject) {
     for (const child of children) child.kill('SIGTERM');
     await Promise.all(children.map((c) => (c.exitCode !== null ? Promise.resolve() : new Promise((r) => c.once('exit', r)))));
     await capture.close();
+    await dropDatabase(databaseUrl);
   };
 }

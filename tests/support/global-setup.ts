@@ -1,10 +1,10 @@
 /**
- * Integration tests: a fresh database on the test cluster, migrated once; a local SMTP capture
+ * Integration tests: a fresh database on the test cluster (named for this run, dropped at the end), migrated once; a local SMTP capture
  * server on free ports. The settings reach the test workers through the environment.
  */
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';
-import { freshDatabase, startTestCluster } from './test-db';
+import { dropDatabase, freshDatabase, startTestCluster } from './test-db';
 import { startSmtpCapture, type SmtpCapture } from '../../server/scripts/smtp-capture';
 
 let capture: SmtpCapture | null = null;
@@ -22,5 +22,6 @@ export default async function setup() {
   process.env.NODE_ENV = 'test';
   return async () => {
     await capture?.close();
+    await dropDatabase(url);
   };
 }

@@ -1,6 +1,5 @@
 /** CSV export (RFC 4180) of the plan's units with centroids, guarded against spreadsheet formula injection. */
-import { centroid } from '@turf/turf';
-import type { Position } from 'geojson';
+import { centroidOf } from '../../../shared/domain/centroid';
 import { kindFamily } from '../../../shared/domain/unit-kinds';
 import { formatCoordinate } from './export-helpers';
 import type { ExportUnit, PlanExport } from './types';
@@ -20,55 +19,10 @@ export function csvField(text: string): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-/**
- * Area-weighted centroid of polygons with holes, planar in lon/lat (an affine change of scale
- * such as cos(latitude) moves a centroid with the shape, so a local map projection gives the same
- * point). turf's centerOfMass joins the rings of a polygon with holes into one and takes the
- * convex hull of a MultiPolygon, so it is not used for areas.
- */
-export function areaCentroid(polygons: Position[][][]): [number, number] | null {
-  const origin = polygons[0]?.[0]?.[0];
-  if (!origin) return null;
-  let sumArea = 0;
-  let sumX = 0;
-  let sumY = 0;
-  for (const rings of polygons) {
-    rings.forEach((ring, i) => {
-      // Shoelace terms relative to the origin, to keep the products small.
-      let a = 0;
-      let cx = 0;
-      let cy = 0;
-      for (let k = 0; k < ring.length - 1; k += 1) {
-        const x0 = ring[k][0] - origin[0];
-        const y0 = ring[k][1] - origin[1];
-        const x1 = ring[k + 1][0] - origin[0];
-        const y1 = ring[k + 1][1] - origin[1];
-        const cross = x0 * y1 - x1 * y0;
-        a += cross;
-        cx += (x0 + x1) * cross;
-        cy += (y0 + y1) * cross;
-      }
-      // Exterior rings add, holes subtract, whatever their winding.
-      const sign = (i === 0 ? 1 : -1) * Math.sign(a);
-      sumArea += sign * a;
-      sumX += sign * cx;
-      sumY += sign * cy;
-    });
-  }
-  if (sumArea === 0) return null;
-  return [origin[0] + sumX / (3 * sumArea), origin[1] + sumY / (3 * sumArea)];
-}
-
-/** A unit's centroid: area-weighted for areas, turf's centroid (mean of vertices) for lines, the point itself. */
+/** A unit's centroid as [lon, lat]: the shared one (area-weighted for areas, the vertex mean for lines, the point itself). */
 export function unitCentroid(unit: ExportUnit): [number, number] {
-  const geometry = unit.geometry;
-  if (geometry.type === 'Point') return [geometry.coordinates[0], geometry.coordinates[1]];
-  if (geometry.type === 'Polygon' || geometry.type === 'MultiPolygon') {
-    const c = areaCentroid(geometry.type === 'Polygon' ? [geometry.coordinates] : geometry.coordinates);
-    if (c) return c;
-  }
-  const point = centroid(geometry);
-  return [point.geometry.coordinates[0], point.geometry.coordinates[1]];
+  const { lon, lat } = centroidOf(unit.geometry);
+  return [lon, lat];
 }
 
 const fixed = (value: number | null | undefined, decimals: number): string =>

@@ -1,12 +1,10 @@
-import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
-import { getData } from '../../../lib/api-client';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { getTaskQueryOptions } from '../../../lib/resources/task';
 import { fieldKeys } from './keys';
 import type { FieldTask } from './get-my-tasks';
 
-/** One task with the unit's geometry and photos. */
-export const getTask = (id: number, signal?: AbortSignal) => getData<FieldTask>(`/api/tasks/${id}`, signal);
-
-export const getTaskQueryOptions = (id: number) => queryOptions({ queryKey: fieldKeys.task(id), queryFn: ({ signal }) => getTask(id, signal) });
+/** One task: the shared query options of GET /api/tasks/:id (src/lib/resources/task.ts). */
+export { getTask, getTaskQueryOptions } from '../../../lib/resources/task';
 
 /** One task; starts from the list's copy (already on the phone), so it shows with no signal. */
 export function useTask(id: number) {

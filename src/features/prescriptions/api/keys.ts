@@ -1,4 +1,5 @@
 /** Query keys the prescriptions use, shared in shape with the library, the plan map and the properties pages so caches line up. */
+import { propertyKeys } from '../../../lib/resources/property';
 export const prescriptionKeys = {
   all: () => ['prescriptions'] as const,
   unit: (unitId: number) => ['prescriptions', { unitId }] as const,
@@ -8,6 +9,6 @@ export const prescriptionKeys = {
   materials: () => ['materials', { includeArchived: true }] as const,
   rates: () => ['rates'] as const,
   firm: () => ['firm'] as const,
-  property: (propertyId: number) => ['properties', 'detail', propertyId] as const,
+  property: propertyKeys.detail,
   units: (propertyId: number) => ['units', { propertyId }] as const,
 };

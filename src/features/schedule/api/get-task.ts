@@ -1,12 +1,8 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { getData } from '../../../lib/api-client';
-import type { TaskDto } from '../../../../shared/schemas/task';
-import { scheduleKeys } from './keys';
+import { useQuery } from '@tanstack/react-query';
+import { getTaskQueryOptions } from '../../../lib/resources/task';
 
-/** GET /api/tasks/:id: one task with its photos and completion. */
-export const getTask = (taskId: number, signal?: AbortSignal) => getData<TaskDto>(`/api/tasks/${taskId}`, signal);
-
-export const getTaskQueryOptions = (taskId: number) => queryOptions({ queryKey: scheduleKeys.detail(taskId), queryFn: ({ signal }) => getTask(taskId, signal) });
+/** One task: the shared query options of GET /api/tasks/:id (src/lib/resources/task.ts). */
+export { getTask, getTaskQueryOptions } from '../../../lib/resources/task';
 
 /** One task (disabled while no task is chosen). */
 export const useTask = (taskId: number | null) => useQuery({ ...getTaskQueryOptions(taskId ?? 0), enabled: taskId !== null });
