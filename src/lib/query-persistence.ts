@@ -82,6 +82,9 @@ export async function startQueryPersistence(queryClient: QueryClient, waitMs = 1
     dehydrateOptions: keptQueries(queryClient),
   });
   stopPersisting = unsubscribe;
+  // What was kept shows at once, but it may predate the person's last write (the kept copy is written
+  // a moment after each answer): mark it stale so every page asks again as soon as there is signal.
+  restored.then(() => queryClient.invalidateQueries()).catch(() => undefined);
   saveWhenLeaving(queryClient);
   await Promise.race([restored.catch(() => undefined), new Promise((resolve) => setTimeout(resolve, waitMs))]);
 }

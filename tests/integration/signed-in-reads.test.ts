@@ -38,7 +38,7 @@ beforeAll(async () => {
 describe('the session user', () => {
   it('is read without the password hash, with the firm name', async () => {
     const user = await readSessionUser(ctx.users.consultant.id);
-    expect(user).toEqual({ id: ctx.users.consultant.id, email: ctx.users.consultant.email, name: ctx.users.consultant.name, role: 'consultant', firmId: ctx.firm.id, firmName: ctx.firm.name, firmTimezone: ctx.firm.timezone, clientId: null });
+    expect(user).toEqual({ id: ctx.users.consultant.id, email: ctx.users.consultant.email, name: ctx.users.consultant.name, role: 'consultant', firmId: ctx.firm.id, firmName: ctx.firm.name, firmTimezone: ctx.firm.timezone, firmAreaUnit: 'acres', firmLengthUnit: 'feet', clientId: null });
     expect(Object.keys(user!)).not.toContain('passwordHash');
   });
 
