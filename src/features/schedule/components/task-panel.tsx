@@ -37,7 +37,10 @@ function ScheduleForm({ task, people }: { task: TaskDto; people: readonly Assign
   const [serverError, setServerError] = useState<string | null>(null);
   const form = useForm<Values, unknown, z.output<typeof TaskUpdateSchema>>({
     resolver: zodResolver(TaskUpdateSchema),
-    defaultValues: { assigneeId: task.assigneeId, startDate: task.startDate, endDate: task.endDate, notes: task.notes },
+    // `values`, not defaults: a kept copy shown at once after a reload is replaced by the server's answer
+    // when it arrives, while a field the person has already changed keeps what they typed.
+    values: { assigneeId: task.assigneeId, startDate: task.startDate, endDate: task.endDate, notes: task.notes },
+    resetOptions: { keepDirtyValues: true },
   });
   const errors = form.formState.errors;
   const submit = form.handleSubmit((values) => {
