@@ -12,6 +12,7 @@ import { propertiesRouter } from './properties';
 import { unitsRouter } from './units';
 import { firmRouter } from './firm';
 import { signupRouter } from './signup';
+import { signupPlacesRouter } from './signup-places';
 import { placesRouter } from './places';
 import { overlaysRouter, propertyOverlaysRouter } from './overlays';
 import { materialsRouter, practicesRouter, ratesRouter } from './library';
@@ -30,6 +31,7 @@ import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from '.
 import { sprayRecordsRouter } from './spray-records';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 import { cameraRouters } from './cameras';
+import { propertyCameraSitesRouter } from './camera-sites';
 import { searchRouter } from './search';
 import { firmExportsRouter } from './firm-exports';
 import { observationPhotosRouter, propertyObservationsRouter } from './observations';
@@ -48,6 +50,7 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertyOverlaysRouter },
   { path: '/units', router: unitsRouter },
   { path: '/firm', router: firmRouter },
+  { path: '/signup/places', router: signupPlacesRouter },
   { path: '/signup', router: signupRouter },
   { path: '/places', router: placesRouter },
   { path: '/overlays', router: overlaysRouter },
@@ -88,4 +91,5 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/observation-photos', router: observationPhotosRouter },
   { path: '', router: huntingRouter },
   { path: '/spray-records', router: sprayRecordsRouter },
+  { path: '/properties', router: propertyCameraSitesRouter },
 ];

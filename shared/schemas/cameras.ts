@@ -125,6 +125,7 @@ export const BuckUpdateSchema = z
     ageEstimates: z.array(AgeEstimateSchema).max(30).optional(),
   })
   .strict();
+export type BuckUpdateInput = z.input<typeof BuckUpdateSchema>;
 
 /** A survey made from tagged photos of chosen deployments and dates, in place of typed tallies. */
 export const FromPhotosSchema = z
@@ -276,3 +277,26 @@ export const DuePullDtoSchema = z.object({
   accessRoute: z.object({ id: z.number().int(), name: z.string(), distanceFt: z.number() }).nullable(),
 });
 export type DuePullDto = z.infer<typeof DuePullDtoSchema>;
+
+const byKind = <T extends z.ZodType>(v: T) => z.object({ deer: v, 'other-species': v, person: v });
+
+/** One camera site's numbers over all its deployments (`GET /api/properties/:id/camera-sites`). */
+export const CameraSiteSummaryDtoSchema = z.object({
+  unitId: z.number().int(),
+  name: z.string(),
+  deploymentCount: z.number().int(),
+  /** The sum of each deployment's nights. */
+  cameraNights: z.number().int(),
+  eventsByKind: byKind(z.number().int()),
+  eventsPer100CameraNights: byKind(z.number().nullable()),
+  /** Events of each kind by the hour (0–23) they started, on the firm's clock. */
+  byHour: byKind(z.array(z.number().int()).length(24)),
+  deerDaylightShare: z.number().nullable(),
+});
+export type CameraSiteSummaryDto = z.infer<typeof CameraSiteSummaryDtoSchema>;
+
+export const CameraSitesAnswerSchema = z.object({
+  data: z.array(CameraSiteSummaryDtoSchema),
+  meta: z.object({ gapMinutes: z.number(), timezone: z.string() }),
+});
+export type CameraSitesAnswer = z.infer<typeof CameraSitesAnswerSchema>;

@@ -14,3 +14,9 @@ export const PlaceSchema = z.object({
   bbox: z.tuple([z.number(), z.number(), z.number(), z.number()]).optional(),
 });
 export type PlaceDto = z.infer<typeof PlaceSchema>;
+
+/**
+ * The sign-up page's place search (`GET /api/signup/places?q=`, public): how many searches one
+ * address may make in the window. A person picking a home area types a few dozen; common practice, no source.
+ */
+export const PUBLIC_PLACE_SEARCH_LIMIT = { max: 120, windowMs: 10 * 60 * 1000 } as const;

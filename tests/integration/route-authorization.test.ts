@@ -5,7 +5,7 @@ import { makeFirm, PASSWORD } from '../support/factories';
 
 // Routes anyone may call without a session.
 // The calendar feed is public to whoever holds its unguessable token (calendar apps cannot sign in).
-const PUBLIC_ALLOWED = [/^\/health/, /^\/auth\/(csrf|login|password-reset|invitations|verify-email)/, /^\/signup$/, /^\/webhooks\//, /^\/calendar\/:file$/];
+const PUBLIC_ALLOWED = [/^\/health/, /^\/auth\/(csrf|login|password-reset|invitations|verify-email)/, /^\/signup$/, /^\/signup\/places$/, /^\/webhooks\//, /^\/calendar\/:file$/];
 
 const concrete = (path: string) => `/api${path.replace(/:token/g, 'x'.repeat(43)).replace(/:[a-zA-Z]+/g, '1')}`;
 

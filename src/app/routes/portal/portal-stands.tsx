@@ -1,5 +1,6 @@
 import { useParams } from 'react-router-dom';
 import { useMe } from '../../../features/auth/api/get-me';
+import { usePortalProperty } from '../../../features/portal/api/get-portal-property';
 import { StandsPage } from '../../../features/hunting/components/stands-page';
 import { PageHeader } from '../../../components/ui/page-header';
 import { parseId } from '../../../lib/route-params';
@@ -9,9 +10,10 @@ import { paths } from '../../../config/paths';
 export function PortalStandsPage() {
   const id = parseId(useParams().id) ?? 0;
   const me = useMe();
+  const property = usePortalProperty(id);
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Stands & wind" crumbs={[{ label: 'Your land', to: paths.portal }, { label: 'Property', to: paths.portalProperty(id) }]}>
+      <PageHeader title="Stands & wind" crumbs={[{ label: 'Your land', to: paths.portal }, { label: property.data?.name ?? '…', to: paths.portalProperty(id) }]}>
         Pick the wind now to see which stands suit it and how to walk in
       </PageHeader>
       {me.data ? <StandsPage propertyId={id} userId={me.data.id} canEdit={false} /> : null}

@@ -4,23 +4,14 @@
  * the firm's own XYZ/WMTS address with its credit line.
  */
 import { useState } from 'react';
-import { TileUrlTemplateSchema, type FirmDto, type HomeArea } from '../../../../shared/schemas/firm';
-import type { PlaceDto } from '../../../../shared/schemas/places';
+import { TileUrlTemplateSchema, type FirmDto } from '../../../../shared/schemas/firm';
 import { PUBLIC_IMAGERY, imageryPresetOf } from '../../../../shared/domain/imagery';
 import { Card, ErrorPanel, Loading } from '../../../components/ui/card';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { useToast } from '../../../components/ui/toast';
 import { useFirm, useUpdateFirmSettings } from '../../../features/firm/api/firm';
-import { PlaceSearch } from '../../../features/plan-map/components/place-search';
-
-/** A found place as a home area: a county's own box, or about 20 km around a town or point. */
-export function homeAreaOf(place: PlaceDto): HomeArea {
-  if (place.bbox) return { name: place.name, bbox: place.bbox };
-  const [lon, lat] = place.center;
-  const r = (v: number) => Math.round(v * 1e5) / 1e5;
-  return { name: place.name, bbox: [r(lon - 0.12), r(lat - 0.09), r(lon + 0.12), r(lat + 0.09)] };
-}
+import { HomeAreaPicker } from '../../../features/plan-map/components/home-area-picker';
 
 /** Home area and imagery, for the firm's owner. */
 export function MapSettingsCard() {
@@ -53,19 +44,11 @@ function MapSettingsFields({ firm }: { firm: FirmDto }) {
       <section aria-label="Home area" className="flex flex-col gap-2">
         <h3 className="text-sm font-semibold text-ink">Home area</h3>
         <p className="text-sm text-slate">A new property’s map opens here. Find a county or town where the firm works.</p>
-        <p className="text-sm" data-testid="home-area">
-          {s.homeArea ? (
-            <>
-              Now: <strong>{s.homeArea.name}</strong>{' '}
-              <button type="button" className="text-moss-deep hover:underline" onClick={() => save({ homeArea: null }, 'Home area cleared.')}>
-                Clear
-              </button>
-            </>
-          ) : (
-            <span className="text-slate">Not set: new maps open on the whole country.</span>
-          )}
-        </p>
-        <PlaceSearch onPick={(place) => save({ homeArea: homeAreaOf(place) }, `Home area: ${place.name}.`)} />
+        <HomeAreaPicker
+          value={s.homeArea}
+          emptyText="Not set: new maps open on the whole country."
+          onChange={(area, placeName) => save({ homeArea: area }, area ? `Home area: ${placeName ?? area.name}.` : 'Home area cleared.')}
+        />
       </section>
       <section aria-label="Imagery" className="flex flex-col gap-2">
         <h3 className="text-sm font-semibold text-ink">Imagery under the plan</h3>

@@ -1,7 +1,8 @@
 /** The camera fleet's reads and writes: one query-options module for cameras, deployments, photos, events, the roster and due pulls. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, getData } from '../../../lib/api-client';
-import type { BuckCreateInput, BuckDto, CameraCreateInput, CameraDto, CameraPhotoDto, CameraPhotoTagInput, CardPullCreateInput, CardUploadResult, DeploymentCreateInput, DeploymentDto, DeploymentEventsDto, DuePullDto, SurveyFromPhotosInput } from '../../../../shared/schemas/cameras';
+import { buckKeys } from '../../../lib/resources/bucks';
+import type { BuckCreateInput, BuckDto, BuckUpdateInput, CameraCreateInput, CameraDto, CameraPhotoDto, CameraPhotoTagInput, CardPullCreateInput, CardUploadResult, DeploymentCreateInput, DeploymentDto, DeploymentEventsDto, DuePullDto, SurveyFromPhotosInput } from '../../../../shared/schemas/cameras';
 import type { SurveyDto } from '../../../../shared/schemas/results';
 
 /** Query keys, hierarchical so that a prefix invalidates a family. */
@@ -12,7 +13,7 @@ export const cameraKeys = {
   propertyDeployments: (propertyId: number) => ['cameras', 'deployments', { propertyId }] as const,
   photos: (deploymentId: number) => ['cameras', 'photos', { deploymentId }] as const,
   events: (deploymentId: number) => ['cameras', 'events', { deploymentId }] as const,
-  bucks: (propertyId: number, scope = 'staff') => ['cameras', 'bucks', { propertyId, scope }] as const,
+  bucks: buckKeys.roster,
 };
 
 export const getCamerasQueryOptions = () => queryOptions({ queryKey: cameraKeys.list(), queryFn: ({ signal }) => getData<CameraDto[]>('/api/cameras', signal) });
@@ -34,10 +35,8 @@ export const getDeploymentEventsQueryOptions = (deploymentId: number) =>
   queryOptions({ queryKey: cameraKeys.events(deploymentId), queryFn: ({ signal }) => getData<DeploymentEventsDto>(`/api/deployments/${deploymentId}/events`, signal) });
 export const useDeploymentEvents = (deploymentId: number | null) => useQuery({ ...getDeploymentEventsQueryOptions(deploymentId ?? 0), enabled: !!deploymentId });
 
-export const getBucksQueryOptions = (propertyId: number, apiBase = '/api') =>
-  queryOptions({ queryKey: cameraKeys.bucks(propertyId, apiBase), queryFn: ({ signal }) => getData<BuckDto[]>(`${apiBase}/properties/${propertyId}/bucks`, signal) });
-/** A property's buck roster (a client gets the featured photos only). */
-export const useBucks = (propertyId: number) => useQuery({ ...getBucksQueryOptions(propertyId), enabled: propertyId > 0 });
+/** The roster's one query-options module lives in src/lib/resources (the hunting feature reads it too). */
+export { getBucksQueryOptions, useBucks } from '../../../lib/resources/bucks';
 
 function useInvalidatingMutation<A, R>(fn: (a: A) => Promise<R>) {
   const qc = useQueryClient();
@@ -50,6 +49,9 @@ export const useCreateDeployment = () =>
 export const useEndDeployment = () => useInvalidatingMutation(({ id, endedOn }: { id: number; endedOn: string }) => api.patch<{ data: DeploymentDto }>(`/api/deployments/${id}`, { endedOn }).then((r) => r.data));
 export const useCreatePull = () => useInvalidatingMutation(({ deploymentId, input }: { deploymentId: number; input: CardPullCreateInput }) => api.post(`/api/deployments/${deploymentId}/pulls`, input));
 export const useCreateBuck = (propertyId: number) => useInvalidatingMutation((input: BuckCreateInput) => api.post<{ data: BuckDto }>(`/api/properties/${propertyId}/bucks`, input).then((r) => r.data));
+/** Changes a roster buck's name, notes or age class per season. */
+export const useUpdateBuck = (propertyId: number) =>
+  useInvalidatingMutation(({ buckId, input }: { buckId: number; input: BuckUpdateInput }) => api.patch<{ data: BuckDto }>(`/api/properties/${propertyId}/bucks/${buckId}`, input).then((r) => r.data));
 
 /** Tags one photo; the grid's cached list is updated in place (no refetch per key press). */
 export function useTagPhoto(deploymentId: number) {

@@ -6,8 +6,14 @@ import type { SitSaveOutcome } from '../hooks/use-sit-queue';
 
 const localInput = (d: Date) => new Date(d.getTime() - d.getTimezoneOffset() * 60000).toISOString().slice(0, 16);
 
-/** Log a sit from a phone: stand, start and end, wind, deer seen, notes. Saved on the phone first, then sent. */
-export function SitForm({ propertyId, stands, standId, wind, save }: { propertyId: number; stands: StandWindsRow[]; standId: number | null; wind: WindName | null; save: (input: { key: string; propertyId: number; standName: string; body: import('../../../../shared/schemas/hunting').SitCreateInput }) => Promise<SitSaveOutcome> }) {
+/** A roster buck as the sit form's picker shows it. */
+export interface RosterBuck {
+  id: number;
+  name: string;
+}
+
+/** Log a sit from a phone: stand, start and end, wind, deer seen (with the roster's bucks told apart), notes. Saved on the phone first, then sent. */
+export function SitForm({ propertyId, stands, standId, wind, bucks = [], save }: { propertyId: number; stands: StandWindsRow[]; standId: number | null; wind: WindName | null; bucks?: RosterBuck[]; save: (input: { key: string; propertyId: number; standName: string; body: import('../../../../shared/schemas/hunting').SitCreateInput }) => Promise<SitSaveOutcome> }) {
   const now = new Date();
   const [stand, setStand] = useState(String(standId ?? stands[0]?.unitId ?? ''));
   const [start, setStart] = useState(localInput(new Date(now.getTime() - 3 * 3600_000)));
@@ -15,6 +21,7 @@ export function SitForm({ propertyId, stands, standId, wind, save }: { propertyI
   const [seen, setSeen] = useState({ bucks: '0', does: '0', fawns: '0' });
   const [mph, setMph] = useState('');
   const [notes, setNotes] = useState('');
+  const [buckIds, setBuckIds] = useState<number[]>([]);
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const input = 'min-h-11 rounded border border-rule px-2';
   return (
@@ -31,6 +38,7 @@ export function SitForm({ propertyId, stands, standId, wind, save }: { propertyI
           ...(mph.trim() ? { windMph: Number(mph) } : {}),
           seen: { bucks: Number(seen.bucks), does: Number(seen.does), fawns: Number(seen.fawns) },
           ...(notes.trim() ? { notes: notes.trim() } : {}),
+          ...(buckIds.length ? { buckIds } : {}),
         };
         const checked = SitCreateSchema.safeParse(body);
         if (!checked.success) {
@@ -63,6 +71,32 @@ export function SitForm({ propertyId, stands, standId, wind, save }: { propertyI
         ))}
         <label className="flex flex-col gap-1 text-sm">mph<input inputMode="decimal" className={input} value={mph} onChange={(e) => setMph(e.target.value)} /></label>
       </div>
+      {bucks.length ? (
+        <fieldset className="flex flex-col gap-1 text-sm">
+          <legend className="mb-1">Bucks you could tell apart (camera roster)</legend>
+          <div className="flex flex-wrap gap-2">
+            {bucks.map((b) => {
+              const on = buckIds.includes(b.id);
+              return (
+                <label key={b.id} className={`flex min-h-11 cursor-pointer items-center gap-2 rounded border px-3 ${on ? 'border-moss bg-moss/10 font-semibold' : 'border-rule'}`}>
+                  <input
+                    type="checkbox"
+                    className="h-4 w-4 accent-moss"
+                    checked={on}
+                    onChange={() => {
+                      const next = on ? buckIds.filter((id) => id !== b.id) : [...buckIds, b.id];
+                      setBuckIds(next);
+                      // A buck told apart is a buck seen: the count is never below the bucks named.
+                      if (Number(seen.bucks) < next.length || !/^\d+$/.test(seen.bucks)) setSeen({ ...seen, bucks: String(Math.max(next.length, Number(seen.bucks) || 0)) });
+                    }}
+                  />
+                  {b.name}
+                </label>
+              );
+            })}
+          </div>
+        </fieldset>
+      ) : null}
       <label className="flex flex-col gap-1 text-sm">Notes<textarea className="rounded border border-rule p-2" rows={2} value={notes} onChange={(e) => setNotes(e.target.value)} /></label>
       <button type="submit" className="min-h-12 rounded bg-moss-deep px-4 font-semibold text-white">Save sit</button>
       {message ? <p role={message.ok ? 'status' : 'alert'} className={`text-sm ${message.ok ? 'text-moss-deep' : 'text-[#8E3F2A]'}`}>{message.text}</p> : null}

@@ -17,12 +17,14 @@ import { SitForm } from './sit-form';
 import { PressureTable } from './pressure-table';
 import { WindRecordCard } from './wind-record-card';
 import { HarvestForm } from './harvest-form';
+import { useBucks } from '../../../lib/resources/bucks';
 import { Card, CautionBox, ErrorPanel, Loading, EmptyState } from '../../../components/ui/card';
 
 export function StandsPage({ propertyId, userId, canEdit }: { propertyId: number; userId: number; canEdit: boolean }) {
   const winds = useStandWinds(propertyId);
   const pressure = usePressure(propertyId);
   const queue = useSitQueue(userId);
+  const roster = useBucks(propertyId);
   const [wind, setWind] = useState<WindName | null>(null);
   const [editing, setEditing] = useState<number | null>(null);
   const [sitStand, setSitStand] = useState<number | null>(null);
@@ -78,7 +80,7 @@ export function StandsPage({ propertyId, userId, canEdit }: { propertyId: number
               Sit at {r.standName} was refused: {r.rejected?.message} <button type="button" className="underline" onClick={() => void queue.dismiss(r.key)}>Dismiss</button>
             </p>
           ))}
-          {sitStand !== null ? <SitForm key={sitStand} propertyId={propertyId} stands={answer.data} standId={sitStand} wind={wind} save={queue.save} /> : null}
+          {sitStand !== null ? <SitForm key={sitStand} propertyId={propertyId} stands={answer.data} standId={sitStand} wind={wind} bucks={roster.data?.map((b) => ({ id: b.id, name: b.name })) ?? []} save={queue.save} /> : null}
         </Card>
       ) : null}
 

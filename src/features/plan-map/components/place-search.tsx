@@ -5,8 +5,11 @@ import type { PlaceDto } from '../../../../shared/schemas/places';
 
 const KIND_WORD: Record<PlaceDto['kind'], string> = { county: 'county', town: 'town', coordinates: 'point' };
 
-/** One box that finds a county, a town or typed coordinates; choosing a result hands it to the map. */
-export function PlaceSearch({ onPick }: { onPick: (place: PlaceDto) => void }) {
+/**
+ * One box that finds a county, a town or typed coordinates; choosing a result hands it to the map.
+ * `source` is the search address (the signed-in `/api/places`, or the sign-up page's public one).
+ */
+export function PlaceSearch({ onPick, source = '/api/places' }: { onPick: (place: PlaceDto) => void; source?: string }) {
   const [text, setText] = useState('');
   const [query, setQuery] = useState('');
   const [open, setOpen] = useState(false);
@@ -16,8 +19,8 @@ export function PlaceSearch({ onPick }: { onPick: (place: PlaceDto) => void }) {
     return () => clearTimeout(t);
   }, [text]);
   const places = useQuery({
-    queryKey: ['places', query],
-    queryFn: ({ signal }) => getData<PlaceDto[]>(`/api/places?q=${encodeURIComponent(query)}`, signal),
+    queryKey: ['places', source, query],
+    queryFn: ({ signal }) => getData<PlaceDto[]>(`${source}?q=${encodeURIComponent(query)}`, signal),
     enabled: query.length >= 2,
     staleTime: Infinity,
   });
