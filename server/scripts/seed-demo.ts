@@ -7,6 +7,7 @@ import { seedDemoSchedule } from '../db/seeds/demo-schedule';
 import { seedDemoPortal } from '../db/seeds/demo-portal';
 import { seedDemoChecks } from '../db/seeds/demo-checks';
 import { seedDemoCameras } from '../db/seeds/demo-cameras';
+import { seedDemoCameraSites } from '../db/seeds/demo-camera-sites';
 import { seedDemoSpray } from '../db/seeds/demo-spray';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
@@ -20,6 +21,7 @@ try {
   await seedDemoPortal(firm);
   await seedDemoChecks(firm);
   await seedDemoCameras(firm);
+  await seedDemoCameraSites(firm);
   await seedDemoSpray(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {

@@ -13,7 +13,7 @@ export function PortalStandsPage() {
   const property = usePortalProperty(id);
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Stands & wind" crumbs={[{ label: 'Your land', to: paths.portal }, { label: property.data?.name ?? '…', to: paths.portalProperty(id) }]}>
+      <PageHeader title="Stands & wind" crumbs={[{ label: 'Your land', to: paths.portal }, { label: property.data?.property.name ?? '…', to: paths.portalProperty(id) }]}>
         Pick the wind now to see which stands suit it and how to walk in
       </PageHeader>
       {me.data ? <StandsPage propertyId={id} userId={me.data.id} canEdit={false} /> : null}

@@ -13,6 +13,7 @@ import { CardUpload } from '../../../features/cameras/components/card-upload';
 import { ReviewGrid } from '../../../features/cameras/components/review-grid';
 import { EventsSummary } from '../../../features/cameras/components/events-summary';
 import { BuckRoster } from '../../../features/cameras/components/buck-roster';
+import { CameraSitesSummary } from '../../../features/cameras/components/camera-sites-summary';
 import { PhotoSurveyForm } from '../../../features/cameras/components/photo-survey-form';
 import { firmToday } from '../../../lib/firm-clock';
 
@@ -79,6 +80,11 @@ export function PropertyCamerasPage() {
             <EventsSummary deploymentId={current} />
           </Card>
         </>
+      ) : null}
+      {list.length ? (
+        <Card title="By site, all deployments">
+          <CameraSitesSummary propertyId={id} />
+        </Card>
       ) : null}
       <Card title="Buck roster">
         <BuckRoster propertyId={id} bucks={roster} />

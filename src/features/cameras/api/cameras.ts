@@ -2,7 +2,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, getData } from '../../../lib/api-client';
 import { buckKeys } from '../../../lib/resources/bucks';
-import type { BuckCreateInput, BuckDto, BuckUpdateInput, CameraCreateInput, CameraDto, CameraPhotoDto, CameraPhotoTagInput, CardPullCreateInput, CardUploadResult, DeploymentCreateInput, DeploymentDto, DeploymentEventsDto, DuePullDto, SurveyFromPhotosInput } from '../../../../shared/schemas/cameras';
+import type { BuckCreateInput, BuckDto, BuckUpdateInput, CameraCreateInput, CameraDto, CameraPhotoDto, CameraPhotoTagInput, CameraSitesAnswer, CardPullCreateInput, CardUploadResult, DeploymentCreateInput, DeploymentDto, DeploymentEventsDto, DuePullDto, SurveyFromPhotosInput } from '../../../../shared/schemas/cameras';
 import type { SurveyDto } from '../../../../shared/schemas/results';
 
 /** Query keys, hierarchical so that a prefix invalidates a family. */
@@ -14,6 +14,7 @@ export const cameraKeys = {
   photos: (deploymentId: number) => ['cameras', 'photos', { deploymentId }] as const,
   events: (deploymentId: number) => ['cameras', 'events', { deploymentId }] as const,
   bucks: buckKeys.roster,
+  sites: (propertyId: number) => ['cameras', 'sites', { propertyId }] as const,
 };
 
 export const getCamerasQueryOptions = () => queryOptions({ queryKey: cameraKeys.list(), queryFn: ({ signal }) => getData<CameraDto[]>('/api/cameras', signal) });
@@ -34,6 +35,11 @@ export const useDeploymentPhotos = (deploymentId: number | null) => useQuery({ .
 export const getDeploymentEventsQueryOptions = (deploymentId: number) =>
   queryOptions({ queryKey: cameraKeys.events(deploymentId), queryFn: ({ signal }) => getData<DeploymentEventsDto>(`/api/deployments/${deploymentId}/events`, signal) });
 export const useDeploymentEvents = (deploymentId: number | null) => useQuery({ ...getDeploymentEventsQueryOptions(deploymentId ?? 0), enabled: !!deploymentId });
+
+export const getCameraSitesQueryOptions = (propertyId: number) =>
+  queryOptions({ queryKey: cameraKeys.sites(propertyId), queryFn: ({ signal }) => api.get<CameraSitesAnswer>(`/api/properties/${propertyId}/camera-sites`, signal) });
+/** The property's camera sites with camera-nights, events and activity by hour summed over their deployments. */
+export const useCameraSites = (propertyId: number) => useQuery({ ...getCameraSitesQueryOptions(propertyId), enabled: propertyId > 0 });
 
 /** The roster's one query-options module lives in src/lib/resources (the hunting feature reads it too). */
 export { getBucksQueryOptions, useBucks } from '../../../lib/resources/bucks';
