@@ -8,6 +8,7 @@ import { seedDemoPortal } from '../db/seeds/demo-portal';
 import { seedDemoChecks } from '../db/seeds/demo-checks';
 import { seedDemoCameras } from '../db/seeds/demo-cameras';
 import { seedDemoCameraSites } from '../db/seeds/demo-camera-sites';
+import { seedDemoPressureHarvest } from '../db/seeds/demo-pressure-harvest';
 import { seedDemoSpray } from '../db/seeds/demo-spray';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
@@ -22,6 +23,7 @@ try {
   await seedDemoChecks(firm);
   await seedDemoCameras(firm);
   await seedDemoCameraSites(firm);
+  await seedDemoPressureHarvest(firm);
   await seedDemoSpray(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {

@@ -291,11 +291,12 @@ function pressureSection(input: SeasonReportDocumentInput): Content[] {
     table(
       ['Stand', 'Sits', 'Hours', 'Deer seen', 'Deer / hour', 'On a wrong wind', 'Harvests'],
       p.stands.map((s) => [s.name, `${s.sits}`, one(s.hours, 1), `${s.deerSeen}`, s.deerPerHour === null ? '—' : one(s.deerPerHour, 2), `${s.sitsOnUnsuitableWind}`, `${s.harvests}`]),
-      ['*', 36, 40, 50, 56, 62, 50],
+      // "On a wrong wind" needs ~76 pt on one line at the table header's size; the stand name takes the rest.
+      ['*', 34, 40, 52, 58, 82, 50],
       [1, 2, 3, 4, 5, 6],
     ),
   );
-  if (p.sampledHarvests > 0) out.push({ text: `${p.sampledHarvests} ${p.sampledHarvests === 1 ? 'harvest carries' : 'harvests carry'} a state disease-sampling number; results come from the state wildlife agency.`, style: 'muted' });
+  if (p.sampledHarvests > 0) out.push({ text: `${p.sampledHarvests} ${p.sampledHarvests === 1 ? 'harvest carries' : 'harvests carry'} a state disease-sampling number; results come from the state wildlife agency.`, style: 'muted', margin: [0, 6, 0, 0] });
   return out;
 }
 

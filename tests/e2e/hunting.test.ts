@@ -42,6 +42,8 @@ describe('stands, winds and the sit log', () => {
     propertyId = Number(new URL(page.url()).pathname.split('/').pop());
     await page.getByRole('link', { name: 'Stands & wind' }).click();
     await page.waitForURL(`${baseUrl}/properties/${propertyId}/stands`);
+    // The way back names the farm, not the word "Property".
+    await poll(() => page.getByRole('navigation', { name: 'Breadcrumb' }).textContent()).toContain('Kettle Hollow Farm');
 
     // The demo's ridge stand watches the ridge clover plot, which deer approach from the south: a wind
     // from the north lays scent south over that side (the issue's convention; demo stand details).
@@ -71,6 +73,7 @@ describe('stands, winds and the sit log', () => {
     await signIn(page, baseUrl, 'client@browseline.test');
     await page.waitForURL(/\/portal/);
     await page.goto(`${baseUrl}/portal/properties/${propertyId}/stands`);
+    await poll(() => page.getByRole('navigation', { name: 'Breadcrumb' }).textContent()).toContain('Kettle Hollow Farm');
     await page.getByRole('group', { name: 'Wind from' }).getByRole('button', { name: pick!.wind, exact: true }).click();
     const list = page.getByRole('list', { name: `Stands for a wind from ${pick!.wind}` });
     const card = list.getByRole('listitem').filter({ hasText: pick!.stand.name });
@@ -82,6 +85,9 @@ describe('stands, winds and the sit log', () => {
     const form = page.getByRole('form', { name: 'Log a sit' });
     await context.setOffline(true);
     await form.getByLabel('Does').fill('3');
+    // A buck the hunter could tell apart, from the camera roster (the demo's "Wide eight"): the bucks count follows.
+    await form.getByRole('group', { name: /Bucks you could tell apart/ }).getByLabel('Wide eight').check();
+    expect(await form.getByLabel('bucks', { exact: true }).inputValue()).toBe('1');
     await form.getByRole('button', { name: 'Save sit' }).click();
     await poll(() => form.getByRole('status').textContent()).toContain('Saved on this phone');
     await poll(() => page.getByText('1 sit waiting to send.').isVisible()).toBe(true);
@@ -91,6 +97,10 @@ describe('stands, winds and the sit log', () => {
     await context.setOffline(false);
     await poll(() => sitsBefore()).toBe(before + 1);
     await poll(() => page.getByText(/waiting to send/).count()).toBe(0);
+    const roster = (await (await hunter.request.get(`/api/properties/${propertyId}/bucks`)).json()) as { data: { id: number; name: string }[] };
+    const sits = (await (await hunter.request.get(`/api/properties/${propertyId}/sits`)).json()) as { data: { id: number; buckIds: number[] }[] };
+    const newest = sits.data.reduce((a, b) => (b.id > a.id ? b : a));
+    expect(newest.buckIds).toEqual([roster.data.find((b) => b.name === 'Wide eight')!.id]);
     // Once: a reload (which runs the queue again) does not send it a second time.
     await page.reload();
     await poll(() => page.getByRole('group', { name: 'Wind from' }).isVisible()).toBe(true);

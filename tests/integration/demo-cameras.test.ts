@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { seedDemo } from '../../server/db/seeds/demo';
 import { seedDemoCameras } from '../../server/db/seeds/demo-cameras';
 import { seedDemoCameraSites } from '../../server/db/seeds/demo-camera-sites';
-import { Camera, CameraPhoto, Sit } from '../../server/models';
+import { seedDemoPressureHarvest } from '../../server/db/seeds/demo-pressure-harvest';
+import { Camera, CameraPhoto, HarvestRecord, Sit } from '../../server/models';
 import { signedInAgent } from '../support/test-app';
 import { CameraSitesAnswerSchema, DeploymentEventsDtoSchema, DuePullDtoSchema } from '../../shared/schemas/cameras';
 
@@ -40,5 +41,16 @@ describe('the demo camera fleet', () => {
     expect(hollow.eventsByKind.deer).toBeGreaterThan(10);
     const sits = await Sit.findAll({ where: { propertyId: photo!.propertyId } });
     expect(sits.filter((s) => s.bucks > 0).every((s) => s.buckIds.length === 1)).toBe(true);
+  });
+
+  it('records the deer taken on the newest sit that saw a buck, with its disease-sampling number, once', async () => {
+    const firm = await seedDemo();
+    await seedDemoPressureHarvest(firm);
+    expect(await seedDemoPressureHarvest(firm)).toBe(0);
+    const sampled = await HarvestRecord.findAll({ where: { firmId: firm.id, diseaseSampleNumber: 'WI-CWD 2026-0417' } });
+    expect(sampled).toHaveLength(1);
+    const sit = (await Sit.findByPk(sampled[0]!.sitId!))!;
+    expect(sit.bucks).toBeGreaterThan(0);
+    expect(sampled[0]!.standUnitId).toBe(sit.standUnitId);
   });
 });

@@ -4,7 +4,7 @@
  * writes one component that reads the map with `usePlanMapController()` and draws with MapLibre
  * sources/layers of its own ids, cleaning them up on unmount; the plan map page inserts it as one
  * element inside `<PlanMapLayers>`. Layers render nothing into the page (return null) unless they
- * need a small panel, which goes in the map's lower-left stack through `PlanMapLayers`' children.
+ * need a small panel, which goes in the map's side panel (beside the map, foldable) through `PlanMapLayers`' children.
  */
 import { createContext, useContext, type ReactNode } from 'react';
 import type { Map as MapLibreMap } from 'maplibre-gl';
@@ -32,10 +32,10 @@ export function usePlanMapController(): { controller: PlanMapHandle | null; prop
   return value;
 }
 
-/** Where layer components go: one element each. Any panel they render stacks over the map's lower left. */
+/** Where layer components go: one element each. Any panel they render stacks in the map's side panel, full width. */
 export function PlanMapLayers({ children }: { children?: ReactNode }) {
   return (
-    <div className="pointer-events-auto flex flex-col items-start gap-2" data-slot="plan-map-layers">
+    <div className="pointer-events-auto flex flex-col items-stretch gap-2" data-slot="plan-map-layers">
       {children}
     </div>
   );

@@ -25,6 +25,7 @@ import { UnitDetail } from '../../../features/plan-map/components/unit-detail';
 import { ImportPanel } from '../../../features/plan-map/components/import-panel';
 import { MapLegend } from '../../../features/plan-map/components/map-legend';
 import { OverlayPanel } from '../../../features/plan-map/components/overlay-panel';
+import { MapSidePanel } from '../../../features/plan-map/components/map-side-panel';
 import type { PlanMapCallbacks, PlanMapController } from '../../../features/plan-map/lib/plan-map-controller';
 import type { ColourBy } from '../../../features/plan-map/lib/plan-layers';
 import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
@@ -67,63 +68,61 @@ export function PlanMapPage() {
       <div className="flex h-full min-h-0 flex-col">
         <PlanMapHeader propertyId={propertyId} property={property.data} hasBoundary={!!boundary} editing={editing} importer={importer} />
         <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
-          <div className="relative min-h-[22rem] min-w-0 flex-1">
-            <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
-            <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
-              <div className="pointer-events-auto relative z-20 max-w-full">
-                <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
-              </div>
-              <div ref={chipsRef} className="pointer-events-auto max-w-full">
-                <DrawChips active={drawTarget} onChoose={editing.chooseTool} />
-              </div>
-              {drawTarget ? <DrawHint target={drawTarget} /> : null}
-              {drawTarget && !drawsPoint(drawTarget) ? (
-                <div className="pointer-events-auto">
-                  <DrawControls points={editing.drawPoints} area={drawsArea(drawTarget)} onFinish={() => controller?.finishDraw()} onUndo={() => controller?.undoVertex()} onCancel={editing.cancelDraw} />
-                </div>
-              ) : null}
-              {measure ? (
-                <div className="pointer-events-auto">
-                  <MeasureReadout
-                    reading={measure}
-                    onClear={() => {
-                      controller?.clearMeasure();
-                      editing.setMeasure(null);
-                    }}
-                  />
-                </div>
-              ) : null}
-              {tilesFailed && tileTemplate ? (
-                <p role="status" className="pointer-events-auto rounded border-l-4 border-clay bg-card/95 px-3 py-1 text-xs text-ink shadow-sm">
-                  <strong>Imagery offline.</strong> {new URL(tileTemplate.replace(/\{[a-z]\}/g, '0')).host} did not answer; the state and county lines and the plan still work. The firm owner can check the imagery choice in Settings.
-                </p>
-              ) : null}
-              {editing.editingBoundary ? (
-                <p role="status" className="pointer-events-auto rounded bg-ink/85 px-3 py-1 text-xs text-white">
-                  Drag the boundary’s corners or the whole outline; each change is saved.
-                </p>
-              ) : null}
-            </div>
-            <div className="pointer-events-none absolute bottom-12 left-2 z-10 flex max-h-[calc(100%-9rem)] flex-col items-start gap-2 overflow-y-auto">
-              <div className="pointer-events-auto">
-                <OverlayPanel overlays={data.overlays.data ?? []} uploading={photos.progress} onUpload={photos.onUpload} onPreview={photos.onPreview} onChange={photos.onChange} onDelete={photos.onDelete} />
-              </div>
+          <div className="relative flex min-h-[22rem] min-w-0 flex-1">
+            <MapSidePanel>
+              <OverlayPanel overlays={data.overlays.data ?? []} uploading={photos.progress} onUpload={photos.onUpload} onPreview={photos.onPreview} onChange={photos.onChange} onDelete={photos.onDelete} />
               <PlanMapLayers>
                 {/* More map layers go here, one element each (see DEVELOPERS.md). */}
                 <ObservationsLayer map={controller?.map ?? null} propertyId={propertyId} />
               </PlanMapLayers>
-              <div className="pointer-events-auto">
-                <MapLegend kinds={data.legendKinds} hasBoundary={!!boundary} byStatus={colourBy === 'status'} />
-              </div>
-            </div>
-            {property.data && !boundary && unitList.length === 0 && !drawTarget && !importState ? (
-              <div className="pointer-events-none absolute inset-0 z-0 flex items-center justify-center">
-                <div className="pointer-events-auto max-w-sm rounded-md border border-rule bg-card/95 px-5 py-4 text-center shadow-sm">
-                  <p className="font-serif text-ink">No boundary yet</p>
-                  <p className="mt-1 text-sm text-slate">Find the farm with the search box, then choose “Boundary” above and click its corners on the map — or import a KML, GPX, GeoJSON or shapefile.</p>
+              <MapLegend kinds={data.legendKinds} hasBoundary={!!boundary} byStatus={colourBy === 'status'} />
+            </MapSidePanel>
+            <div className="relative min-w-0 flex-1">
+              <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
+              <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
+                <div className="pointer-events-auto relative z-20 max-w-full">
+                  <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
                 </div>
+                <div ref={chipsRef} className="pointer-events-auto max-w-full">
+                  <DrawChips active={drawTarget} onChoose={editing.chooseTool} />
+                </div>
+                {drawTarget ? <DrawHint target={drawTarget} /> : null}
+                {drawTarget && !drawsPoint(drawTarget) ? (
+                  <div className="pointer-events-auto">
+                    <DrawControls points={editing.drawPoints} area={drawsArea(drawTarget)} onFinish={() => controller?.finishDraw()} onUndo={() => controller?.undoVertex()} onCancel={editing.cancelDraw} />
+                  </div>
+                ) : null}
+                {measure ? (
+                  <div className="pointer-events-auto">
+                    <MeasureReadout
+                      reading={measure}
+                      onClear={() => {
+                        controller?.clearMeasure();
+                        editing.setMeasure(null);
+                      }}
+                    />
+                  </div>
+                ) : null}
+                {tilesFailed && tileTemplate ? (
+                  <p role="status" className="pointer-events-auto rounded border-l-4 border-clay bg-card/95 px-3 py-1 text-xs text-ink shadow-sm">
+                    <strong>Imagery offline.</strong> {new URL(tileTemplate.replace(/\{[a-z]\}/g, '0')).host} did not answer; the state and county lines and the plan still work. The firm owner can check the imagery choice in Settings.
+                  </p>
+                ) : null}
+                {editing.editingBoundary ? (
+                  <p role="status" className="pointer-events-auto rounded bg-ink/85 px-3 py-1 text-xs text-white">
+                    Drag the boundary’s corners or the whole outline; each change is saved.
+                  </p>
+                ) : null}
               </div>
-            ) : null}
+              {property.data && !boundary && unitList.length === 0 && !drawTarget && !importState ? (
+                <div className="pointer-events-none absolute inset-0 z-0 flex items-center justify-center">
+                  <div className="pointer-events-auto max-w-sm rounded-md border border-rule bg-card/95 px-5 py-4 text-center shadow-sm">
+                    <p className="font-serif text-ink">No boundary yet</p>
+                    <p className="mt-1 text-sm text-slate">Find the farm with the search box, then choose “Boundary” above and click its corners on the map — or import a KML, GPX, GeoJSON or shapefile.</p>
+                  </div>
+                </div>
+              ) : null}
+            </div>
           </div>
           <ConfirmDialog open={editing.largeAsk !== null} title="Keep this large area?" confirmLabel="Keep it" onConfirm={() => editing.answerLargeArea(true)} onCancel={() => editing.answerLargeArea(false)}>
             <p>{editing.largeAsk?.message.replace(/;? ?to keep it anyway, confirm the large area \(confirmLargeArea: true\)\.$/, '.')}</p>
