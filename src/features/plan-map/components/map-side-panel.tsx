@@ -41,7 +41,7 @@ export function MapSidePanel({ children }: { children: ReactNode }) {
             ‹
           </button>
         </div>
-        <div className="flex min-h-0 flex-1 flex-col gap-2 overflow-y-auto p-2 [&_section]:w-full [&_section]:max-w-none [&_section]:shadow-none">{children}</div>
+        <div className="flex min-h-0 flex-1 flex-col gap-2 overflow-y-auto p-2 [&_section]:w-full [&_section]:max-w-none [&_section]:shadow-none [&_details]:max-h-none">{children}</div>
       </aside>
     </>
   );
