@@ -23,8 +23,8 @@ const post = (agent: Agent, url: string, body: unknown, headers: Record<string, 
   return req.send(body as object);
 };
 
-// A failed brassica stand: 1 rape and 1 turnip seedling over 4 × 1 ft² frames against targets of 6 and 5
-// plants/ft² (targets from memory) → well under 40 % of target (threshold: common practice, no source).
+// A failed brassica stand: 1 rape and 1 turnip seedling over 4 × 1 ft² frames against targets of 5
+// (rape: OMAFRA canola stand guide, lower end of 5–8/ft²) and 5 plants/ft² (turnip: from memory) → well under 40 % of target (threshold: common practice, no source).
 const failedStand = {
   kind: 'establishment',
   checkedOn: '2026-10-01',
