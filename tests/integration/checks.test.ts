@@ -68,7 +68,7 @@ describe('establishment check', () => {
 
   it('writes the re-seeding prescription at the scaled rates when the consultant accepts it', async () => {
     const thin = await post(consultant, `/api/units/${plotId}/checks`, { ...failedStand, samples: [{ species: 'rape', plants: 3 }, { species: 'turnip', plants: 3 }] });
-    expect(thin.body.data.status).toBe('thin'); // 3/6 and 3/5 of target → mean 0.55
+    expect(thin.body.data.status).toBe('thin'); // 3/5 (rape, OMAFRA canola guide) and 3/5 (turnip, from memory) of target → mean 0.6
     const before = await Prescription.count({ where: { unitId: plotId } });
     const accepted = await post(consultant, `/api/checks/${thin.body.data.id}/reseed`, { decision: 'accept' });
     expect(accepted.status).toBe(200);
