@@ -8,6 +8,7 @@ import { seedDemoPortal } from '../db/seeds/demo-portal';
 import { seedDemoChecks } from '../db/seeds/demo-checks';
 import { seedDemoCameras } from '../db/seeds/demo-cameras';
 import { seedDemoSpray } from '../db/seeds/demo-spray';
+import { seedDemoSeasons } from '../db/seeds/demo-seasons';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
@@ -19,6 +20,7 @@ try {
   await seedDemoSchedule(firm);
   await seedDemoPortal(firm);
   await seedDemoChecks(firm);
+  await seedDemoSeasons(firm);
   await seedDemoCameras(firm);
   await seedDemoSpray(firm);
   console.log(`demo data ready for ${firm.name}`);
