@@ -5,6 +5,7 @@
  */
 import { PLOT_STATUS_LABELS } from '../schemas/checks';
 import type { PlotCheckStatus } from './plot-checks';
+import { formatDate } from './clock';
 
 /** A check as the comparison needs it: its kind, date, status and computed figures. */
 export interface ComparisonCheck {
@@ -63,15 +64,16 @@ const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFi
 /** A check in one sentence a landowner can read: the stand's status, the share deer ate, or basal area against target. */
 export function checkOutcomeText(check: ComparisonCheck): string {
   const r = check.result;
-  if (check.kind === 'establishment') return `${PLOT_STATUS_LABELS[check.status]} (${check.checkedOn})`;
+  const on = formatDate(check.checkedOn);
+  if (check.kind === 'establishment') return `${PLOT_STATUS_LABELS[check.status]} (${on})`;
   if (check.kind === 'browse') {
     const use = num(r.overallUsePct);
-    return use === null ? `Browse checked (${check.checkedOn})` : `Deer ate ${Math.round(use)} % of the forage (${check.checkedOn})`;
+    return use === null ? `Browse checked (${on})` : `Deer ate ${Math.round(use)} % of the forage (${on})`;
   }
   const ba = num(r.basalAreaSqFtPerAcre);
   const target = num(r.targetResidualBaSqFtPerAcre);
-  if (ba === null) return `Timber cruised (${check.checkedOn})`;
-  return `Basal area ${Math.round(ba)} ft²/acre${target === null ? '' : ` against a target of ${Math.round(target)}`} (${check.checkedOn})`;
+  if (ba === null) return `Timber cruised (${on})`;
+  return `Basal area ${Math.round(ba)} ft²/acre${target === null ? '' : ` against a target of ${Math.round(target)}`} (${on})`;
 }
 
 const EMPTY: SeasonCell = { status: null, checks: [], soilPh: null, tasksDone: 0, tasksTotal: 0, workDone: [] };

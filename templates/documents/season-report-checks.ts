@@ -6,6 +6,7 @@
  */
 import type { Content, TableCell } from 'pdfmake/interfaces';
 import type { EstablishmentStatus } from '../../shared/domain/plot-checks';
+import { formatDate } from '../../shared/domain/clock';
 import { DOC_COLORS, ruledTableLayout } from './kit/layout';
 
 export interface SeasonReportChecks {
@@ -61,7 +62,7 @@ function establishmentPart(checks: SeasonReportChecks['establishment']): Content
     c.species.forEach((s, i) => {
       rows.push([
         { text: i === 0 ? c.unitName : '', style: 'tableCell' },
-        { text: i === 0 ? c.checkedOn : '', style: 'tableCell' },
+        { text: i === 0 ? formatDate(c.checkedOn) : '', style: 'tableCell' },
         { text: s.species, style: 'tableCell' },
         { text: fixed(s.plantsPerSqFt, 1), style: 'tableCell', alignment: 'right' },
         { text: orDash(s.targetPlantsPerSqFt, 0), style: 'tableCell', alignment: 'right' },
@@ -79,7 +80,7 @@ function establishmentPart(checks: SeasonReportChecks['establishment']): Content
 
 function browsePart(checks: SeasonReportChecks['browse']): Content[] {
   if (checks.length === 0) return [];
-  const rows: string[][] = checks.flatMap((c) => c.species.map((s, i) => [i === 0 ? c.unitName : '', i === 0 ? c.checkedOn : '', s.species, `${Math.round(s.usePct)} %`, s.jacobsD === null ? '—' : fixed(s.jacobsD, 2), i === 0 ? `${Math.round(c.overallUsePct)} %` : '']));
+  const rows: string[][] = checks.flatMap((c) => c.species.map((s, i) => [i === 0 ? c.unitName : '', i === 0 ? formatDate(c.checkedOn) : '', s.species, `${Math.round(s.usePct)} %`, s.jacobsD === null ? '—' : fixed(s.jacobsD, 2), i === 0 ? `${Math.round(c.overallUsePct)} %` : '']));
   return [
     { text: 'How hard deer used the plots', style: 'h3' },
     table(['Plot', 'Checked', 'Species', 'Use', "Jacobs' D", 'All species'], rows, ['*', 58, 90, 40, 50, 62], [3, 4, 5]),
@@ -97,7 +98,7 @@ function timberPart(checks: SeasonReportChecks['timber']): Content[] {
     const over = c.targetResidualBaSqFtPerAcre !== null && c.basalAreaSqFtPerAcre > c.targetResidualBaSqFtPerAcre;
     return [
       c.unitName,
-      c.checkedOn,
+      formatDate(c.checkedOn),
       fixed(c.basalAreaSqFtPerAcre, 0),
       orDash(c.targetResidualBaSqFtPerAcre, 0),
       orDash(c.treesPerAcre, 0),
@@ -112,7 +113,7 @@ function timberPart(checks: SeasonReportChecks['timber']): Content[] {
 
 function soilPart(tests: SeasonReportChecks['soilTests']): Content[] {
   if (tests.length === 0) return [];
-  const rows = tests.map((t) => [t.unitName, t.sampledOn, fixed(t.ph, 1), orDash(t.pPpm, 0), orDash(t.kPpm, 0), fixed(t.limeTonsPerAcre, 2), `${t.p2o5LbPerAcre}`, `${t.k2oLbPerAcre}`]);
+  const rows = tests.map((t) => [t.unitName, formatDate(t.sampledOn), fixed(t.ph, 1), orDash(t.pPpm, 0), orDash(t.kPpm, 0), fixed(t.limeTonsPerAcre, 2), `${t.p2o5LbPerAcre}`, `${t.k2oLbPerAcre}`]);
   const sources = [...new Set(tests.flatMap((t) => [t.limeSource, t.nutrientSource]))];
   return [
     { text: 'Soil tests on file', style: 'h3' },

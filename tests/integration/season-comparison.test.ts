@@ -59,8 +59,8 @@ describe('GET /api/properties/:id/season-comparison', () => {
     expect(row.current.soilPh).toBe(6.1);
     expect(row.phChange).toBe(0.7); // 6.1 − 5.4
     expect(row.current.status).toBe('browsed-hard'); // the latest check: (10 − 4) ÷ 10 = 60 % ≥ 50 % (common practice, no source)
-    expect(row.current.checks).toEqual(['Established (2026-09-20)', 'Deer ate 60 % of the forage (2026-10-20)']);
-    expect(row.previous.checks).toEqual(['Failed stand (2025-09-24)']);
+    expect(row.current.checks).toEqual(['Established (Sep 20, 2026)', 'Deer ate 60 % of the forage (Oct 20, 2026)']);
+    expect(row.previous.checks).toEqual(['Failed stand (Sep 24, 2025)']);
   });
 
   it('takes the season asked for', async () => {

@@ -5,10 +5,10 @@ const rec = (over: Partial<SeasonUnitRecord>): SeasonUnitRecord => ({ unitId: 1,
 
 describe('season comparison', () => {
   it('reads each check in one plain sentence', () => {
-    expect(checkOutcomeText({ kind: 'establishment', checkedOn: '2026-09-20', status: 'thin', result: {} })).toBe('Thin stand (2026-09-20)');
+    expect(checkOutcomeText({ kind: 'establishment', checkedOn: '2026-09-20', status: 'thin', result: {} })).toBe('Thin stand (Sep 20, 2026)');
     // use % over all pairs (caged − open) ÷ caged, as plot-checks computes it; rounded for the landowner
-    expect(checkOutcomeText({ kind: 'browse', checkedOn: '2026-10-20', status: 'browsed-hard', result: { overallUsePct: 57.6 } })).toBe('Deer ate 58 % of the forage (2026-10-20)');
-    expect(checkOutcomeText({ kind: 'timber', checkedOn: '2026-11-08', status: 'over-target', result: { basalAreaSqFtPerAcre: 110, targetResidualBaSqFtPerAcre: 70 } })).toBe('Basal area 110 ft²/acre against a target of 70 (2026-11-08)');
+    expect(checkOutcomeText({ kind: 'browse', checkedOn: '2026-10-20', status: 'browsed-hard', result: { overallUsePct: 57.6 } })).toBe('Deer ate 58 % of the forage (Oct 20, 2026)');
+    expect(checkOutcomeText({ kind: 'timber', checkedOn: '2026-11-08', status: 'over-target', result: { basalAreaSqFtPerAcre: 110, targetResidualBaSqFtPerAcre: 70 } })).toBe('Basal area 110 ft²/acre against a target of 70 (Nov 8, 2026)');
   });
 
   it('takes the latest check and soil test of a season, and counts work done against work not skipped', () => {

@@ -59,10 +59,10 @@ describe('the season report prints the checks and the soil tests', () => {
     // r = 6/9 = 0.667 of use, p = 9/23 = 0.391 available → D = (0.667 − 0.391) ÷ (0.667 + 0.391 − 2 × 0.261) = 0.51 (Jacobs 1974)
     expect(text).toMatch(/white clover\s+67 %\s+0\.51/);
     // BAF 10 × mean 11 in-trees = 110 ft²/acre against 70: thin 40 (standard prism cruise)
-    expect(text).toMatch(/North oak slope\s+2025-11-08\s+110\s+70/);
+    expect(text).toMatch(/North oak slope\s+Nov 8, 2025\s+110\s+70/);
     expect(flat).toContain('Thin 40 ft²/acre');
     // 900 lb ENM ÷ 400 per ton = 2.25 t/acre (University of Missouri); P (25 − 18) × 20 ÷ 4 + 30 = 65 (Tri-State); K (150 − 120) × 8 ÷ 4 + 60 = 120
-    expect(text).toMatch(/Ridge clover plot\s+2025-03-18\s+5\.6\s+18\s+120\s+2\.25\s+65\s+120/);
+    expect(text).toMatch(/Ridge clover plot\s+Mar 18, 2025\s+5\.6\s+18\s+120\s+2\.25\s+65\s+120/);
     expect(flat).toMatch(/Worked by: University of Missouri .*Tri-State/);
   });
 

@@ -15,7 +15,7 @@ const TONE: Record<string, string> = {
 
 function Status({ status }: { status: SeasonCell['status'] }) {
   if (!status) return <span className="text-xs text-slate">Not checked</span>;
-  return <span className={`inline-block rounded border px-2 py-0.5 text-xs font-semibold ${TONE[status] ?? ''}`}>{PLOT_STATUS_LABELS[status]}</span>;
+  return <span className={`inline-block self-start rounded border px-2 py-0.5 text-xs font-semibold ${TONE[status] ?? ''}`}>{PLOT_STATUS_LABELS[status]}</span>;
 }
 
 function Cell({ label, cell }: { label: string; cell: SeasonCell }) {
