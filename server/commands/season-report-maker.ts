@@ -26,6 +26,7 @@ import { clientRecipients } from '../services/mail/client-recipients';
 import { enqueueJob, type JobContext } from '../services/jobs/job-queue';
 import { countObservations } from '../queries/observations';
 import { buildSeasonPressure } from '../queries/season-pressure';
+import { readSeasonReportChecks } from '../queries/season-report-checks';
 import { kindLabel, presentObservationSummary } from '../presenters/observation';
 import type { SeasonReportObservations } from '../../templates/documents/season-report';
 
@@ -88,6 +89,7 @@ export async function seasonReportInput(property: Property, season: number, reco
     cautions: [CAUTIONS['deer-scent-baiting']],
     observations: await seasonObservations(property.id, range.startsOn, range.endsOn, usableZone(firm?.timezone)),
     pressure: await buildSeasonPressure(property.firmId, property.id, season, transaction),
+    checks: await readSeasonReportChecks(property, range.startsOn, range.endsOn, transaction),
   };
 }
 

@@ -30,6 +30,7 @@ import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './ch
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
 import { sprayRecordsRouter } from './spray-records';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
+import { propertySeasonComparisonRouter } from './season-comparison';
 import { cameraRouters } from './cameras';
 import { propertyCameraSitesRouter } from './camera-sites';
 import { searchRouter } from './search';
@@ -84,6 +85,7 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/soil-tests', router: soilTestsRouter },
   { path: '/properties', router: propertySeasonsRouter },
   { path: '/season-drafts', router: seasonDraftsRouter },
+  { path: '/properties', router: propertySeasonComparisonRouter },
   ...cameraRouters,
   { path: '/search', router: searchRouter },
   { path: '/firm-exports', router: firmExportsRouter },

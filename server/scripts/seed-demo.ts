@@ -10,6 +10,7 @@ import { seedDemoCameras } from '../db/seeds/demo-cameras';
 import { seedDemoCameraSites } from '../db/seeds/demo-camera-sites';
 import { seedDemoPressureHarvest } from '../db/seeds/demo-pressure-harvest';
 import { seedDemoSpray } from '../db/seeds/demo-spray';
+import { seedDemoSeasons } from '../db/seeds/demo-seasons';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
@@ -21,6 +22,7 @@ try {
   await seedDemoSchedule(firm);
   await seedDemoPortal(firm);
   await seedDemoChecks(firm);
+  await seedDemoSeasons(firm);
   await seedDemoCameras(firm);
   await seedDemoCameraSites(firm);
   await seedDemoPressureHarvest(firm);

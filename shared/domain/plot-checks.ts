@@ -22,27 +22,39 @@ export interface StandTarget {
   source: string;
 }
 
-const FROM_MEMORY = 'from memory (common extension guidance; not checked against a published table)';
+const FROM_MEMORY = 'from memory (common extension guidance; no published stand count found for this species)';
+
+/** Penn State Extension, "Wheat Stand Assessment": 20–30 plants/ft² adequate for maximum yield; replant below 12–14. */
+const PSU_WHEAT = 'Penn State Extension, "Wheat Stand Assessment": 20–30 plants/ft² adequate (lower end taken)';
+/** The same guide applied to the other fall cereals: no oat or rye count was found, so this is by analogy. */
+const PSU_WHEAT_ANALOGY = 'by analogy to Penn State Extension, "Wheat Stand Assessment" (20 plants/ft² for wheat); no published count found for this cereal';
+/** Forage rape is Brassica napus, the species of canola; canola stand guides apply to its seedlings. */
+const CANOLA_STAND = 'OMAFRA Field Crop News, "Stand assessments and replant decisions for spring canola" (2025): optimum 5–8 plants/ft² (lower end taken); NDSU Crop & Pest Report (27 May 1999): 4 plants/ft² minimum';
+/** Penn State forage specialist M. Hall, quoted in Hay & Forage Grower, "When thin alfalfa seedings aren't worth keeping": 15 plants/ft² bare minimum in new seedings. */
+const ALFALFA_STAND = 'Penn State Extension (M. Hall), in Hay & Forage Grower, "When thin alfalfa seedings aren\'t worth keeping": 15 plants/ft² minimum in a new seeding';
 
 /**
- * Target stands by species (the common names the library's seed materials use). No published table
- * could be checked while writing these, so each says "from memory"; they are starting values a
- * consultant can judge against, not rules.
+ * Target stands by species (the common names the library's seed materials use): seedlings per ft²
+ * a few weeks after seeding. Each carries where the number comes from; where no published stand
+ * count could be found it says "from memory", and the consultant judges.
  */
 export const STAND_TARGETS: Readonly<Record<string, StandTarget>> = {
   'white clover': { plantsPerSqFt: 10, source: FROM_MEMORY },
   'red clover': { plantsPerSqFt: 10, source: FROM_MEMORY },
   'crimson clover': { plantsPerSqFt: 12, source: FROM_MEMORY },
+  alfalfa: { plantsPerSqFt: 15, source: ALFALFA_STAND },
   'forage chicory': { plantsPerSqFt: 5, source: FROM_MEMORY },
   'forage radish': { plantsPerSqFt: 4, source: FROM_MEMORY },
   turnip: { plantsPerSqFt: 5, source: FROM_MEMORY },
-  rape: { plantsPerSqFt: 6, source: FROM_MEMORY },
-  oats: { plantsPerSqFt: 20, source: FROM_MEMORY },
-  wheat: { plantsPerSqFt: 22, source: FROM_MEMORY },
-  'cereal rye': { plantsPerSqFt: 20, source: FROM_MEMORY },
+  rape: { plantsPerSqFt: 5, source: CANOLA_STAND },
+  oats: { plantsPerSqFt: 20, source: PSU_WHEAT_ANALOGY },
+  wheat: { plantsPerSqFt: 20, source: PSU_WHEAT },
+  'cereal rye': { plantsPerSqFt: 20, source: PSU_WHEAT_ANALOGY },
   cowpeas: { plantsPerSqFt: 2, source: FROM_MEMORY },
   'grain sorghum': { plantsPerSqFt: 2, source: FROM_MEMORY },
   soybeans: { plantsPerSqFt: 3, source: FROM_MEMORY },
+  // Native grasses: one plant per ft² "will in time produce a very good stand" — a seed vendor's
+  // establishment guide (Roundstone Native Seed, 2008), not an extension table: still from memory.
   'big bluestem': { plantsPerSqFt: 1, source: FROM_MEMORY },
   indiangrass: { plantsPerSqFt: 1, source: FROM_MEMORY },
   'little bluestem': { plantsPerSqFt: 1, source: FROM_MEMORY },

@@ -9,9 +9,9 @@
  *   lime's ENM guarantee per ton (1,600 ÷ 400 = 4 t/acre; 1,200 ÷ 400 = 3 t/acre, MU Extension).
  *   MU measures salt pH and the Woodruff buffer's neutralizable acidity; the ENM figure is the lab's.
  *
- * Phosphate and potash: build-up to a critical level over a few years plus the crop's maintenance.
- * No state table could be checked while writing these, so every P and K constant is marked
- * "from memory"; the consultant edits the prescription, which shows the source.
+ * Phosphate and potash: the Tri-State build-up and maintenance approach (see NUTRIENT_RULES, each
+ * constant with its source; the K critical level and crop maintenance remain from memory); the
+ * consultant edits the prescription, which shows the source.
  */
 import { DomainValidationError } from './errors';
 import { limeTonsPerAcreFromEnm } from './lime';
@@ -31,9 +31,9 @@ export const LIME_METHOD_LABELS: Record<LimeMethod, string> = {
   missouri: 'University of Missouri ENM method',
 };
 
-/** Target soil pH by crop group (from memory: common extension guidance of 6.0–6.5 for food-plot crops, legumes at the top). */
+/** Target soil pH by crop group (from memory: common extension guidance of 6.0–6.5 for food-plot crops, legumes at the top; the legume value lies in red clover's 6.1–6.7 of Univ. of Kentucky AGR-33). */
 export const TARGET_PH: Record<string, { ph: number; source: string }> = {
-  legume: { ph: 6.5, source: 'from memory' },
+  legume: { ph: 6.5, source: 'Univ. of Kentucky AGR-33, "Growing Red Clover in Kentucky": pH 6.1–6.7 (6.5 taken)' },
   brassica: { ph: 6.3, source: 'from memory' },
   grain: { ph: 6.0, source: 'from memory' },
   'native-grass': { ph: 5.8, source: 'from memory' },
@@ -110,19 +110,31 @@ export function limeRecommendation(method: LimeMethod, test: SoilTestValues, tar
   return { method, targetPh, tonsPerAcre: roundHalfUp(tons, 2), working: `${test.enmLbPerAcre} lb ENM/acre ÷ ${productEnmLbPerTon} lb ENM/ton = ${tons.toFixed(2)} t/acre`, source: 'University of Missouri Extension (ENM ÷ ENM per ton)' };
 }
 
-/** P and K levels and rates (all from memory; see the module comment). */
+/**
+ * Phosphate and potash by the Tri-State build-up and maintenance approach (Vitosh, Johnson & Mengel
+ * 1995, "Tri-State Fertilizer Recommendations for Corn, Soybeans, Wheat and Alfalfa", MSU Extension
+ * Bulletin E-2567, with Ohio State and Purdue). Its lab methods: Bray P1 for P and 1 N ammonium
+ * acetate for K, in ppm; a Mehlich-3 P reads about 35 % higher than Bray P1 and Mehlich-3 K about 14 %
+ * higher than ammonium-acetate K (Ohio State ANR-75, Culman et al. 2019), so send Bray/AA values.
+ */
 export const NUTRIENT_RULES = {
-  pCriticalPpm: 30,
+  /** Tri-State: wheat and alfalfa are more responsive to P than corn or soybeans, so their critical Bray P1 level is 25 ppm (not 15) — Ohio State agBMPs, "Soil test P levels less than 50 ppm", citing Vitosh et al. 1995. */
+  pCriticalPpm: 25,
+  /** From memory: the Tri-State K critical level rises with CEC; 150 ppm is a round value for the silt loams of the demo region, not read from the bulletin. */
   kCriticalPpm: 150,
-  /** lb P2O5 that raise soil-test P by 1 ppm. */
-  p2o5LbPerPpm: 18,
-  /** lb K2O that raise soil-test K by 1 ppm. */
+  /** Tri-State build-up equations: about 20 lb P2O5 raise soil-test P by 1 ppm (as summarised in AgProfessional, "How much fertilizer will move soil test levels"). */
+  p2o5LbPerPpm: 20,
+  /** Tri-State build-up equations: 6–10 lb K2O raise soil-test K by 1 ppm depending on CEC (same summary); the middle, 8, is taken. */
   k2oLbPerPpm: 8,
+  /** Tri-State: build-up raises the soil test to the critical level over four years (Ohio State agcrops, "The new Tri-State fertilizer recommendation framework"). */
   buildUpYears: 4,
-  source: 'from memory (build-up to a critical level over 4 years plus maintenance; not checked against a state table)',
+  /** At or above twice the critical level nothing is added: for P that is 50 ppm Bray P1, the level Ohio State agBMPs gives for no further fertilizer when every crop of the rotation is considered. */
+  noneAboveCriticalTimes: 2,
+  source:
+    'Tri-State build-up and maintenance (Vitosh et al. 1995, MSU E-2567): P critical 25 ppm Bray P1 (wheat/alfalfa), 20 lb P2O5 per ppm, 8 lb K2O per ppm (6–10 by CEC), built up over 4 years; K critical 150 ppm and crop maintenance from memory',
 } as const;
 
-/** Maintenance by crop group, lb/acre (from memory). */
+/** Maintenance by crop group, lb/acre: crop removal (from memory; the Tri-State bulletin has tables for corn, soybeans, wheat and alfalfa only). */
 export const MAINTENANCE: Record<string, { p2o5: number; k2o: number }> = {
   legume: { p2o5: 30, k2o: 60 },
   brassica: { p2o5: 40, k2o: 60 },
@@ -143,7 +155,7 @@ export function nutrientRecommendation(test: SoilTestValues, cropGroup: string):
   const r = NUTRIENT_RULES;
   const part = (ppm: number | null | undefined, critical: number, perPpm: number, maintenance: number) => {
     if (ppm === null || ppm === undefined) return maintenance;
-    if (ppm >= critical * 2) return 0;
+    if (ppm >= critical * r.noneAboveCriticalTimes) return 0;
     const buildUp = ppm < critical ? ((critical - ppm) * perPpm) / r.buildUpYears : 0;
     return Math.round(buildUp + maintenance);
   };

@@ -120,6 +120,7 @@ const routes: RouteObject[] = [
         { path: paths.portalResults, ...page(() => import('./routes/portal/portal-results'), (m) => m.PortalResultsPage) },
         { path: paths.portalPropertyResults(), ...page(() => import('./routes/portal/portal-results'), (m) => m.PortalPropertyResultsPage) },
         { path: paths.portalPropertyStands(), ...page(() => import('./routes/portal/portal-stands'), (m) => m.PortalStandsPage) },
+        { path: paths.portalPropertySeasons(), ...page(() => import('./routes/portal/portal-seasons'), (m) => m.PortalSeasonsPage) },
         { path: paths.portalProperty(), loader: portalPropertyLoader, ...page(() => import('./routes/portal/portal-property'), (m) => m.PortalPropertyPage) },
         { path: paths.portalPropertyProgress(), ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressPage) },
         { path: paths.portalProgress, ...page(() => import('./routes/portal/portal-progress'), (m) => m.PortalProgressHomePage) },

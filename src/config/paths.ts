@@ -48,6 +48,7 @@ export const paths = {
   /** The link in the season-report e-mail: keep this path. */
   portalPropertyResults: (id: number | string = ':id') => `/portal/properties/${id}/results`,
   portalPropertyStands: (id: number | string = ':id') => `/portal/properties/${id}/stands`,
+  portalPropertySeasons: (id: number | string = ':id') => `/portal/properties/${id}/seasons`,
   /** The link in the proposal e-mail: keep this path. */
   portalProposal: (id: number | string = ':id') => `/portal/proposals/${id}`,
   portalInvoices: '/portal/invoices',

@@ -1,7 +1,8 @@
 /**
  * The season report a landowner receives at the close of a hunting season: the work done (with a
  * few of the crew's photos), the acres established, the camera-survey estimates compared season
- * over season, the harvest's age structure and buck:doe trend as bar charts, the consultant's
+ * over season, the harvest's age structure and buck:doe trend as bar charts, the checks on the
+ * plots and the soil tests (season-report-checks.ts), the consultant's
  * recommendations for next season, and the cautions about the survey method and baiting.
  *
  * Figures are printed as the server computed them with shared/domain/survey-estimates.ts; this
@@ -16,6 +17,7 @@ import { formatArea, type AreaUnit } from '../../shared/units';
 import { AGE_CLASS_LABELS } from '../../shared/schemas/results';
 import { barChartSvg } from './kit/bar-chart-svg';
 import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, ruledTableLayout } from './kit/layout';
+import { seasonChecksSection, type SeasonReportChecks } from './season-report-checks';
 
 const CONTENT_WIDTH_PT = 612 - 2 * 54;
 /** DESIGN.md-like chart colours: moss for bucks, clay for does, ochre for fawns. */
@@ -57,6 +59,8 @@ export interface SeasonReportDocumentInput {
   observations?: SeasonReportObservations;
   /** Hunting pressure: sits and deer seen per stand (omitted, or no stands: no section). */
   pressure?: SeasonReportPressure;
+  /** Establishment, browse and timber checks of the season and the soil tests on file (omitted or empty: no section). */
+  checks?: SeasonReportChecks;
 }
 
 /** What the season report says about hunting pressure and sits. */
@@ -319,6 +323,7 @@ export function seasonReportDocument(input: SeasonReportDocumentInput): TDocumen
       { label: 'Season', value: `${formatReportDate(input.season.startsOn, 'season.startsOn')} – ${formatReportDate(input.season.endsOn, 'season.endsOn')}` },
     ]),
     ...workSection(input),
+    ...seasonChecksSection(input.checks),
     ...surveySection(input),
     ...harvestSection(input),
     ...observationsSection(input),

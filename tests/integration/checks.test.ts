@@ -23,8 +23,8 @@ const post = (agent: Agent, url: string, body: unknown, headers: Record<string, 
   return req.send(body as object);
 };
 
-// A failed brassica stand: 1 rape and 1 turnip seedling over 4 × 1 ft² frames against targets of 6 and 5
-// plants/ft² (targets from memory) → well under 40 % of target (threshold: common practice, no source).
+// A failed brassica stand: 1 rape and 1 turnip seedling over 4 × 1 ft² frames against targets of 5
+// (rape: OMAFRA canola stand guide, lower end of 5–8/ft²) and 5 plants/ft² (turnip: from memory) → well under 40 % of target (threshold: common practice, no source).
 const failedStand = {
   kind: 'establishment',
   checkedOn: '2026-10-01',
@@ -68,7 +68,7 @@ describe('establishment check', () => {
 
   it('writes the re-seeding prescription at the scaled rates when the consultant accepts it', async () => {
     const thin = await post(consultant, `/api/units/${plotId}/checks`, { ...failedStand, samples: [{ species: 'rape', plants: 3 }, { species: 'turnip', plants: 3 }] });
-    expect(thin.body.data.status).toBe('thin'); // 3/6 and 3/5 of target → mean 0.55
+    expect(thin.body.data.status).toBe('thin'); // 3/5 (rape, OMAFRA canola guide) and 3/5 (turnip, from memory) of target → mean 0.6
     const before = await Prescription.count({ where: { unitId: plotId } });
     const accepted = await post(consultant, `/api/checks/${thin.body.data.id}/reseed`, { decision: 'accept' });
     expect(accepted.status).toBe(200);

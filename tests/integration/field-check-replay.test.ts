@@ -27,7 +27,7 @@ async function send(item: QueuedCheck): Promise<{ replayed: boolean }> {
   return { replayed: res.body.replayed === true };
 }
 
-// A failed stand: 1 plant over 2 × 1 ft² frames of rape (target from memory; thresholds common practice, no source).
+// A failed stand: 1 plant over 2 × 1 ft² frames of rape (target 5/ft²: OMAFRA canola stand guide; thresholds common practice, no source).
 const failedStand = { kind: 'establishment' as const, checkedOn: '2026-10-01', frameSqFt: 1, samples: [{ species: 'rape', plants: 1 }, { species: 'rape', plants: 0 }], groundCoverPct: 15, weedPressure: 'high' as const };
 
 beforeAll(async () => {

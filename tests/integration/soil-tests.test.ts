@@ -31,8 +31,8 @@ describe('a soil test by the University of Missouri ENM method (the default outs
     // 1,600 lb ENM ÷ 400 lb ENM/ton (starter library's spread lime) = 4 t/acre (University of Missouri)
     expect(data.lime.tonsPerAcre).toBe(4);
     expect(data.lime.method).toBe('missouri');
-    // Brassica plot: P (30 − 20) × 18 ÷ 4 + 40 = 85; K (150 − 110) × 8 ÷ 4 + 60 = 140 (rules from memory)
-    expect(data.nutrients).toMatchObject({ p2o5LbPerAcre: 85, k2oLbPerAcre: 140 });
+    // Brassica plot: P (25 − 20) × 20 ÷ 4 + 40 = 65 (Tri-State: critical 25 ppm Bray P1, 20 lb P2O5/ppm, 4 years); K (150 − 110) × 8 ÷ 4 + 60 = 140 (8 lb K2O/ppm Tri-State mid-range; K critical and maintenance from memory)
+    expect(data.nutrients).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 140 });
     expect(data.retestDue).toBe('2029-03-10'); // 3 years by default
   });
 
@@ -42,7 +42,7 @@ describe('a soil test by the University of Missouri ENM method (the default outs
     expect(res.status).toBe(200);
     const prescription = await Prescription.findByPk(res.body.data.prescriptionId);
     expect(prescription!.parameters.steps!.lime!.limeTonsPerAcre).toBe(3); // 1,200 ÷ 400 (MU Extension)
-    expect(prescription!.parameters.steps!.fertilize).toMatchObject({ p2o5LbPerAcre: 85, k2oLbPerAcre: 140 });
+    expect(prescription!.parameters.steps!.fertilize).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 140 });
     expect(prescription!.notes).toMatch(/from the soil test of Mar 11, 2026.*University of Missouri/);
     const edit = await consultant.patch(`/api/prescriptions/${prescription!.id}`).set('X-CSRF-Token', consultant.csrf).send({ parameters: { steps: { lime: { limeTonsPerAcre: 2.5 } } } });
     expect(edit.status).toBe(200);

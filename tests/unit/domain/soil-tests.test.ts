@@ -34,17 +34,27 @@ describe('lime by the University of Missouri ENM method', () => {
   });
 });
 
-describe('phosphate and potash (from memory)', () => {
+describe('phosphate and potash (Tri-State build-up and maintenance)', () => {
   it('adds a quarter of the build-up to maintenance below the critical level', () => {
-    // P 20 ppm: (30 − 20) × 18 ÷ 4 = 45 + 40 brassica maintenance = 85; K 110: (150 − 110) × 8 ÷ 4 = 80 + 60 = 140 (rules from memory)
+    // P 20 ppm Bray P1: (25 − 20) × 20 ÷ 4 = 25 + 40 brassica maintenance = 65 — critical 25 ppm for wheat/alfalfa
+    // (Ohio State agBMPs citing Vitosh et al. 1995), 20 lb P2O5 per ppm and 4 years (Tri-State build-up);
+    // K 110 ppm: (150 − 110) × 8 ÷ 4 = 80 + 60 = 140 — 8 lb K2O per ppm is the middle of Tri-State's 6–10; 150 ppm and maintenance from memory
     const rec = nutrientRecommendation({ ph: 6, pPpm: 20, kPpm: 110 }, 'brassica');
-    expect(rec.p2o5LbPerAcre).toBe(85);
+    expect(rec.p2o5LbPerAcre).toBe(65);
     expect(rec.k2oLbPerAcre).toBe(140);
-    expect(rec.source).toMatch(/from memory/);
+    expect(rec.source).toMatch(/Tri-State/);
+    expect(rec.source).toMatch(/from memory/); // the K critical level and maintenance are still not from a table
   });
 
-  it('drops everything well above the critical level', () => {
+  it('builds P at 20 lb P2O5 per ppm: the Tri-State figure', () => {
+    // Legume, P 5 ppm, K at critical: (25 − 5) × 20 ÷ 4 = 100 + 30 maintenance = 130; K 150 → maintenance 60 only
+    expect(nutrientRecommendation({ ph: 6, pPpm: 5, kPpm: 150 }, 'legume')).toMatchObject({ p2o5LbPerAcre: 130, k2oLbPerAcre: 60 });
+  });
+
+  it('drops everything at or above twice the critical level (P 50 ppm Bray P1: Ohio State agBMPs)', () => {
     expect(nutrientRecommendation({ ph: 6, pPpm: 80, kPpm: 400 }, 'legume')).toMatchObject({ p2o5LbPerAcre: 0, k2oLbPerAcre: 0 });
+    expect(nutrientRecommendation({ ph: 6, pPpm: 50, kPpm: 150 }, 'legume').p2o5LbPerAcre).toBe(0);
+    expect(nutrientRecommendation({ ph: 6, pPpm: 49, kPpm: 150 }, 'legume').p2o5LbPerAcre).toBe(30); // maintenance only
   });
 
   it('groups crops by what they sow and dates the retest', () => {

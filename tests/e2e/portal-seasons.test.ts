@@ -1,0 +1,48 @@
+/**
+ * The landowner on a phone sees this season and last side by side: from the property page to the
+ * comparison, the brassica plot's failed or thin stand last season and its established stand this
+ * season, the soil-test pH of both, read-only (no form, no button that writes).
+ */
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+
+const baseUrl = inject('baseUrl');
+
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('seasons side by side in the portal', () => {
+  it('shows each plot’s two seasons on a 390 × 844 phone without a write control', async () => {
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, timezoneId: 'America/Chicago' });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'client@browseline.test');
+    await page.waitForURL(/\/portal/);
+    await page.getByRole('link', { name: 'See the plan of Kettle Hollow Farm' }).click();
+    await page.getByRole('link', { name: 'This season and last, side by side' }).click();
+    await page.waitForURL(/\/portal\/properties\/\d+\/seasons/);
+    const brassica = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: 'Hollow brassica plot' }) });
+    await brassica.waitFor();
+    // The demo seed (demo-checks.ts, demo-seasons.ts): a thin or failed stand last season, established this season.
+    await expect.poll(() => brassica.getByText('Established', { exact: true }).count(), { timeout: 20_000 }).toBe(1);
+    expect(await brassica.getByText(/^(Thin stand|Failed stand)$/).count()).toBe(1);
+    expect(await brassica.getByText('6.0', { exact: true }).count()).toBe(1); // this season's soil-test pH (demo-seasons.ts)
+    const clover = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: 'Ridge clover plot' }) });
+    expect(await clover.getByText(/Deer ate \d+ % of the forage/).count()).toBeGreaterThanOrEqual(1);
+    // Read-only: nothing to type into and no button on the page's main content.
+    expect(await page.locator('main form, main input, main textarea, main select').count()).toBe(0);
+    // Fits the phone: no sideways scrolling.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await screenshot(page, 'portal-seasons-390');
+    watch.assertClean();
+    await context.close();
+  });
+});
