@@ -18,6 +18,8 @@ import { fitsFamily, GeometryKindMismatchError } from '../../../shared/domain/ge
 import { isUnitKind, KIND_STYLES, kindFamily, UNIT_KINDS, type KindStyle, type UnitKind } from '../../../shared/domain/unit-kinds';
 import { FEET_PER_MILE, METRES_PER_FOOT } from '../../../shared/units';
 import { DOC_COLORS, FONT_BODY, FONT_HEADING } from './look';
+import { areaPaint, fmt, labelWidthPt, lineSvg, SYMBOL_HALF_PT, symbolSvg } from './map-marks';
+import { insidePoly, overlaps, polyArea, rectSamples, segmentHitsRect, within, type Poly, type Pt, type Rect } from './map-planar';
 import { z } from 'zod';
 import { areaCentroid } from '../../../shared/domain/centroid';
 import { fitProjection } from '../../../shared/domain/map-projection';
@@ -158,42 +160,7 @@ export function projectionFor(bbox: BBox, box: MapBox, marginPt = 0): MapProject
 }
 
 export { escapeXml };
-
-// Advance widths of Source Sans 3 SemiBold (the map's label face), 1/1000 em, for ASCII 32–126,
-// read from @fontsource/source-sans-3 5.3.1 with fontkit. Other characters count as 0.56 em.
-const SEMIBOLD_WIDTHS = [
-  200, 315, 482, 513, 513, 841, 639, 275, 324, 324, 438, 513, 275, 322, 275, 344, 513, 513, 513, 513, 513, 513, 513, 513,
-  513, 513, 275, 275, 513, 513, 513, 444, 875, 558, 597, 576, 625, 538, 510, 628, 663, 282, 494, 597, 502, 745, 657, 674,
-  582, 674, 592, 545, 546, 655, 536, 800, 541, 501, 540, 324, 344, 324, 513, 500, 549, 516, 563, 462, 564, 507, 317, 520,
-  558, 262, 263, 522, 271, 843, 560, 549, 564, 564, 373, 431, 361, 556, 495, 748, 481, 495, 443, 324, 255, 324, 513,
-];
-
-/** Width in points of a label set in Source Sans 3 SemiBold at `fontSizePt`. */
-export function labelWidthPt(text: string, fontSizePt: number): number {
-  let units = 0;
-  for (const ch of text) {
-    const code = ch.codePointAt(0)!;
-    units += code >= 32 && code < 127 ? SEMIBOLD_WIDTHS[code - 32] : 560;
-  }
-  return (units / 1000) * fontSizePt;
-}
-
-type Pt = [number, number];
-type Ring = Pt[];
-/** One polygon: outer ring first, then holes. */
-type Poly = Ring[];
-
-interface Rect {
-  x: number;
-  y: number;
-  w: number;
-  h: number;
-}
-
-const fmt = (n: number): string => {
-  const r = Math.round(n * 100) / 100;
-  return Object.is(r, -0) ? '0' : String(r);
-};
+export { kindSwatchSvg, labelWidthPt } from './map-marks';
 
 function checkPosition(pos: unknown, field: string, name: string): Position {
   if (
@@ -304,110 +271,6 @@ function* allPositions(boundary: Position[][][], units: PreparedUnit[]): Iterabl
   }
 }
 
-function ringArea(ring: Ring): number {
-  let sum = 0;
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) sum += ring[j][0] * ring[i][1] - ring[i][0] * ring[j][1];
-  return sum / 2;
-}
-
-function polyArea(poly: Poly): number {
-  return poly.reduce((acc, ring, i) => acc + (i === 0 ? 1 : -1) * Math.abs(ringArea(ring)), 0);
-}
-
-function insideRing(p: Pt, ring: Ring): boolean {
-  let inside = false;
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
-    const [xi, yi] = ring[i];
-    const [xj, yj] = ring[j];
-    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
-}
-
-function insidePoly(p: Pt, poly: Poly): boolean {
-  return insideRing(p, poly[0]) && !poly.slice(1).some((hole) => insideRing(p, hole));
-}
-
-/** Points along a rectangle's edges (corners, then every ~4 pt), for "does it fit inside" tests. */
-function rectSamples(r: Rect): Pt[] {
-  const out: Pt[] = [];
-  const nx = Math.max(2, Math.ceil(r.w / 4));
-  const ny = Math.max(2, Math.ceil(r.h / 4));
-  for (let i = 0; i <= nx; i++) {
-    const x = r.x + (r.w * i) / nx;
-    out.push([x, r.y], [x, r.y + r.h]);
-  }
-  for (let j = 1; j < ny; j++) {
-    const y = r.y + (r.h * j) / ny;
-    out.push([r.x, y], [r.x + r.w, y]);
-  }
-  return out;
-}
-
-const overlaps = (a: Rect, b: Rect): boolean => a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
-const within = (a: Rect, b: Rect): boolean => a.x >= b.x && a.y >= b.y && a.x + a.w <= b.x + b.w && a.y + a.h <= b.y + b.h;
-
-function segmentsCross(p1: Pt, p2: Pt, p3: Pt, p4: Pt): boolean {
-  const d = (a: Pt, b: Pt, c: Pt): number => (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]);
-  const d1 = d(p3, p4, p1);
-  const d2 = d(p3, p4, p2);
-  const d3 = d(p1, p2, p3);
-  const d4 = d(p1, p2, p4);
-  return ((d1 > 0 && d2 < 0) || (d1 < 0 && d2 > 0)) && ((d3 > 0 && d4 < 0) || (d3 < 0 && d4 > 0));
-}
-
-/** True when the segment a–b touches the rectangle (an end inside it, or crossing an edge). */
-function segmentHitsRect(a: Pt, b: Pt, r: Rect): boolean {
-  const inside = (p: Pt): boolean => p[0] >= r.x && p[0] <= r.x + r.w && p[1] >= r.y && p[1] <= r.y + r.h;
-  if (inside(a) || inside(b)) return true;
-  const c: Pt[] = [[r.x, r.y], [r.x + r.w, r.y], [r.x + r.w, r.y + r.h], [r.x, r.y + r.h]];
-  return c.some((p, i) => segmentsCross(a, b, p, c[(i + 1) % 4]));
-}
-
-function dashFor(dash: KindStyle['dash'], widthPt: number): string {
-  if (dash === 'dashed') return ` stroke-dasharray="${fmt(widthPt * 3)} ${fmt(widthPt * 2)}"`;
-  // Round caps turn near-zero dashes into dots.
-  if (dash === 'dotted') return ` stroke-dasharray="0.1 ${fmt(widthPt * 2)}" stroke-linecap="round"`;
-  return '';
-}
-
-const SYMBOL_HALF_PT = 5;
-
-/** Our own point symbol, centred at (x, y). */
-function symbolSvg(style: KindStyle, x: number, y: number, half = SYMBOL_HALF_PT): string {
-  const paint = `fill="${style.fill}" stroke="${style.stroke}" stroke-width="1" stroke-linejoin="round"`;
-  switch (style.symbol) {
-    case 'triangle':
-      return `<path d="M${fmt(x)} ${fmt(y - half * 1.15)}L${fmt(x + half * 1.1)} ${fmt(y + half * 0.85)}L${fmt(x - half * 1.1)} ${fmt(y + half * 0.85)}Z" ${paint}/>`;
-    case 'square':
-      return `<rect x="${fmt(x - half * 0.85)}" y="${fmt(y - half * 0.85)}" width="${fmt(half * 1.7)}" height="${fmt(half * 1.7)}" ${paint}/>`;
-    case 'diamond':
-      return `<path d="M${fmt(x)} ${fmt(y - half * 1.15)}L${fmt(x + half)} ${fmt(y)}L${fmt(x)} ${fmt(y + half * 1.15)}L${fmt(x - half)} ${fmt(y)}Z" ${paint}/>`;
-    case 'bar':
-      return `<rect x="${fmt(x - half * 1.2)}" y="${fmt(y - half * 0.45)}" width="${fmt(half * 2.4)}" height="${fmt(half * 0.9)}" ${paint}/>`;
-    case 'circle':
-    default:
-      return `<circle cx="${fmt(x)}" cy="${fmt(y)}" r="${fmt(half * 0.9)}" ${paint}/>`;
-  }
-}
-
-function areaPaint(style: KindStyle, strokeWidthPt = 1): string {
-  return `fill="${style.fill}" fill-opacity="${style.fillOpacity}" fill-rule="evenodd" stroke="${style.stroke}" stroke-width="${strokeWidthPt}" stroke-linejoin="round"${dashFor(style.dash, strokeWidthPt * 1.6)}`;
-}
-
-function lineWidthFor(kind: UnitKind): number {
-  return kind === 'fence' ? 1.3 : 2.2;
-}
-
-function lineSvg(style: KindStyle, path: string): string {
-  const width = lineWidthFor(style.kind);
-  // A pale casing under the line keeps it readable over any area fill.
-  return (
-    `<path d="${path}" fill="none" stroke="${DOC_COLORS.card}" stroke-opacity="0.85" stroke-width="${fmt(width + 2)}" stroke-linejoin="round" stroke-linecap="round"/>` +
-    `<path d="${path}" fill="none" stroke="${style.stroke}" stroke-width="${width}" stroke-linejoin="round"${dashFor(style.dash, width)}/>`
-  );
-}
-
 interface ScaleChoice {
   ft: number;
   label: string;
@@ -441,20 +304,6 @@ const LABEL_NUDGES: Array<[number, number]> = [
   [0, 0], [0, -1.2], [0, 1.2], [0, -2.4], [0, 2.4], [-0.3, 0], [0.3, 0], [-0.3, -1.2], [0.3, -1.2], [-0.3, 1.2], [0.3, 1.2],
 ];
 const POINT_LABEL_PT = 7;
-
-/**
- * A small SVG key for one kind (area swatch, line sample or point symbol), the same marks as the
- * map's legend, for tables and lists in documents.
- */
-export function kindSwatchSvg(kind: UnitKind, widthPt = 16, heightPt = 10): string {
-  const style = KIND_STYLES[kind];
-  const cy = heightPt / 2;
-  let mark: string;
-  if (style.family === 'area') mark = `<rect x="0.5" y="0.5" width="${fmt(widthPt - 1)}" height="${fmt(heightPt - 1)}" ${areaPaint(style)}/>`;
-  else if (style.family === 'line') mark = lineSvg(style, `M1.5 ${fmt(cy)}L${fmt(widthPt - 1.5)} ${fmt(cy)}`);
-  else mark = symbolSvg(style, widthPt / 2, cy, Math.min(4.5, heightPt / 2 - 0.5));
-  return `<svg xmlns="http://www.w3.org/2000/svg" width="${fmt(widthPt)}" height="${fmt(heightPt)}" viewBox="0 0 ${fmt(widthPt)} ${fmt(heightPt)}">${mark}</svg>`;
-}
 
 /** The validated input: the boundary's polygons, the units with their kind style, and the extent of both. */
 interface PreparedMap {
