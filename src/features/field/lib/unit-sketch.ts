@@ -4,7 +4,7 @@
  * north up, one scale on both axes), plus dots for photo positions.
  */
 import type { Geometry, Position } from 'geojson';
-import { fitProjection } from '../../../../shared/domain/map-projection';
+import { fitProjection, metresPerDegree } from '../../../../shared/domain/map-projection';
 
 export interface SketchPoint {
   x: number;
@@ -71,7 +71,9 @@ export function sketchUnit(geometry: Geometry | null, widthPx: number, heightPx:
   const lons = all.map((p) => p[0]);
   let [minLat, maxLat, minLon, maxLon] = [Math.min(...lats), Math.max(...lats), Math.min(...lons), Math.max(...lons)];
   const midLat = (minLat + maxLat) / 2;
-  const k = Math.cos((midLat * Math.PI) / 180);
+  // Ground length of a degree of longitude over that of a degree of latitude.
+  const perDeg = metresPerDegree(midLat);
+  const k = perDeg.lon / perDeg.lat;
   if (maxLat - minLat < 1e-9 && maxLon - minLon < 1e-9) {
     minLat -= POINT_HALF_SPAN_DEG;
     maxLat += POINT_HALF_SPAN_DEG;
