@@ -116,10 +116,16 @@ export default defineConfig({
               test: /[\\/]src[\\/](features[\\/]field[\\/](hooks[\\/][^\\/]+|api[\\/](complete-task|skip-task)\.ts|lib[\\/](completion-queue|completion-store|task-text)\.ts|components[\\/](task-card|queue-notice)\.tsx)|app[\\/]routes[\\/]field[\\/](field-shell|field-home)\.tsx|components[\\/]layouts[\\/]field-layout\.tsx)$/,
             },
             {
-              // A task's page (its unit sketch and directions): loads when a task is opened, precached for no signal.
+              // A task's page (its directions): loads when a task is opened, precached for no signal.
               name: 'field-task',
               includeDependenciesRecursively: false,
-              test: /[\\/]src[\\/](features[\\/]field[\\/](lib[\\/](unit-sketch|directions)\.ts|components[\\/](unit-map|directions)\.tsx)|app[\\/]routes[\\/]field[\\/]field-task\.tsx)$/,
+              test: /[\\/]src[\\/](features[\\/]field[\\/](lib[\\/](geo-uri|directions)\.ts|components[\\/]directions\.tsx)|app[\\/]routes[\\/]field[\\/]field-task\.tsx)$/,
+            },
+            {
+              // The task's unit sketch (it draws through d3-geo): loaded with the task page, precached for no signal.
+              name: 'unit-map',
+              includeDependenciesRecursively: false,
+              test: /[\\/](src[\\/]features[\\/]field[\\/](lib[\\/]unit-sketch\.ts|components[\\/]unit-map\.tsx)|shared[\\/]domain[\\/]map-projection\.ts)$/,
             },
           ],
         },

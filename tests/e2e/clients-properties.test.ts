@@ -180,7 +180,7 @@ describe('the consultant keeps clients and properties', () => {
     await page.waitForURL(/\/properties\/\d+$/);
     // Demo seed: Sawmill Ridge 80 is a surveyed "80" of about 78 acres.
     await expect.poll(() => page.getByRole('img', { name: /Outline of Sawmill Ridge 80, 78\.\d ac/ }).count()).toBe(1);
-    expect(await page.locator('svg[role="img"] path').first().getAttribute('d')).toMatch(/^M[\d.]+ [\d.]+L/);
+    expect(await page.locator('svg[role="img"] path').first().getAttribute('d')).toMatch(/^M[\d.]+[ ,][\d.]+L/);
     await expect.poll(() => page.getByText('Hectares').count()).toBe(1);
     await screenshot(page, 'property-demo');
     watch.assertClean();

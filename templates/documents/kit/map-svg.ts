@@ -3,12 +3,10 @@
  * palette and symbols, area labels where they fit, and a band below the map with the legend (only
  * the kinds present), a scale bar in round feet or miles, and a north arrow.
  *
- * Projection: a local equirectangular projection centred on the drawing, with the WGS84 radii of
- * curvature at the centre latitude (metres per degree of latitude from the meridian radius M,
- * of longitude from N·cos(latitude); Snyder 1987, USGS Professional Paper 1395, ch. 4). North is
- * up and both axes share one scale. Over a property (a few miles at most) its scale error stays
- * under about 0.1 %: it grows with tan(latitude) times the north-south distance from the centre.
- * It is not meant for areas much larger than a county, nor for shapes across the antimeridian.
+ * Projection: the shared map projection (shared/domain/map-projection.ts, on d3-geo): a local
+ * equirectangular projection centred on the drawing with the WGS84 radii of curvature at the centre
+ * latitude, north up, one scale on both axes. Label spots start from the shared centroid
+ * (shared/domain/centroid.ts).
  *
  * Only SVG features that pdfmake's svg-to-pdfkit draws are used: paths, rects, circles, polylines,
  * text with text-anchor, fill-opacity, stroke-dasharray, evenodd fill. Every text is XML-escaped.
@@ -20,7 +18,11 @@ import { fitsFamily, GeometryKindMismatchError } from '../../../shared/domain/ge
 import { isUnitKind, KIND_STYLES, kindFamily, UNIT_KINDS, type KindStyle, type UnitKind } from '../../../shared/domain/unit-kinds';
 import { FEET_PER_MILE, METRES_PER_FOOT } from '../../../shared/units';
 import { DOC_COLORS, FONT_BODY, FONT_HEADING } from './look';
+import { areaPaint, fmt, labelWidthPt, lineSvg, SYMBOL_HALF_PT, symbolSvg } from './map-marks';
+import { insidePoly, overlaps, polyArea, rectSamples, segmentHitsRect, within, type Poly, type Pt, type Rect } from './map-planar';
 import { z } from 'zod';
+import { areaCentroid } from '../../../shared/domain/centroid';
+import { fitProjection } from '../../../shared/domain/map-projection';
 
 export interface PlanMapUnit {
   name: string;
@@ -82,6 +84,8 @@ export interface MapProjection {
   project(lon: number, lat: number): [number, number];
   /** Drawing [x, y] in points back to [longitude, latitude] in degrees. */
   invert(xPt: number, yPt: number): [number, number];
+  /** SVG path data of a geometry's polygons (closed rings, holes included) and lines, in points. */
+  path(geometry: Geometry): string;
 }
 
 export interface ScaleBarLayout {
@@ -120,12 +124,6 @@ export interface PlanMap {
   layout: PlanMapLayout;
 }
 
-// WGS84 defining constants (NIMA TR8350.2): semi-major axis and flattening.
-const WGS84_A_M = 6378137;
-const WGS84_F = 1 / 298.257223563;
-const WGS84_E2 = WGS84_F * (2 - WGS84_F);
-const DEG = Math.PI / 180;
-
 /** A single point or a sliver still gets a map this many metres across. */
 const MIN_SPAN_M = 150;
 export const MIN_MAP_WIDTH_PT = 300;
@@ -148,67 +146,21 @@ export function projectionFor(bbox: BBox, box: MapBox, marginPt = 0): MapProject
   if (!(availW > 0 && availH > 0)) {
     throw new DomainValidationError('box', 'The map box is smaller than its margins; give it more room.');
   }
-  const lat0 = (south + north) / 2;
-  const lon0 = (west + east) / 2;
-  const sinLat = Math.sin(lat0 * DEG);
-  const w = 1 - WGS84_E2 * sinLat * sinLat;
-  const meridianRadiusM = (WGS84_A_M * (1 - WGS84_E2)) / w ** 1.5;
-  const primeVerticalRadiusM = WGS84_A_M / Math.sqrt(w);
-  const metresPerDegLat = meridianRadiusM * DEG;
-  const metresPerDegLon = primeVerticalRadiusM * Math.cos(lat0 * DEG) * DEG;
-  const spanXm = Math.max((east - west) * metresPerDegLon, MIN_SPAN_M);
-  const spanYm = Math.max((north - south) * metresPerDegLat, MIN_SPAN_M);
-  const ptPerM = Math.min(availW / spanXm, availH / spanYm);
-  const cx = box.xPt + box.widthPt / 2;
-  const cy = box.yPt + box.heightPt / 2;
+  const fitted = fitProjection([west, south, east, north], { x: box.xPt, y: box.yPt, width: box.widthPt, height: box.heightPt }, { padding: marginPt, minSpanM: MIN_SPAN_M, digits: 2 });
   return {
-    lon0,
-    lat0,
-    ptPerM,
-    metresPerDegLon,
-    metresPerDegLat,
-    project: (lon, lat) => [cx + (lon - lon0) * metresPerDegLon * ptPerM, cy - (lat - lat0) * metresPerDegLat * ptPerM],
-    invert: (x, y) => [lon0 + (x - cx) / (ptPerM * metresPerDegLon), lat0 - (y - cy) / (ptPerM * metresPerDegLat)],
+    lon0: fitted.lon0,
+    lat0: fitted.lat0,
+    ptPerM: fitted.unitsPerMetre,
+    metresPerDegLon: fitted.metresPerDegLon,
+    metresPerDegLat: fitted.metresPerDegLat,
+    project: fitted.project,
+    invert: fitted.invert,
+    path: fitted.path,
   };
 }
 
 export { escapeXml };
-
-// Advance widths of Source Sans 3 SemiBold (the map's label face), 1/1000 em, for ASCII 32–126,
-// read from @fontsource/source-sans-3 5.3.1 with fontkit. Other characters count as 0.56 em.
-const SEMIBOLD_WIDTHS = [
-  200, 315, 482, 513, 513, 841, 639, 275, 324, 324, 438, 513, 275, 322, 275, 344, 513, 513, 513, 513, 513, 513, 513, 513,
-  513, 513, 275, 275, 513, 513, 513, 444, 875, 558, 597, 576, 625, 538, 510, 628, 663, 282, 494, 597, 502, 745, 657, 674,
-  582, 674, 592, 545, 546, 655, 536, 800, 541, 501, 540, 324, 344, 324, 513, 500, 549, 516, 563, 462, 564, 507, 317, 520,
-  558, 262, 263, 522, 271, 843, 560, 549, 564, 564, 373, 431, 361, 556, 495, 748, 481, 495, 443, 324, 255, 324, 513,
-];
-
-/** Width in points of a label set in Source Sans 3 SemiBold at `fontSizePt`. */
-export function labelWidthPt(text: string, fontSizePt: number): number {
-  let units = 0;
-  for (const ch of text) {
-    const code = ch.codePointAt(0)!;
-    units += code >= 32 && code < 127 ? SEMIBOLD_WIDTHS[code - 32] : 560;
-  }
-  return (units / 1000) * fontSizePt;
-}
-
-type Pt = [number, number];
-type Ring = Pt[];
-/** One polygon: outer ring first, then holes. */
-type Poly = Ring[];
-
-interface Rect {
-  x: number;
-  y: number;
-  w: number;
-  h: number;
-}
-
-const fmt = (n: number): string => {
-  const r = Math.round(n * 100) / 100;
-  return Object.is(r, -0) ? '0' : String(r);
-};
+export { kindSwatchSvg, labelWidthPt } from './map-marks';
 
 function checkPosition(pos: unknown, field: string, name: string): Position {
   if (
@@ -319,139 +271,6 @@ function* allPositions(boundary: Position[][][], units: PreparedUnit[]): Iterabl
   }
 }
 
-function ringArea(ring: Ring): number {
-  let sum = 0;
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) sum += ring[j][0] * ring[i][1] - ring[i][0] * ring[j][1];
-  return sum / 2;
-}
-
-function polyArea(poly: Poly): number {
-  return poly.reduce((acc, ring, i) => acc + (i === 0 ? 1 : -1) * Math.abs(ringArea(ring)), 0);
-}
-
-/** Area-weighted centroid of a polygon with holes, in drawing space. */
-function polyCentroid(poly: Poly): Pt {
-  let cx = 0;
-  let cy = 0;
-  let total = 0;
-  poly.forEach((ring, k) => {
-    const a = ringArea(ring);
-    if (a === 0) return;
-    const sign = (k === 0 ? 1 : -1) * Math.sign(a);
-    let rx = 0;
-    let ry = 0;
-    for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
-      const cross = ring[j][0] * ring[i][1] - ring[i][0] * ring[j][1];
-      rx += (ring[j][0] + ring[i][0]) * cross;
-      ry += (ring[j][1] + ring[i][1]) * cross;
-    }
-    // (rx, ry) / (6a) is the ring's centroid; weight it by the ring's |area| with its sign.
-    cx += sign * (rx / 6);
-    cy += sign * (ry / 6);
-    total += sign * a;
-  });
-  if (total === 0) return poly[0][0];
-  return [cx / total, cy / total];
-}
-
-function insideRing(p: Pt, ring: Ring): boolean {
-  let inside = false;
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
-    const [xi, yi] = ring[i];
-    const [xj, yj] = ring[j];
-    if (yi > p[1] !== yj > p[1] && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
-}
-
-function insidePoly(p: Pt, poly: Poly): boolean {
-  return insideRing(p, poly[0]) && !poly.slice(1).some((hole) => insideRing(p, hole));
-}
-
-/** Points along a rectangle's edges (corners, then every ~4 pt), for "does it fit inside" tests. */
-function rectSamples(r: Rect): Pt[] {
-  const out: Pt[] = [];
-  const nx = Math.max(2, Math.ceil(r.w / 4));
-  const ny = Math.max(2, Math.ceil(r.h / 4));
-  for (let i = 0; i <= nx; i++) {
-    const x = r.x + (r.w * i) / nx;
-    out.push([x, r.y], [x, r.y + r.h]);
-  }
-  for (let j = 1; j < ny; j++) {
-    const y = r.y + (r.h * j) / ny;
-    out.push([r.x, y], [r.x + r.w, y]);
-  }
-  return out;
-}
-
-const overlaps = (a: Rect, b: Rect): boolean => a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
-const within = (a: Rect, b: Rect): boolean => a.x >= b.x && a.y >= b.y && a.x + a.w <= b.x + b.w && a.y + a.h <= b.y + b.h;
-
-function segmentsCross(p1: Pt, p2: Pt, p3: Pt, p4: Pt): boolean {
-  const d = (a: Pt, b: Pt, c: Pt): number => (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]);
-  const d1 = d(p3, p4, p1);
-  const d2 = d(p3, p4, p2);
-  const d3 = d(p1, p2, p3);
-  const d4 = d(p1, p2, p4);
-  return ((d1 > 0 && d2 < 0) || (d1 < 0 && d2 > 0)) && ((d3 > 0 && d4 < 0) || (d3 < 0 && d4 > 0));
-}
-
-/** True when the segment a–b touches the rectangle (an end inside it, or crossing an edge). */
-function segmentHitsRect(a: Pt, b: Pt, r: Rect): boolean {
-  const inside = (p: Pt): boolean => p[0] >= r.x && p[0] <= r.x + r.w && p[1] >= r.y && p[1] <= r.y + r.h;
-  if (inside(a) || inside(b)) return true;
-  const c: Pt[] = [[r.x, r.y], [r.x + r.w, r.y], [r.x + r.w, r.y + r.h], [r.x, r.y + r.h]];
-  return c.some((p, i) => segmentsCross(a, b, p, c[(i + 1) % 4]));
-}
-
-function ringPath(ring: Ring): string {
-  return `M${ring.map(([x, y]) => `${fmt(x)} ${fmt(y)}`).join('L')}Z`;
-}
-
-function dashFor(dash: KindStyle['dash'], widthPt: number): string {
-  if (dash === 'dashed') return ` stroke-dasharray="${fmt(widthPt * 3)} ${fmt(widthPt * 2)}"`;
-  // Round caps turn near-zero dashes into dots.
-  if (dash === 'dotted') return ` stroke-dasharray="0.1 ${fmt(widthPt * 2)}" stroke-linecap="round"`;
-  return '';
-}
-
-const SYMBOL_HALF_PT = 5;
-
-/** Our own point symbol, centred at (x, y). */
-function symbolSvg(style: KindStyle, x: number, y: number, half = SYMBOL_HALF_PT): string {
-  const paint = `fill="${style.fill}" stroke="${style.stroke}" stroke-width="1" stroke-linejoin="round"`;
-  switch (style.symbol) {
-    case 'triangle':
-      return `<path d="M${fmt(x)} ${fmt(y - half * 1.15)}L${fmt(x + half * 1.1)} ${fmt(y + half * 0.85)}L${fmt(x - half * 1.1)} ${fmt(y + half * 0.85)}Z" ${paint}/>`;
-    case 'square':
-      return `<rect x="${fmt(x - half * 0.85)}" y="${fmt(y - half * 0.85)}" width="${fmt(half * 1.7)}" height="${fmt(half * 1.7)}" ${paint}/>`;
-    case 'diamond':
-      return `<path d="M${fmt(x)} ${fmt(y - half * 1.15)}L${fmt(x + half)} ${fmt(y)}L${fmt(x)} ${fmt(y + half * 1.15)}L${fmt(x - half)} ${fmt(y)}Z" ${paint}/>`;
-    case 'bar':
-      return `<rect x="${fmt(x - half * 1.2)}" y="${fmt(y - half * 0.45)}" width="${fmt(half * 2.4)}" height="${fmt(half * 0.9)}" ${paint}/>`;
-    case 'circle':
-    default:
-      return `<circle cx="${fmt(x)}" cy="${fmt(y)}" r="${fmt(half * 0.9)}" ${paint}/>`;
-  }
-}
-
-function areaPaint(style: KindStyle, strokeWidthPt = 1): string {
-  return `fill="${style.fill}" fill-opacity="${style.fillOpacity}" fill-rule="evenodd" stroke="${style.stroke}" stroke-width="${strokeWidthPt}" stroke-linejoin="round"${dashFor(style.dash, strokeWidthPt * 1.6)}`;
-}
-
-function lineWidthFor(kind: UnitKind): number {
-  return kind === 'fence' ? 1.3 : 2.2;
-}
-
-function lineSvg(style: KindStyle, path: string): string {
-  const width = lineWidthFor(style.kind);
-  // A pale casing under the line keeps it readable over any area fill.
-  return (
-    `<path d="${path}" fill="none" stroke="${DOC_COLORS.card}" stroke-opacity="0.85" stroke-width="${fmt(width + 2)}" stroke-linejoin="round" stroke-linecap="round"/>` +
-    `<path d="${path}" fill="none" stroke="${style.stroke}" stroke-width="${width}" stroke-linejoin="round"${dashFor(style.dash, width)}/>`
-  );
-}
-
 interface ScaleChoice {
   ft: number;
   label: string;
@@ -486,22 +305,14 @@ const LABEL_NUDGES: Array<[number, number]> = [
 ];
 const POINT_LABEL_PT = 7;
 
-/**
- * A small SVG key for one kind (area swatch, line sample or point symbol), the same marks as the
- * map's legend, for tables and lists in documents.
- */
-export function kindSwatchSvg(kind: UnitKind, widthPt = 16, heightPt = 10): string {
-  const style = KIND_STYLES[kind];
-  const cy = heightPt / 2;
-  let mark: string;
-  if (style.family === 'area') mark = `<rect x="0.5" y="0.5" width="${fmt(widthPt - 1)}" height="${fmt(heightPt - 1)}" ${areaPaint(style)}/>`;
-  else if (style.family === 'line') mark = lineSvg(style, `M1.5 ${fmt(cy)}L${fmt(widthPt - 1.5)} ${fmt(cy)}`);
-  else mark = symbolSvg(style, widthPt / 2, cy, Math.min(4.5, heightPt / 2 - 0.5));
-  return `<svg xmlns="http://www.w3.org/2000/svg" width="${fmt(widthPt)}" height="${fmt(heightPt)}" viewBox="0 0 ${fmt(widthPt)} ${fmt(heightPt)}">${mark}</svg>`;
+/** The validated input: the boundary's polygons, the units with their kind style, and the extent of both. */
+interface PreparedMap {
+  boundary: Position[][][];
+  units: PreparedUnit[];
+  bbox: BBox;
 }
 
-/** Draws the plan map and returns the SVG together with its layout (projection, scale bar, legend). */
-export function renderPlanMap(input: PlanMapInput): PlanMap {
+function prepareMap(input: PlanMapInput): PreparedMap {
   const { widthPt, heightPt } = input;
   if (!Number.isFinite(widthPt) || !Number.isFinite(heightPt) || widthPt < MIN_MAP_WIDTH_PT || heightPt < MIN_MAP_HEIGHT_PT) {
     throw new DomainValidationError(
@@ -515,11 +326,23 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
   if (!bbox) {
     throw new DomainValidationError('units', 'Nothing to draw: give the property boundary or at least one unit.');
   }
+  return { boundary, units, bbox };
+}
 
-  // Layout: optional title, the framed map, then a band with the legend and the scale bar.
+/** Where things go: optional title, the framed map, then a band with the legend and the scale bar. */
+interface FrameLayout {
+  frame: MapBox;
+  legendKinds: UnitKind[];
+  legendRows: number;
+  /** Top of the band under the frame. */
+  bandTop: number;
+}
+
+function frameLayout(input: PlanMapInput, hasBoundary: boolean, units: readonly PreparedUnit[]): FrameLayout {
+  const { widthPt, heightPt } = input;
   const present = new Set(units.map((u) => u.unit.kind));
   const legendKinds = UNIT_KINDS.filter((k) => present.has(k));
-  const legendItems = (boundary.length > 0 ? 1 : 0) + legendKinds.length;
+  const legendItems = (hasBoundary ? 1 : 0) + legendKinds.length;
   const legendCols = Math.max(1, Math.floor((widthPt - RIGHT_BLOCK_PT - BAND_PAD_PT) / LEGEND_COL_PT));
   const legendRows = Math.max(1, Math.ceil(legendItems / legendCols));
   const bandH = Math.max(legendRows * LEGEND_ROW_PT + 2 * BAND_PAD_PT, 50);
@@ -531,96 +354,117 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
       `The plan map is too short for its ${legendItems}-entry legend; give it at least ${Math.ceil(heightPt - frame.heightPt + 120)} pt of height.`,
     );
   }
-  const projection = projectionFor(bbox, frame, FRAME_MARGIN_PT);
-  const project = (p: Position): Pt => projection.project(p[0], p[1]);
-  const toPoly = (rings: Position[][]): Poly => rings.map((ring) => ring.map(project));
+  return { frame, legendKinds, legendRows, bandTop: frame.yPt + frame.heightPt + 0.5 };
+}
 
-  const parts: string[] = [];
-  parts.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${fmt(widthPt)}" height="${fmt(heightPt)}" viewBox="0 0 ${fmt(widthPt)} ${fmt(heightPt)}" font-family="${FONT_BODY}">`,
-  );
-  if (input.title) {
-    parts.push(
-      `<text x="0" y="13" font-family="${FONT_HEADING}" font-weight="bold" font-size="11" fill="${DOC_COLORS.ink}">${escapeXml(input.title)}</text>`,
-    );
-  }
-  parts.push(
-    `<rect x="${fmt(frame.xPt)}" y="${fmt(frame.yPt)}" width="${fmt(frame.widthPt)}" height="${fmt(frame.heightPt)}" fill="#EEEBE1" stroke="${DOC_COLORS.rule}" stroke-width="1"/>`,
-  );
+/** An area unit in drawing space: its polygons projected (for labels) and their drawn size. */
+interface DrawnArea extends PreparedUnit {
+  polys: Poly[];
+  size: number;
+}
 
-  // Boundary: the property lifts off the surrounding ground as paper.
-  const boundaryPolys = boundary.map(toPoly);
-  const boundaryPath = boundaryPolys.map((poly) => poly.map(ringPath).join('')).join('');
-  if (boundaryPath) {
-    parts.push(`<path id="boundary-fill" d="${boundaryPath}" fill="${DOC_COLORS.card}" fill-rule="evenodd" stroke="none"/>`);
-  }
+/** The open tag, the title and the frame's background. */
+function frameSvg(input: PlanMapInput, frame: MapBox): string {
+  const { widthPt, heightPt } = input;
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${fmt(widthPt)}" height="${fmt(heightPt)}" viewBox="0 0 ${fmt(widthPt)} ${fmt(heightPt)}" font-family="${FONT_BODY}">` +
+    (input.title
+      ? `<text x="0" y="13" font-family="${FONT_HEADING}" font-weight="bold" font-size="11" fill="${DOC_COLORS.ink}">${escapeXml(input.title)}</text>`
+      : '') +
+    `<rect x="${fmt(frame.xPt)}" y="${fmt(frame.yPt)}" width="${fmt(frame.widthPt)}" height="${fmt(frame.heightPt)}" fill="#EEEBE1" stroke="${DOC_COLORS.rule}" stroke-width="1"/>`
+  );
+}
+
+/** The base layer: the property lifts off the surrounding ground as paper, with the aerial photos over it. */
+function baseLayerSvg(boundaryPath: string, overlays: readonly PlanMapOverlay[], frame: MapBox, projection: MapProjection): string {
+  let out = boundaryPath ? `<path id="boundary-fill" d="${boundaryPath}" fill="${DOC_COLORS.card}" fill-rule="evenodd" stroke="none"/>` : '';
   // Aerial photos over the paper and under the plan, clipped to the frame.
-  const overlays = input.overlays ?? [];
-  if (overlays.length > 0) parts.push(overlaysSvg(overlays, frame, projection));
+  if (overlays.length > 0) out += overlaysSvg(overlays, frame, projection);
+  return out;
+}
 
-  // Areas, largest first so that small units stay on top.
-  const areaUnits = units
+/** Area units, largest first so that small units stay on top. */
+function drawnAreas(units: readonly PreparedUnit[], toPoly: (rings: Position[][]) => Poly): DrawnArea[] {
+  return units
     .filter((u) => u.polygons.length > 0)
     .map((u) => {
       const polys = u.polygons.map(toPoly);
-      const size = polys.reduce((acc, p) => acc + polyArea(p), 0);
-      return { ...u, polys, size };
+      return { ...u, polys, size: polys.reduce((acc, p) => acc + polyArea(p), 0) };
     })
     .sort((a, b) => b.size - a.size);
-  parts.push('<g id="areas">');
-  for (const a of areaUnits) {
-    const d = a.polys.map((poly) => poly.map(ringPath).join('')).join('');
-    parts.push(`<path class="unit" data-kind="${a.unit.kind}" d="${d}" ${areaPaint(a.style)}/>`);
-  }
-  parts.push('</g>');
-  if (boundaryPath) {
-    parts.push(
-      `<path id="boundary" d="${boundaryPath}" fill="none" stroke="${DOC_COLORS.ink}" stroke-width="1.6" stroke-linejoin="round"/>`,
-    );
-  }
+}
 
+function areasSvg(areas: readonly DrawnArea[], projection: MapProjection): string {
+  const paths = areas.map(
+    (a) => `<path class="unit" data-kind="${a.unit.kind}" d="${projection.path({ type: 'MultiPolygon', coordinates: a.polygons })}" ${areaPaint(a.style)}/>`,
+  );
+  return `<g id="areas">${paths.join('')}</g>`;
+}
+
+function boundaryOutlineSvg(boundaryPath: string): string {
+  return boundaryPath ? `<path id="boundary" d="${boundaryPath}" fill="none" stroke="${DOC_COLORS.ink}" stroke-width="1.6" stroke-linejoin="round"/>` : '';
+}
+
+function linesSvg(units: readonly PreparedUnit[], projection: MapProjection): string {
+  const groups = units
+    .filter((u) => u.lines.length > 0)
+    .map((u) => `<g class="unit" data-kind="${u.unit.kind}">${lineSvg(u.style, projection.path({ type: 'MultiLineString', coordinates: u.lines }))}</g>`);
+  return `<g id="lines">${groups.join('')}</g>`;
+}
+
+interface PointMark {
+  u: PreparedUnit;
+  at: Pt;
+}
+
+function pointMarksOf(units: readonly PreparedUnit[], project: (p: Position) => Pt): PointMark[] {
+  return units.flatMap((u) => u.points.map((p) => ({ u, at: project(p) })));
+}
+
+function pointsSvg(marks: readonly PointMark[]): string {
+  return `<g id="points">${marks.map(({ u, at }) => `<g class="unit" data-kind="${u.unit.kind}">${symbolSvg(u.style, at[0], at[1])}</g>`).join('')}</g>`;
+}
+
+/** What a label must not cover: boxes already taken (point symbols, other labels) and segments it should rather not cross. */
+interface LabelRoom {
+  frameRect: Rect;
+  occupied: Rect[];
+  obstacles: Array<[Pt, Pt]>;
+}
+
+function labelRoom(frame: MapBox, boundaryPolys: readonly Poly[], areas: readonly DrawnArea[], lines: readonly Pt[][], marks: readonly PointMark[]): LabelRoom {
   // Segments that labels should rather not cover: lines, the boundary and area outlines.
   const obstacles: Array<[Pt, Pt]> = [];
   const addSegments = (path: Pt[]) => {
     for (let i = 1; i < path.length; i++) obstacles.push([path[i - 1], path[i]]);
   };
   boundaryPolys.forEach((poly) => poly.forEach(addSegments));
-  areaUnits.forEach((a) => a.polys.forEach((poly) => poly.forEach(addSegments)));
+  areas.forEach((a) => a.polys.forEach((poly) => poly.forEach(addSegments)));
+  lines.forEach(addSegments);
+  const occupied = marks.map(({ at }) => ({ x: at[0] - SYMBOL_HALF_PT - 1, y: at[1] - SYMBOL_HALF_PT - 1, w: 2 * SYMBOL_HALF_PT + 2, h: 2 * SYMBOL_HALF_PT + 2 }));
+  return { frameRect: { x: frame.xPt + 2, y: frame.yPt + 2, w: frame.widthPt - 4, h: frame.heightPt - 4 }, occupied, obstacles };
+}
 
-  parts.push('<g id="lines">');
-  for (const u of units.filter((x) => x.lines.length > 0)) {
-    const paths = u.lines.map((line) => line.map(project));
-    paths.forEach(addSegments);
-    const d = paths.map((path) => `M${path.map(([x, y]) => `${fmt(x)} ${fmt(y)}`).join('L')}`).join('');
-    parts.push(`<g class="unit" data-kind="${u.unit.kind}">${lineSvg(u.style, d)}</g>`);
-  }
-  parts.push('</g>');
+const clearOfLines = (room: LabelRoom, rect: Rect): boolean => !room.obstacles.some(([a, b]) => segmentHitsRect(a, b, rect));
 
-  const occupied: Rect[] = [];
-  const pointMarks: Array<{ u: PreparedUnit; at: Pt }> = [];
-  parts.push('<g id="points">');
-  for (const u of units.filter((x) => x.points.length > 0)) {
-    for (const p of u.points) {
-      const at = project(p);
-      pointMarks.push({ u, at });
-      occupied.push({ x: at[0] - SYMBOL_HALF_PT - 1, y: at[1] - SYMBOL_HALF_PT - 1, w: 2 * SYMBOL_HALF_PT + 2, h: 2 * SYMBOL_HALF_PT + 2 });
-      parts.push(`<g class="unit" data-kind="${u.unit.kind}">${symbolSvg(u.style, at[0], at[1])}</g>`);
-    }
-  }
-  parts.push('</g>');
-
-  // Area labels at the centroid of each unit's largest polygon, when the label fits inside it and
-  // clear of the units drawn on top of it, of point symbols and of other labels; a spot that no
-  // line crosses is preferred over a larger size.
+/**
+ * Area labels at the centroid of each unit's largest polygon (the shared centroid,
+ * shared/domain/centroid.ts), when the label fits inside it and clear of the units drawn on top of
+ * it, of point symbols and of other labels; a spot that no line crosses is preferred over a larger size.
+ */
+function areaLabels(areas: readonly DrawnArea[], room: LabelRoom, project: (p: Position) => Pt): { labels: PlacedLabel[]; svg: string } {
   const labels: PlacedLabel[] = [];
-  const labelParts: string[] = [];
-  const frameRect: Rect = { x: frame.xPt + 2, y: frame.yPt + 2, w: frame.widthPt - 4, h: frame.heightPt - 4 };
-  const clearOfLines = (rect: Rect): boolean => !obstacles.some(([a, b]) => segmentHitsRect(a, b, rect));
-  const byLabelOrder = [...areaUnits].sort((a, b) => a.size - b.size);
+  let svg = '';
+  const byLabelOrder = [...areas].sort((a, b) => a.size - b.size);
   for (const a of byLabelOrder) {
-    const largest = a.polys.reduce((best, p) => (polyArea(p) > polyArea(best) ? p : best), a.polys[0]);
-    const [cx, cy] = polyCentroid(largest);
-    const above = areaUnits.slice(areaUnits.indexOf(a) + 1);
+    let largestIndex = 0;
+    a.polys.forEach((p, i) => {
+      if (polyArea(p) > polyArea(a.polys[largestIndex])) largestIndex = i;
+    });
+    const largest = a.polys[largestIndex];
+    const centre = areaCentroid([a.polygons[largestIndex]]);
+    const [cx, cy] = centre ? project([centre.lon, centre.lat]) : largest[0][0];
+    const above = areas.slice(areas.indexOf(a) + 1);
     const text = a.unit.name.trim();
     placing: for (const strict of [true, false]) {
       for (const size of LABEL_SIZES_PT) {
@@ -631,25 +475,28 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
           const x = cx + dx * w;
           const y = cy + dy * h;
           const rect: Rect = { x: x - w / 2, y: y - h / 2, w, h };
-          if (!within(rect, frameRect) || occupied.some((r) => overlaps(r, rect))) continue;
-          if (strict && !clearOfLines(rect)) continue;
+          if (!within(rect, room.frameRect) || room.occupied.some((r) => overlaps(r, rect))) continue;
+          if (strict && !clearOfLines(room, rect)) continue;
           const samples = rectSamples(rect);
           if (!samples.every((s) => insidePoly(s, largest))) continue;
           if (above.some((o) => o.polys.some((poly) => samples.some((s) => insidePoly(s, poly))))) continue;
-          occupied.push(rect);
+          room.occupied.push(rect);
           labels.push({ text, xPt: x, yPt: y, widthPt: w, heightPt: h, fontSizePt: size });
-          labelParts.push(
+          svg +=
             `<g class="unit-label" data-kind="${a.unit.kind}"><rect x="${fmt(rect.x)}" y="${fmt(rect.y)}" width="${fmt(rect.w)}" height="${fmt(rect.h)}" rx="2" fill="${DOC_COLORS.card}" fill-opacity="0.82" stroke="none"/>` +
-              `<text x="${fmt(x)}" y="${fmt(y + size * 0.36)}" font-size="${size}" font-weight="bold" text-anchor="middle" fill="${DOC_COLORS.ink}">${escapeXml(text)}</text></g>`,
-          );
+            `<text x="${fmt(x)}" y="${fmt(y + size * 0.36)}" font-size="${size}" font-weight="bold" text-anchor="middle" fill="${DOC_COLORS.ink}">${escapeXml(text)}</text></g>`;
           break placing;
         }
       }
     }
   }
-  // Point names beside their symbol (right, left, above, below) where there is room, preferring
-  // a spot that no line crosses.
-  for (const { u, at } of pointMarks) {
+  return { labels, svg };
+}
+
+/** Point names beside their symbol (right, left, above, below) where there is room, preferring a spot that no line crosses. */
+function pointLabelsSvg(marks: readonly PointMark[], room: LabelRoom): string {
+  let svg = '';
+  for (const { u, at } of marks) {
     const text = u.unit.name.trim();
     const w = labelWidthPt(text, POINT_LABEL_PT) + 4;
     const h = POINT_LABEL_PT * 1.25 + 1;
@@ -660,31 +507,30 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
       { rect: { x: at[0] - w / 2, y: at[1] - gap - h, w, h }, anchor: 'middle', x: at[0], baseline: at[1] - gap - h / 2 },
       { rect: { x: at[0] - w / 2, y: at[1] + gap, w, h }, anchor: 'middle', x: at[0], baseline: at[1] + gap + h / 2 },
     ];
-    const free = candidates.filter((c) => within(c.rect, frameRect) && !occupied.some((r) => overlaps(r, c.rect)));
-    const spot = free.find((c) => clearOfLines(c.rect)) ?? free[0];
+    const free = candidates.filter((c) => within(c.rect, room.frameRect) && !room.occupied.some((r) => overlaps(r, c.rect)));
+    const spot = free.find((c) => clearOfLines(room, c.rect)) ?? free[0];
     if (!spot) continue;
-    occupied.push(spot.rect);
-    labelParts.push(
+    room.occupied.push(spot.rect);
+    svg +=
       `<g class="point-label" data-kind="${u.unit.kind}"><rect x="${fmt(spot.rect.x)}" y="${fmt(spot.rect.y)}" width="${fmt(spot.rect.w)}" height="${fmt(spot.rect.h)}" rx="1.5" fill="${DOC_COLORS.card}" fill-opacity="0.75" stroke="none"/>` +
-        `<text x="${fmt(spot.x)}" y="${fmt(spot.baseline + POINT_LABEL_PT * 0.36)}" font-size="${POINT_LABEL_PT}" text-anchor="${spot.anchor}" fill="${DOC_COLORS.ink}">${escapeXml(text)}</text></g>`,
-    );
+      `<text x="${fmt(spot.x)}" y="${fmt(spot.baseline + POINT_LABEL_PT * 0.36)}" font-size="${POINT_LABEL_PT}" text-anchor="${spot.anchor}" fill="${DOC_COLORS.ink}">${escapeXml(text)}</text></g>`;
   }
-  parts.push(`<g id="labels">${labelParts.join('')}</g>`);
+  return svg;
+}
 
-  // The band: legend on the left, scale bar and north arrow on the right.
-  const bandTop = frame.yPt + frame.heightPt + 0.5;
-  parts.push('<g id="legend">');
-  const legendEntries: Array<{ key: string; label: string; swatch: (x: number, y: number) => string }> = [];
-  if (boundary.length > 0) {
-    legendEntries.push({
+/** The legend on the left of the band: the boundary (when drawn) and the kinds present. */
+function legendSvg(layout: FrameLayout, hasBoundary: boolean): string {
+  const entries: Array<{ key: string; label: string; swatch: (x: number, y: number) => string }> = [];
+  if (hasBoundary) {
+    entries.push({
       key: 'boundary',
       label: 'Property boundary',
       swatch: (x, y) => `<rect x="${fmt(x)}" y="${fmt(y - 4.5)}" width="16" height="9" fill="${DOC_COLORS.card}" stroke="${DOC_COLORS.ink}" stroke-width="1.4"/>`,
     });
   }
-  for (const kind of legendKinds) {
+  for (const kind of layout.legendKinds) {
     const style = KIND_STYLES[kind];
-    legendEntries.push({
+    entries.push({
       key: kind,
       label: style.label,
       swatch: (x, y) => {
@@ -696,59 +542,89 @@ export function renderPlanMap(input: PlanMapInput): PlanMap {
       },
     });
   }
-  legendEntries.forEach((entry, i) => {
-    const col = Math.floor(i / legendRows);
-    const row = i % legendRows;
+  const items = entries.map((entry, i) => {
+    const col = Math.floor(i / layout.legendRows);
+    const row = i % layout.legendRows;
     const x = BAND_PAD_PT + col * LEGEND_COL_PT;
-    const y = bandTop + BAND_PAD_PT + row * LEGEND_ROW_PT + LEGEND_ROW_PT / 2;
+    const y = layout.bandTop + BAND_PAD_PT + row * LEGEND_ROW_PT + LEGEND_ROW_PT / 2;
     const cls = entry.key === 'boundary' ? 'legend-boundary' : 'legend-item';
-    parts.push(
-      `<g class="${cls}" data-kind="${entry.key}">${entry.swatch(x, y)}<text x="${fmt(x + 22)}" y="${fmt(y + 3)}" font-size="8.5" fill="${DOC_COLORS.ink}">${escapeXml(entry.label)}</text></g>`,
-    );
+    return `<g class="${cls}" data-kind="${entry.key}">${entry.swatch(x, y)}<text x="${fmt(x + 22)}" y="${fmt(y + 3)}" font-size="8.5" fill="${DOC_COLORS.ink}">${escapeXml(entry.label)}</text></g>`;
   });
-  parts.push('</g>');
+  return `<g id="legend">${items.join('')}</g>`;
+}
 
-  const arrowX = widthPt - BAND_PAD_PT - 10;
-  const maxBarPt = Math.min(110, frame.widthPt * 0.3);
+/** Horizontal centre of the north arrow, at the right end of the band. */
+const arrowXOf = (widthPt: number): number => widthPt - BAND_PAD_PT - 10;
+
+/** The scale bar left of the north arrow: the longest round distance that fits, in four segments. */
+function scaleBar(layout: FrameLayout, widthPt: number, projection: MapProjection): { bar: ScaleBarLayout; svg: string } {
+  const maxBarPt = Math.min(110, layout.frame.widthPt * 0.3);
   const choice = chooseScaleBar(projection.ptPerM, maxBarPt);
   const groundM = choice.ft * METRES_PER_FOOT;
   const barPt = groundM * projection.ptPerM;
-  const x2 = arrowX - 30;
+  const x2 = arrowXOf(widthPt) - 30;
   const x1 = x2 - barPt;
-  const barY = bandTop + BAND_PAD_PT + 10;
+  const barY = layout.bandTop + BAND_PAD_PT + 10;
   const segment = barPt / 4;
-  parts.push(`<g id="scale-bar" data-ground-ft="${choice.ft}">`);
+  let svg = `<g id="scale-bar" data-ground-ft="${choice.ft}">`;
   for (let i = 0; i < 4; i++) {
-    parts.push(
-      `<rect class="scale-segment" x="${fmt(x1 + i * segment)}" y="${fmt(barY)}" width="${fmt(segment)}" height="4" fill="${i % 2 === 0 ? DOC_COLORS.ink : DOC_COLORS.card}" stroke="${DOC_COLORS.ink}" stroke-width="0.6"/>`,
-    );
+    svg += `<rect class="scale-segment" x="${fmt(x1 + i * segment)}" y="${fmt(barY)}" width="${fmt(segment)}" height="4" fill="${i % 2 === 0 ? DOC_COLORS.ink : DOC_COLORS.card}" stroke="${DOC_COLORS.ink}" stroke-width="0.6"/>`;
   }
-  parts.push(
-    `<text x="${fmt(x1)}" y="${fmt(barY + 14)}" font-size="8" text-anchor="middle" fill="${DOC_COLORS.slate}">0</text>`,
-    `<text class="scale-label" x="${fmt(x2)}" y="${fmt(barY + 14)}" font-size="8" text-anchor="middle" fill="${DOC_COLORS.slate}">${escapeXml(choice.label)}</text>`,
-    '</g>',
-  );
+  svg +=
+    `<text x="${fmt(x1)}" y="${fmt(barY + 14)}" font-size="8" text-anchor="middle" fill="${DOC_COLORS.slate}">0</text>` +
+    `<text class="scale-label" x="${fmt(x2)}" y="${fmt(barY + 14)}" font-size="8" text-anchor="middle" fill="${DOC_COLORS.slate}">${escapeXml(choice.label)}</text>` +
+    '</g>';
+  return { bar: { x1Pt: x1, x2Pt: x2, yPt: barY + 2, groundFt: choice.ft, groundM, label: choice.label }, svg };
+}
 
-  const arrowTop = bandTop + BAND_PAD_PT + 11;
+function northArrowSvg(layout: FrameLayout, widthPt: number): string {
+  const arrowX = arrowXOf(widthPt);
+  const arrowTop = layout.bandTop + BAND_PAD_PT + 11;
   const arrowBottom = arrowTop + 20;
-  parts.push(
-    '<g id="north-arrow">',
-    `<text x="${fmt(arrowX)}" y="${fmt(arrowTop - 2)}" font-family="${FONT_HEADING}" font-weight="bold" font-size="9" text-anchor="middle" fill="${DOC_COLORS.ink}">N</text>`,
-    `<path d="M${fmt(arrowX)} ${fmt(arrowTop)}L${fmt(arrowX)} ${fmt(arrowBottom - 6)}L${fmt(arrowX - 7)} ${fmt(arrowBottom)}Z" fill="${DOC_COLORS.ink}" stroke="${DOC_COLORS.ink}" stroke-width="0.8" stroke-linejoin="round"/>`,
-    `<path d="M${fmt(arrowX)} ${fmt(arrowTop)}L${fmt(arrowX + 7)} ${fmt(arrowBottom)}L${fmt(arrowX)} ${fmt(arrowBottom - 6)}Z" fill="${DOC_COLORS.card}" stroke="${DOC_COLORS.ink}" stroke-width="0.8" stroke-linejoin="round"/>`,
-    '</g>',
+  return (
+    '<g id="north-arrow">' +
+    `<text x="${fmt(arrowX)}" y="${fmt(arrowTop - 2)}" font-family="${FONT_HEADING}" font-weight="bold" font-size="9" text-anchor="middle" fill="${DOC_COLORS.ink}">N</text>` +
+    `<path d="M${fmt(arrowX)} ${fmt(arrowTop)}L${fmt(arrowX)} ${fmt(arrowBottom - 6)}L${fmt(arrowX - 7)} ${fmt(arrowBottom)}Z" fill="${DOC_COLORS.ink}" stroke="${DOC_COLORS.ink}" stroke-width="0.8" stroke-linejoin="round"/>` +
+    `<path d="M${fmt(arrowX)} ${fmt(arrowTop)}L${fmt(arrowX + 7)} ${fmt(arrowBottom)}L${fmt(arrowX)} ${fmt(arrowBottom - 6)}Z" fill="${DOC_COLORS.card}" stroke="${DOC_COLORS.ink}" stroke-width="0.8" stroke-linejoin="round"/>` +
+    '</g>'
   );
-  parts.push('</svg>');
+}
+
+/** Draws the plan map and returns the SVG together with its layout (projection, scale bar, legend). */
+export function renderPlanMap(input: PlanMapInput): PlanMap {
+  const { boundary, units, bbox } = prepareMap(input);
+  const hasBoundary = boundary.length > 0;
+  const layout = frameLayout(input, hasBoundary, units);
+  const projection = projectionFor(bbox, layout.frame, FRAME_MARGIN_PT);
+  const project = (p: Position): Pt => projection.project(p[0], p[1]);
+  const toPoly = (rings: Position[][]): Poly => rings.map((ring) => ring.map(project));
+
+  const boundaryPath = hasBoundary ? projection.path({ type: 'MultiPolygon', coordinates: boundary }) : '';
+  const areas = drawnAreas(units, toPoly);
+  const marks = pointMarksOf(units, project);
+  const projectedLines = units.flatMap((u) => u.lines.map((line) => line.map(project)));
+  const room = labelRoom(layout.frame, boundary.map(toPoly), areas, projectedLines, marks);
+  const areaLabelled = areaLabels(areas, room, project);
+  const pointLabels = pointLabelsSvg(marks, room);
+  const bar = scaleBar(layout, input.widthPt, projection);
+
+  const svg = [
+    frameSvg(input, layout.frame),
+    baseLayerSvg(boundaryPath, input.overlays ?? [], layout.frame, projection),
+    areasSvg(areas, projection),
+    boundaryOutlineSvg(boundaryPath),
+    linesSvg(units, projection),
+    pointsSvg(marks),
+    `<g id="labels">${areaLabelled.svg}${pointLabels}</g>`,
+    legendSvg(layout, hasBoundary),
+    bar.svg,
+    northArrowSvg(layout, input.widthPt),
+    '</svg>',
+  ].join('');
 
   return {
-    svg: parts.join(''),
-    layout: {
-      projection,
-      frame,
-      scaleBar: { x1Pt: x1, x2Pt: x2, yPt: barY + 2, groundFt: choice.ft, groundM, label: choice.label },
-      legendKinds,
-      labels,
-    },
+    svg,
+    layout: { projection, frame: layout.frame, scaleBar: bar.bar, legendKinds: layout.legendKinds, labels: areaLabelled.labels },
   };
 }
 

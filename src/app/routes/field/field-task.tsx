@@ -10,7 +10,6 @@ import { Button } from '../../../components/ui/button';
 import { useTask } from '../../../features/field/api/get-task';
 import type { FieldTask } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
-import { UnitMap } from '../../../features/field/components/unit-map';
 import { KindChip, TaskStatusChip } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
 import { Directions } from '../../../features/field/components/directions';
@@ -22,6 +21,10 @@ import { useMe } from '../../../features/auth/api/get-me';
 // The forms (and the shared zod schemas they check with) load after the page shows; the page asks for them at once.
 const loadCompleteForm = () => import('../../../features/field/components/complete-form');
 const loadSkipForm = () => import('../../../features/field/components/skip-form');
+// The unit's small map draws through d3-geo (shared/domain/map-projection.ts): loaded with the page
+// rather than in its first load, and precached for no signal (OFFLINE_PAGES in bundle-budgets.ts).
+const loadUnitMap = () => import('../../../features/field/components/unit-map');
+const UnitMap = lazy(() => loadUnitMap().then((m) => ({ default: m.UnitMap })));
 const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
 const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
 const CheckForm = lazy(() => import('../../../features/field/components/check-form').then((m) => ({ default: m.CheckForm })));
@@ -108,6 +111,7 @@ export function FieldTaskPage() {
   useEffect(() => {
     void loadCompleteForm().catch(() => undefined);
     void loadSkipForm().catch(() => undefined);
+    void loadUnitMap().catch(() => undefined);
   }, []);
   if (!id || (task.isError && task.error instanceof ApiError && task.error.status === 404)) {
     return (
@@ -159,7 +163,9 @@ export function FieldTaskPage() {
           ))}
         </ul>
       ) : null}
-      <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
+      <Suspense fallback={<div className="aspect-[8/5] w-full rounded border border-rule bg-paper" aria-hidden />}>
+        <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
+      </Suspense>
       <Directions location={t.location} label={t.unitName} />
       <QuantitiesCard task={t} />
       {t.cautions.map((c) => (

@@ -4,7 +4,7 @@
  * = driving); Android and other systems get the geo URI their maps apps register for, and every
  * device can copy the coordinates.
  */
-import { geoUri } from './unit-sketch';
+import { geoUri } from './geo-uri';
 
 export type Platform = 'ios' | 'android' | 'other';
 

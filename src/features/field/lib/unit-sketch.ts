@@ -1,9 +1,10 @@
 /**
  * The task page's small map of a unit, drawn without tiles so it works with no signal: the unit's
- * geometry projected into a box (x = lon·cos(midLat), y = −lat, an equirectangular projection about
- * the middle latitude; plenty for a field-sized shape), plus dots for photo positions.
+ * geometry projected into a box through the shared map projection (shared/domain/map-projection.ts:
+ * north up, one scale on both axes), plus dots for photo positions.
  */
 import type { Geometry, Position } from 'geojson';
+import { fitProjection, metresPerDegree } from '../../../../shared/domain/map-projection';
 
 export interface SketchPoint {
   x: number;
@@ -70,7 +71,9 @@ export function sketchUnit(geometry: Geometry | null, widthPx: number, heightPx:
   const lons = all.map((p) => p[0]);
   let [minLat, maxLat, minLon, maxLon] = [Math.min(...lats), Math.max(...lats), Math.min(...lons), Math.max(...lons)];
   const midLat = (minLat + maxLat) / 2;
-  const k = Math.cos((midLat * Math.PI) / 180);
+  // Ground length of a degree of longitude over that of a degree of latitude.
+  const perDeg = metresPerDegree(midLat);
+  const k = perDeg.lon / perDeg.lat;
   if (maxLat - minLat < 1e-9 && maxLon - minLon < 1e-9) {
     minLat -= POINT_HALF_SPAN_DEG;
     maxLat += POINT_HALF_SPAN_DEG;
@@ -95,38 +98,21 @@ export function sketchUnit(geometry: Geometry | null, widthPx: number, heightPx:
     minLat = Math.min(minLat, e.position[1]);
     maxLat = Math.max(maxLat, e.position[1]);
   }
-  const spanX = (maxLon - minLon) * k;
-  const spanY = maxLat - minLat;
-  const innerW = widthPx - 2 * paddingPx;
-  const innerH = heightPx - 2 * paddingPx;
-  const scale = Math.min(spanX > 0 ? innerW / spanX : Infinity, spanY > 0 ? innerH / spanY : Infinity);
-  const offsetX = paddingPx + (innerW - spanX * scale) / 2;
-  const offsetY = paddingPx + (innerH - spanY * scale) / 2;
+  const projection = fitProjection([minLon, minLat, maxLon, maxLat], { x: 0, y: 0, width: widthPx, height: heightPx }, { padding: paddingPx, digits: 1 });
   const r = (n: number) => Math.round(n * 10) / 10;
-  const project = ([lon, lat]: Position): SketchPoint => ({ x: r(offsetX + (lon - minLon) * k * scale), y: r(offsetY + (maxLat - lat) * scale) });
-  const pathOf = (list: Position[][], close: boolean) =>
-    list.map((line) => line.map((p, i) => `${i === 0 ? 'M' : 'L'}${project(p).x} ${project(p).y}`).join('') + (close ? 'Z' : '')).join('');
+  const project = ([lon, lat]: Position): SketchPoint => {
+    const [x, y] = projection.project(lon!, lat!);
+    return { x: r(x), y: r(y) };
+  };
   return {
     width: widthPx,
     height: heightPx,
-    areaPath: pathOf(rings, true),
-    linePath: pathOf(lines, false),
+    areaPath: rings.length > 0 ? projection.path({ type: 'Polygon', coordinates: rings }) : '',
+    linePath: lines.length > 0 ? projection.path({ type: 'MultiLineString', coordinates: lines }) : '',
     points: points.map(project),
     placed: near.map((e) => ({ id: e.id, ...project(e.position) })),
     offMap,
   };
 }
 
-/**
- * The link that opens a place in the phone's maps app: a geo URI (RFC 5870, section 3.3:
- * "geo:" latitude "," longitude, WGS 84), six decimals (about 0.1 m). Null without a position.
- */
-export function geoUri(location: [number, number] | null, label?: string): string | null {
-  if (!location) return null;
-  const [lon, lat] = location;
-  if (!Number.isFinite(lat) || !Number.isFinite(lon) || Math.abs(lat) > 90 || Math.abs(lon) > 180) return null;
-  const fix = (n: number) => String(Math.round(n * 1e6) / 1e6);
-  // Android's maps apps read a "q" query with the same point and a label; other apps ignore it.
-  const query = label ? `?q=${fix(lat)},${fix(lon)}(${encodeURIComponent(label)})` : '';
-  return `geo:${fix(lat)},${fix(lon)}${query}`;
-}
+export { geoUri } from './geo-uri';

@@ -1,4 +1,5 @@
-import type { MultiPolygon, Polygon, Position } from 'geojson';
+import type { MultiPolygon, Polygon } from 'geojson';
+import { extentOfPositions, fitProjection, positionsOf } from '../../../../shared/domain/map-projection';
 
 export interface BoundaryDrawing {
   /** SVG path data of every ring, in box pixels (y down). */
@@ -8,48 +9,16 @@ export interface BoundaryDrawing {
 }
 
 /**
- * Projects a lon/lat boundary into a box for a small static picture: x = lon·cos(midLat),
- * y = −lat (an equirectangular projection about the middle latitude; good enough for a
- * property-sized outline), scaled to fit the box with `paddingPx` around and centred.
- * Answers null when there is nothing to draw.
+ * Projects a lon/lat boundary into a box for a small static picture through the shared map
+ * projection (shared/domain/map-projection.ts: north up, one scale on both axes), fitted to the box
+ * with `paddingPx` around and centred. Answers null when there is nothing to draw.
  */
 export function drawBoundary(boundary: Polygon | MultiPolygon, widthPx: number, heightPx: number, paddingPx = 8): BoundaryDrawing | null {
-  const polygons: Position[][][] = boundary.type === 'Polygon' ? [boundary.coordinates] : boundary.coordinates;
-  const rings = polygons.flat().filter((ring) => ring.length >= 3);
-  if (rings.length === 0) return null;
-  let minLat = Infinity;
-  let maxLat = -Infinity;
-  for (const ring of rings)
-    for (const [, lat] of ring) {
-      minLat = Math.min(minLat, lat);
-      maxLat = Math.max(maxLat, lat);
-    }
-  const k = Math.cos((((minLat + maxLat) / 2) * Math.PI) / 180);
-  const projected = rings.map((ring) => ring.map(([lon, lat]) => [lon * k, -lat] as const));
-  let minX = Infinity;
-  let maxX = -Infinity;
-  let minY = Infinity;
-  let maxY = -Infinity;
-  for (const ring of projected)
-    for (const [x, y] of ring) {
-      minX = Math.min(minX, x);
-      maxX = Math.max(maxX, x);
-      minY = Math.min(minY, y);
-      maxY = Math.max(maxY, y);
-    }
-  const spanX = maxX - minX;
-  const spanY = maxY - minY;
-  if (!(spanX > 0) && !(spanY > 0)) return null;
-  const innerW = widthPx - 2 * paddingPx;
-  const innerH = heightPx - 2 * paddingPx;
-  const scale = Math.min(spanX > 0 ? innerW / spanX : Infinity, spanY > 0 ? innerH / spanY : Infinity);
-  const offsetX = paddingPx + (innerW - spanX * scale) / 2;
-  const offsetY = paddingPx + (innerH - spanY * scale) / 2;
-  const r = (n: number) => Math.round(n * 10) / 10;
-  const d = projected
-    .map((ring) => ring.map(([x, y], i) => `${i === 0 ? 'M' : 'L'}${r(offsetX + (x - minX) * scale)} ${r(offsetY + (y - minY) * scale)}`).join('') + 'Z')
-    .join('');
-  return { d, width: widthPx, height: heightPx };
+  const extent = extentOfPositions(positionsOf(boundary));
+  if (!extent || (extent[2] - extent[0] <= 0 && extent[3] - extent[1] <= 0)) return null;
+  const projection = fitProjection(extent, { x: 0, y: 0, width: widthPx, height: heightPx }, { padding: paddingPx, digits: 1 });
+  const d = projection.path(boundary);
+  return d ? { d, width: widthPx, height: heightPx } : null;
 }
 
 /** A small static picture of a property's boundary on paper, in moss, with north up. */

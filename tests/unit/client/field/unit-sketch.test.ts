@@ -4,7 +4,7 @@ import { geoUri, sketchUnit } from '../../../../src/features/field/lib/unit-sket
 
 /** The x/y extent of the numbers in an SVG path. */
 function extent(d: string) {
-  const nums = [...d.matchAll(/[ML](-?[\d.]+) (-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+  const nums = [...d.matchAll(/[ML](-?[\d.]+)[ ,](-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
   const xs = nums.map((p) => p[0]);
   const ys = nums.map((p) => p[1]);
   return { w: Math.max(...xs) - Math.min(...xs), h: Math.max(...ys) - Math.min(...ys), nums };

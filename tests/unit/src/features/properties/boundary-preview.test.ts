@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { MultiPolygon, Polygon } from 'geojson';
 import { drawBoundary } from '../../../../../src/features/properties/components/boundary-preview';
 
-const points = (d: string) => [...d.matchAll(/[ML]([-\d.]+) ([-\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+const points = (d: string) => [...d.matchAll(/[ML]([-\d.]+)[ ,]([-\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
 
 describe('drawBoundary', () => {
   it('fits a square of equal degrees at 60°N into the box as a rectangle half as wide as tall', () => {
