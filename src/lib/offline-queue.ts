@@ -254,22 +254,23 @@ function notify(runtime: { listeners: Set<() => void> }): void {
 /** The shared runtime for a kind and person, made on first use; later calls take the newest config. */
 function queueRuntime<T extends QueuedItem>(config: OfflineQueueConfig<T>): QueueRuntime<T> {
   const id = `${config.name}:${config.userId}`;
-  const existing = runtimes.get(id) as QueueRuntime<T> | undefined;
-  if (existing) return existing;
-  const runtime: QueueRuntime<T> = { config, syncing: false, listeners: new Set(), run: () => Promise.reject(new Error('not ready')) };
-  runtime.run = createSyncRunner(async () => {
-    runtime.syncing = true;
-    notify(runtime);
+  let runtime = runtimes.get(id) as QueueRuntime<T> | undefined;
+  if (runtime) return runtime;
+  const run = createSyncRunner(async () => {
+    const self = runtime!;
+    const { store, send, userId, what, afterSync } = self.config;
+    self.syncing = true;
+    notify(self);
     try {
-      const { store, send, userId, what, afterSync } = runtime.config;
-      const report = await syncQueue(store, send, { userId, what, isOnline: () => (typeof navigator === 'undefined' ? true : navigator.onLine) });
+      const report = await syncQueue(store, send, { userId, what, isOnline: () => navigator.onLine });
       await afterSync?.(report);
       return report;
     } finally {
-      runtime.syncing = false;
-      notify(runtime);
+      self.syncing = false;
+      notify(self);
     }
   });
+  runtime = { config, run, syncing: false, listeners: new Set() };
   runtimes.set(id, runtime);
   return runtime;
 }
@@ -288,45 +289,36 @@ export function useOfflineQueue<T extends QueuedItem>(config: OfflineQueueConfig
   });
   const [items, setItems] = useState<T[]>([]);
   const [syncing, setSyncing] = useState(runtime.syncing);
-  const [online, setOnline] = useState(() => (typeof navigator === 'undefined' ? true : navigator.onLine));
+  const [online, setOnline] = useState(() => navigator.onLine);
 
   const refresh = useCallback(async () => {
     const all = await store.all();
     setItems(all.filter((i) => i.userId === userId));
   }, [store, userId]);
 
-  const syncNow = useCallback(() => {
-    runtime
-      .run()
-      .catch(() => undefined)
-      .finally(() => void refresh());
-  }, [runtime, refresh]);
+  // Every pass tells each listener when it starts and ends, and they read the store again.
+  const syncNow = useCallback(() => void runtime.run().catch(() => undefined), [runtime]);
 
   useEffect(() => {
     const listener = () => {
       setSyncing(runtime.syncing);
       void refresh();
     };
-    runtime.listeners.add(listener);
-    return () => {
-      runtime.listeners.delete(listener);
-    };
-  }, [runtime, refresh]);
-
-  useEffect(() => {
-    void refresh().then(syncNow);
     const goOnline = () => {
       setOnline(true);
       syncNow();
     };
     const goOffline = () => setOnline(false);
+    runtime.listeners.add(listener);
+    void refresh().then(syncNow);
     window.addEventListener('online', goOnline);
     window.addEventListener('offline', goOffline);
     return () => {
+      runtime.listeners.delete(listener);
       window.removeEventListener('online', goOnline);
       window.removeEventListener('offline', goOffline);
     };
-  }, [refresh, syncNow]);
+  }, [runtime, refresh, syncNow]);
 
   const waiting = useMemo(() => waitingItems(items, userId), [items, userId]);
   const rejected = useMemo(() => items.filter((i) => i.rejected !== null), [items]);
