@@ -11,6 +11,7 @@ import { writeArrayBuffer } from 'geotiff';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, screenshot, watchPage } from '../support/browser';
 import { signUpAndSignIn } from '../support/signup';
+import { addClientAndProperty } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
@@ -66,18 +67,7 @@ describe('a new firm’s first plan map', () => {
     await screenshot(page, 'map-settings-home-area');
 
     // A client and a property; its plan map opens on the home area.
-    await page.goto(`${baseUrl}/clients`);
-    await page.getByRole('button', { name: 'New client' }).click();
-    const clientForm = page.getByRole('form', { name: 'New client' });
-    await clientForm.getByLabel('Name').fill('Brekke Farm');
-    await clientForm.getByRole('button', { name: 'Add client' }).click();
-    await page.waitForURL(/\/clients\/\d+$/, WAIT);
-    await page.getByRole('button', { name: 'New property' }).click();
-    const propertyForm = page.getByRole('form', { name: 'New property' });
-    await propertyForm.getByLabel('Property name').fill('Brekke Ridge');
-    await propertyForm.getByLabel('County').fill('Crawford');
-    await propertyForm.getByLabel('State').fill('WI');
-    await propertyForm.getByRole('button', { name: 'Add property' }).click();
+    await addClientAndProperty(page, baseUrl, { client: 'Brekke Farm', property: 'Brekke Ridge', county: 'Crawford', state: 'WI' });
     // After "Add property" the plan map is one click away (or opened directly).
     await poll(async () => /\/map$/.test(page.url()) || (await page.getByRole('link', { name: 'Plan map of Brekke Ridge' }).count()) === 1).toBe(true);
     if (!/\/map$/.test(page.url())) await page.getByRole('link', { name: 'Plan map of Brekke Ridge' }).click();

@@ -4,6 +4,7 @@ import { encode } from 'fast-png';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, screenshot, watchPage } from '../support/browser';
 import { confirmEmail } from '../support/signup';
+import { addClientAndProperty } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
@@ -89,18 +90,7 @@ describe('a new firm sets itself up', () => {
     expect(firm.logoUrl).toMatch(/^\/api\/firm\/logo/);
 
     // The first client and property.
-    await page.goto(`${baseUrl}/clients`);
-    await page.getByRole('button', { name: 'New client' }).click();
-    const clientForm = page.getByRole('form', { name: 'New client' });
-    await clientForm.getByLabel('Name').fill('Kinney Family Farm');
-    await clientForm.getByRole('button', { name: 'Add client' }).click();
-    await page.waitForURL(/\/clients\/\d+$/, WAIT);
-    await page.getByRole('button', { name: 'New property' }).click();
-    const propertyForm = page.getByRole('form', { name: 'New property' });
-    await propertyForm.getByLabel('Property name').fill('Kinney Ridge');
-    await propertyForm.getByLabel('County').fill('Crawford');
-    await propertyForm.getByLabel('State').fill('WI');
-    await propertyForm.getByRole('button', { name: 'Add property' }).click();
+    await addClientAndProperty(page, baseUrl, { client: 'Kinney Family Farm', property: 'Kinney Ridge', county: 'Crawford', state: 'WI' });
 
     // "Add property" lands on the new property's plan map; find a town by name there: the map flies there.
     await page.waitForURL(/\/properties\/\d+\/map$/, WAIT);
