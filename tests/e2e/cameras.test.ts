@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { openProperty } from '../support/journey-steps';
 import { makeJpeg } from '../support/photo-fixtures';
 import { todayIn } from '../../shared/domain/clock';
 
@@ -28,9 +29,7 @@ describe('a camera card from the field to a survey', () => {
     // The demo's Cam 1 was last pulled 26 days ago: on the Desk with its walk-in route.
     await poll(() => page.getByRole('list', { name: 'Cards to pull' }).getByText('Cam 1 at Camera 2 — hollow').count()).toBe(1);
 
-    await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Properties' }).click();
-    await page.getByRole('link', { name: 'Kettle Hollow Farm', exact: true }).click();
-    await page.waitForURL(/\/properties\/\d+$/);
+    await openProperty(page, 'Kettle Hollow Farm');
     await page.getByRole('link', { name: 'Cameras', exact: true }).click();
     await page.waitForURL(/\/properties\/\d+\/cameras$/);
 

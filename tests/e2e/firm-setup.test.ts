@@ -12,6 +12,7 @@ import path from 'node:path';
 import { decode, encode } from 'fast-png';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, screenshot, SCREENSHOTS, watchPage } from '../support/browser';
+import { signUpAndSignIn } from '../support/signup';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
@@ -26,9 +27,6 @@ afterAll(async () => {
   await browser?.close();
 });
 
-type Summary = { id: number; subject: string; to: string[] };
-const mailTo = async (address: string) => ((await (await fetch(`${mailUrl}/messages`)).json()) as { data: Summary[] }).data.filter((m) => m.to.includes(address));
-const mailText = async (id: number) => ((await (await fetch(`${mailUrl}/messages/${id}`)).json()) as { data: { text: string } }).data.text;
 const box = (lon: number, lat: number, dLon: number, dLat: number) => ({ type: 'Polygon', coordinates: [[[lon, lat], [lon + dLon, lat], [lon + dLon, lat + dLat], [lon, lat + dLat], [lon, lat]]] });
 /** A logo of one colour no other part of the document uses (pure magenta), so its pixels can be counted. */
 const MAGENTA = [255, 0, 255] as const;
@@ -46,22 +44,7 @@ describe('a new firm’s own name, address and logo', () => {
     const watch = watchPage(page);
 
     // Sign up and confirm from the captured e-mail.
-    await page.goto(`${baseUrl}/signup`);
-    await page.getByLabel('Firm name').fill(`Kickapoo ${stamp}`);
-    await page.getByLabel('Your name').fill('Ingrid Thorsgaard');
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Create the firm' }).click();
-    await poll(() => page.getByRole('status').filter({ hasText: 'Check your e-mail' }).count()).toBe(1);
-    await poll(async () => (await mailTo(email)).length).toBe(1);
-    const link = /(http:\/\/\S+\/verify-email\/[A-Za-z0-9_-]+)/.exec(await mailText((await mailTo(email))[0]!.id))![1]!;
-    await page.goto(link);
-    await poll(() => page.getByRole('status').filter({ hasText: 'Your e-mail is confirmed' }).count()).toBe(1);
-    await page.goto(`${baseUrl}/login`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${baseUrl}/desk`, WAIT);
+    await signUpAndSignIn(page, { baseUrl, mailUrl }, { firmName: `Kickapoo ${stamp}`, yourName: 'Ingrid Thorsgaard', email, password });
     const steps = page.getByRole('list', { name: 'First steps' });
     await steps.waitFor(WAIT);
     expect(await steps.locator('li[data-done="false"]').count()).toBe(3);

@@ -8,6 +8,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { openProperty, signInAsConsultant } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 const poll = <T>(fn: () => Promise<T> | T, timeout = 30_000) => expect.poll(fn, { timeout, interval: 150 });
@@ -34,12 +35,8 @@ describe('stands, winds and the sit log', () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
     const watch = watchPage(page);
-    await signIn(page, baseUrl, 'consultant@browseline.test');
-    await page.waitForURL(`${baseUrl}/desk`);
-    await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Properties' }).click();
-    await page.getByRole('link', { name: 'Kettle Hollow Farm', exact: true }).click();
-    await page.waitForURL(/\/properties\/\d+$/);
-    propertyId = Number(new URL(page.url()).pathname.split('/').pop());
+    await signInAsConsultant(page, baseUrl);
+    propertyId = await openProperty(page, 'Kettle Hollow Farm');
     await page.getByRole('link', { name: 'Stands & wind' }).click();
     await page.waitForURL(`${baseUrl}/properties/${propertyId}/stands`);
     // The way back names the farm, not the word "Property".

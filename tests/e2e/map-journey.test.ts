@@ -10,6 +10,8 @@ import crypto from 'node:crypto';
 import { writeArrayBuffer } from 'geotiff';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, screenshot, watchPage } from '../support/browser';
+import { signUpAndSignIn } from '../support/signup';
+import { addClientAndProperty } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
@@ -24,9 +26,6 @@ afterAll(async () => {
   await browser?.close();
 });
 
-type Summary = { id: number; subject: string; to: string[] };
-const mailTo = async (address: string) => ((await (await fetch(`${mailUrl}/messages`)).json()) as { data: Summary[] }).data.filter((m) => m.to.includes(address));
-const mailText = async (id: number) => ((await (await fetch(`${mailUrl}/messages/${id}`)).json()) as { data: { text: string } }).data.text;
 
 type MapLike = {
   getCenter: () => { lng: number; lat: number };
@@ -56,22 +55,7 @@ describe('a new firm’s first plan map', () => {
     page.on('dialog', (d) => void d.accept());
 
     // Sign up and confirm the address from the captured e-mail.
-    await page.goto(`${baseUrl}/signup`);
-    await page.getByLabel('Firm name').fill(`Kickapoo Valley Habitat ${stamp}`);
-    await page.getByLabel('Your name').fill('Jo Halvorsen');
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Create the firm' }).click();
-    await poll(() => page.getByRole('status').filter({ hasText: 'Check your e-mail' }).count()).toBe(1);
-    await poll(async () => (await mailTo(email)).length).toBe(1);
-    const link = /(http:\/\/\S+\/verify-email\/[A-Za-z0-9_-]+)/.exec(await mailText((await mailTo(email))[0]!.id))![1]!;
-    await page.goto(link);
-    await poll(() => page.getByRole('status').filter({ hasText: 'Your e-mail is confirmed' }).count()).toBe(1);
-    await page.goto(`${baseUrl}/login`);
-    await page.getByLabel('E-mail').fill(email);
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(`${baseUrl}/desk`, WAIT);
+    await signUpAndSignIn(page, { baseUrl, mailUrl }, { firmName: `Kickapoo Valley Habitat ${stamp}`, yourName: 'Jo Halvorsen', email, password });
 
     // The home area, picked from the counties in Settings.
     await page.goto(`${baseUrl}/settings/team`);
@@ -83,18 +67,7 @@ describe('a new firm’s first plan map', () => {
     await screenshot(page, 'map-settings-home-area');
 
     // A client and a property; its plan map opens on the home area.
-    await page.goto(`${baseUrl}/clients`);
-    await page.getByRole('button', { name: 'New client' }).click();
-    const clientForm = page.getByRole('form', { name: 'New client' });
-    await clientForm.getByLabel('Name').fill('Brekke Farm');
-    await clientForm.getByRole('button', { name: 'Add client' }).click();
-    await page.waitForURL(/\/clients\/\d+$/, WAIT);
-    await page.getByRole('button', { name: 'New property' }).click();
-    const propertyForm = page.getByRole('form', { name: 'New property' });
-    await propertyForm.getByLabel('Property name').fill('Brekke Ridge');
-    await propertyForm.getByLabel('County').fill('Crawford');
-    await propertyForm.getByLabel('State').fill('WI');
-    await propertyForm.getByRole('button', { name: 'Add property' }).click();
+    await addClientAndProperty(page, baseUrl, { client: 'Brekke Farm', property: 'Brekke Ridge', county: 'Crawford', state: 'WI' });
     // After "Add property" the plan map is one click away (or opened directly).
     await poll(async () => /\/map$/.test(page.url()) || (await page.getByRole('link', { name: 'Plan map of Brekke Ridge' }).count()) === 1).toBe(true);
     if (!/\/map$/.test(page.url())) await page.getByRole('link', { name: 'Plan map of Brekke Ridge' }).click();

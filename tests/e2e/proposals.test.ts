@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { openProperty, signInAsConsultant } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -33,11 +34,8 @@ describe('a proposal from the plan to the landowner’s approval', () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
     const watch = watchPage(page);
-    await signIn(page, baseUrl, 'consultant@browseline.test');
-    await page.waitForURL(`${baseUrl}/desk`);
-    await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Properties' }).click();
-    await page.getByRole('link', { name: 'Kettle Hollow Farm', exact: true }).click();
-    await page.waitForURL(/\/properties\/\d+$/);
+    await signInAsConsultant(page, baseUrl);
+    await openProperty(page, 'Kettle Hollow Farm');
     await page.getByRole('button', { name: 'New proposal' }).click();
     await page.waitForURL(/\/proposals\/\d+$/);
     proposalId = Number(new URL(page.url()).pathname.split('/').pop());

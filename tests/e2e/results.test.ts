@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { openProperty, signInAsConsultant } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -20,12 +21,8 @@ describe('season results from the consultant to the landowner', () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
     const watch = watchPage(page);
-    await signIn(page, baseUrl, 'consultant@browseline.test');
-    await page.waitForURL(`${baseUrl}/desk`);
-    await page.getByRole('navigation', { name: 'Places' }).getByRole('link', { name: 'Properties' }).click();
-    await page.getByRole('link', { name: 'Kettle Hollow Farm', exact: true }).click();
-    await page.waitForURL(/\/properties\/\d+$/);
-    propertyId = Number(new URL(page.url()).pathname.split('/').pop());
+    await signInAsConsultant(page, baseUrl);
+    propertyId = await openProperty(page, 'Kettle Hollow Farm');
     await page.getByRole('link', { name: 'Results', exact: true }).click();
     await page.waitForURL(`${baseUrl}/properties/${propertyId}/results`);
 

@@ -3,6 +3,8 @@ import crypto from 'node:crypto';
 import { encode } from 'fast-png';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, screenshot, watchPage } from '../support/browser';
+import { confirmEmail } from '../support/signup';
+import { addClientAndProperty } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
@@ -17,9 +19,6 @@ afterAll(async () => {
   await browser?.close();
 });
 
-type Summary = { id: number; subject: string; to: string[] };
-const mailTo = async (address: string) => ((await (await fetch(`${mailUrl}/messages`)).json()) as { data: Summary[] }).data.filter((m) => m.to.includes(address));
-const mailText = async (id: number) => ((await (await fetch(`${mailUrl}/messages/${id}`)).json()) as { data: { text: string } }).data.text;
 
 describe('a new firm sets itself up', () => {
   it('signs up, confirms the e-mail from the captured mail, signs in, fills in its profile and logo, and adds a client and a property', async () => {
@@ -51,11 +50,7 @@ describe('a new firm sets itself up', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await poll(() => page.getByRole('alert').filter({ hasText: 'Confirm your e-mail address first' }).count()).toBe(1);
 
-    await poll(async () => (await mailTo(email)).length).toBe(1);
-    const text = await mailText((await mailTo(email))[0]!.id);
-    const link = /(http:\/\/\S+\/verify-email\/[A-Za-z0-9_-]+)/.exec(text)![1]!;
-    await page.goto(link);
-    await poll(() => page.getByRole('status').filter({ hasText: 'Your e-mail is confirmed' }).count()).toBe(1);
+    await confirmEmail(page, mailUrl, email);
     await page.getByRole('link', { name: 'Sign in' }).click();
     await page.waitForURL(/\/login\?email=/, WAIT);
     expect(await page.getByLabel('E-mail').inputValue()).toBe(email);
@@ -95,18 +90,7 @@ describe('a new firm sets itself up', () => {
     expect(firm.logoUrl).toMatch(/^\/api\/firm\/logo/);
 
     // The first client and property.
-    await page.goto(`${baseUrl}/clients`);
-    await page.getByRole('button', { name: 'New client' }).click();
-    const clientForm = page.getByRole('form', { name: 'New client' });
-    await clientForm.getByLabel('Name').fill('Kinney Family Farm');
-    await clientForm.getByRole('button', { name: 'Add client' }).click();
-    await page.waitForURL(/\/clients\/\d+$/, WAIT);
-    await page.getByRole('button', { name: 'New property' }).click();
-    const propertyForm = page.getByRole('form', { name: 'New property' });
-    await propertyForm.getByLabel('Property name').fill('Kinney Ridge');
-    await propertyForm.getByLabel('County').fill('Crawford');
-    await propertyForm.getByLabel('State').fill('WI');
-    await propertyForm.getByRole('button', { name: 'Add property' }).click();
+    await addClientAndProperty(page, baseUrl, { client: 'Kinney Family Farm', property: 'Kinney Ridge', county: 'Crawford', state: 'WI' });
 
     // "Add property" lands on the new property's plan map; find a town by name there: the map flies there.
     await page.waitForURL(/\/properties\/\d+\/map$/, WAIT);

@@ -1,7 +1,6 @@
 import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import { execFileSync } from 'node:child_process';
-import { signedInAgent, type Agent, propertyWithBrassicaPlot } from '../support/test-app';
-import { makeFirm, PASSWORD } from '../support/factories';
+import { type Agent, propertyWithBrassicaPlot } from '../support/test-app';
+import { pdfText, send, signedInFirm, type FirmContext } from '../support/firm-settings';
 import { rectangle } from '../support/geodesy';
 import { Firm, Practice } from '../../server/models';
 
@@ -10,20 +9,17 @@ import { Firm, Practice } from '../../server/models';
 // 11:30 PM CST on Monday, November 30, 2026 is 05:30 UTC on December 1: the UTC date is a day ahead.
 const LAST_DAY_2330_CST = new Date('2026-12-01T05:30:00Z');
 
-const send = (agent: Agent, method: 'post' | 'patch' | 'delete', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
 
 afterEach(() => {
   vi.useRealTimers();
 });
 
 describe('the firm’s time zone', () => {
-  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let ctx: FirmContext;
   let owner: Agent;
   let consultant: Agent;
   beforeAll(async () => {
-    ctx = await makeFirm();
-    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
-    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+    ({ ctx, owner, consultant } = await signedInFirm('owner', 'consultant'));
   });
 
   it('starts on Central time and travels with the signed-in user', async () => {
@@ -50,14 +46,12 @@ describe('the firm’s time zone', () => {
 });
 
 describe('today at 11:30 PM on the last day of a month, in Chicago', () => {
-  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let ctx: FirmContext;
   let consultant: Agent;
   let client: Agent;
   let propertyId: number;
   beforeAll(async () => {
-    ctx = await makeFirm();
-    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
-    client = await signedInAgent(ctx.users.client.email, PASSWORD);
+    ({ ctx, consultant, client } = await signedInFirm('consultant', 'client'));
     propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
   });
 
@@ -131,27 +125,14 @@ describe('today at 11:30 PM on the last day of a month, in Chicago', () => {
   });
 });
 
-async function pdfText(agent: Agent, url: string): Promise<string> {
-  const res = await agent.get(url).buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
-  expect(res.status).toBe(200);
-  return execFileSync('pdftotext', ['-layout', '-', '-'], { input: res.body as Buffer }).toString();
-}
-
 describe('documents that never change', () => {
-  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let ctx: FirmContext;
   let consultant: Agent;
   let owner: Agent;
   let client: Agent;
   let propertyId: number;
   beforeAll(async () => {
-    ctx = await makeFirm();
-    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
-    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
-    client = await signedInAgent(ctx.users.client.email, PASSWORD);
+    ({ ctx, consultant, owner, client } = await signedInFirm('consultant', 'owner', 'client'));
     propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
   });
 

@@ -7,6 +7,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import yauzl from 'yauzl';
 import { anonymousAgent, propertyWithBrassicaPlot, signedInAgent, type Agent } from '../support/test-app';
 import { makeFirm, PASSWORD } from '../support/factories';
+import { send } from '../support/firm-settings';
 import { OutboxMessage } from '../../server/models';
 import { FirmExport } from '../../server/models/firm-export';
 import { waitForJob } from '../../server/services/jobs/job-queue';
@@ -18,7 +19,6 @@ let consultant: Agent;
 let propertyId: number;
 const PDF = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
 
-const send = (agent: Agent, method: 'post' | 'patch', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
 
 /** Every entry of a zip, name → bytes. */
 function unzip(bytes: Buffer): Promise<Map<string, Buffer>> {

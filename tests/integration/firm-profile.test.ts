@@ -1,12 +1,11 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { encode } from 'fast-png';
-import { signedInAgent, type Agent, propertyWithBrassicaPlot } from '../support/test-app';
-import { makeFirm, PASSWORD } from '../support/factories';
+import { type Agent, propertyWithBrassicaPlot } from '../support/test-app';
+import { binary, patchFirm, send, signedInFirm, textOfPdf, type FirmContext } from '../support/firm-settings';
 
 import { Firm, OutboxMessage } from '../../server/models';
 
-const send = (agent: Agent, method: 'post' | 'patch', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
 const upload = (agent: Agent, bytes: Buffer, name: string) => agent.post('/api/firm/logo').set('X-CSRF-Token', agent.csrf).attach('file', bytes, name);
 
 /** A plain PNG of the given size (fast-png, RGB). */
@@ -19,16 +18,6 @@ function jpeg(width: number, height: number): Buffer {
   return execFileSync('convert', ['-size', `${width}x${height}`, 'xc:#3F6B3A', 'jpg:-']);
 }
 
-async function binary(agent: Agent, url: string): Promise<{ status: number; body: Buffer; type: string }> {
-  const res = await agent.get(url).buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  });
-  return { status: res.status, body: res.body as Buffer, type: String(res.headers['content-type']) };
-}
-
-const pdfText = (pdf: Buffer) => execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString();
 /** Images in a PDF, one line each (poppler's pdfimages -list, two header lines). */
 const pdfImageCount = (pdf: Buffer) => execFileSync('pdfimages', ['-list', '-'], { input: pdf }).toString().trim().split('\n').length - 2;
 
@@ -49,13 +38,11 @@ const PROFILE = {
 };
 
 describe('the firm profile', () => {
-  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let ctx: FirmContext;
   let owner: Agent;
   let consultant: Agent;
   beforeAll(async () => {
-    ctx = await makeFirm();
-    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
-    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+    ({ ctx, owner, consultant } = await signedInFirm('owner', 'consultant'));
   });
 
   it('starts with a new firm’s defaults', async () => {
@@ -64,7 +51,7 @@ describe('the firm profile', () => {
   });
 
   it('lets the owner set every field, and reads them back', async () => {
-    const res = await send(owner, 'patch', '/api/firm', PROFILE);
+    const res = await patchFirm(owner, PROFILE);
     expect(res.status).toBe(200);
     const { timezone: _zone, ...rest } = PROFILE;
     expect(res.body.data).toMatchObject(rest);
@@ -76,11 +63,11 @@ describe('the firm profile', () => {
   });
 
   it('clears a text field sent empty and leaves the others', async () => {
-    const res = await send(owner, 'patch', '/api/firm', { website: '' });
+    const res = await patchFirm(owner, { website: '' });
     expect(res.status).toBe(200);
     expect(res.body.data.website).toBeNull();
     expect(res.body.data.phone).toBe(PROFILE.phone);
-    await send(owner, 'patch', '/api/firm', { website: PROFILE.website }).expect(200);
+    await patchFirm(owner, { website: PROFILE.website }).expect(200);
   });
 
   it('refuses bad fields with a sentence and changes nothing', async () => {
@@ -98,7 +85,7 @@ describe('the firm profile', () => {
       [{ name: 'x'.repeat(121) }, /name/],
     ];
     for (const [body, message] of cases) {
-      const res = await send(owner, 'patch', '/api/firm', { phone: '000', ...body });
+      const res = await patchFirm(owner, { phone: '000', ...body });
       expect(res.status, JSON.stringify(body)).toBe(422);
       expect(JSON.stringify(res.body), JSON.stringify(body)).toMatch(message);
     }
@@ -112,11 +99,10 @@ describe('the firm profile', () => {
 });
 
 describe('the firm’s logo', () => {
-  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let ctx: FirmContext;
   let owner: Agent;
   beforeAll(async () => {
-    ctx = await makeFirm();
-    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
+    ({ ctx, owner } = await signedInFirm('owner'));
   });
 
   it('has none at first', async () => {
@@ -166,18 +152,15 @@ describe('the firm’s logo', () => {
 });
 
 describe('documents and e-mails print the profile; a sent one keeps it', () => {
-  let ctx: Awaited<ReturnType<typeof makeFirm>>;
+  let ctx: FirmContext;
   let owner: Agent;
   let consultant: Agent;
   let client: Agent;
   let propertyId: number;
   beforeAll(async () => {
-    ctx = await makeFirm();
-    owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
-    consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
-    client = await signedInAgent(ctx.users.client.email, PASSWORD);
+    ({ ctx, owner, consultant, client } = await signedInFirm('owner', 'consultant', 'client'));
     propertyId = (await propertyWithBrassicaPlot(consultant, ctx.firm.id, ctx.client.id)).propertyId;
-    await send(owner, 'patch', '/api/firm', PROFILE).expect(200);
+    await patchFirm(owner, PROFILE).expect(200);
     await upload(owner, png(240, 90), 'logo.png').expect(201);
   });
 
@@ -199,7 +182,7 @@ describe('documents and e-mails print the profile; a sent one keeps it', () => {
     const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, {});
     const id = draft.body.data.id;
     const draftPdf = (await binary(consultant, `/api/proposals/${id}/pdf`)).body;
-    const text = pdfText(draftPdf);
+    const text = textOfPdf(draftPdf);
     for (const s of ['Driftless Habitat Works', 'PO Box 214, Gays Mills, WI 54631', '608-555-0142', 'office@driftless-habitat.example', 'driftless-habitat.example', 'WI DATCP pesticide applicator #84-1123', 'Certified prescribed burn manager WI-2291']) expect(text).toContain(s);
     expect(text).not.toContain('https://');
 
@@ -212,30 +195,30 @@ describe('documents and e-mails print the profile; a sent one keeps it', () => {
 
     expect((await send(consultant, 'post', `/api/proposals/${id}/send`)).status).toBe(200);
     expect((await send(client, 'post', `/api/proposals/${id}/approve`, { signedName: 'Pat Landowner' })).status).toBe(200);
-    const sentText = pdfText((await binary(consultant, `/api/proposals/${id}/pdf`)).body);
+    const sentText = textOfPdf((await binary(consultant, `/api/proposals/${id}/pdf`)).body);
     const invoiceId = (await consultant.get(`/api/invoices?proposalId=${id}`).expect(200)).body.data[0].id;
     expect((await send(consultant, 'post', `/api/invoices/${invoiceId}/send`)).status).toBe(200);
     const invoicePdf = (await binary(consultant, `/api/invoices/${invoiceId}/pdf`)).body;
-    const invoiceText = pdfText(invoicePdf);
+    const invoiceText = textOfPdf(invoicePdf);
     for (const s of ['Driftless Habitat Works', 'PO Box 214, Gays Mills, WI 54631', 'WI DATCP pesticide applicator #84-1123']) expect(invoiceText).toContain(s);
     const invoiceImages = pdfImageCount(invoicePdf);
     expect(invoiceImages).toBeGreaterThanOrEqual(1);
 
     // The firm moves, renames itself and changes its logo: what was sent still reads as sent.
-    await send(owner, 'patch', '/api/firm', { name: 'Kickapoo Land Care', address: '1 Main St\nViola, WI 54664', licenceNumbers: null }).expect(200);
+    await patchFirm(owner, { name: 'Kickapoo Land Care', address: '1 Main St\nViola, WI 54664', licenceNumbers: null }).expect(200);
     await upload(owner, png(400, 100), 'new-logo.png').expect(201);
-    expect(pdfText((await binary(client, `/api/proposals/${id}/pdf`)).body)).toBe(sentText);
+    expect(textOfPdf((await binary(client, `/api/proposals/${id}/pdf`)).body)).toBe(sentText);
     const laterInvoice = (await binary(consultant, `/api/invoices/${invoiceId}/pdf`)).body;
-    expect(pdfText(laterInvoice)).toBe(invoiceText);
+    expect(textOfPdf(laterInvoice)).toBe(invoiceText);
     const oldLogo = execFileSync('pdfimages', ['-list', '-'], { input: invoicePdf }).toString();
     expect(execFileSync('pdfimages', ['-list', '-'], { input: laterInvoice }).toString()).toBe(oldLogo);
     // A new draft prints the firm as it is now.
     const fresh = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, {});
-    const freshText = pdfText((await binary(consultant, `/api/proposals/${fresh.body.data.id}/pdf`)).body);
+    const freshText = textOfPdf((await binary(consultant, `/api/proposals/${fresh.body.data.id}/pdf`)).body);
     expect(freshText).toContain('Kickapoo Land Care');
     expect(freshText).toContain('1 Main St, Viola, WI 54664');
     expect(freshText).not.toContain('DATCP');
-    await send(owner, 'patch', '/api/firm', PROFILE).expect(200);
+    await patchFirm(owner, PROFILE).expect(200);
   });
 
   it('client e-mails sign off with the firm’s address, phone, e-mail, website and licences', async () => {
@@ -248,21 +231,21 @@ describe('documents and e-mails print the profile; a sent one keeps it', () => {
   });
   it('the plan summary prints the letterhead too, and plan and proposal PDFs show areas in the firm’s unit', async () => {
     // PROFILE chose hectares and metres: 1 acre = 0.40468564224 ha (NIST Handbook 44, Appendix C).
-    const plan = pdfText((await binary(consultant, `/api/properties/${propertyId}/plan.pdf`)).body);
+    const plan = textOfPdf((await binary(consultant, `/api/properties/${propertyId}/plan.pdf`)).body);
     expect(plan).toContain('Driftless Habitat Works');
     expect(plan).toContain('PO Box 214');
     expect(plan).toContain('WI DATCP pesticide applicator #84-1123');
     expect(plan).toMatch(/\d+\.\d+ ha\b/);
     expect(plan).not.toMatch(/\d+\.\d+ acres?\b/);
     const draft = await send(consultant, 'post', `/api/properties/${propertyId}/proposals`, {});
-    const proposal = pdfText((await binary(consultant, `/api/proposals/${draft.body.data.id}/pdf`)).body);
+    const proposal = textOfPdf((await binary(consultant, `/api/proposals/${draft.body.data.id}/pdf`)).body);
     // The property's area and the work's sizes in hectares; priced quantities stay in the unit their price is per (acre).
     expect(proposal).toMatch(/\d+\.\d+ ha\b/);
     expect(proposal).toMatch(/\d+\.\d+ acres\s+\$\d+\.\d{2}/);
     // Back to acres: the same figures print in acres.
-    await send(owner, 'patch', '/api/firm', { areaUnit: 'acres' }).expect(200);
-    const again = pdfText((await binary(consultant, `/api/properties/${propertyId}/plan.pdf`)).body);
+    await patchFirm(owner, { areaUnit: 'acres' }).expect(200);
+    const again = textOfPdf((await binary(consultant, `/api/properties/${propertyId}/plan.pdf`)).body);
     expect(again).toMatch(/\d+\.\d+ acres\b/);
-    await send(owner, 'patch', '/api/firm', PROFILE).expect(200);
+    await patchFirm(owner, PROFILE).expect(200);
   });
 });

@@ -10,6 +10,7 @@ import { encode } from 'fast-png';
 import request from 'supertest';
 import { anonymousAgent, signedInAgent, testApp, type Agent } from '../support/test-app';
 import { makeFirm, PASSWORD } from '../support/factories';
+import { signedInFirm, type FirmContext } from '../support/firm-settings';
 import { rectangle } from '../support/geodesy';
 import { FirmSchema, OverlaySchema } from '../../shared/schemas/firm';
 import { PlaceSchema } from '../../shared/schemas/places';
@@ -18,14 +19,12 @@ import { AuditEvent, Firm, Overlay, User } from '../../server/models';
 import { sequelize } from '../../server/db/sequelize';
 import { DEMO_HOME_AREA, seedDemoMap } from '../../server/db/seeds/demo-map';
 
-let ctx: Awaited<ReturnType<typeof makeFirm>>;
+let ctx: FirmContext;
 let owner: Agent;
 let consultant: Agent;
 
 beforeAll(async () => {
-  ctx = await makeFirm();
-  owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
-  consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
+  ({ ctx, owner, consultant } = await signedInFirm('owner', 'consultant'));
 });
 
 async function newPropertyId(): Promise<number> {

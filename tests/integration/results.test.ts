@@ -5,6 +5,7 @@ import { capturedMailTo, capturedMessage, signedInAgent, type Agent } from '../s
 import { deliverAllMail } from '../support/test-app';
 import { makeClient, makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
+import { binary, send, textOfPdf } from '../support/firm-settings';
 import { OutboxMessage, Property, SeasonReport, SharedFile, Task, TaskPhoto } from '../../server/models';
 import { saveFile } from '../../server/services/storage/storage';
 import { SurveyCreateSchema } from '../../shared/schemas/results';
@@ -17,21 +18,6 @@ let propertyId: number;
 let cameraIds: number[];
 let plotId: number;
 
-const send = (agent: Agent, method: 'post' | 'patch' | 'delete', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
-
-async function pdfBytes(agent: Agent, url: string): Promise<{ status: number; body: Buffer }> {
-  const res = await agent
-    .get(url)
-    .buffer(true)
-    .parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
-  return { status: res.status, body: res.body as Buffer };
-}
-
-const pdfText = (pdf: Buffer) => execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString();
 
 // Tallies built to reproduce the published example (SEDSG 1993 abstract, REFERENCES.md):
 // 10,000 acres, 213 bucks, buck:doe 1:1.4, doe:fawn 1:0.67 → 711 deer ≈ 45.5 per mi².
@@ -295,10 +281,10 @@ describe('season summary and report', () => {
     reportId = made.body.data.id;
     expect(made.body.data).toMatchObject({ season: 2024, seasonLabel: '2024–25', sentAt: null, pdfUrl: `/api/season-reports/${reportId}/pdf` });
 
-    const pdf = await pdfBytes(consultant, made.body.data.pdfUrl);
+    const pdf = await binary(consultant, made.body.data.pdfUrl);
     expect(pdf.status).toBe(200);
     expect(pdf.body.subarray(0, 5).toString()).toBe('%PDF-');
-    const text = pdfText(pdf.body);
+    const text = textOfPdf(pdf.body);
     for (const expected of ['Work done this season', 'Sow the brassica blend', 'Camera surveys', 'Estimated deer by season', 'Age structure of the harvest', 'Recommendations for next season', 'Take two more adult does', 'baiting and feeding']) {
       expect(text).toContain(expected);
     }
@@ -309,7 +295,7 @@ describe('season summary and report', () => {
 
     const file = await SharedFile.findOne({ where: { propertyId, category: 'season-report' } });
     expect(file?.visibleToClient).toBe(false);
-    expect((await pdfBytes(client, made.body.data.pdfUrl)).status).toBe(404);
+    expect((await binary(client, made.body.data.pdfUrl)).status).toBe(404);
     expect((await client.get(`/api/properties/${propertyId}/season-reports`)).body.data).toEqual([]);
 
     const sent = await send(consultant, 'post', `/api/season-reports/${reportId}/send`);
@@ -319,7 +305,7 @@ describe('season summary and report', () => {
     expect(message?.attachments[0]).toMatchObject({ filename: 'season-report-2024.pdf', contentType: 'application/pdf' });
     await file!.reload();
     expect(file!.visibleToClient).toBe(true);
-    expect((await pdfBytes(client, made.body.data.pdfUrl)).status).toBe(200);
+    expect((await binary(client, made.body.data.pdfUrl)).status).toBe(200);
     expect((await client.get(`/api/properties/${propertyId}/season-reports`)).body.data.map((r: { id: number }) => r.id)).toEqual([reportId]);
 
     await deliverAllMail();
@@ -330,10 +316,10 @@ describe('season summary and report', () => {
   });
 
   it('keeps reports from the crew, other clients and other firms', async () => {
-    expect((await pdfBytes(crew, `/api/season-reports/${reportId}/pdf`)).status).toBe(403);
+    expect((await binary(crew, `/api/season-reports/${reportId}/pdf`)).status).toBe(403);
     const otherFirm = await makeFirm();
     const stranger = await signedInAgent(otherFirm.users.client.email, PASSWORD);
-    expect((await pdfBytes(stranger, `/api/season-reports/${reportId}/pdf`)).status).toBe(404);
+    expect((await binary(stranger, `/api/season-reports/${reportId}/pdf`)).status).toBe(404);
     const strangerStaff = await signedInAgent(otherFirm.users.consultant.email, PASSWORD);
     expect((await send(strangerStaff, 'post', `/api/season-reports/${reportId}/send`)).status).toBe(404);
     expect((await send(client, 'post', `/api/season-reports/${reportId}/send`)).status).toBe(403);
@@ -368,12 +354,12 @@ describe('season summary and report', () => {
 
   it('withdraws a sent report from the portal: the client no longer lists or opens it; sending again brings it back', async () => {
     const pdfUrl = `/api/season-reports/${reportId}/pdf`;
-    expect((await pdfBytes(client, pdfUrl)).status).toBe(200);
+    expect((await binary(client, pdfUrl)).status).toBe(200);
     expect((await send(client, 'post', `/api/season-reports/${reportId}/withdraw`)).status).toBe(403);
     const res = await send(consultant, 'post', `/api/season-reports/${reportId}/withdraw`);
     expect(res.status).toBe(200);
     expect(res.body.data.withdrawnAt).not.toBeNull();
-    expect((await pdfBytes(client, pdfUrl)).status).toBe(404);
+    expect((await binary(client, pdfUrl)).status).toBe(404);
     expect((await client.get(`/api/properties/${propertyId}/season-reports`)).body.data.map((r: { id: number }) => r.id)).not.toContain(reportId);
     const file = await SharedFile.findByPk((await SeasonReport.findByPk(reportId))!.sharedFileId);
     expect(file!.visibleToClient).toBe(false);
@@ -382,9 +368,9 @@ describe('season summary and report', () => {
     const twice = await send(consultant, 'post', `/api/season-reports/${reportId}/withdraw`);
     expect(twice.status).toBe(409);
     expect(twice.body.error).toMatch(/already withdrawn/);
-    expect((await pdfBytes(consultant, pdfUrl)).status).toBe(200);
+    expect((await binary(consultant, pdfUrl)).status).toBe(200);
     await send(consultant, 'post', `/api/season-reports/${reportId}/send`).expect(200);
-    expect((await pdfBytes(client, pdfUrl)).status).toBe(200);
+    expect((await binary(client, pdfUrl)).status).toBe(200);
   });
 
   it('refuses a season that is not a year', async () => {

@@ -10,7 +10,7 @@ import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/ca
 import { Button } from '../../../components/ui/button';
 import { DataTable, type DataColumn } from '../../../components/ui/data-table';
 import { PageHeader } from '../../../components/ui/page-header';
-import { SelectField } from '../../../components/ui/select-field';
+import { StatusFilter } from '../../../components/ui/status-filter';
 
 // The receivables chart (recharts) loads after the list of invoices.
 const ReceivablesPanel = lazy(() => import('../../../features/invoices/components/receivables-panel').then((m) => ({ default: m.ReceivablesPanel })));
@@ -76,14 +76,7 @@ export function InvoicesPage() {
               rowHref={(i) => paths.invoice(i.id)}
               searchPlaceholder="Number, client or property…"
               toolbar={
-                <SelectField label="Status" value={status ?? ''} onChange={(e) => setStatus(e.target.value)} className="w-44">
-                  <option value="">All states</option>
-                  {INVOICE_STATUSES.map((s) => (
-                    <option key={s} value={s}>
-                      {INVOICE_STATUS_LABELS[s]}
-                    </option>
-                  ))}
-                </SelectField>
+                <StatusFilter value={status} states={INVOICE_STATUSES} labels={INVOICE_STATUS_LABELS} onChange={setStatus} />
               }
               empty={
                 <EmptyState title={status ? `No ${INVOICE_STATUS_LABELS[status].toLowerCase()} invoices` : 'No invoices yet'}>

@@ -3,7 +3,8 @@ import { usePortalHome } from '../../../features/portal/api/get-portal-home';
 import { useResults } from '../../../features/results/api/get-results';
 import { SurveyEstimatesCard } from '../../../features/results/components/survey-estimates-card';
 import { HarvestTable } from '../../../features/results/components/harvest-table';
-import { AgeStructureChart, BuckDoeTrendChart, SurveyRatioChart, SurveyTrendChart } from '../../../features/results/components/lazy-results-charts';
+import { AgeStructureChart, BuckDoeTrendChart } from '../../../features/results/components/lazy-results-charts';
+import { SurveyTrendCard } from '../../../features/results/components/survey-trend-card';
 import { PortalSeasonReports } from '../../../features/results/components/season-reports-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { MissingRecord } from '../../../components/ui/missing-record';
@@ -90,14 +91,7 @@ export function PortalPropertyResultsPage() {
         </h2>
         {latest ? <SurveyEstimatesCard survey={latest} cautions={r.cautions} /> : <EmptyState title="No camera survey yet">Your consultant adds each survey’s figures here.</EmptyState>}
         <PortalBuckPhotos propertyId={id} />
-        {r.surveyTrend.length > 0 ? (
-          <Card title="Season over season">
-            <div className="grid gap-6 md:grid-cols-2">
-              <SurveyTrendChart trend={r.surveyTrend} />
-              <SurveyRatioChart trend={r.surveyTrend} />
-            </div>
-          </Card>
-        ) : null}
+        <SurveyTrendCard trend={r.surveyTrend} />
       </section>
       <PortalResultsObservations propertyId={r.property.id} propertyName={r.property.name} />
       <section aria-labelledby="portal-harvest" className="flex flex-col gap-3">

@@ -8,7 +8,8 @@ import { SurveyForm } from '../../../features/results/components/survey-form';
 import { HarvestForm } from '../../../features/results/components/harvest-form';
 import { HarvestTable } from '../../../features/results/components/harvest-table';
 import { SurveyEstimatesCard } from '../../../features/results/components/survey-estimates-card';
-import { AgeStructureChart, BuckDoeTrendChart, SurveyRatioChart, SurveyTrendChart } from '../../../features/results/components/lazy-results-charts';
+import { AgeStructureChart, BuckDoeTrendChart } from '../../../features/results/components/lazy-results-charts';
+import { SurveyTrendCard } from '../../../features/results/components/survey-trend-card';
 import { SeasonReportsCard } from '../../../features/results/components/season-reports-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
@@ -88,14 +89,7 @@ export function PropertyResultsPage() {
         ) : (
           <EmptyState title="No camera survey yet">Record one with “Record a camera survey”: the tallies give the herd estimates.</EmptyState>
         )}
-        {r.surveyTrend.length > 0 ? (
-          <Card title="Season over season">
-            <div className="grid gap-6 md:grid-cols-2">
-              <SurveyTrendChart trend={r.surveyTrend} />
-              <SurveyRatioChart trend={r.surveyTrend} />
-            </div>
-          </Card>
-        ) : null}
+        <SurveyTrendCard trend={r.surveyTrend} />
         {older.length > 0 ? (
           <details className="rounded-md border border-rule bg-card p-3">
             <summary className="cursor-pointer font-semibold">Earlier surveys ({older.length})</summary>

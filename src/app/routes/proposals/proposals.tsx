@@ -8,7 +8,7 @@ import { formatMomentDay } from '../../../features/proposals/utils/dates';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { DataTable, type DataColumn } from '../../../components/ui/data-table';
 import { PageHeader } from '../../../components/ui/page-header';
-import { SelectField } from '../../../components/ui/select-field';
+import { StatusFilter } from '../../../components/ui/status-filter';
 import { paths } from '../../../config/paths';
 
 const COLUMNS: DataColumn<ProposalRowDto>[] = [
@@ -57,14 +57,7 @@ export function ProposalsPage() {
             rowHref={(p) => paths.proposal(p.id)}
             searchPlaceholder="Number, property or client…"
             toolbar={
-              <SelectField label="Status" value={status ?? ''} onChange={(e) => setStatus(e.target.value)} className="w-44">
-                <option value="">All states</option>
-                {PROPOSAL_STATES.map((s) => (
-                  <option key={s} value={s}>
-                    {STATUS_LABELS[s]}
-                  </option>
-                ))}
-              </SelectField>
+              <StatusFilter value={status} states={PROPOSAL_STATES} labels={STATUS_LABELS} onChange={setStatus} />
             }
             empty={
               <EmptyState title={status ? `No ${STATUS_LABELS[status].toLowerCase()} proposals` : 'No proposals yet'}>

@@ -4,8 +4,7 @@
  * "browseline-checks") before anything is sent; every retry carries the same Idempotency-Key, so
  * the server records the check once.
  */
-import { createStore, del, set, values } from 'idb-keyval';
-import { memoryStore, type OfflineStore, type QueuedItem } from '../../../lib/offline-queue';
+import { browserStore, makeQueuedItem, type NewQueuedItem, type OfflineStore, type QueuedItem } from '../../../lib/offline-queue';
 import type { UnitCheckCreateInput } from '../../../../shared/schemas/checks';
 
 /** The kinds the field sheet offers (a timber cruise is the forester's, on the unit's page). */
@@ -24,20 +23,11 @@ export function newCheckKey(randomUuid: () => string = () => crypto.randomUUID()
 }
 
 /** The queue item for a check the person just saved. */
-export function makeQueuedCheck(input: Omit<QueuedCheck, 'queuedAt' | 'attempts' | 'lastError' | 'rejected'>, now = new Date()): QueuedCheck {
-  return { ...input, queuedAt: now.toISOString(), attempts: 0, lastError: null, rejected: null };
+export function makeQueuedCheck(input: NewQueuedItem<QueuedCheck>, now = new Date()): QueuedCheck {
+  return makeQueuedItem<QueuedCheck>(input, now);
 }
-
-let store: OfflineStore<QueuedCheck> | null = null;
 
 /** The phone's check store (one per page; memory where there is no IndexedDB). */
 export function checkStore(): OfflineStore<QueuedCheck> {
-  if (store) return store;
-  if (typeof indexedDB === 'undefined') {
-    store = memoryStore<QueuedCheck>();
-    return store;
-  }
-  const idb = createStore('browseline-checks', 'checks');
-  store = { all: () => values<QueuedCheck>(idb), put: (item) => set(item.key, item, idb), remove: (key) => del(key, idb) };
-  return store;
+  return browserStore<QueuedCheck>('browseline-checks', 'checks');
 }

@@ -9,7 +9,7 @@
  * unit tests an in-memory map.
  */
 import type { TaskQuantityUsed } from '../../../../shared/domain/tasks';
-import { memoryStore as genericMemoryStore, type QueueStore as GenericQueueStore, type SendItem } from '../../../lib/offline-queue';
+import { makeQueuedItem, memoryStore as genericMemoryStore, type OfflineStore, type QueuedItem, type SendItem } from '../../../lib/offline-queue';
 import type { SprayApplicationInput } from '../../../../shared/schemas/spray-records';
 
 /** A photo as it waits on the phone. */
@@ -30,31 +30,17 @@ export interface CompletionFields {
   spray?: SprayApplicationInput;
 }
 
-/** A refusal the server gave for good: shown to the person until they dismiss it. */
-export interface CompletionRejection {
-  status: number;
-  message: string;
-  at: string;
-}
-
-export interface QueuedCompletion {
-  /** The idempotency key, made once when the person tapped Save; also the store key. */
-  key: string;
+/** A completion as it waits on the phone (the queue's bookkeeping plus the task and the form's fields). */
+export interface QueuedCompletion extends QueuedItem {
   taskId: number;
   taskName: string;
   unitName: string;
-  /** Who queued it: only their own items are sent under their session. */
-  userId: number;
   fields: CompletionFields;
   photos: QueuedPhoto[];
-  queuedAt: string;
-  attempts: number;
-  lastError: string | null;
-  rejected: CompletionRejection | null;
 }
 
 /** Where queued completions live. */
-export type QueueStore = GenericQueueStore<QueuedCompletion>;
+export type CompletionStore = OfflineStore<QueuedCompletion>;
 
 /** Sends one completion with its key; throws on any failure (an error with a `status`, 0 for the network). */
 export type SendCompletion = SendItem<QueuedCompletion>;
@@ -62,7 +48,7 @@ export type SendCompletion = SendItem<QueuedCompletion>;
 export { classifySendError, createSyncRunner, syncQueue, waitingItems, type SendOutcome, type SyncOptions, type SyncReport } from '../../../lib/offline-queue';
 
 /** An in-memory store of completions (tests, and the fallback when the browser has no IndexedDB). */
-export const memoryStore = (): GenericQueueStore<QueuedCompletion> & { items: Map<string, QueuedCompletion> } => genericMemoryStore<QueuedCompletion>();
+export const memoryStore = (): CompletionStore & { items: Map<string, QueuedCompletion> } => genericMemoryStore<QueuedCompletion>();
 
 export const OFFLINE_MESSAGE = 'Saved on this phone — will send when you’re back online.';
 
@@ -73,7 +59,7 @@ export function newCompletionKey(randomUuid: () => string = () => crypto.randomU
 
 /** Makes the queue item for a completion the person just saved. */
 export function makeQueuedCompletion(input: { key: string; taskId: number; taskName: string; unitName: string; userId: number; fields: CompletionFields; photos: QueuedPhoto[] }, now: Date = new Date()): QueuedCompletion {
-  return { ...input, queuedAt: now.toISOString(), attempts: 0, lastError: null, rejected: null };
+  return makeQueuedItem<QueuedCompletion>(input, now);
 }
 
 /** The multipart body of a completion: doneOn, notes, hours, quantitiesUsed (JSON) and the photos. */

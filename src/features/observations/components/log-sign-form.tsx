@@ -11,13 +11,14 @@ import { KindSymbol } from './kind-symbol';
 import { localInstant, newObservationKey } from '../lib/observation-queue';
 import type { LogOutcome } from '../hooks/use-observation-queue';
 import type { QueuedObservation } from '../lib/observation-queue';
+import type { NewQueuedItem } from '../../../lib/offline-queue';
 
 export interface LogSignFormProps {
   properties: { id: number; name: string }[];
   defaultPropertyId?: number;
   /** A position the person tapped on the page's map, if it has one. */
   mapPosition?: { lon: number; lat: number } | null;
-  save: (input: Omit<QueuedObservation, 'queuedAt' | 'attempts' | 'lastError' | 'rejected' | 'userId'>) => Promise<LogOutcome>;
+  save: (input: Omit<NewQueuedItem<QueuedObservation>, 'userId'>) => Promise<LogOutcome>;
   onDone?: (outcome: LogOutcome) => void;
 }
 

@@ -3,8 +3,7 @@
  * observation's fields and photos. Stored in IndexedDB (idb-keyval, db "browseline-observations")
  * before anything is sent.
  */
-import { createStore, del, set, values } from 'idb-keyval';
-import { memoryStore, type OfflineStore, type QueuedItem } from '../../../lib/offline-queue';
+import { browserStore, type OfflineStore, type QueuedItem } from '../../../lib/offline-queue';
 import type { ObservationKind } from '../../../../shared/domain/observations';
 
 /** A photo as it waits on the phone. */
@@ -36,11 +35,6 @@ export function newObservationKey(randomUuid: () => string = () => crypto.random
   return `obs-${randomUuid()}`;
 }
 
-/** The queue item for an observation the person just saved. */
-export function makeQueuedObservation(input: Omit<QueuedObservation, 'queuedAt' | 'attempts' | 'lastError' | 'rejected'>, now = new Date()): QueuedObservation {
-  return { ...input, queuedAt: now.toISOString(), attempts: 0, lastError: null, rejected: null };
-}
-
 /** The multipart body: kind, observedAt, notes, lon/lat/positionSource when given, the photos. */
 export function observationForm(item: QueuedObservation): FormData {
   const form = new FormData();
@@ -57,18 +51,9 @@ export function observationForm(item: QueuedObservation): FormData {
   return form;
 }
 
-let store: OfflineStore<QueuedObservation> | null = null;
-
 /** The phone's observation store (one per page). */
 export function observationStore(): OfflineStore<QueuedObservation> {
-  if (store) return store;
-  if (typeof indexedDB === 'undefined') {
-    store = memoryStore<QueuedObservation>();
-    return store;
-  }
-  const idb = createStore('browseline-observations', 'observations');
-  store = { all: () => values<QueuedObservation>(idb), put: (item) => set(item.key, item, idb), remove: (key) => del(key, idb) };
-  return store;
+  return browserStore<QueuedObservation>('browseline-observations', 'observations');
 }
 
 /** An instant with the phone's own offset, as the server wants it: "2026-10-14T07:31:00-05:00". */
