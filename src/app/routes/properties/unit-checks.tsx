@@ -1,8 +1,9 @@
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { useCheckedUnit, useCreateUnitCheck, useUnitChecks } from '../../../features/checks/api/get-unit-checks';
 import { CheckForm } from '../../../features/checks/components/check-form';
 import { CheckList } from '../../../features/checks/components/check-list';
 import { SoilTestsCard } from '../../../features/checks/components/soil-tests-card';
+import { SoilTestForm } from '../../../features/checks/components/soil-test-form';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { MissingRecord } from '../../../components/ui/missing-record';
@@ -75,7 +76,13 @@ export function UnitChecksPage() {
             }}
           />
         </Card>
+        <SoilTestForm propertyId={propertyId} unitId={unitId} />
         <SoilTestsCard unitId={unitId} />
+        <p className="text-sm">
+          <Link to={paths.propertySoilTests(propertyId)} className="font-semibold text-moss underline">
+            Import a lab’s results file for several units
+          </Link>
+        </p>
         </div>
       </div>
     </div>
