@@ -70,7 +70,7 @@ export const MaterialCreateSchema = z.discriminatedUnion('kind', [
     lbAiPerGal: positive('Concentration', 12, 'lb a.i./gal').optional(),
     restrictedUse: z.boolean().default(false),
     /** EPA Reg. No. from the label (spray records). */
-    epaRegNo: z.string().trim().regex(EPA_REG_NO_PATTERN, { message: 'epaRegNo: write the EPA Reg. No. as on the label, e.g. 524-475 or 524-475-123' }).optional(),
+    epaRegNo: z.string().trim().regex(EPA_REG_NO_PATTERN, { message: 'EPA Reg. No. (epaRegNo): write it as on the label, e.g. 524-475 or 524-475-123' }).optional(),
     adjuvant: z.boolean().default(false),
     /** Label rate the firm usually uses, lb a.i. per acre. */
     rateLbAiPerAcre: positive('Rate', 20, 'lb a.i./acre').optional(),

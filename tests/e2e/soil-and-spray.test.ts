@@ -47,7 +47,7 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     await form.getByLabel('Soil pH').fill('12');
     await poll(() => preview.textContent()).toMatch(/ph must lie between 3 and 10/i);
     await form.getByRole('button', { name: 'Save the soil test' }).click();
-    await poll(() => form.getByText('Ph must lie between 3 and 10').isVisible()).toBe(true);
+    await poll(() => form.getByText('Ph must lie between 3 and 10', { exact: true }).isVisible()).toBe(true);
     await form.getByLabel('Soil pH').fill('5.6');
     await expectNoAxeViolations(page, 'soil test form');
     await screenshot(page, 'soil-test-form-preview');
@@ -97,14 +97,14 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     const record = list.records[0]!;
 
     await page.goto(`${baseUrl}/library/materials`);
-    await page.getByRole('row', { name: new RegExp(record.productName) }).getByRole('button', { name: /Edit/ }).click();
+    await page.getByRole('button', { name: `Edit ${record.productName}`, exact: true }).click();
     const epa = page.getByLabel('EPA Reg. No.');
     await epa.fill('524 475');
-    await page.getByRole('button', { name: /^Save/ }).click();
-    await poll(() => page.getByText(/write the EPA Reg\. No\. as on the label, e\.g\. 524-475/i).isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Save material' }).click();
+    await poll(() => page.getByText(/EPA Reg\. No\. \(epaRegNo\): write it as on the label, e\.g\. 524-475/i).isVisible()).toBe(true);
     await screenshot(page, 'library-epa-reg-no-refused');
     await epa.fill('524-475');
-    await page.getByRole('button', { name: /^Save/ }).click();
+    await page.getByRole('button', { name: 'Save material' }).click();
     await poll(() => page.getByRole('cell', { name: '524-475', exact: true }).isVisible()).toBe(true);
 
     // From the task on the schedule to its spray record.
@@ -113,7 +113,8 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     await page.waitForURL(/\/spray-records\?/);
     const row = page.locator('tr[aria-current="true"]');
     // A record is a copy made at the application (the demo's came before the number was entered), so it keeps what it had.
-    await poll(() => row.textContent()).toMatch(new RegExp(`${record.productName}.*EPA Reg\\. No\\.`));
+    await poll(() => row.textContent()).toContain(record.productName);
+    await poll(() => row.textContent()).toMatch(/EPA Reg\. No\./);
     await poll(() => page.getByRole('note', { name: 'Herbicides: the label is the law' }).textContent()).toMatch(/certified applicator.*local licensed practice/);
     expect(await page.getByLabel('Property').inputValue()).toBe(String(farm.id === record.propertyId ? farm.id : record.propertyId));
     // Filters: a word no record holds empties the table; restricted-use only keeps none of the demo's.
@@ -123,10 +124,12 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     await poll(() => page.getByTestId('spray-record-row').count()).toBeGreaterThan(0);
     await expectNoAxeViolations(page, 'spray records');
     await screenshot(page, 'spray-records');
-    // The CSV export of the same season and property carries the registration number.
+    // The CSV export of the same season and property: the 7 CFR 110.3 columns and the demo's application.
     const csvHref = await page.getByRole('link', { name: 'CSV' }).getAttribute('href');
+    expect(csvHref).toBe(`/api/spray-records?season=${list.season}&format=csv&propertyId=${record.propertyId}`);
     const csv = await (await page.request.get(`${baseUrl}${csvHref}`)).text();
-    expect(csv).toMatch(/524-475/);
+    expect(csv.split('\n')[0]).toMatch(/Product,EPA Reg\. No\.,Restricted use,Total amount applied.*Applicator,Certification No\./);
+    expect(csv).toContain(record.productName);
     watch.assertClean();
     await context.close();
   });

@@ -34,7 +34,7 @@ describe('the EPA Reg. No. of a library herbicide', () => {
     for (const bad of ['524 475', '524-475-', 'EPA 524-475', '524']) {
       const res = await send('post', '/api/materials', { ...herbicide, epaRegNo: bad });
       expect(res.status, bad).toBe(422);
-      expect(JSON.stringify(res.body)).toMatch(/epaRegNo: write the EPA Reg\. No\. as on the label/);
+      expect(JSON.stringify(res.body)).toMatch(/EPA Reg\. No\. \(epaRegNo\): write it as on the label/);
     }
     expect(await Material.count()).toBe(before);
   });

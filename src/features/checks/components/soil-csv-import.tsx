@@ -152,7 +152,7 @@ export function SoilCsvImport({ propertyId, onImported }: { propertyId: number; 
                         <td className="py-1 pr-3">{r.ph || '—'}</td>
                         <td className="py-1">
                           {problems.length ? (
-                            <ul className="text-clay">
+                            <ul className="text-[#8E3F2A]">
                               {problems.map((p, i) => (
                                 <li key={i}>
                                   <strong>{p.field}</strong>: {p.message}
