@@ -4,6 +4,7 @@ import { CheckForm } from '../../../features/checks/components/check-form';
 import { CheckList } from '../../../features/checks/components/check-list';
 import { SoilTestsCard } from '../../../features/checks/components/soil-tests-card';
 import { SoilTestForm } from '../../../features/checks/components/soil-test-form';
+import { UnitHistoryCard } from '../../../features/checks/components/unit-history-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { MissingRecord } from '../../../components/ui/missing-record';
@@ -63,6 +64,7 @@ export function UnitChecksPage() {
           ) : (
             <CheckList checks={checks.data} canDecide />
           )}
+          <UnitHistoryCard unitId={unitId} />
         </section>
         <div className="flex flex-col gap-4">
         <Card title="Record a check">

@@ -43,7 +43,10 @@ export function useCreateSoilTest() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ unitId, input }: { unitId: number; input: SoilTestCreateValues }) => (await api.post<{ data: SoilTestDto }>(`/api/units/${unitId}/soil-tests`, input)).data,
-    onSuccess: () => void qc.invalidateQueries({ queryKey: soilTestKeys.all() }),
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: soilTestKeys.all() });
+      void qc.invalidateQueries({ queryKey: ['checks', 'history'] });
+    },
   });
 }
 
@@ -52,6 +55,9 @@ export function useImportSoilTests() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ propertyId, input }: { propertyId: number; input: SoilTestImportInput }) => (await api.post<{ data: SoilTestDto[] }>(`/api/properties/${propertyId}/soil-tests/import`, input)).data,
-    onSuccess: () => void qc.invalidateQueries({ queryKey: soilTestKeys.all() }),
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: soilTestKeys.all() });
+      void qc.invalidateQueries({ queryKey: ['checks', 'history'] });
+    },
   });
 }

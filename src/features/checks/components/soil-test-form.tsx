@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { get, useForm, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
@@ -52,12 +53,17 @@ export function soilTestPreview(values: unknown, context: SoilTestContextDto, un
   }
 }
 
-/** A lab result typed in for one unit, with the lime and P and K it recommends shown as the numbers go in. */
+/** A lab result typed in for one unit, with the lime and P and K it recommends shown as the numbers go in; a fresh form after each save (date and lab kept). */
 export function SoilTestForm({ propertyId, unitId }: { propertyId: number; unitId: number }) {
+  const [kept, setKept] = useState<{ n: number; sampledOn: string; lab: string }>({ n: 0, sampledOn: firmToday(), lab: '' });
+  return <SoilTestFields key={kept.n} propertyId={propertyId} unitId={unitId} sampledOn={kept.sampledOn} lab={kept.lab} onSaved={(v) => setKept((k) => ({ n: k.n + 1, ...v }))} />;
+}
+
+function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { propertyId: number; unitId: number; sampledOn: string; lab: string; onSaved: (kept: { sampledOn: string; lab: string }) => void }) {
   const context = useSoilTestContext(propertyId);
   const create = useCreateSoilTest();
   const toast = useToast();
-  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(SoilTestCreateSchema), defaultValues: { sampledOn: firmToday(), lab: '', bufferMethod: null } });
+  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(SoilTestCreateSchema), defaultValues: { sampledOn, lab, bufferMethod: null } });
   const e = form.formState.errors;
   const values = form.watch();
   const ctx = context.data;
@@ -68,7 +74,7 @@ export function SoilTestForm({ propertyId, unitId }: { propertyId: number; unitI
     try {
       await create.mutateAsync({ unitId, input });
       toast('success', 'Soil test saved with its recommendation.');
-      form.reset({ sampledOn: input.sampledOn, lab: input.lab, bufferMethod: input.bufferMethod ?? null });
+      onSaved({ sampledOn: input.sampledOn, lab: input.lab });
     } catch (error) {
       let placed = false;
       for (const p of fieldProblems(error)) {
