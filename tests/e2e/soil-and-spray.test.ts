@@ -142,4 +142,28 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     watch.assertClean();
     await context.close();
   });
+  it('the owner chooses the firm’s lime method and retest years for soil tests', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'owner@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.goto(`${baseUrl}/settings/team`);
+    const form = page.getByRole('form', { name: 'Soil-test settings' });
+    // The demo firm is in the Midwest: by default the University of Missouri ENM method, retest after 3 years.
+    await poll(() => form.getByLabel('Lime by').inputValue()).toBe('');
+    expect(await form.getByLabel('Retest soil after (years)').inputValue()).toBe('3');
+    await form.getByLabel('Retest soil after (years)').fill('0');
+    await form.getByRole('button', { name: 'Save soil-test settings' }).click();
+    await poll(() => form.getByText(/at least 1 year/).isVisible()).toBe(true);
+    await form.getByLabel('Retest soil after (years)').fill('4');
+    await form.getByRole('button', { name: 'Save soil-test settings' }).click();
+    await poll(() => page.getByText('Soil-test settings saved; new soil tests use them.').isVisible()).toBe(true);
+    await form.scrollIntoViewIfNeeded();
+    await screenshot(page, 'soil-test-settings');
+    const firm = (await (await page.request.get(`${baseUrl}/api/firm`)).json()) as { data: { settings: { soilRetestYears: number; limeMethod: string | null } } };
+    expect(firm.data.settings).toMatchObject({ soilRetestYears: 4, limeMethod: null });
+    watch.assertClean();
+    await context.close();
+  });
 });

@@ -159,3 +159,26 @@ describe('the context the browser previews a soil test with', () => {
     }
   });
 });
+
+describe('the firm’s soil-test settings', () => {
+  it('the owner chooses the method and the retest years; bad values are refused naming the field', async () => {
+    const owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
+    const patch = (body: unknown) => owner.patch('/api/firm/settings').set('X-CSRF-Token', owner.csrf).send(body as object);
+    try {
+      const res = await patch({ limeMethod: 'ncdacs', soilRetestYears: 2 });
+      expect(res.status).toBe(200);
+      expect(res.body.data.settings).toMatchObject({ limeMethod: 'ncdacs', soilRetestYears: 2 });
+      expect((await consultant.get(`/api/properties/${propertyId}/soil-test-context`)).body.data).toMatchObject({ method: 'ncdacs', retestYears: 2 });
+      const bad = await patch({ limeMethod: 'mehlich' });
+      expect(bad.status).toBe(422);
+      expect(bad.body.error).toMatch(/limeMethod must be one of ncdacs, missouri/);
+      expect((await patch({ soilRetestYears: 0 })).body.error).toMatch(/soilRetestYears: at least 1 year/);
+      // Back to the region's method (midwest: Missouri) and the default 3 years when unset.
+      const cleared = await patch({ limeMethod: null });
+      expect(cleared.body.data.settings).toMatchObject({ limeMethod: null, soilRetestYears: 2 });
+      expect((await consultant.get(`/api/properties/${propertyId}/soil-test-context`)).body.data.method).toBe('missouri');
+    } finally {
+      await Firm.update({ settings: {} }, { where: { id: ctx.firm.id } });
+    }
+  });
+});
