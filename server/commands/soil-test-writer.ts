@@ -3,93 +3,58 @@
  * method (shared/domain/soil-tests), imports a lab's CSV by unit name (all rows or none), and writes
  * a test's recommendation into the unit's prescription. Each write is one transaction with its audit.
  */
-import type { Transaction } from 'sequelize';
+import type { CreationAttributes, Transaction } from 'sequelize';
 import { parse } from 'csv-parse/sync';
 import { ZodError } from 'zod';
 import { sequelize } from '../db/sequelize';
-import { Firm, Material, Practice, Prescription, Property, Unit } from '../models';
+import { Prescription, Property, Unit } from '../models';
 import { SoilTest } from '../models/soil-test';
 import { findInFirm } from '../policies/firm-scope';
 import { unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
 import { computePrescriptionRecord } from './prescription-writer';
 import { DomainValidationError } from '../../shared/domain/errors';
-import { cropGroupOf, LIME_METHODS, limeRecommendation, nutrientRecommendation, retestDue, TARGET_PH, type BufferMethod, type LimeMethod } from '../../shared/domain/soil-tests';
-import { SOIL_CSV_MAX_ROWS, SoilTestCreateSchema, type SoilTestCreateValues } from '../../shared/schemas/soil-tests';
+import { recommendSoilTest, retestDue, type BufferMethod } from '../../shared/domain/soil-tests';
+import { guessSoilCsvColumns, soilCsvRowBody, SOIL_CSV_FIELD_LABELS, unitNameKey, unmappedRequired, type SoilCsvColumns } from '../../shared/domain/soil-csv';
+import { retestYearsFor, soilTestContextOf, unitSoilContext } from '../queries/soil-test-context';
+import { SOIL_CSV_MAX_ROWS, SoilTestCreateSchema, type SoilCsvRowProblem, type SoilTestCreateValues } from '../../shared/schemas/soil-tests';
 import type { PrescriptionParameters } from '../../shared/domain/practice';
 import type { SessionUser } from '../../shared/schemas/auth';
 import { formatDate } from '../../shared/domain/clock';
 
-/** Default years between soil tests when the firm has not set `soilRetestYears` (common practice, no source). */
-export const DEFAULT_RETEST_YEARS = 3;
+export { DEFAULT_RETEST_YEARS, limeMethodFor, retestYearsFor } from '../queries/soil-test-context';
 
-/** The firm's lime method: its `limeMethod` setting, else by region (south and mid-south: NCDA&CS; elsewhere: Missouri). */
-export function limeMethodFor(settings: Record<string, unknown>, region: string | null): LimeMethod {
-  const chosen = settings.limeMethod;
-  if (typeof chosen === 'string' && (LIME_METHODS as readonly string[]).includes(chosen)) return chosen as LimeMethod;
-  return region === 'south' || region === 'midsouth' ? 'ncdacs' : 'missouri';
-}
+type SoilTestAttributes = CreationAttributes<SoilTest>;
 
-/** The firm's retest interval in years. */
-export function retestYearsFor(settings: Record<string, unknown>): number {
-  const years = settings.soilRetestYears;
-  return typeof years === 'number' && Number.isInteger(years) && years >= 1 && years <= 10 ? years : DEFAULT_RETEST_YEARS;
-}
-
-interface UnitContext {
-  prescription: Prescription | null;
-  practice: Practice | null;
-  cropGroup: string;
-  limeEnmLbPerTon: number;
-}
-
-/** The unit's latest prescription, the crop group it sows and the ENM of its lime. */
-async function unitContext(unit: Unit, transaction: Transaction): Promise<UnitContext> {
-  const prescription = await Prescription.findOne({ where: { unitId: unit.id }, order: [['year', 'DESC'], ['id', 'DESC']], transaction });
-  const practice = prescription ? await Practice.findByPk(prescription.practiceId, { transaction }) : null;
-  const seedKeys = practice?.definition.steps.flatMap((s) => (s.application?.type === 'seed' ? s.application.components.map((c) => c.materialKey) : [])) ?? [];
-  const limeStep = practice?.definition.steps.find((s) => s.application?.type === 'lime');
-  const keys = [...seedKeys, ...(limeStep?.application?.type === 'lime' ? [limeStep.application.materialKey] : [])];
-  const materials = keys.length ? await Material.findAll({ where: { firmId: unit.firmId, key: keys }, transaction }) : [];
-  const species = materials.map((m) => (m.definition.type === 'seed' ? m.definition.species : '')).filter(Boolean);
-  const lime = materials.find((m) => m.definition.type === 'lime');
-  const enm = lime?.definition.type === 'lime' ? lime.definition.enmLbPerTon : undefined;
-  return { prescription, practice, cropGroup: cropGroupOf(species), limeEnmLbPerTon: enm ?? 400 };
+/** The row to store for one soil test: its recommendation worked by the shared function (throws DomainValidationError naming a field). */
+async function prepareOne(actor: SessionUser, unit: Unit, values: SoilTestCreateValues, transaction: Transaction): Promise<SoilTestAttributes> {
+  const context = await soilTestContextOf(unit, transaction);
+  const test = { ...values, bufferMethod: (values.bufferMethod ?? null) as BufferMethod | null };
+  const recommendation = recommendSoilTest(test, context);
+  return {
+    firmId: actor.firmId,
+    propertyId: unit.propertyId,
+    unitId: unit.id,
+    sampledOn: values.sampledOn,
+    lab: values.lab,
+    ph: values.ph,
+    bufferPh: values.bufferPh ?? null,
+    bufferMethod: values.bufferMethod ?? null,
+    pPpm: values.pPpm ?? null,
+    kPpm: values.kPpm ?? null,
+    organicMatterPct: values.organicMatterPct ?? null,
+    cec: values.cec ?? null,
+    enmLbPerAcre: values.enmLbPerAcre ?? null,
+    cropGroup: context.cropGroup,
+    recommendation,
+    retestDue: retestDue(values.sampledOn, retestYearsFor(context.settings)),
+    appliedPrescriptionId: null,
+    createdById: actor.id,
+  };
 }
 
 async function writeOne(actor: SessionUser, unit: Unit, values: SoilTestCreateValues, transaction: Transaction): Promise<SoilTest> {
-  const firm = await Firm.findByPk(actor.firmId, { attributes: ['settings', 'region'], transaction });
-  const property = await Property.findByPk(unit.propertyId, { attributes: ['region'], transaction });
-  const settings = (firm?.settings ?? {}) as Record<string, unknown>;
-  const method = limeMethodFor(settings, property?.region ?? firm?.region ?? null);
-  const context = await unitContext(unit, transaction);
-  const target = TARGET_PH[context.cropGroup] ?? TARGET_PH.grain!;
-  const test = { ...values, bufferMethod: (values.bufferMethod ?? null) as BufferMethod | null };
-  const lime = limeRecommendation(method, test, target.ph, context.limeEnmLbPerTon);
-  const nutrients = nutrientRecommendation(test, context.cropGroup);
-  return SoilTest.create(
-    {
-      firmId: actor.firmId,
-      propertyId: unit.propertyId,
-      unitId: unit.id,
-      sampledOn: values.sampledOn,
-      lab: values.lab,
-      ph: values.ph,
-      bufferPh: values.bufferPh ?? null,
-      bufferMethod: values.bufferMethod ?? null,
-      pPpm: values.pPpm ?? null,
-      kPpm: values.kPpm ?? null,
-      organicMatterPct: values.organicMatterPct ?? null,
-      cec: values.cec ?? null,
-      enmLbPerAcre: values.enmLbPerAcre ?? null,
-      cropGroup: context.cropGroup,
-      recommendation: { lime: { ...lime, source: `${lime.source}; target pH ${target.ph} (${target.source})` }, nutrients },
-      retestDue: retestDue(values.sampledOn, retestYearsFor(settings)),
-      appliedPrescriptionId: null,
-      createdById: actor.id,
-    },
-    { transaction },
-  );
+  return SoilTest.create(await prepareOne(actor, unit, values, transaction), { transaction });
 }
 
 /** Stores one soil test of a unit with its recommendation. */
@@ -102,46 +67,64 @@ export async function createSoilTest(actor: SessionUser, unitId: number, values:
   });
 }
 
-const NUMERIC = ['ph', 'bufferPh', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
+/** Most refused rows the answer's sentence lists (all are in `details`). */
+const LISTED_PROBLEMS = 5;
 
-/** Imports a lab's CSV (header row; a `unit` column naming plan units of the property): every row is stored, or none. */
-export async function importSoilTests(actor: SessionUser, propertyId: number, csv: string, ip: string | null): Promise<SoilTest[]> {
+/**
+ * Imports a lab's CSV (header row; a column naming plan units of the property, matched by `columns` or by
+ * header names): every row is checked first and every problem reported by row and field; then all rows
+ * are stored in one transaction, or none.
+ */
+export async function importSoilTests(actor: SessionUser, propertyId: number, csv: string, ip: string | null, columns?: SoilCsvColumns): Promise<SoilTest[]> {
   let records: Record<string, string>[];
+  let headers: string[] = [];
   try {
-    records = parse(csv, { columns: (header: string[]) => header.map((h) => h.trim()), skip_empty_lines: true, trim: true, bom: true }) as Record<string, string>[];
+    records = parse(csv, { columns: (header: string[]) => (headers = header.map((h) => h.trim())), skip_empty_lines: true, trim: true, bom: true }) as Record<string, string>[];
   } catch (error) {
     throw unprocessable(`csv: the file could not be read as CSV (${(error as Error).message}). Save it from the spreadsheet as "CSV UTF-8" with a header row.`);
   }
   if (records.length === 0) throw unprocessable('csv: no rows under the header. Put one soil test per row with a "unit" column.');
   if (records.length > SOIL_CSV_MAX_ROWS) throw unprocessable(`csv: at most ${SOIL_CSV_MAX_ROWS} rows at a time (got ${records.length}).`);
+  const mapping = columns ?? guessSoilCsvColumns(headers);
+  const strayColumn = Object.entries(mapping).find(([, header]) => !headers.includes(header));
+  if (strayColumn) throw unprocessable(`columns.${strayColumn[0]}: the file has no column “${strayColumn[1]}”. Pick one of ${headers.join(', ')}.`);
+  const missing = unmappedRequired(mapping);
+  if (missing.length) throw unprocessable(`columns: say which column holds ${missing.map((f) => SOIL_CSV_FIELD_LABELS[f].toLowerCase()).join(', ')}.`, missing.map((f) => ({ path: `columns.${f}`, message: 'pick the column' })));
   return sequelize.transaction(async (transaction) => {
     await findInFirm(Property, propertyId, actor.firmId, 'That property', { transaction });
     const units = await Unit.findAll({ where: { propertyId, firmId: actor.firmId }, transaction });
-    const byName = new Map(units.map((u) => [u.name.trim().toLowerCase(), u]));
-    const rows: SoilTest[] = [];
+    const byName = new Map(units.map((u) => [unitNameKey(u.name), u]));
+    const problems: SoilCsvRowProblem[] = [];
+    const prepared: SoilTestAttributes[] = [];
     for (const [i, record] of records.entries()) {
-      const line = i + 2;
-      const unit = byName.get((record.unit ?? '').trim().toLowerCase());
-      if (!unit) throw unprocessable(`csv row ${line}, unit: “${record.unit ?? ''}” is not a unit of this property. Use the unit names on the plan map.`, [{ path: `rows.${line}.unit`, message: 'not on this property' }]);
-      const body: Record<string, unknown> = { sampledOn: record.sampledOn, lab: record.lab, bufferMethod: record.bufferMethod || null };
-      for (const key of NUMERIC) {
-        const text = record[key];
-        body[key] = text === undefined || text === '' ? null : Number(text);
+      const row = i + 2;
+      const { unitName, body } = soilCsvRowBody(record, mapping);
+      const unit = byName.get(unitNameKey(unitName));
+      if (!unit) {
+        problems.push({ row, field: 'unit', message: `“${unitName}” is not a unit of this property. Use the unit names on the plan map` });
+        continue;
       }
-      if (body.ph === null) delete body.ph;
       const parsed = SoilTestCreateSchema.safeParse(body);
       if (!parsed.success) {
-        const issue = parsed.error.issues[0]!;
-        throw unprocessable(`csv row ${line}, ${issue.path.join('.') || 'row'}: ${issue.message}.`, [{ path: `rows.${line}.${issue.path.join('.')}`, message: issue.message }]);
+        for (const issue of parsed.error.issues) problems.push({ row, field: issue.path.join('.') || 'row', message: issue.message });
+        continue;
       }
       try {
-        rows.push(await writeOne(actor, unit, parsed.data, transaction));
+        prepared.push(await prepareOne(actor, unit, parsed.data, transaction));
       } catch (error) {
-        if (error instanceof DomainValidationError) throw unprocessable(`csv row ${line}, ${error.field}: ${error.message}`, [{ path: `rows.${line}.${error.field}`, message: error.message }]);
-        if (error instanceof ZodError) throw unprocessable(`csv row ${line}: ${error.issues[0]?.message ?? 'not valid'}.`);
-        throw error;
+        if (error instanceof DomainValidationError) problems.push({ row, field: error.field, message: error.message });
+        else if (error instanceof ZodError) problems.push({ row, field: 'row', message: error.issues[0]?.message ?? 'not valid' });
+        else throw error;
       }
     }
+    if (problems.length) {
+      const rowsWrong = new Set(problems.map((p) => p.row)).size;
+      const listed = problems.slice(0, LISTED_PROBLEMS).map((p) => `csv row ${p.row}, ${p.field}: ${p.message.replace(/\.$/, '')}`).join('; ');
+      const more = problems.length > LISTED_PROBLEMS ? `; and ${problems.length - LISTED_PROBLEMS} more` : '';
+      throw unprocessable(`Nothing was saved: ${rowsWrong} of ${records.length} ${records.length === 1 ? 'row needs' : 'rows need'} changes. ${listed}${more}.`, problems.map((p) => ({ path: `rows.${p.row}.${p.field}`, message: p.message, row: p.row, field: p.field })));
+    }
+    const rows: SoilTest[] = [];
+    for (const attributes of prepared) rows.push(await SoilTest.create(attributes, { transaction }));
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'soil-test.imported', subjectType: 'Property', subjectId: propertyId, data: { rows: rows.length }, ip }, transaction);
     return rows;
   });
@@ -155,7 +138,7 @@ export async function applySoilTest(actor: SessionUser, soilTestId: number, ip: 
   return sequelize.transaction(async (transaction) => {
     const soilTest = await findInFirm(SoilTest, soilTestId, actor.firmId, 'That soil test', { transaction, lock: true });
     const unit = await findInFirm(Unit, soilTest.unitId, actor.firmId, 'That unit', { transaction });
-    const { prescription, practice } = await unitContext(unit, transaction);
+    const { prescription, practice } = await unitSoilContext(unit, transaction);
     if (!prescription || !practice) throw unprocessable('This unit has no prescription yet: write one, then apply the soil test to it.');
     const limeStep = practice.definition.steps.find((s) => s.application?.type === 'lime');
     const fertStep = practice.definition.steps.find((s) => s.application?.type === 'fertilizer' && (s.application.p2o5LbPerAcre > 0 || s.application.k2oLbPerAcre > 0));

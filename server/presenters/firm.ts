@@ -5,6 +5,14 @@ import { usableZone } from '../../shared/domain/clock';
 import { firmDefaults } from '../../shared/domain/firm-defaults';
 import { largeAreaThreshold } from '../../shared/domain/large-area';
 import { observationSnapFt } from '../../shared/domain/observations';
+import { LIME_METHODS, type LimeMethod } from '../../shared/domain/soil-tests';
+import { retestYearsFor } from '../queries/soil-test-context';
+
+/** The firm's soil-test settings as chosen (null method: the region's) with the default retest interval filled in. */
+function soilSettings(settings: Record<string, unknown>): { limeMethod: LimeMethod | null; soilRetestYears: number } {
+  const method = (LIME_METHODS as readonly unknown[]).includes(settings.limeMethod) ? (settings.limeMethod as LimeMethod) : null;
+  return { limeMethod: method, soilRetestYears: retestYearsFor(settings) };
+}
 
 /** The firm and the settings the app reads. */
 export function presentFirm(firm: Firm): FirmDto {
@@ -16,7 +24,7 @@ export function presentFirm(firm: Firm): FirmDto {
     phone: firm.phone,
     region: firm.region,
     timezone: usableZone(firm.timezone),
-    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, homeArea: s.homeArea ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS, observationSnapFt: observationSnapFt(firm.settings) },
+    settings: { tileUrlTemplate: s.tileUrlTemplate ?? null, tileAttribution: s.tileAttribution ?? null, homeArea: s.homeArea ?? null, taxRatePct: s.taxRatePct ?? 0, largeAreaAcres: largeAreaThreshold(firm.settings), idleTimeoutHours: s.idleTimeoutHours ?? DEFAULT_IDLE_TIMEOUT_HOURS, observationSnapFt: observationSnapFt(firm.settings), ...soilSettings(firm.settings as Record<string, unknown>) },
     address: firm.address,
     website: firm.website ?? null,
     licenceNumbers: firm.licenceNumbers ?? null,

@@ -28,6 +28,7 @@ import { jobsRouter } from './jobs';
 import { outboxRouter } from './outbox';
 import { checksRouter, propertyPlotStatusesRouter, unitChecksRouter } from './checks';
 import { propertySoilTestsRouter, soilTestsRouter, unitSoilTestsRouter } from './soil-tests';
+import { soilTestContextRouter } from './soil-test-context';
 import { sprayRecordsRouter } from './spray-records';
 import { propertySeasonsRouter, seasonDraftsRouter } from './seasons';
 import { propertySeasonComparisonRouter } from './season-comparison';
@@ -82,6 +83,7 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/properties', router: propertyPlotStatusesRouter },
   { path: '/units', router: unitSoilTestsRouter },
   { path: '/properties', router: propertySoilTestsRouter },
+  { path: '/properties', router: soilTestContextRouter },
   { path: '/soil-tests', router: soilTestsRouter },
   { path: '/properties', router: propertySeasonsRouter },
   { path: '/season-drafts', router: seasonDraftsRouter },

@@ -29,7 +29,7 @@ units.post('/:id/soil-tests', STAFF, validate({ params: IdParamsSchema, body: So
 });
 
 properties.post('/:id/soil-tests/import', STAFF, validate({ params: IdParamsSchema, body: SoilTestImportSchema }), async (req, res) => {
-  const rows = await importSoilTests(actor(req), Number(req.params.id), req.body.csv, req.ip ?? null);
+  const rows = await importSoilTests(actor(req), Number(req.params.id), req.body.csv, req.ip ?? null, req.body.columns);
   const names = new Map((await Unit.findAll({ where: { id: rows.map((r) => r.unitId) }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
   res.status(201).json({ data: rows.map((r) => presentSoilTest(r, names.get(r.unitId) ?? '')) });
 });

@@ -52,6 +52,13 @@ export interface FertilizerMaterial {
 /** Longest plant-back interval accepted, days (labels give up to about 4 years for some residual herbicides). */
 export const PLANT_BACK_MAX_DAYS = 1500;
 
+/**
+ * An EPA registration number as a label prints it: the registrant's company number, a hyphen, the product
+ * number, and for a supplemental distributor's product the distributor's company number after a third hyphen
+ * (40 CFR 152.132; from memory), e.g. "524-475" or "524-475-123".
+ */
+export const EPA_REG_NO_PATTERN = /^\d{1,7}-\d{1,7}(-\d{1,7})?$/;
+
 export interface SprayMaterial {
   key: string;
   type: 'herbicide' | 'adjuvant';
@@ -338,6 +345,9 @@ export function validateMaterialDefinition(material: MaterialDefinition, field =
       if (material.lbAiPerGal !== undefined) positive('lbAiPerGal', material.lbAiPerGal, 'Product concentration', 'lb a.i./gal', 12);
       if (material.plantBackDays !== undefined && !(Number.isInteger(material.plantBackDays) && material.plantBackDays >= 0 && material.plantBackDays <= PLANT_BACK_MAX_DAYS)) {
         throw new DomainValidationError(`${field}.plantBackDays`, `Plant-back interval (plantBackDays) must be a whole number of days from 0 to ${PLANT_BACK_MAX_DAYS}, as the label gives it (months × 30).`);
+      }
+      if (material.epaRegNo !== undefined && !EPA_REG_NO_PATTERN.test(material.epaRegNo)) {
+        throw new DomainValidationError(`${field}.epaRegNo`, `EPA Reg. No. (epaRegNo) “${material.epaRegNo}” is not written as on a label: company and product numbers with a hyphen, e.g. 524-475, or 524-475-123 for a distributor's product.`);
       }
       validateSprayPricing(material.pricing, `${field}.pricing`);
       return;

@@ -179,3 +179,20 @@ export function retestDue(sampledOn: string, years = 3): string {
   const rest = sampledOn.slice(4);
   return rest === '-02-29' ? `${y}-02-28` : `${y}${rest}`;
 }
+
+/** What a unit's soil test is worked against: the firm's method, the crop group its prescription sows, and its lime's ENM. */
+export interface SoilTestContext {
+  method: LimeMethod;
+  cropGroup: string;
+  limeEnmLbPerTon: number;
+}
+
+/**
+ * The lime and P and K a soil test recommends for a unit (target pH by crop group, source named): the one
+ * computation the server stores and the browser previews.
+ */
+export function recommendSoilTest(test: SoilTestValues, context: SoilTestContext): { lime: LimeRecommendationResult; nutrients: NutrientRecommendation } {
+  const target = TARGET_PH[context.cropGroup] ?? TARGET_PH.grain!;
+  const lime = limeRecommendation(context.method, test, target.ph, context.limeEnmLbPerTon);
+  return { lime: { ...lime, source: `${lime.source}; target pH ${target.ph} (${target.source})` }, nutrients: nutrientRecommendation(test, context.cropGroup) };
+}

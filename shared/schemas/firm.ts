@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isTimeZone } from '../domain/clock';
+import { LIME_METHODS } from '../domain/soil-tests';
 
 /**
  * An XYZ raster tile URL template such as https://tiles.example.com/{z}/{x}/{y}.png (https only).
@@ -46,6 +47,10 @@ export const FirmSettingsUpdateSchema = z.object({
   cardPullIntervalDays: z.number({ message: 'give the days between card pulls' }).int({ message: 'whole days between card pulls' }).min(1).max(365).optional(),
   /** Minutes within which photos at one camera site form one independent event (default 30). */
   eventGapMinutes: z.number({ message: 'give the event gap in minutes' }).int({ message: 'whole minutes' }).min(1).max(24 * 60).optional(),
+  /** The state method soil tests are worked by; null goes back to the region's (south and mid-south NCDA&CS, elsewhere Missouri). */
+  limeMethod: z.enum(LIME_METHODS, { error: `limeMethod must be one of ${LIME_METHODS.join(', ')}` }).nullable().optional(),
+  /** Years after a soil test when the Desk lists it for a retest (default 3). */
+  soilRetestYears: z.number({ message: 'soilRetestYears: give the years between soil tests' }).int({ message: 'soilRetestYears: whole years' }).min(1, { message: 'soilRetestYears: at least 1 year' }).max(10, { message: 'soilRetestYears: at most 10 years' }).optional(),
 });
 
 /** The idle timeout of a firm that has not chosen one. */
@@ -112,7 +117,7 @@ export const FirmSchema = z.object({
   region: z.string(),
   /** IANA time zone: the firm's "today" and the times on its documents. */
   timezone: z.string(),
-  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), homeArea: HomeAreaSchema.nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number(), observationSnapFt: z.number() }),
+  settings: z.object({ tileUrlTemplate: z.string().nullable(), tileAttribution: z.string().nullable(), homeArea: HomeAreaSchema.nullable(), taxRatePct: z.number(), largeAreaAcres: z.number(), idleTimeoutHours: z.number(), observationSnapFt: z.number(), limeMethod: z.enum(LIME_METHODS).nullable().optional(), soilRetestYears: z.number().optional() }),
   address: z.string().nullable(),
   website: z.string().nullable(),
   licenceNumbers: z.string().nullable(),

@@ -9,7 +9,7 @@ import { LIMITS } from '../limits';
 import { UNIT_KINDS } from '../domain/unit-kinds';
 import { WINDOW_KEYS } from '../domain/planting-windows';
 import { CAUTION_IDS } from '../domain/cautions';
-import { PLANT_BACK_MAX_DAYS, type MaterialDefinition, type PracticeDefinition } from '../domain/practice';
+import { EPA_REG_NO_PATTERN, PLANT_BACK_MAX_DAYS, type MaterialDefinition, type PracticeDefinition } from '../domain/practice';
 
 const name = z.string().trim().min(1, { message: 'enter a name' }).max(LIMITS.nameMax);
 const cents = (label: string) => z.number({ message: `${label} must be a number of cents` }).int({ message: `${label} must be whole cents` }).min(0, { message: `${label} cannot be negative` }).max(100_000_000, { message: `${label} looks too large` });
@@ -70,7 +70,7 @@ export const MaterialCreateSchema = z.discriminatedUnion('kind', [
     lbAiPerGal: positive('Concentration', 12, 'lb a.i./gal').optional(),
     restrictedUse: z.boolean().default(false),
     /** EPA Reg. No. from the label (spray records). */
-    epaRegNo: z.string().trim().regex(/^\d{1,7}-\d{1,7}(-\d{1,7})?$/, { message: 'epaRegNo: write the EPA Reg. No. as on the label, e.g. 524-475' }).optional(),
+    epaRegNo: z.string().trim().regex(EPA_REG_NO_PATTERN, { message: 'EPA Reg. No. (epaRegNo): write it as on the label, e.g. 524-475 or 524-475-123' }).optional(),
     adjuvant: z.boolean().default(false),
     /** Label rate the firm usually uses, lb a.i. per acre. */
     rateLbAiPerAcre: positive('Rate', 20, 'lb a.i./acre').optional(),

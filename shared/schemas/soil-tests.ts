@@ -2,7 +2,8 @@
 import { z } from 'zod';
 import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
-import { BUFFER_METHODS, PH_MAX, PH_MIN, type LimeRecommendationResult, type NutrientRecommendation } from '../domain/soil-tests';
+import { BUFFER_METHODS, PH_MAX, PH_MIN, type BufferMethod, type LimeMethod, type LimeRecommendationResult, type NutrientRecommendation } from '../domain/soil-tests';
+import { SOIL_CSV_FIELDS } from '../domain/soil-csv';
 
 const ph = (field: string) =>
   z
@@ -36,7 +37,27 @@ export const SOIL_CSV_MAX_CHARS = 200_000;
 /** A lab's results as CSV text with a header row: unit, sampledOn, lab, ph, bufferPh, bufferMethod, pPpm, kPpm, organicMatterPct, cec, enmLbPerAcre. */
 export const SoilTestImportSchema = z.object({
   csv: z.string({ error: 'csv: paste the lab’s CSV text' }).min(1, { message: 'csv: paste the lab’s CSV text' }).max(SOIL_CSV_MAX_CHARS, { message: `csv: at most ${SOIL_CSV_MAX_CHARS.toLocaleString('en-US')} characters` }),
+  /** Which of the file's columns holds each field; left out, columns are matched by their header names. */
+  columns: z.partialRecord(z.enum(SOIL_CSV_FIELDS, { error: `columns: the fields are ${SOIL_CSV_FIELDS.join(', ')}` }), z.string().max(200, { message: 'columns: a column name of at most 200 characters' })).optional(),
 });
+export type SoilTestImportInput = z.output<typeof SoilTestImportSchema>;
+
+/** One row the import refused: the file's row number (the header is row 1), the field and what to change. */
+export interface SoilCsvRowProblem {
+  row: number;
+  field: string;
+  message: string;
+}
+
+/** What the firm's state method needs to work a unit's soil test in the browser (`GET /api/properties/:id/soil-test-context`). */
+export interface SoilTestContextDto {
+  method: LimeMethod;
+  methodLabel: string;
+  /** The buffers the method reads; any other is refused. */
+  buffers: readonly BufferMethod[];
+  retestYears: number;
+  units: { unitId: number; name: string; cropGroup: string; targetPh: number; limeEnmLbPerTon: number }[];
+}
 
 export interface SoilTestDto {
   id: number;

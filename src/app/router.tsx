@@ -75,6 +75,8 @@ const routes: RouteObject[] = [
         { path: paths.propertyResults(), ...page(() => import('./routes/properties/property-results'), (m) => m.PropertyResultsPage) },
         { path: paths.unitChecks(), ...page(() => import('./routes/properties/unit-checks'), (m) => m.UnitChecksPage) },
         { path: paths.nextSeason(), ...page(() => import('./routes/properties/next-season'), (m) => m.NextSeasonPage) },
+        { path: paths.propertySoilTests(), ...page(() => import('./routes/properties/soil-test-import'), (m) => m.SoilTestImportPage) },
+        { path: paths.sprayRecords, ...page(() => import('./routes/spray-records/spray-records'), (m) => m.SprayRecordsPage) },
         { path: paths.propertyCameras(), ...page(() => import('./routes/properties/property-cameras'), (m) => m.PropertyCamerasPage) },
         { path: paths.propertyStands(), ...page(() => import('./routes/properties/property-stands'), (m) => m.PropertyStandsPage) },
         {

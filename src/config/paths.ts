@@ -37,6 +37,10 @@ export const paths = {
   nextSeason: (id: number | string = ':id') => `/properties/${id}/next-season`,
   /** A unit's page: its checks and the re-seeding they draft. */
   unitChecks: (propertyId: number | string = ':id', unitId: number | string = ':unitId') => `/properties/${propertyId}/units/${unitId}`,
+  /** A lab's soil-test results file for several units of a property. */
+  propertySoilTests: (id: number | string = ':id') => `/properties/${id}/soil-tests`,
+  /** The firm's spray records (7 CFR Part 110) by season and property; `task` marks one task's records. */
+  sprayRecords: '/spray-records',
   propertyCameras: (id: number | string = ':id') => `/properties/${id}/cameras`,
   propertyStands: (id: number | string = ':id') => `/properties/${id}/stands`,
   field: '/field',

@@ -109,3 +109,76 @@ describe('who may see and write soil tests', () => {
     expect(due.body.data.some((d: { unitId: number }) => d.unitId === plotId)).toBe(false);
   });
 });
+
+describe('the lab CSV import with the lab’s own column names', () => {
+  it('stores every row through a column mapping', async () => {
+    await Firm.update({ settings: {}, region: 'midwest' }, { where: { id: ctx.firm.id } });
+    const csv = 'Field ID,Date,Laboratory,Soil pH,ENM,P (ppm),K (ppm)\nNorth plot,2026-07-01,Valley lab,5.6,"1,200",25,140\n';
+    const columns = { unit: 'Field ID', sampledOn: 'Date', lab: 'Laboratory', ph: 'Soil pH', enmLbPerAcre: 'ENM', pPpm: 'P (ppm)', kPpm: 'K (ppm)' };
+    const res = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv, columns });
+    expect(res.status).toBe(201);
+    const [row] = res.body.data.map((d: unknown) => SoilTestDtoSchema.parse(d));
+    expect(row.lime.tonsPerAcre).toBe(3); // 1,200 lb ENM ÷ 400 lb ENM/ton (University of Missouri)
+  });
+
+  it('names every wrong row and field and stores none', async () => {
+    const before = await SoilTest.count({ where: { unitId: plotId } });
+    const csv = 'Field ID,Date,Laboratory,Soil pH,ENM\nNorth plot,2026-08-01,Valley lab,5.6,400\nNorth plot,2026-08-01,Valley lab,12,400\nBack forty,2026-08-01,Valley lab,6.0,400\nNorth plot,2026-08-01,,6.0,400\n';
+    const columns = { unit: 'Field ID', sampledOn: 'Date', lab: 'Laboratory', ph: 'Soil pH', enmLbPerAcre: 'ENM' };
+    const res = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv, columns });
+    expect(res.status).toBe(422);
+    expect(res.body.error).toMatch(/^Nothing was saved: 3 of 4 rows need changes/);
+    const problems = (res.body.details as { row: number; field: string }[]).map((p) => `${p.row}:${p.field}`);
+    expect(problems).toEqual(['3:ph', '4:unit', '5:lab']);
+    expect(await SoilTest.count({ where: { unitId: plotId } })).toBe(before);
+  });
+
+  it('asks for the required columns no mapping names', async () => {
+    const res = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv: 'Field ID,Soil pH\nNorth plot,6\n', columns: { unit: 'Field ID' } });
+    expect(res.status).toBe(422);
+    expect(res.body.error).toMatch(/columns: say which column holds date sampled, laboratory, soil ph/);
+    const stray = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv: 'Field ID,Soil pH\nNorth plot,6\n', columns: { unit: 'Field', ph: 'Soil pH' } });
+    expect(stray.status).toBe(422);
+    expect(stray.body.error).toMatch(/columns.unit: the file has no column “Field”/);
+  });
+});
+
+describe('the context the browser previews a soil test with', () => {
+  it('gives the firm’s method and each unit’s crop group and target pH', async () => {
+    await Firm.update({ settings: { limeMethod: 'ncdacs', soilRetestYears: 4 } }, { where: { id: ctx.firm.id } });
+    try {
+      const res = await consultant.get(`/api/properties/${propertyId}/soil-test-context`);
+      expect(res.status).toBe(200);
+      expect(res.body.data).toMatchObject({ method: 'ncdacs', buffers: ['mehlich'], retestYears: 4 });
+      // the brassica plot's target pH 6.3 (from memory, TARGET_PH) and the starter library's 400 lb ENM/ton lime
+      expect(res.body.data.units).toContainEqual(expect.objectContaining({ unitId: plotId, cropGroup: 'brassica', targetPh: 6.3, limeEnmLbPerTon: 400 }));
+      expect((await crew.get(`/api/properties/${propertyId}/soil-test-context`)).status).toBe(403);
+      expect((await outsider.get(`/api/properties/${propertyId}/soil-test-context`)).status).toBe(404);
+    } finally {
+      await Firm.update({ settings: {} }, { where: { id: ctx.firm.id } });
+    }
+  });
+});
+
+describe('the firm’s soil-test settings', () => {
+  it('the owner chooses the method and the retest years; bad values are refused naming the field', async () => {
+    const owner = await signedInAgent(ctx.users.owner.email, PASSWORD);
+    const patch = (body: unknown) => owner.patch('/api/firm/settings').set('X-CSRF-Token', owner.csrf).send(body as object);
+    try {
+      const res = await patch({ limeMethod: 'ncdacs', soilRetestYears: 2 });
+      expect(res.status).toBe(200);
+      expect(res.body.data.settings).toMatchObject({ limeMethod: 'ncdacs', soilRetestYears: 2 });
+      expect((await consultant.get(`/api/properties/${propertyId}/soil-test-context`)).body.data).toMatchObject({ method: 'ncdacs', retestYears: 2 });
+      const bad = await patch({ limeMethod: 'mehlich' });
+      expect(bad.status).toBe(422);
+      expect(bad.body.error).toMatch(/limeMethod must be one of ncdacs, missouri/);
+      expect((await patch({ soilRetestYears: 0 })).body.error).toMatch(/soilRetestYears: at least 1 year/);
+      // Back to the region's method (midwest: Missouri) and the default 3 years when unset.
+      const cleared = await patch({ limeMethod: null });
+      expect(cleared.body.data.settings).toMatchObject({ limeMethod: null, soilRetestYears: 2 });
+      expect((await consultant.get(`/api/properties/${propertyId}/soil-test-context`)).body.data.method).toBe('missouri');
+    } finally {
+      await Firm.update({ settings: {} }, { where: { id: ctx.firm.id } });
+    }
+  });
+});

@@ -10,6 +10,7 @@ const PLACES = [
   { to: paths.clients, label: 'Clients' },
   { to: paths.properties, label: 'Properties' },
   { to: paths.schedule, label: 'Schedule' },
+  { to: paths.sprayRecords, label: 'Spray records' },
   { to: paths.proposals, label: 'Proposals' },
   { to: paths.invoices, label: 'Invoices' },
   { to: paths.library, label: 'Library' },

@@ -124,6 +124,12 @@ export function PropertyPage() {
               Cameras
             </Link>
             <Link to={paths.propertyStands(p.id)} className={buttonClasses('secondary')}>Stands &amp; wind</Link>
+            <Link to={paths.propertySoilTests(p.id)} className={buttonClasses('secondary')}>
+              Soil tests
+            </Link>
+            <Link to={`${paths.sprayRecords}?propertyId=${p.id}`} className={buttonClasses('secondary')}>
+              Spray records
+            </Link>
             <Button variant="danger-outline" onClick={() => setConfirming(true)}>
               Delete property
             </Button>

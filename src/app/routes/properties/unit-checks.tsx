@@ -1,8 +1,10 @@
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { useCheckedUnit, useCreateUnitCheck, useUnitChecks } from '../../../features/checks/api/get-unit-checks';
 import { CheckForm } from '../../../features/checks/components/check-form';
 import { CheckList } from '../../../features/checks/components/check-list';
 import { SoilTestsCard } from '../../../features/checks/components/soil-tests-card';
+import { SoilTestForm } from '../../../features/checks/components/soil-test-form';
+import { UnitHistoryCard } from '../../../features/checks/components/unit-history-card';
 import { Card, EmptyState, ErrorPanel, Loading } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
 import { MissingRecord } from '../../../components/ui/missing-record';
@@ -62,6 +64,7 @@ export function UnitChecksPage() {
           ) : (
             <CheckList checks={checks.data} canDecide />
           )}
+          <UnitHistoryCard unitId={unitId} />
         </section>
         <div className="flex flex-col gap-4">
         <Card title="Record a check">
@@ -75,7 +78,13 @@ export function UnitChecksPage() {
             }}
           />
         </Card>
+        <SoilTestForm propertyId={propertyId} unitId={unitId} />
         <SoilTestsCard unitId={unitId} />
+        <p className="text-sm">
+          <Link to={paths.propertySoilTests(propertyId)} className="font-semibold text-moss underline">
+            Import a lab’s results file for several units
+          </Link>
+        </p>
         </div>
       </div>
     </div>

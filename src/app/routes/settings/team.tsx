@@ -15,6 +15,7 @@ import { paths } from '../../../config/paths';
 import { FirmProfileForm } from '../../../features/firm/components/firm-profile-form';
 import { JobsCard } from '../../../features/jobs/components/jobs-card';
 import { FirmSettingsForm } from '../../../features/firm/components/firm-settings-form';
+import { SoilSettingsForm } from '../../../features/firm/components/soil-settings-form';
 import { MapSettingsCard } from './map-settings-card';
 import { UndeliveredMailCard } from '../../../features/outbox/components/undelivered-mail-card';
 
@@ -93,6 +94,11 @@ export function TeamPage() {
       {isOwner ? (
         <Card title="Firm settings">
           <FirmSettingsForm />
+        </Card>
+      ) : null}
+      {isOwner ? (
+        <Card title="Soil tests">
+          <SoilSettingsForm />
         </Card>
       ) : null}
       {isOwner ? <MapSettingsCard /> : null}

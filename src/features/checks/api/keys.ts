@@ -4,4 +4,5 @@ export const checksKeys = {
   unit: (unitId: number) => ['checks', { unitId }] as const,
   plotStatuses: (propertyId: number) => ['checks', 'plot-statuses', { propertyId }] as const,
   unitDetail: (unitId: number) => ['checks', 'unit-detail', unitId] as const,
+  history: (unitId: number) => ['checks', 'history', unitId] as const,
 };

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, getData } from '../../../lib/api-client';
-import type { SoilTestDto } from '../../../../shared/schemas/soil-tests';
+import type { SoilTestContextDto, SoilTestCreateValues, SoilTestDto, SoilTestImportInput } from '../../../../shared/schemas/soil-tests';
 
 /** Query keys of soil tests. */
 export const soilTestKeys = {
@@ -28,6 +28,36 @@ export function useApplySoilTest() {
     onSuccess: () => {
       void qc.invalidateQueries({ queryKey: soilTestKeys.all() });
       void qc.invalidateQueries({ queryKey: ['prescriptions'] });
+    },
+  });
+}
+
+export const getSoilTestContextQueryOptions = (propertyId: number) =>
+  queryOptions({ queryKey: [...soilTestKeys.all(), 'context', { propertyId }] as const, queryFn: ({ signal }) => getData<SoilTestContextDto>(`/api/properties/${propertyId}/soil-test-context`, signal) });
+
+/** The firm's state method and each unit's crop group on a property: what the browser previews a recommendation with. */
+export const useSoilTestContext = (propertyId: number) => useQuery({ ...getSoilTestContextQueryOptions(propertyId), enabled: propertyId > 0 });
+
+/** POST /api/units/:id/soil-tests: one lab result typed in. */
+export function useCreateSoilTest() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ unitId, input }: { unitId: number; input: SoilTestCreateValues }) => (await api.post<{ data: SoilTestDto }>(`/api/units/${unitId}/soil-tests`, input)).data,
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: soilTestKeys.all() });
+      void qc.invalidateQueries({ queryKey: ['checks', 'history'] });
+    },
+  });
+}
+
+/** POST /api/properties/:id/soil-tests/import: a lab's file for several units, all rows or none. */
+export function useImportSoilTests() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ propertyId, input }: { propertyId: number; input: SoilTestImportInput }) => (await api.post<{ data: SoilTestDto[] }>(`/api/properties/${propertyId}/soil-tests/import`, input)).data,
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: soilTestKeys.all() });
+      void qc.invalidateQueries({ queryKey: ['checks', 'history'] });
     },
   });
 }

@@ -175,6 +175,7 @@ function HerbicideForm(props: KindFormProps) {
       <TextField label="Usual rate, lb a.i./acre" inputMode="decimal" hint="Optional" error={errorOf(e, 'rateLbAiPerAcre')} {...form.register('rateLbAiPerAcre', num)} />
       <TextField label="Carrier, gal/acre" inputMode="decimal" hint="Optional" error={errorOf(e, 'carrierGpa')} {...form.register('carrierGpa', num)} />
       <TextField label="Plant-back interval, days" inputMode="numeric" hint="Optional, from the label (months × 30)" error={errorOf(e, 'plantBackDays')} {...form.register('plantBackDays', num)} />
+      <TextField label="EPA Reg. No." placeholder="524-475" hint="As on the label; printed on spray records, needed for restricted-use products" error={errorOf(e, 'epaRegNo')} {...form.register('epaRegNo', { setValueAs: (v: string) => (typeof v === 'string' && v.trim() ? v : undefined) })} />
       <SelectField label="Sold" error={errorOf(e, 'pricing.basis')} {...form.register('pricing.basis')}>
         <option value="container">In containers</option>
         <option value="per-gal">By the gallon</option>

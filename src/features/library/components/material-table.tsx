@@ -53,6 +53,7 @@ const COLUMNS: Record<MaterialKind, Column[]> = {
           ''
         ),
     },
+    { header: 'EPA Reg. No.', cell: (m) => ((m.type === 'herbicide' || m.type === 'adjuvant') && m.epaRegNo ? m.epaRegNo : '—') },
     { header: 'Concentration', align: 'right', cell: (m) => ((m.type === 'herbicide' || m.type === 'adjuvant') && m.lbAiPerGal !== undefined ? `${formatQuantity(m.lbAiPerGal)} lb/gal` : '—') },
     { header: 'Sold', cell: (m) => (m.type === 'herbicide' || m.type === 'adjuvant' ? (m.pricing.basis === 'container' ? `${formatQuantity(m.pricing.containerSizeGal)}-gal container` : 'by the gallon') : '') },
     { header: 'Price', align: 'right', cell: (m) => (m.type === 'herbicide' || m.type === 'adjuvant' ? (m.pricing.basis === 'container' ? price(m.pricing.containerPriceCents) : `${price(m.pricing.pricePerGalCents)}/gal`) : '') },

@@ -52,7 +52,7 @@ export const MATERIAL_FORM_FIELDS: Record<MaterialKind, string[]> = {
   seed: ['name', 'species', 'purityPct', 'germinationPct', 'dormantPct', 'rateLbPerAcre', 'packageSizeLb', 'packagePriceCents'],
   lime: ['name', 'enmLbPerTon', 'pricing.basis', 'pricing.pricePerTonCents', 'pricing.bagSizeLb', 'pricing.bagPriceCents', 'pricing'],
   fertilizer: ['name', 'grade', 'bagSizeLb', 'bagPriceCents'],
-  herbicide: ['name', 'activeIngredient', 'lbAiPerGal', 'restrictedUse', 'adjuvant', 'rateLbAiPerAcre', 'carrierGpa', 'plantBackDays', 'pricing.basis', 'pricing.pricePerGalCents', 'pricing.containerSizeGal', 'pricing.containerPriceCents', 'pricing'],
+  herbicide: ['name', 'activeIngredient', 'lbAiPerGal', 'restrictedUse', 'adjuvant', 'rateLbAiPerAcre', 'carrierGpa', 'plantBackDays', 'epaRegNo', 'pricing.basis', 'pricing.pricePerGalCents', 'pricing.containerSizeGal', 'pricing.containerPriceCents', 'pricing'],
   other: ['name', 'itemLabel', 'packSize', 'packLabel', 'packPriceCents'],
 };
 
@@ -93,7 +93,7 @@ export function materialFormDefaults(kind: MaterialKind, m?: MaterialDto): Recor
         h?.pricing.basis === 'per-gal'
           ? { basis: 'per-gal', pricePerGalCents: centsToDollarsText(h.pricing.pricePerGalCents) }
           : { basis: 'container', containerSizeGal: h?.pricing.basis === 'container' ? h.pricing.containerSizeGal : undefined, containerPriceCents: centsToDollarsText(h?.pricing.basis === 'container' ? h.pricing.containerPriceCents : undefined) };
-      return { kind, name: h?.name ?? '', activeIngredient: h?.activeIngredient ?? '', lbAiPerGal: h?.lbAiPerGal, restrictedUse: h?.restrictedUse ?? false, adjuvant: h?.type === 'adjuvant', rateLbAiPerAcre: m?.rateLbAiPerAcre, carrierGpa: m?.carrierGpa, plantBackDays: h?.type === 'herbicide' ? h.plantBackDays : undefined, pricing };
+      return { kind, name: h?.name ?? '', activeIngredient: h?.activeIngredient ?? '', lbAiPerGal: h?.lbAiPerGal, restrictedUse: h?.restrictedUse ?? false, adjuvant: h?.type === 'adjuvant', rateLbAiPerAcre: m?.rateLbAiPerAcre, carrierGpa: m?.carrierGpa, plantBackDays: h?.type === 'herbicide' ? h.plantBackDays : undefined, epaRegNo: h?.epaRegNo ?? '', pricing };
     }
     case 'other': {
       const o = m?.type === 'item' ? m : undefined;

@@ -5,6 +5,9 @@ import type { z } from 'zod';
 import { TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
 import { formatCents } from '../../../../shared/domain/money';
 import { formatMonthDay } from '../../../../shared/domain/planting-windows';
+import { isHerbicideTask } from '../../../../shared/domain/spray-records';
+import { Link } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { Button } from '../../../components/ui/button';
 import { CautionBox, ErrorPanel, Loading } from '../../../components/ui/card';
 import { SelectField } from '../../../components/ui/select-field';
@@ -123,6 +126,11 @@ function Completion({ task }: { task: TaskDto }) {
         Done {task.doneOn ? formatMonthDay(task.doneOn) : ''}
         {task.completedByName ? ` by ${task.completedByName}` : ''}
       </h3>
+      {isHerbicideTask(task) && task.doneOn ? (
+        <Link to={`${paths.sprayRecords}?season=${task.doneOn.slice(0, 4)}&propertyId=${task.propertyId}&task=${task.id}`} className="font-semibold text-moss underline">
+          Spray record of this application
+        </Link>
+      ) : null}
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
         <dt className="text-slate">Hours</dt>
         <dd className="tabular-nums">{task.hours ?? '—'}</dd>

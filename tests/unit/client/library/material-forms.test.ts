@@ -60,3 +60,19 @@ describe('server error paths find their form field', () => {
     expect(matchField('somewhere.else', fields)).toBeNull();
   });
 });
+
+describe('the herbicide form’s EPA Reg. No.', () => {
+  const herbicide = { kind: 'herbicide', name: 'Burndown', activeIngredient: 'glyphosate 41%', restrictedUse: false, adjuvant: false, pricing: { basis: 'per-gal', pricePerGalCents: '25.00' } };
+  it('takes the label’s forms (company-product, and a distributor’s third number) and leaves an empty box out', async () => {
+    const { HerbicideFormSchema } = await import('../../../../src/features/library/lib/material-forms');
+    expect(HerbicideFormSchema.parse({ ...herbicide, epaRegNo: '524-475' }).epaRegNo).toBe('524-475');
+    expect(HerbicideFormSchema.parse({ ...herbicide, epaRegNo: '524-475-123' }).epaRegNo).toBe('524-475-123');
+    expect(HerbicideFormSchema.parse({ ...herbicide, epaRegNo: undefined }).epaRegNo).toBeUndefined();
+    const refused = HerbicideFormSchema.safeParse({ ...herbicide, epaRegNo: '524 475' });
+    expect(refused.error?.issues[0]).toMatchObject({ path: ['epaRegNo'], message: expect.stringMatching(/EPA Reg\. No\. \(epaRegNo\)/) });
+  });
+  it('starts from the material’s number when editing', () => {
+    const m = { id: 1, kind: 'herbicide', type: 'herbicide', key: 'h', name: 'Burndown', activeIngredient: 'glyphosate', restrictedUse: false, epaRegNo: '524-475', pricing: { basis: 'per-gal', pricePerGalCents: 2500 }, archived: false, updatedAt: '' } as unknown as MaterialDto;
+    expect(materialFormDefaults('herbicide', m)).toMatchObject({ epaRegNo: '524-475' });
+  });
+});

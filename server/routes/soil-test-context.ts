@@ -1,0 +1,17 @@
+/** What the browser needs to preview a soil test's recommendation with the shared function: the firm's method and each unit's crop. */
+import { defineRoutes, STAFF } from '../middlewares/access';
+import { validate } from '../middlewares/validate';
+import { IdParamsSchema } from '../../shared/schemas/common';
+import { actor, findInFirm } from '../policies/firm-scope';
+import { propertySoilTestContext } from '../queries/soil-test-context';
+import { Property } from '../models';
+
+const r = defineRoutes('/properties');
+
+r.get('/:id/soil-test-context', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+  const me = actor(req);
+  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
+  res.json({ data: await propertySoilTestContext(me.firmId, property.id) });
+});
+
+export const soilTestContextRouter = r.router;
