@@ -22,9 +22,9 @@ const r = defineRoutes('/invoices');
 const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
 
 /** An invoice the signed-in person may read: staff of its firm, or its own client once issued. */
-async function readable(req: Request): Promise<Invoice> {
+async function readable(req: Request, id: number): Promise<Invoice> {
   const me = actor(req);
-  const invoice = await findInFirm(Invoice, Number(req.params.id), me.firmId, 'That invoice');
+  const invoice = await findInFirm(Invoice, id, me.firmId, 'That invoice');
   if (me.role === 'client' && (invoice.clientId !== me.clientId || invoice.status === 'draft')) throw notFound('That invoice');
   return invoice;
 }
@@ -78,12 +78,12 @@ r.post('/', STAFF, ...typed({ body: InvoiceCreateSchema }, async ({ body }, req,
   res.status(created ? 201 : 200).json({ data: await readInvoice(invoice) });
 }));
 
-r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  res.json({ data: await readInvoice(await readable(req)) });
+r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readInvoice(await readable(req, params.id)) });
 }));
 
-r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const invoice = await readable(req);
+r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const invoice = await readable(req, params.id);
   const pdf = await renderInvoicePdfFor(invoice);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="${invoice.number}.pdf"`);

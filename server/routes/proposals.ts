@@ -23,9 +23,9 @@ const r = defineRoutes('/proposals');
 const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
 
 /** A proposal the signed-in person may read: staff of its firm, or its client once it is sent. */
-async function readable(req: Request): Promise<Proposal> {
+async function readable(req: Request, id: number): Promise<Proposal> {
   const me = actor(req);
-  const proposal = await findInFirm(Proposal, Number(req.params.id), me.firmId, 'That proposal');
+  const proposal = await findInFirm(Proposal, id, me.firmId, 'That proposal');
   if (me.role === 'client' && (proposal.clientId !== me.clientId || proposal.status === 'draft')) throw notFound('That proposal');
   return proposal;
 }
@@ -90,8 +90,8 @@ r.get('/', STAFF_AND_CLIENT, ...typed({ query: ProposalListQuerySchema }, async 
   res.json({ data, page: pageOf(query, total) });
 }));
 
-r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const proposal = await readable(req);
+r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const proposal = await readable(req, params.id);
   if (actor(req).role === 'client' && !proposal.firstViewedAt) await proposal.update({ firstViewedAt: new Date() });
   res.json({ data: await readProposal(proposal) });
 }));
@@ -102,8 +102,8 @@ r.get('/:id/versions', STAFF, ...typed({ params: IdParamsSchema }, async ({ para
   res.json({ data: await listRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }, todayInZone(actor(req).firmTimezone)) });
 }));
 
-r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const proposal = await readable(req);
+r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const proposal = await readable(req, params.id);
   const pdf = await renderProposalPdfFor(proposal);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="${proposal.number}-v${proposal.version}.pdf"`);

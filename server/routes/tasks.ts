@@ -2,7 +2,6 @@
 import type { Request } from 'express';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
 import { typed } from '../middlewares/typed-route';
 import { arrayUpload } from '../middlewares/upload';
 import { Property, Task, TaskPhoto } from '../models';
@@ -55,26 +54,20 @@ function idempotencyKey(req: Request): string {
   return parsed.data;
 }
 
-r.post(
-  '/:id/complete',
-  WORKERS,
-  validate({ params: IdParamsSchema }),
-  async (req, _res, next) => {
-    // Refuse before reading any file: wrong key, someone else's task or a finished task stores nothing.
+r.post('/:id/complete', WORKERS, ...typed({ params: IdParamsSchema, body: TaskCompleteWithSpraySchema }, async ({ params, body }, req, res) => {
+  const files = (req.files as Express.Multer.File[] | undefined) ?? [];
+  const photos = [];
+  for (const file of files) photos.push(await inspectPhoto(file.buffer, file.originalname || null));
+  const { task, replayed } = await completeTask(actor(req), params.id, body, photos, idempotencyKey(req), req.ip ?? null);
+  res.status(replayed ? 200 : 201).json({ data: await readTask(actor(req), task), replayed });
+}, {
+  // Refuse before reading any file: wrong key, someone else's task or a finished task stores nothing.
+  before: async (params, req) => {
     idempotencyKey(req);
-    await taskForActor(actor(req), Number(req.params.id));
-    next();
+    await taskForActor(actor(req), params.id);
   },
-  arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perCompletion, 'photo'),
-  validate({ body: TaskCompleteWithSpraySchema }),
-  async (req, res) => {
-    const files = (req.files as Express.Multer.File[] | undefined) ?? [];
-    const photos = [];
-    for (const file of files) photos.push(await inspectPhoto(file.buffer, file.originalname || null));
-    const { task, replayed } = await completeTask(actor(req), Number(req.params.id), req.body, photos, idempotencyKey(req), req.ip ?? null);
-    res.status(replayed ? 200 : 201).json({ data: await readTask(actor(req), task), replayed });
-  },
-);
+  upload: arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perCompletion, 'photo'),
+}));
 
 r.post('/:id/skip', WORKERS, ...typed({ params: IdParamsSchema, body: TaskSkipSchema }, async ({ params, body }, req, res) => {
   const task = await skipTask(actor(req), params.id, body.reason, req.ip ?? null);
