@@ -137,3 +137,13 @@ export async function updatePrescription(actor: SessionUser, prescriptionId: num
     return row;
   });
 }
+
+/** Deletes a prescription of the actor's firm (404 for any other), with its audit record, in one transaction. */
+export async function deletePrescription(actor: SessionUser, prescriptionId: number, ip: string | null): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    const row = await Prescription.findOne({ where: { id: prescriptionId, firmId: actor.firmId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!row) throw notFound('That prescription');
+    await row.destroy({ transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'prescription.deleted', subjectType: 'Unit', subjectId: row.unitId, ip }, transaction);
+  });
+}

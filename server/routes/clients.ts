@@ -9,7 +9,7 @@ import { ClientCreateSchema, ClientListQuerySchema, ClientUpdateSchema } from '.
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { presentClient } from '../presenters/client';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { recordAudit } from '../commands/audit-recorder';
+import { createClient, updateClient } from '../commands/client-writer';
 
 const r = defineRoutes('/clients');
 
@@ -34,11 +34,7 @@ r.get('/', STAFF, ...typed({ query: ClientListQuerySchema }, async ({ query }, r
 
 r.post('/', STAFF, ...typed({ body: ClientCreateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
-  const client = await sequelize.transaction(async (transaction) => {
-    const created = await Client.create({ firmId: me.firmId, name: body.name, email: body.email ?? null, phone: body.phone ?? null, address: body.address ?? null, notes: body.notes ?? null }, { transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'client.created', subjectType: 'Client', subjectId: created.id, ip: req.ip ?? null }, transaction);
-    return created;
-  });
+  const client = await createClient(me, body, req.ip ?? null);
   res.status(201).json({ data: presentClient(client, NONE) });
 }));
 
@@ -51,8 +47,7 @@ r.get('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req
 
 r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: ClientUpdateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const client = await findInFirm(Client, params.id, me.firmId, 'That client');
-  await client.update(body);
+  const client = await updateClient(me, params.id, body, req.ip ?? null);
   const stats = await clientStats(me.firmId, [client.id]);
   res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
 }));

@@ -9,7 +9,7 @@ import { Client, Property, Proposal } from '../models';
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { ApproveSchema, DeclineSchema, ProposalCreateSchema, ProposalListQuerySchema, ProposalUpdateSchema } from '../../shared/schemas/proposal';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { draftProposal, reviseProposal, sendProposal, updateProposal, withdrawProposal } from '../commands/proposal-writer';
+import { draftProposal, noteProposalViewed, reviseProposal, sendProposal, updateProposal, withdrawProposal } from '../commands/proposal-writer';
 import { approveProposal, declineProposal } from '../commands/proposal-approver';
 import { readProposal } from '../services/proposals/proposal-reader';
 import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
@@ -92,7 +92,8 @@ r.get('/', STAFF_AND_CLIENT, ...typed({ query: ProposalListQuerySchema }, async 
 
 r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const proposal = await readable(req, params.id);
-  if (actor(req).role === 'client' && !proposal.firstViewedAt) await proposal.update({ firstViewedAt: new Date() });
+  const me = actor(req);
+  if (me.role === 'client') await noteProposalViewed(me, proposal, req.ip ?? null);
   res.json({ data: await readProposal(proposal) });
 }));
 

@@ -11,6 +11,7 @@ import { PHOTO_LIMITS } from '../../shared/limits';
 import { TaskCompleteWithSpraySchema } from '../../shared/schemas/spray-records';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { assignTasks, completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
+import { setUnitDoneNotice } from '../commands/property-writer';
 import { listTasks, readTask } from '../services/tasks/task-reader';
 import { inspectPhoto } from '../services/tasks/photo-intake';
 import { propertyProgress } from '../services/tasks/progress';
@@ -105,8 +106,7 @@ perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], ...typed({ p
 
 const NotifySchema = z.object({ notifyClientOnUnitDone: z.boolean() }).strict();
 perProperty.patch('/:id/progress-settings', STAFF, ...typed({ params: IdParamsSchema, body: NotifySchema }, async ({ params, body }, req, res) => {
-  const property = await findInFirm(Property, params.id, actor(req).firmId, 'That property');
-  await property.update({ notifyClientOnUnitDone: body.notifyClientOnUnitDone });
+  const property = await setUnitDoneNotice(actor(req), params.id, body.notifyClientOnUnitDone, req.ip ?? null);
   res.json({ data: { notifyClientOnUnitDone: property.notifyClientOnUnitDone } });
 }));
 
