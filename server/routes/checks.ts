@@ -1,12 +1,10 @@
 /** Checks on a unit: establishment checks, browse checks and timber cruises; the re-seeding a check drafts; plot statuses; the unit's history. */
-import type { Request } from 'express';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
+import { optionalIdempotencyKey } from '../middlewares/idempotency-key';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { ReseedDecisionSchema, UnitCheckCreateSchema } from '../../shared/schemas/checks';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { unprocessable } from '../errors';
 import { checkableUnit, createCheck, decideReseed } from '../commands/check-writer';
 import { listUnitChecks, plotStatuses } from '../queries/checks';
 import { presentCheck } from '../presenters/unit-check';
@@ -19,14 +17,6 @@ const checks = defineRoutes('/checks');
 const properties = defineRoutes('/properties');
 const CHECKERS = ['owner', 'consultant', 'crew'] as const;
 
-/** The optional Idempotency-Key of a check sent from the field sheet's queue. */
-function optionalKey(req: Request): string | null {
-  const raw = req.get(IDEMPOTENCY_HEADER);
-  if (!raw) return null;
-  const parsed = IdempotencyKeySchema.safeParse(raw);
-  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
-  return parsed.data;
-}
 
 units.get('/:id/checks', CHECKERS, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const unit = await checkableUnit(actor(req), params.id);
@@ -34,7 +24,7 @@ units.get('/:id/checks', CHECKERS, ...typed({ params: IdParamsSchema }, async ({
 }));
 
 units.post('/:id/checks', CHECKERS, ...typed({ params: IdParamsSchema, body: UnitCheckCreateSchema }, async ({ params, body }, req, res) => {
-  const { check, replayed } = await createCheck(actor(req), params.id, body, optionalKey(req), req.ip ?? null);
+  const { check, replayed } = await createCheck(actor(req), params.id, body, optionalIdempotencyKey(req), req.ip ?? null);
   const unit = await Unit.findByPk(check.unitId, { attributes: ['name'] });
   res.status(replayed ? 200 : 201).json({ data: presentCheck(check, unit?.name ?? ''), replayed });
 }));

@@ -5,11 +5,11 @@
 import type { NextFunction, Request, Response } from 'express';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
+import { idempotencyKey } from '../middlewares/idempotency-key';
 import { singleUpload } from '../middlewares/upload';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { badRequest, unprocessable } from '../errors';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
 import {
   HUNTING_LIMITS,
   HuntingSettingsUpdateSchema,
@@ -95,13 +95,6 @@ r.post('/properties/:id/wind-record', STAFF, staffProperty, multipartOnly, async
   res.status(201).json({ data: presentWindRecord(record) });
 });
 
-function idempotencyKey(req: Request): string {
-  const raw = req.get(IDEMPOTENCY_HEADER);
-  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per sit, reused when the same sit is sent again.`);
-  const parsed = IdempotencyKeySchema.safeParse(raw);
-  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
-  return parsed.data;
-}
 
 /** A client is refused before the body is looked at when sit logging is not on for them. */
 async function mayLogSits(req: Request, _res: Response, next: NextFunction) {
@@ -116,7 +109,7 @@ r.get('/properties/:id/sits', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchem
 
 r.post('/properties/:id/sits', STAFF_AND_CLIENT, mayLogSits, ...typed({ params: IdParamsSchema, body: SitCreateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const key = idempotencyKey(req);
+  const key = idempotencyKey(req, 'sit');
   const { sit, replayed } = await createSit(me, params.id, body, key, req.ip ?? null);
   const layout = await readHuntingLayout(me, sit.propertyId);
   res.status(replayed ? 200 : 201).json({ data: presentSit(sit, standWindsOf(layout)), replayed });

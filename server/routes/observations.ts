@@ -2,10 +2,10 @@
 import type { Request } from 'express';
 import { defineRoutes } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
+import { idempotencyKey } from '../middlewares/idempotency-key';
 import { arrayUpload } from '../middlewares/upload';
 import { Firm, Observation, ObservationPhoto, Property } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
 import { ObservationCreateSchema, ObservationListQuerySchema, ObservationSummaryQuerySchema } from '../../shared/schemas/observation';
 import { PHOTO_LIMITS } from '../../shared/limits';
 import { actor, findInFirm } from '../policies/firm-scope';
@@ -15,7 +15,7 @@ import { presentObservation, presentObservationSummary } from '../presenters/obs
 import { inspectPhoto } from '../services/photos';
 import { usableZone } from '../services/clock';
 import { sendStoredFile } from '../services/storage/storage';
-import { badRequest, notFound, unprocessable } from '../errors';
+import { notFound } from '../errors';
 
 const perProperty = defineRoutes('/properties');
 const photos = defineRoutes('/observation-photos');
@@ -23,13 +23,6 @@ const photos = defineRoutes('/observation-photos');
 const LOGGERS = ['owner', 'consultant', 'crew', 'client'] as const;
 const READERS = ['owner', 'consultant', 'crew', 'client'] as const;
 
-function idempotencyKey(req: Request): string {
-  const raw = req.get(IDEMPOTENCY_HEADER);
-  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per observation, reused when the same observation is sent again.`);
-  const parsed = IdempotencyKeySchema.safeParse(raw);
-  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
-  return parsed.data;
-}
 
 async function zoneOf(firmId: number): Promise<string> {
   const firm = await Firm.findByPk(firmId, { attributes: ['timezone'] });
@@ -47,12 +40,12 @@ perProperty.post('/:id/observations', LOGGERS, ...typed({ params: IdParamsSchema
   const files = (req.files as Express.Multer.File[] | undefined) ?? [];
   const inspected = [];
   for (const file of files) inspected.push(await inspectPhoto({ bytes: file.buffer, originalName: file.originalname || null }));
-  const { id, replayed } = await logObservation(me, params.id, body, inspected, idempotencyKey(req), req.ip ?? null);
+  const { id, replayed } = await logObservation(me, params.id, body, inspected, idempotencyKey(req, 'observation'), req.ip ?? null);
   res.status(replayed ? 200 : 201).json({ data: await answer(params.id, id, await zoneOf(me.firmId)), replayed });
 }, {
   // Refuse before reading any file: no key, someone else's property, or logging not allowed stores nothing.
   before: async (params, req) => {
-    idempotencyKey(req);
+    idempotencyKey(req, 'observation');
     await propertyToLogOn(actor(req), params.id);
   },
   upload: arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perObservation, 'photo'),
