@@ -60,6 +60,12 @@ export async function computePrescriptionRecord(input: ComputeInput) {
   return { result, schedule, cautions, summary, year, totalCents: result.totalCents };
 }
 
+/** The stored columns of a computed prescription: its year, quantities and costs, schedule, cautions and summary. */
+export function computedColumns(computed: Awaited<ReturnType<typeof computePrescriptionRecord>>) {
+  const { year, result, schedule, cautions, summary, totalCents } = computed;
+  return { year, result, schedule, cautions, summary, totalCents };
+}
+
 async function findUnit(unitId: number, firmId: number): Promise<Unit> {
   const unit = await Unit.findOne({ where: { id: unitId, firmId } });
   if (!unit) throw notFound('That unit');
@@ -84,16 +90,11 @@ export async function createPrescription(actor: SessionUser, unitId: number, inp
         propertyId: unit.propertyId,
         unitId: unit.id,
         practiceId: practice.id,
-        year: computed.year,
         targetDate: input.targetDate ?? null,
         count: input.count ?? null,
         notes: input.notes ?? null,
         parameters: input.parameters ?? {},
-        result: computed.result,
-        schedule: computed.schedule,
-        cautions: computed.cautions,
-        summary: computed.summary,
-        totalCents: computed.totalCents,
+        ...computedColumns(computed),
         createdById: actor.id,
       },
       { transaction },
@@ -120,16 +121,11 @@ export async function updatePrescription(actor: SessionUser, prescriptionId: num
   return sequelize.transaction(async (transaction) => {
     await row.update(
       {
-        year: computed.year,
         targetDate: next.targetDate ?? null,
         count: next.count ?? null,
         notes: input.notes !== undefined ? (input.notes ?? null) : row.notes,
         parameters: next.parameters,
-        result: computed.result,
-        schedule: computed.schedule,
-        cautions: computed.cautions,
-        summary: computed.summary,
-        totalCents: computed.totalCents,
+        ...computedColumns(computed),
       },
       { transaction },
     );
