@@ -1,10 +1,10 @@
 /** Clients of the firm. */
-import { Op, QueryTypes, type WhereOptions } from 'sequelize';
+import { Op, type WhereOptions } from 'sequelize';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
 import { Client, User } from '../models';
 import { presentTeamMember } from '../presenters/user';
-import { sequelize } from '../db/sequelize';
+import { clientStats } from '../queries/clients';
 import { ClientCreateSchema, ClientListQuerySchema, ClientUpdateSchema } from '../../shared/schemas/client';
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { presentClient } from '../presenters/client';
@@ -13,14 +13,6 @@ import { createClient, updateClient } from '../commands/client-writer';
 
 const r = defineRoutes('/clients');
 
-/** Property count and acres per client of a firm, in one query. */
-async function clientStats(firmId: number, clientIds?: number[]): Promise<Map<number, { propertyCount: number; totalAcres: number }>> {
-  const rows = await sequelize.query<{ client_id: number; n: string; acres: string | null }>(
-    `SELECT client_id, count(*) AS n, sum(acres) AS acres FROM properties WHERE firm_id = :firmId ${clientIds ? 'AND client_id IN (:clientIds)' : ''} GROUP BY client_id`,
-    { replacements: { firmId, clientIds: clientIds?.length ? clientIds : [0] }, type: QueryTypes.SELECT },
-  );
-  return new Map(rows.map((row) => [row.client_id, { propertyCount: Number(row.n), totalAcres: Number(row.acres ?? 0) }]));
-}
 const NONE = { propertyCount: 0, totalAcres: 0 };
 
 r.get('/', STAFF, ...typed({ query: ClientListQuerySchema }, async ({ query }, req, res) => {
