@@ -10,7 +10,7 @@ import { UnitCheck } from '../models/unit-check';
 import { findInFirm } from '../policies/firm-scope';
 import { conflict, notFound, unprocessable } from '../errors';
 import { recordAudit } from './audit-recorder';
-import { computePrescriptionRecord } from './prescription-writer';
+import { computedColumns, computePrescriptionRecord } from './prescription-writer';
 import { firmToday } from '../services/clock';
 import { browseResult, establishmentResult, plotStatus, reseedRateFactor, scaledSeedRates, timberResult, type PlotCheckStatus } from '../../shared/domain/plot-checks';
 import type { PracticeDefinition, PrescriptionParameters } from '../../shared/domain/practice';
@@ -144,16 +144,11 @@ export async function decideReseed(actor: SessionUser, checkId: number, decision
           propertyId: unit.propertyId,
           unitId: unit.id,
           practiceId: practice.id,
-          year: computed.year,
           targetDate: null,
           count: null,
           notes: draft.reason,
           parameters,
-          result: computed.result,
-          schedule: computed.schedule,
-          cautions: computed.cautions,
-          summary: computed.summary,
-          totalCents: computed.totalCents,
+          ...computedColumns(computed),
           createdById: actor.id,
         },
         { transaction },

@@ -3,7 +3,8 @@ import crypto from 'node:crypto';
 import { Op, UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { AuthToken, Firm, User } from '../models';
-import { hashPassword, hashToken, newToken } from '../services/auth/passwords';
+import { hashPassword, hashToken } from '../services/auth/passwords';
+import { issueAuthToken } from './auth-token-issuer';
 import { assertStrongPassword } from '../services/auth/password-strength';
 import { enqueueEmail } from '../services/mail/outbox';
 import { signupExistingEmail, signupVerifyEmail } from '../../templates/email/signup';
@@ -51,8 +52,7 @@ export async function signUpFirm(input: SignupInput, ip: string | null): Promise
         { firmId: firm.id, clientId: null, role: 'owner', email: input.email, name: input.name, phone: null, passwordHash, active: true, emailVerified: false, lastSignInAt: null },
         { transaction },
       );
-      const { token, tokenHash } = newToken();
-      await AuthToken.create({ userId: user.id, purpose: 'verify', tokenHash, expiresAt: new Date(Date.now() + LIMITS.verifyTtlHours * 3_600_000), usedAt: null, createdById: null }, { transaction });
+      const token = await issueAuthToken(user.id, 'verify', LIMITS.verifyTtlHours * 3_600_000, null, transaction);
       await enqueueEmail(
         { firmId: firm.id, kind: 'signup-verify', to: user.email, email: signupVerifyEmail({ firmName: firm.name, name: user.name, url: `${config.publicUrl}/verify-email/${token}`, ttlHours: LIMITS.verifyTtlHours }) },
         transaction,

@@ -2,7 +2,7 @@
 import { Op } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { AuthToken, Client, Firm, User } from '../models';
-import { newToken } from '../services/auth/passwords';
+import { issueAuthToken } from './auth-token-issuer';
 import { enqueueEmail } from '../services/mail/outbox';
 import { invitationEmail } from '../../templates/email/invitation';
 import { config } from '../config';
@@ -42,11 +42,7 @@ export async function sendInvitation(actor: SessionUser, input: InviteCreateInpu
         { transaction },
       );
     }
-    const { token, tokenHash } = newToken();
-    await AuthToken.create(
-      { userId: user.id, purpose: 'invite', tokenHash, expiresAt: new Date(Date.now() + LIMITS.inviteTtlHours * 3600_000), usedAt: null, createdById: actor.id },
-      { transaction },
-    );
+    const token = await issueAuthToken(user.id, 'invite', LIMITS.inviteTtlHours * 3600_000, actor.id, transaction);
     const firm = await Firm.findByPk(actor.firmId, { transaction });
     await enqueueEmail(
       {

@@ -2,7 +2,8 @@
 import { Op } from 'sequelize';
 import { sequelize } from '../db/sequelize';
 import { AuthToken, Firm, User } from '../models';
-import { hashPassword, hashToken, newToken, verifyPassword } from '../services/auth/passwords';
+import { hashPassword, hashToken, verifyPassword } from '../services/auth/passwords';
+import { issueAuthToken } from './auth-token-issuer';
 import { assertStrongPassword } from '../services/auth/password-strength';
 import { endSessionsOf } from '../services/auth/session-control';
 import { unauthorized, unprocessable } from '../errors';
@@ -21,11 +22,7 @@ export async function requestPasswordReset(email: string): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     const user = await User.findOne({ where: { email: { [Op.iLike]: email }, active: true }, transaction });
     if (!user || !user.passwordHash) return;
-    const { token, tokenHash } = newToken();
-    await AuthToken.create(
-      { userId: user.id, purpose: 'reset', tokenHash, expiresAt: new Date(Date.now() + LIMITS.resetTtlMinutes * 60_000), usedAt: null, createdById: null },
-      { transaction },
-    );
+    const token = await issueAuthToken(user.id, 'reset', LIMITS.resetTtlMinutes * 60_000, null, transaction);
     const firm = await Firm.findByPk(user.firmId, { transaction });
     await enqueueEmail(
       {

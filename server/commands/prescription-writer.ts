@@ -60,6 +60,12 @@ export async function computePrescriptionRecord(input: ComputeInput) {
   return { result, schedule, cautions, summary, year, totalCents: result.totalCents };
 }
 
+/** The stored columns of a computed prescription: its year, quantities and costs, schedule, cautions and summary. */
+export function computedColumns(computed: Awaited<ReturnType<typeof computePrescriptionRecord>>) {
+  const { year, result, schedule, cautions, summary, totalCents } = computed;
+  return { year, result, schedule, cautions, summary, totalCents };
+}
+
 async function findUnit(unitId: number, firmId: number): Promise<Unit> {
   const unit = await Unit.findOne({ where: { id: unitId, firmId } });
   if (!unit) throw notFound('That unit');
@@ -84,16 +90,11 @@ export async function createPrescription(actor: SessionUser, unitId: number, inp
         propertyId: unit.propertyId,
         unitId: unit.id,
         practiceId: practice.id,
-        year: computed.year,
         targetDate: input.targetDate ?? null,
         count: input.count ?? null,
         notes: input.notes ?? null,
         parameters: input.parameters ?? {},
-        result: computed.result,
-        schedule: computed.schedule,
-        cautions: computed.cautions,
-        summary: computed.summary,
-        totalCents: computed.totalCents,
+        ...computedColumns(computed),
         createdById: actor.id,
       },
       { transaction },
@@ -120,20 +121,25 @@ export async function updatePrescription(actor: SessionUser, prescriptionId: num
   return sequelize.transaction(async (transaction) => {
     await row.update(
       {
-        year: computed.year,
         targetDate: next.targetDate ?? null,
         count: next.count ?? null,
         notes: input.notes !== undefined ? (input.notes ?? null) : row.notes,
         parameters: next.parameters,
-        result: computed.result,
-        schedule: computed.schedule,
-        cautions: computed.cautions,
-        summary: computed.summary,
-        totalCents: computed.totalCents,
+        ...computedColumns(computed),
       },
       { transaction },
     );
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'prescription.revised', subjectType: 'Prescription', subjectId: row.id, ip }, transaction);
     return row;
+  });
+}
+
+/** Deletes a prescription of the actor's firm (404 for any other), with its audit record, in one transaction. */
+export async function deletePrescription(actor: SessionUser, prescriptionId: number, ip: string | null): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    const row = await Prescription.findOne({ where: { id: prescriptionId, firmId: actor.firmId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!row) throw notFound('That prescription');
+    await row.destroy({ transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'prescription.deleted', subjectType: 'Unit', subjectId: row.unitId, ip }, transaction);
   });
 }

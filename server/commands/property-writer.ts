@@ -94,3 +94,13 @@ export async function deleteProperty(actor: SessionUser, propertyId: number, ip:
     await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'property.deleted', subjectType: 'Property', subjectId: property.id, data: { name: property.name }, ip }, transaction);
   });
 }
+
+/** Turns the client's e-mail on or off for each unit whose work is finished, with its audit record. */
+export async function setUnitDoneNotice(actor: SessionUser, propertyId: number, notifyClientOnUnitDone: boolean, ip: string | null): Promise<Property> {
+  return sequelize.transaction(async (transaction) => {
+    const property = await findInFirm(Property, propertyId, actor.firmId, 'That property', { transaction, lock: true });
+    await property.update({ notifyClientOnUnitDone }, { transaction });
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'property.progress-notice-changed', subjectType: 'Property', subjectId: property.id, data: { notifyClientOnUnitDone }, ip }, transaction);
+    return property;
+  });
+}

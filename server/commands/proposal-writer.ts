@@ -234,3 +234,18 @@ export async function withdrawProposal(actor: SessionUser, id: number, ip: strin
     return proposal;
   });
 }
+
+/**
+ * Notes when the client first opened a sent proposal (shown on the Desk), with its audit record;
+ * later views change nothing. A conditional update, so two first views at once store one time.
+ */
+export async function noteProposalViewed(actor: SessionUser, proposal: Proposal, ip: string | null): Promise<void> {
+  if (proposal.firstViewedAt) return;
+  await sequelize.transaction(async (transaction) => {
+    const viewedAt = new Date();
+    const [changed] = await Proposal.update({ firstViewedAt: viewedAt }, { where: { id: proposal.id, firmId: actor.firmId, firstViewedAt: null }, transaction });
+    if (changed === 0) return;
+    await recordAudit({ firmId: actor.firmId, userId: actor.id, action: 'proposal.first-viewed', subjectType: 'Proposal', subjectId: proposal.id, ip }, transaction);
+    proposal.setDataValue('firstViewedAt', viewedAt);
+  });
+}

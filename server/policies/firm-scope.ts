@@ -25,3 +25,18 @@ export async function findInFirm<M extends Model>(
   if (!row) throw notFound(label);
   return row;
 }
+
+/**
+ * A firm's document (proposal, invoice) the actor may read: staff of its firm, or its own client
+ * once it has left draft. Anyone else gets the same 404 as for a record that does not exist.
+ */
+export async function findIssuedInFirm<M extends Model & { clientId: number; status: string }>(
+  model: ModelStatic<M>,
+  id: number,
+  me: { firmId: number; role: string; clientId?: number | null },
+  label: string,
+): Promise<M> {
+  const row = await findInFirm(model, id, me.firmId, label);
+  if (me.role === 'client' && (row.clientId !== me.clientId || row.status === 'draft')) throw notFound(label);
+  return row;
+}

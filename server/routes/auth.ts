@@ -4,6 +4,7 @@ import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { z } from 'zod';
 import { defineRoutes } from '../middlewares/access';
 import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { csrfToken } from '../middlewares/csrf';
 import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
 import { passport } from '../services/auth/passport';
@@ -108,40 +109,40 @@ r.get('/me', 'signed-in', (req, res) => {
 
 const TokenParams = z.object({ token: z.string().min(20).max(200) });
 
-r.get('/invitations/:token', 'public', validate({ params: TokenParams }), async (req, res) => {
-  const { user } = await findLiveToken(String(req.params.token), 'invite');
+r.get('/invitations/:token', 'public', ...typed({ params: TokenParams }, async ({ params }, _req, res) => {
+  const { user } = await findLiveToken(params.token, 'invite');
   const firm = await Firm.findByPk(user.firmId);
   res.json({ data: { name: user.name, email: user.email, role: user.role, firmName: firm?.name ?? '' } });
-});
+}));
 
-r.post('/invitations/accept', 'public', invitationAcceptLimiter, validate({ body: TokenPasswordSchema }), async (req, res, next) => {
-  const user = await setPasswordFromToken(req.body.token, 'invite', req.body.password, req.ip ?? null);
+r.post('/invitations/accept', 'public', invitationAcceptLimiter, ...typed({ body: TokenPasswordSchema }, async ({ body }, req, res, next) => {
+  const user = await setPasswordFromToken(body.token, 'invite', body.password, req.ip ?? null);
   signIn(req, res, next, await toSessionUser(user), 201);
-});
+}));
 
-r.post('/password-reset', 'public', resetRequestLimiter, validate({ body: PasswordResetRequestSchema }), async (req, res) => {
-  await requestPasswordReset(req.body.email);
+r.post('/password-reset', 'public', resetRequestLimiter, ...typed({ body: PasswordResetRequestSchema }, async ({ body }, _req, res) => {
+  await requestPasswordReset(body.email);
   res.status(202).json({ data: { message: 'If that address belongs to an account, a reset link is on its way. It expires in an hour.' } });
-});
+}));
 
-r.get('/password-reset/:token', 'public', validate({ params: TokenParams }), async (req, res) => {
-  const { user } = await findLiveToken(String(req.params.token), 'reset');
+r.get('/password-reset/:token', 'public', ...typed({ params: TokenParams }, async ({ params }, _req, res) => {
+  const { user } = await findLiveToken(params.token, 'reset');
   res.json({ data: { email: user.email } });
-});
+}));
 
-r.post('/password-reset/complete', 'public', resetCompleteLimiter, validate({ body: TokenPasswordSchema }), async (req, res) => {
-  await setPasswordFromToken(req.body.token, 'reset', req.body.password, req.ip ?? null);
+r.post('/password-reset/complete', 'public', resetCompleteLimiter, ...typed({ body: TokenPasswordSchema }, async ({ body }, req, res) => {
+  await setPasswordFromToken(body.token, 'reset', body.password, req.ip ?? null);
   res.json({ data: { message: 'Your password is changed. Sign in with the new one.' } });
-});
+}));
 
-r.post('/verify-email', 'public', verifyEmailLimiter, validate({ body: VerifyEmailSchema }), async (req, res) => {
-  const { email } = await verifySignupEmail(req.body.token, req.ip ?? null);
+r.post('/verify-email', 'public', verifyEmailLimiter, ...typed({ body: VerifyEmailSchema }, async ({ body }, req, res) => {
+  const { email } = await verifySignupEmail(body.token, req.ip ?? null);
   res.json({ data: { email, message: 'Your e-mail is confirmed. Sign in with the password you chose.' } });
-});
+}));
 
-r.post('/password', 'signed-in', passwordChangeLimiter, validate({ body: PasswordChangeSchema }), async (req, res) => {
-  const { sessionsEnded } = await changePassword(req.user!.id, req.sessionID, req.body, req.ip ?? null);
+r.post('/password', 'signed-in', passwordChangeLimiter, ...typed({ body: PasswordChangeSchema }, async ({ body }, req, res) => {
+  const { sessionsEnded } = await changePassword(req.user!.id, req.sessionID, body, req.ip ?? null);
   res.json({ data: { message: sessionsEnded > 0 ? `Your password is changed. You were signed out on ${sessionsEnded === 1 ? 'one other device' : `${sessionsEnded} other devices`}.` : 'Your password is changed.', sessionsEnded } });
-});
+}));
 
 export const authRouter = r.router;

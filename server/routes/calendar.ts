@@ -4,7 +4,8 @@ import { typed } from '../middlewares/typed-route';
 import { CalendarFeed } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { actor } from '../policies/firm-scope';
-import { calendarForToken, createFeed } from '../services/tasks/calendar-feed';
+import { calendarForToken } from '../services/tasks/calendar-feed';
+import { createCalendarFeed, revokeCalendarFeed } from '../commands/calendar-feed-writer';
 import type { CalendarFeedDto } from '../../shared/schemas/task';
 import { notFound } from '../errors';
 
@@ -22,15 +23,12 @@ feeds.get('/', WORKERS, async (req, res) => {
 
 feeds.post('/', WORKERS, async (req, res) => {
   const me = actor(req);
-  const { feed, url } = await createFeed(me.id, me.firmId);
+  const { feed, url } = await createCalendarFeed(me, req.ip ?? null);
   res.status(201).json({ data: dto(feed, url) });
 });
 
 feeds.delete('/:id', WORKERS, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
-  const me = actor(req);
-  const feed = await CalendarFeed.findOne({ where: { id: params.id, userId: me.id, firmId: me.firmId, revokedAt: null } });
-  if (!feed) throw notFound('That calendar feed');
-  await feed.update({ revokedAt: new Date() });
+  await revokeCalendarFeed(actor(req), params.id, req.ip ?? null);
   res.status(204).end();
 }));
 

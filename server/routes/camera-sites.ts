@@ -1,6 +1,6 @@
 /** A property's camera sites with their numbers summed over every deployment (staff). */
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { Property } from '../models';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { todayInZone } from '../services/clock';
@@ -9,10 +9,10 @@ import { IdParamsSchema } from '../../shared/schemas/common';
 
 const r = defineRoutes('/properties');
 
-r.get('/:id/camera-sites', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/:id/camera-sites', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const property = await findInFirm(Property, Number(req.params.id), me.firmId, 'That property');
+  const property = await findInFirm(Property, params.id, me.firmId, 'That property');
   res.json(await cameraSiteSummaries(me.firmId, property.id, todayInZone(me.firmTimezone)));
-});
+}));
 
 export const propertyCameraSitesRouter = r.router;

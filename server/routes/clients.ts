@@ -1,26 +1,18 @@
 /** Clients of the firm. */
-import { Op, QueryTypes, type WhereOptions } from 'sequelize';
+import { Op, type WhereOptions } from 'sequelize';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
 import { Client, User } from '../models';
 import { presentTeamMember } from '../presenters/user';
-import { sequelize } from '../db/sequelize';
+import { clientStats } from '../queries/clients';
 import { ClientCreateSchema, ClientListQuerySchema, ClientUpdateSchema } from '../../shared/schemas/client';
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { presentClient } from '../presenters/client';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { recordAudit } from '../commands/audit-recorder';
+import { createClient, updateClient } from '../commands/client-writer';
 
 const r = defineRoutes('/clients');
 
-/** Property count and acres per client of a firm, in one query. */
-async function clientStats(firmId: number, clientIds?: number[]): Promise<Map<number, { propertyCount: number; totalAcres: number }>> {
-  const rows = await sequelize.query<{ client_id: number; n: string; acres: string | null }>(
-    `SELECT client_id, count(*) AS n, sum(acres) AS acres FROM properties WHERE firm_id = :firmId ${clientIds ? 'AND client_id IN (:clientIds)' : ''} GROUP BY client_id`,
-    { replacements: { firmId, clientIds: clientIds?.length ? clientIds : [0] }, type: QueryTypes.SELECT },
-  );
-  return new Map(rows.map((row) => [row.client_id, { propertyCount: Number(row.n), totalAcres: Number(row.acres ?? 0) }]));
-}
 const NONE = { propertyCount: 0, totalAcres: 0 };
 
 r.get('/', STAFF, ...typed({ query: ClientListQuerySchema }, async ({ query }, req, res) => {
@@ -34,11 +26,7 @@ r.get('/', STAFF, ...typed({ query: ClientListQuerySchema }, async ({ query }, r
 
 r.post('/', STAFF, ...typed({ body: ClientCreateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
-  const client = await sequelize.transaction(async (transaction) => {
-    const created = await Client.create({ firmId: me.firmId, name: body.name, email: body.email ?? null, phone: body.phone ?? null, address: body.address ?? null, notes: body.notes ?? null }, { transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'client.created', subjectType: 'Client', subjectId: created.id, ip: req.ip ?? null }, transaction);
-    return created;
-  });
+  const client = await createClient(me, body, req.ip ?? null);
   res.status(201).json({ data: presentClient(client, NONE) });
 }));
 
@@ -51,8 +39,7 @@ r.get('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req
 
 r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: ClientUpdateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const client = await findInFirm(Client, params.id, me.firmId, 'That client');
-  await client.update(body);
+  const client = await updateClient(me, params.id, body, req.ip ?? null);
   const stats = await clientStats(me.firmId, [client.id]);
   res.json({ data: presentClient(client, stats.get(client.id) ?? NONE) });
 }));

@@ -5,7 +5,7 @@
  */
 import type { NextFunction, Request, Response } from 'express';
 import { defineRoutes, OWNER } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { config } from '../config';
 import { AppError, notFound, serviceUnavailable } from '../errors';
@@ -46,11 +46,11 @@ r.get('/', OWNER, readerOn, async (req, res) => {
   res.json({ data: data.filter((m) => typeof m.outboxId === 'number' && ours.has(m.outboxId)) });
 });
 
-r.get('/:id', OWNER, readerOn, validate({ params: IdParamsSchema }), async (req, res) => {
-  const message = await fromCapture<{ data: CapturedSummary }>(`/messages/${Number(req.params.id)}`);
+r.get('/:id', OWNER, readerOn, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const message = await fromCapture<{ data: CapturedSummary }>(`/messages/${params.id}`);
   const outboxId = message.data.outboxId;
   if (typeof outboxId !== 'number' || !(await firmOutboxIds(actor(req).firmId, [outboxId])).has(outboxId)) throw notFound('That message');
   res.json(message);
-});
+}));
 
 export const devMailRouter = r.router;

@@ -1,6 +1,6 @@
 /** Take your data with you: the owner's whole-firm zip, built in the background and downloaded here. */
 import { defineRoutes, OWNER } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { actor } from '../policies/firm-scope';
 import { BackgroundJob, Firm } from '../models';
 import { FirmExport } from '../models/firm-export';
@@ -35,15 +35,15 @@ r.get('/', OWNER, async (req, res) => {
   res.json({ data: await present(records) });
 });
 
-r.get('/:id', OWNER, validate({ params: FirmExportIdParamsSchema }), async (req, res) => {
+r.get('/:id', OWNER, ...typed({ params: FirmExportIdParamsSchema }, async ({ params }, req, res) => {
   res.setHeader('Cache-Control', 'no-store');
-  const record = await exportInFirm(Number(req.params.id), actor(req).firmId);
+  const record = await exportInFirm(params.id, actor(req).firmId);
   res.json({ data: (await present([record]))[0] });
-});
+}));
 
-r.get('/:id/download', OWNER, validate({ params: FirmExportIdParamsSchema }), async (req, res) => {
+r.get('/:id/download', OWNER, ...typed({ params: FirmExportIdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const record = await exportInFirm(Number(req.params.id), me.firmId);
+  const record = await exportInFirm(params.id, me.firmId);
   if (record.status !== 'ready' || !record.storageKey) throw conflict('This export is not ready yet. Wait until this page says it is ready, then download it.');
   const firm = await Firm.findByPk(me.firmId, { attributes: ['slug'] });
   const day = (record.finishedAt ?? record.createdAt).toISOString().slice(0, 10);
@@ -52,6 +52,6 @@ r.get('/:id/download', OWNER, validate({ params: FirmExportIdParamsSchema }), as
   res.setHeader('Cache-Control', 'private, no-store');
   res.setHeader('X-Content-Type-Options', 'nosniff');
   await sendStoredFile(res, record.storageKey);
-});
+}));
 
 export const firmExportsRouter = r.router;

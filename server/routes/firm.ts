@@ -6,12 +6,10 @@ import { FirmProfileUpdateSchema, FirmSettingsUpdateSchema } from '../../shared/
 import { singleUpload } from '../middlewares/upload';
 import { LOGO_LIMITS } from '../../shared/limits';
 import { checkLogo, LOGO_TOO_LARGE } from '../services/firm-logo';
-import { settingsFromProfile } from '../services/firm-profile';
 import { readFile, saveFile } from '../services/storage/storage';
 import { presentFirm } from '../presenters/firm';
 import { actor } from '../policies/firm-scope';
-import { recordAudit } from '../commands/audit-recorder';
-import { sequelize } from '../db/sequelize';
+import { setFirmLogo, updateFirmProfile, updateFirmSettings } from '../commands/firm-writer';
 import { badRequest, notFound, payloadTooLarge } from '../errors';
 import { MulterError } from 'multer';
 import type { RequestHandler } from 'express';
@@ -26,16 +24,7 @@ r.get('/', STAFF, async (req, res) => {
 
 r.patch('/settings', OWNER, ...typed({ body: FirmSettingsUpdateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
-  const firm = await sequelize.transaction(async (transaction) => {
-    const row = await Firm.findByPk(me.firmId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!row) throw notFound('Your firm');
-    const { timezone, ...rest } = body;
-    const settings = { ...row.settings };
-    for (const [key, value] of Object.entries(rest)) if (value !== undefined) settings[key] = value;
-    await row.update({ settings, ...(timezone !== undefined ? { timezone } : {}) }, { transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.settings-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(body) }, ip: req.ip ?? null }, transaction);
-    return row;
-  });
+  const firm = await updateFirmSettings(me, body, req.ip ?? null);
   res.json({ data: presentFirm(firm) });
 }));
 
@@ -49,15 +38,7 @@ const logoUpload: RequestHandler = (req, res, next) =>
 /** The profile: what documents and e-mails print, and the defaults of new proposals and invoices. */
 r.patch('/', OWNER, ...typed({ body: FirmProfileUpdateSchema }, async ({ body }, req, res) => {
   const me = actor(req);
-  const firm = await sequelize.transaction(async (transaction) => {
-    const row = await Firm.findByPk(me.firmId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!row) throw notFound('Your firm');
-    const { name, address, phone, email, website, licenceNumbers, timezone, ...defaults } = body;
-    const columns = Object.fromEntries(Object.entries({ name, address, phone, email, website, licenceNumbers, timezone }).filter(([, v]) => v !== undefined));
-    await row.update({ ...columns, settings: { ...row.settings, ...settingsFromProfile(defaults) } }, { transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.profile-changed', subjectType: 'Firm', subjectId: me.firmId, data: { keys: Object.keys(body) }, ip: req.ip ?? null }, transaction);
-    return row;
-  });
+  const firm = await updateFirmProfile(me, body, req.ip ?? null);
   res.json({ data: presentFirm(firm) });
 }));
 
@@ -67,13 +48,7 @@ r.post('/logo', OWNER, logoUpload, async (req, res) => {
   const size = checkLogo(req.file.buffer);
   // A new key every time: documents already sent keep printing the logo they were sent with.
   const key = await saveFile('logos', req.file.buffer, size.kind === 'png' ? 'png' : 'jpg');
-  const firm = await sequelize.transaction(async (transaction) => {
-    const row = await Firm.findByPk(me.firmId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!row) throw notFound('Your firm');
-    await row.update({ logoKey: key, logoContentType: size.kind === 'png' ? 'image/png' : 'image/jpeg' }, { transaction });
-    await recordAudit({ firmId: me.firmId, userId: me.id, action: 'firm.logo-changed', subjectType: 'Firm', subjectId: me.firmId, data: { width: size.width, height: size.height }, ip: req.ip ?? null }, transaction);
-    return row;
-  });
+  const firm = await setFirmLogo(me, { key, contentType: size.kind === 'png' ? 'image/png' : 'image/jpeg', width: size.width, height: size.height }, req.ip ?? null);
   res.status(201).json({ data: presentFirm(firm) });
 });
 

@@ -4,12 +4,12 @@
  */
 import type { NextFunction, Request, Response } from 'express';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
+import { idempotencyKey } from '../middlewares/idempotency-key';
 import { singleUpload } from '../middlewares/upload';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { badRequest, unprocessable } from '../errors';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
 import {
   HUNTING_LIMITS,
   HuntingSettingsUpdateSchema,
@@ -19,7 +19,6 @@ import {
   StandSiteUpdateSchema,
   WindFileFieldsSchema,
   WindSectorsSchema,
-  type SitCreateValues,
 } from '../../shared/schemas/hunting';
 import { Firm, Unit } from '../models';
 import { readableProperty } from '../services/results/results-reader';
@@ -32,20 +31,19 @@ import { huntingSettings } from '../../shared/domain/stand-winds';
 
 const r = defineRoutes('');
 const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
-const propertyId = (req: Request) => Number(req.params.id);
 
-r.get('/properties/:id/stand-winds', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
-  res.json(await readStandWinds(actor(req), propertyId(req)));
-});
+r.get('/properties/:id/stand-winds', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json(await readStandWinds(actor(req), params.id));
+}));
 
-r.put('/units/:id/stand-site', STAFF, validate({ params: IdParamsSchema, body: StandSiteUpdateSchema }), async (req, res) => {
-  const { unit, site } = await updateStandSite(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+r.put('/units/:id/stand-site', STAFF, ...typed({ params: IdParamsSchema, body: StandSiteUpdateSchema }, async ({ params, body }, req, res) => {
+  const { unit, site } = await updateStandSite(actor(req), params.id, body, req.ip ?? null);
   res.json({ data: { unitId: unit.id, name: unit.name, watchedUnitId: site.watchedUnitId, standType: site.standType, heightFt: site.heightFt, approachFrom: site.approachFrom } });
-});
+}));
 
-r.get('/properties/:id/wind-record', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
-  res.json({ data: await readWindRecord(actor(req), propertyId(req)) });
-});
+r.get('/properties/:id/wind-record', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readWindRecord(actor(req), params.id) });
+}));
 
 /** The property must be the firm's before an upload is read. */
 async function staffProperty(req: Request, _res: Response, next: NextFunction) {
@@ -60,7 +58,7 @@ const multipartOnly = (req: Request, res: Response, next: NextFunction) => (req.
 
 r.post('/properties/:id/wind-record', STAFF, staffProperty, multipartOnly, async (req, res) => {
   const me = actor(req);
-  const id = propertyId(req);
+  const { id } = IdParamsSchema.parse(req.params);
   if (!req.file) {
     const parsed = WindSectorsSchema.safeParse(req.body ?? {});
     if (!parsed.success) throw unprocessable(`Send a wind file in the “file” field (CSV or ISD-Lite), or JSON { sectors: [{ from, share }] }: ${parsed.error.issues[0]?.path.join('.') ?? ''} ${parsed.error.issues[0]?.message ?? ''}`.trim(), { issues: parsed.error.issues });
@@ -97,13 +95,6 @@ r.post('/properties/:id/wind-record', STAFF, staffProperty, multipartOnly, async
   res.status(201).json({ data: presentWindRecord(record) });
 });
 
-function idempotencyKey(req: Request): string {
-  const raw = req.get(IDEMPOTENCY_HEADER);
-  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per sit, reused when the same sit is sent again.`);
-  const parsed = IdempotencyKeySchema.safeParse(raw);
-  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
-  return parsed.data;
-}
 
 /** A client is refused before the body is looked at when sit logging is not on for them. */
 async function mayLogSits(req: Request, _res: Response, next: NextFunction) {
@@ -111,24 +102,23 @@ async function mayLogSits(req: Request, _res: Response, next: NextFunction) {
   next();
 }
 
-r.get('/properties/:id/sits', STAFF_AND_CLIENT, validate({ params: IdParamsSchema }), async (req, res) => {
-  const { sits, winds } = await readSits(actor(req), propertyId(req));
+r.get('/properties/:id/sits', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const { sits, winds } = await readSits(actor(req), params.id);
   res.json({ data: sits.map((s) => presentSit(s, winds)) });
-});
+}));
 
-r.post('/properties/:id/sits', STAFF_AND_CLIENT, mayLogSits, validate({ params: IdParamsSchema, body: SitCreateSchema }), async (req, res) => {
+r.post('/properties/:id/sits', STAFF_AND_CLIENT, mayLogSits, ...typed({ params: IdParamsSchema, body: SitCreateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const key = idempotencyKey(req);
-  const { sit, replayed } = await createSit(me, propertyId(req), req.body as SitCreateValues, key, req.ip ?? null);
+  const key = idempotencyKey(req, 'sit');
+  const { sit, replayed } = await createSit(me, params.id, body, key, req.ip ?? null);
   const layout = await readHuntingLayout(me, sit.propertyId);
   res.status(replayed ? 200 : 201).json({ data: presentSit(sit, standWindsOf(layout)), replayed });
-});
+}));
 
-r.get('/properties/:id/pressure', STAFF_AND_CLIENT, validate({ params: IdParamsSchema, query: PressureQuerySchema }), async (req, res) => {
-  const q = PressureQuerySchema.parse(req.query);
-  const { rows, season, maxSitsPerWeek } = await readPressure(actor(req), propertyId(req), q.season);
+r.get('/properties/:id/pressure', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema, query: PressureQuerySchema }, async ({ params, query }, req, res) => {
+  const { rows, season, maxSitsPerWeek } = await readPressure(actor(req), params.id, query.season);
   res.json({ data: rows, meta: { season, maxSitsPerWeek } });
-});
+}));
 
 r.get('/pressure-warnings', STAFF_AND_CLIENT, async (req, res) => {
   res.json({ data: await readPressureWarnings(actor(req)) });
@@ -139,25 +129,25 @@ r.get('/firm/hunting-settings', STAFF, async (req, res) => {
   res.json({ data: huntingSettings(firm?.settings) });
 });
 
-r.patch('/firm/hunting-settings', OWNER, validate({ body: HuntingSettingsUpdateSchema }), async (req, res) => {
-  const settings = await updateHuntingSettings(actor(req), req.body, req.ip ?? null);
+r.patch('/firm/hunting-settings', OWNER, ...typed({ body: HuntingSettingsUpdateSchema }, async ({ body }, req, res) => {
+  const settings = await updateHuntingSettings(actor(req), body, req.ip ?? null);
   res.json({ data: huntingSettings(settings) });
-});
+}));
 
-r.put('/clients/:id/sit-logging', STAFF, validate({ params: IdParamsSchema, body: SitLoggingSchema }), async (req, res) => {
-  const client = await setSitLogging(actor(req), Number(req.params.id), req.body.allowed, req.ip ?? null);
+r.put('/clients/:id/sit-logging', STAFF, ...typed({ params: IdParamsSchema, body: SitLoggingSchema }, async ({ params, body }, req, res) => {
+  const client = await setSitLogging(actor(req), params.id, body.allowed, req.ip ?? null);
   res.json({ data: { clientId: client.id, portalSitsAllowed: client.portalSitsAllowed } });
-});
+}));
 
 /** A stand unit's details for its page (staff). */
-r.get('/units/:id/stand-site', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
+r.get('/units/:id/stand-site', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const me = actor(req);
-  const unit = await findInFirm(Unit, Number(req.params.id), me.firmId, 'That unit');
+  const unit = await findInFirm(Unit, params.id, me.firmId, 'That unit');
   if (unit.kind !== 'stand-site') throw unprocessable(`“${unit.name}” is not a stand site.`);
   const layout = await readHuntingLayout(me, unit.propertyId);
   const stand = layout.stands.find((s) => s.id === unit.id);
   const d = stand?.detail ?? null;
   res.json({ data: { unitId: unit.id, name: unit.name, watchedUnitId: d?.watchedUnitId ?? null, standType: d?.standType ?? null, heightFt: d?.heightFt ?? null, approachFrom: d?.approachFrom ?? null } });
-});
+}));
 
 export const huntingRouter = r.router;

@@ -9,6 +9,10 @@ import { portalRouter } from './portal';
 import { fieldRouter } from './field';
 import { devMailRouter } from './dev-mail';
 import { propertiesRouter } from './properties';
+import { propertyUnitsRouter } from './property-units';
+import { propertyImportsRouter } from './property-imports';
+import { propertyExportsRouter } from './property-exports';
+import { propertyPlanPdfRouter } from './property-plan-pdf';
 import { unitsRouter } from './units';
 import { firmRouter } from './firm';
 import { signupRouter } from './signup';
@@ -49,6 +53,10 @@ export const apiRouters: { path: string; router: Router }[] = [
   { path: '/field', router: fieldRouter },
   { path: '/dev/mail', router: devMailRouter },
   { path: '/properties', router: propertiesRouter },
+  { path: '/properties', router: propertyUnitsRouter },
+  { path: '/properties', router: propertyImportsRouter },
+  { path: '/properties', router: propertyExportsRouter },
+  { path: '/properties', router: propertyPlanPdfRouter },
   { path: '/properties', router: propertyOverlaysRouter },
   { path: '/units', router: unitsRouter },
   { path: '/firm', router: firmRouter },

@@ -1,5 +1,4 @@
 /** Invoices: made from approved proposals by staff, paid by the client from the portal. */
-import type { Request } from 'express';
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { defineRoutes, OWNER, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
@@ -9,25 +8,16 @@ import { Invoice, Task } from '../models';
 import { sequelize } from '../db/sequelize';
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { BillableTasksQuerySchema, CheckoutSchema, InvoiceCreateSchema, InvoiceListQuerySchema, InvoiceUpdateSchema, LineParamsSchema, ManualLineSchema, RefundSchema, VoidSchema, type BillableTaskDto, type ReceivablesDto } from '../../shared/schemas/invoice';
-import { actor, findInFirm } from '../policies/firm-scope';
+import { actor, findIssuedInFirm } from '../policies/firm-scope';
 import { addManualLine, createInvoice, removeManualLine, sendInvoice, updateInvoice, voidInvoice } from '../commands/invoice-writer';
 import { refundPayment, startCheckout } from '../commands/payment-recorder';
 import { listInvoiceRows, readInvoice, summarizeInvoices } from '../services/invoices/invoice-reader';
 import { renderInvoicePdfFor } from '../services/invoices/invoice-pdf';
-import { notFound } from '../errors';
 import { todayInZone, usableZone } from '../services/clock';
 import { ageReceivables } from '../../shared/domain/invoicing';
 
 const r = defineRoutes('/invoices');
 const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
-
-/** An invoice the signed-in person may read: staff of its firm, or its own client once issued. */
-async function readable(req: Request): Promise<Invoice> {
-  const me = actor(req);
-  const invoice = await findInFirm(Invoice, Number(req.params.id), me.firmId, 'That invoice');
-  if (me.role === 'client' && (invoice.clientId !== me.clientId || invoice.status === 'draft')) throw notFound('That invoice');
-  return invoice;
-}
 
 r.get('/', STAFF_AND_CLIENT, ...typed({ query: InvoiceListQuerySchema }, async ({ query }, req, res) => {
   const me = actor(req);
@@ -78,12 +68,12 @@ r.post('/', STAFF, ...typed({ body: InvoiceCreateSchema }, async ({ body }, req,
   res.status(created ? 201 : 200).json({ data: await readInvoice(invoice) });
 }));
 
-r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  res.json({ data: await readInvoice(await readable(req)) });
+r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readInvoice(await findIssuedInFirm(Invoice, params.id, actor(req), 'That invoice')) });
 }));
 
-r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const invoice = await readable(req);
+r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const invoice = await findIssuedInFirm(Invoice, params.id, actor(req), 'That invoice');
   const pdf = await renderInvoicePdfFor(invoice);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="${invoice.number}.pdf"`);

@@ -1,12 +1,12 @@
 /** Field observations: log (multipart, idempotent), list, counts by unit or month, and their photos. */
 import type { Request } from 'express';
 import { defineRoutes } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
+import { idempotencyKey } from '../middlewares/idempotency-key';
 import { arrayUpload } from '../middlewares/upload';
 import { Firm, Observation, ObservationPhoto, Property } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema } from '../../shared/schemas/task';
-import { ObservationCreateSchema, ObservationListQuerySchema, ObservationSummaryQuerySchema, type ObservationListQuery, type ObservationSummaryQuery } from '../../shared/schemas/observation';
+import { ObservationCreateSchema, ObservationListQuerySchema, ObservationSummaryQuerySchema } from '../../shared/schemas/observation';
 import { PHOTO_LIMITS } from '../../shared/limits';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { logObservation, propertyForObservations, propertyToLogOn } from '../commands/observation-logger';
@@ -15,7 +15,7 @@ import { presentObservation, presentObservationSummary } from '../presenters/obs
 import { inspectPhoto } from '../services/photos';
 import { usableZone } from '../services/clock';
 import { sendStoredFile } from '../services/storage/storage';
-import { badRequest, notFound, unprocessable } from '../errors';
+import { notFound } from '../errors';
 
 const perProperty = defineRoutes('/properties');
 const photos = defineRoutes('/observation-photos');
@@ -23,13 +23,6 @@ const photos = defineRoutes('/observation-photos');
 const LOGGERS = ['owner', 'consultant', 'crew', 'client'] as const;
 const READERS = ['owner', 'consultant', 'crew', 'client'] as const;
 
-function idempotencyKey(req: Request): string {
-  const raw = req.get(IDEMPOTENCY_HEADER);
-  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per observation, reused when the same observation is sent again.`);
-  const parsed = IdempotencyKeySchema.safeParse(raw);
-  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
-  return parsed.data;
-}
 
 async function zoneOf(firmId: number): Promise<string> {
   const firm = await Firm.findByPk(firmId, { attributes: ['timezone'] });
@@ -42,46 +35,38 @@ async function answer(propertyId: number, id: number, zone: string) {
   return presentObservation(rows[0], list);
 }
 
-perProperty.post(
-  '/:id/observations',
-  LOGGERS,
-  validate({ params: IdParamsSchema }),
-  async (req, _res, next) => {
-    // Refuse before reading any file: no key, someone else's property, or logging not allowed stores nothing.
-    idempotencyKey(req);
-    await propertyToLogOn(actor(req), Number(req.params.id));
-    next();
-  },
-  arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perObservation, 'photo'),
-  validate({ body: ObservationCreateSchema }),
-  async (req, res) => {
-    const me = actor(req);
-    const propertyId = Number(req.params.id);
-    const files = (req.files as Express.Multer.File[] | undefined) ?? [];
-    const inspected = [];
-    for (const file of files) inspected.push(await inspectPhoto({ bytes: file.buffer, originalName: file.originalname || null }));
-    const { id, replayed } = await logObservation(me, propertyId, req.body, inspected, idempotencyKey(req), req.ip ?? null);
-    res.status(replayed ? 200 : 201).json({ data: await answer(propertyId, id, await zoneOf(me.firmId)), replayed });
-  },
-);
-
-perProperty.get('/:id/observations', READERS, validate({ params: IdParamsSchema, query: ObservationListQuerySchema }), async (req, res) => {
+perProperty.post('/:id/observations', LOGGERS, ...typed({ params: IdParamsSchema, body: ObservationCreateSchema }, async ({ params, body }, req, res) => {
   const me = actor(req);
-  const property = await propertyForObservations(me, Number(req.params.id));
-  const { rows, photos: list } = await listObservations(property.id, req.validQuery as ObservationListQuery, await zoneOf(me.firmId));
+  const files = (req.files as Express.Multer.File[] | undefined) ?? [];
+  const inspected = [];
+  for (const file of files) inspected.push(await inspectPhoto({ bytes: file.buffer, originalName: file.originalname || null }));
+  const { id, replayed } = await logObservation(me, params.id, body, inspected, idempotencyKey(req, 'observation'), req.ip ?? null);
+  res.status(replayed ? 200 : 201).json({ data: await answer(params.id, id, await zoneOf(me.firmId)), replayed });
+}, {
+  // Refuse before reading any file: no key, someone else's property, or logging not allowed stores nothing.
+  before: async (params, req) => {
+    idempotencyKey(req, 'observation');
+    await propertyToLogOn(actor(req), params.id);
+  },
+  upload: arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perObservation, 'photo'),
+}));
+
+perProperty.get('/:id/observations', READERS, ...typed({ params: IdParamsSchema, query: ObservationListQuerySchema }, async ({ params, query }, req, res) => {
+  const me = actor(req);
+  const property = await propertyForObservations(me, params.id);
+  const { rows, photos: list } = await listObservations(property.id, query, await zoneOf(me.firmId));
   res.json({ data: rows.map((r) => presentObservation(r, list)) });
-});
+}));
 
-perProperty.get('/:id/observations/summary', READERS, validate({ params: IdParamsSchema, query: ObservationSummaryQuerySchema }), async (req, res) => {
+perProperty.get('/:id/observations/summary', READERS, ...typed({ params: IdParamsSchema, query: ObservationSummaryQuerySchema }, async ({ params, query }, req, res) => {
   const me = actor(req);
-  const property = await propertyForObservations(me, Number(req.params.id));
-  const query = req.validQuery as ObservationSummaryQuery;
+  const property = await propertyForObservations(me, params.id);
   res.json({ data: presentObservationSummary(query.by, await countObservations(property.id, query.by, query, await zoneOf(me.firmId))) });
-});
+}));
 
-async function photoFor(req: Request): Promise<ObservationPhoto> {
+async function photoFor(req: Request, id: number): Promise<ObservationPhoto> {
   const me = actor(req);
-  const photo = await findInFirm(ObservationPhoto, Number(req.params.id), me.firmId, 'That photo');
+  const photo = await findInFirm(ObservationPhoto, id, me.firmId, 'That photo');
   const observation = await Observation.findByPk(photo.observationId, { attributes: ['id', 'propertyId'] });
   if (!observation) throw notFound('That photo');
   if (me.role === 'client') {
@@ -92,22 +77,22 @@ async function photoFor(req: Request): Promise<ObservationPhoto> {
 }
 
 /** An observation photo: the firm's staff and crew, and the client whose land it shows. */
-photos.get('/:id', READERS, validate({ params: IdParamsSchema }), async (req, res) => {
-  const photo = await photoFor(req);
+photos.get('/:id', READERS, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const photo = await photoFor(req, params.id);
   res.setHeader('Content-Type', photo.contentType);
   res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
   res.setHeader('Content-Disposition', 'inline');
   await sendStoredFile(res, photo.storageKey);
-});
+}));
 
-photos.get('/:id/thumbnail', READERS, validate({ params: IdParamsSchema }), async (req, res) => {
-  const photo = await photoFor(req);
+photos.get('/:id/thumbnail', READERS, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const photo = await photoFor(req, params.id);
   if (!photo.thumbnailKey) throw notFound('A thumbnail of that photo');
   res.setHeader('Content-Type', 'image/jpeg');
   res.setHeader('Cache-Control', 'private, max-age=86400, immutable');
   res.setHeader('Content-Disposition', 'inline');
   await sendStoredFile(res, photo.thumbnailKey);
-});
+}));
 
 export const propertyObservationsRouter = perProperty.router;
 export const observationPhotosRouter = photos.router;

@@ -6,9 +6,7 @@ import { IdParamsSchema } from '../../shared/schemas/common';
 import type { UndeliveredMailDto } from '../../shared/schemas/outbox';
 import { OutboxMessage } from '../models';
 import { actor } from '../policies/firm-scope';
-import { conflict, notFound } from '../errors';
-import { resendMessage } from '../services/mail/outbox';
-import { recordAudit } from '../commands/audit-recorder';
+import { resendUndeliveredMail } from '../commands/mail-resender';
 
 const r = defineRoutes('/outbox');
 
@@ -35,11 +33,7 @@ r.get('/undelivered', OWNER, async (req, res) => {
 });
 
 r.post('/:id/resend', OWNER, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
-  const me = actor(req);
-  const message = await resendMessage(me.firmId, params.id);
-  if (!message) throw notFound('That message');
-  if (message.status === 'sent') throw conflict('That message was delivered already; nothing to resend.');
-  await recordAudit({ firmId: me.firmId, userId: me.id, action: 'mail.resent', subjectType: 'OutboxMessage', subjectId: message.id, ip: req.ip ?? null });
+  const message = await resendUndeliveredMail(actor(req), params.id, req.ip ?? null);
   res.json({ data: present(message) });
 }));
 

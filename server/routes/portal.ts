@@ -29,9 +29,9 @@ function ownScope(req: Request): PortalScope {
 }
 
 /** A staff member's preview scope: the client must be of their firm (404 otherwise). */
-async function previewScope(req: Request): Promise<PortalScope> {
+async function previewScope(req: Request, clientId: number): Promise<PortalScope> {
   const me = actor(req);
-  const client = await findInFirm(Client, Number(req.params.clientId), me.firmId, 'That client');
+  const client = await findInFirm(Client, clientId, me.firmId, 'That client');
   return { firmId: me.firmId, clientId: client.id };
 }
 
@@ -60,16 +60,16 @@ r.get('/properties/:id', ['client'], ...typed({ params: PropertyParamsSchema }, 
   res.json({ data: await readPortalProperty(ownScope(req), params.id) });
 }));
 
-r.get('/preview/:clientId/properties', STAFF, ...typed({ params: PreviewParamsSchema }, async (_input, req, res) => {
-  res.json({ data: await readPortalProperties(await previewScope(req)) });
+r.get('/preview/:clientId/properties', STAFF, ...typed({ params: PreviewParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await readPortalProperties(await previewScope(req, params.clientId)) });
 }));
 
 r.get('/preview/:clientId/properties/:id', STAFF, ...typed({ params: PreviewPropertyParamsSchema }, async ({ params }, req, res) => {
-  res.json({ data: await readPortalProperty(await previewScope(req), params.id) });
+  res.json({ data: await readPortalProperty(await previewScope(req, params.clientId), params.id) });
 }));
 
-r.get('/preview/:clientId/files', STAFF, ...typed({ params: PreviewParamsSchema }, async (_input, req, res) => {
-  const scope = await previewScope(req);
+r.get('/preview/:clientId/files', STAFF, ...typed({ params: PreviewParamsSchema }, async ({ params }, req, res) => {
+  const scope = await previewScope(req, params.clientId);
   res.json({ data: await clientVisibleFiles(scope.firmId, scope.clientId) });
 }));
 

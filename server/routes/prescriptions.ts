@@ -6,8 +6,7 @@ import { IdParamsSchema } from '../../shared/schemas/common';
 import { PrescriptionCreateSchema, PrescriptionUpdateSchema } from '../../shared/schemas/library';
 import { presentPrescription } from '../presenters/prescription';
 import { actor, findInFirm } from '../policies/firm-scope';
-import { createPrescription, updatePrescription } from '../commands/prescription-writer';
-import { recordAudit } from '../commands/audit-recorder';
+import { createPrescription, deletePrescription, updatePrescription } from '../commands/prescription-writer';
 
 const perUnit = defineRoutes('/units');
 const perProperty = defineRoutes('/properties');
@@ -54,10 +53,7 @@ r.patch('/:id', STAFF, ...typed({ params: IdParamsSchema, body: PrescriptionUpda
 }));
 
 r.delete('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
-  const me = actor(req);
-  const row = await findInFirm(Prescription, params.id, me.firmId, 'That prescription');
-  await row.destroy();
-  await recordAudit({ firmId: me.firmId, userId: me.id, action: 'prescription.deleted', subjectType: 'Unit', subjectId: row.unitId, ip: req.ip ?? null });
+  await deletePrescription(actor(req), params.id, req.ip ?? null);
   res.status(204).end();
 }));
 

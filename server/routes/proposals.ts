@@ -5,67 +5,27 @@ import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
-import { Client, Property, Proposal } from '../models';
+import { Property, Proposal } from '../models';
 import { IdParamsSchema, pageOf } from '../../shared/schemas/common';
 import { ApproveSchema, DeclineSchema, ProposalCreateSchema, ProposalListQuerySchema, ProposalUpdateSchema } from '../../shared/schemas/proposal';
-import { actor, findInFirm } from '../policies/firm-scope';
-import { draftProposal, reviseProposal, sendProposal, updateProposal, withdrawProposal } from '../commands/proposal-writer';
+import { actor, findInFirm, findIssuedInFirm } from '../policies/firm-scope';
+import { draftProposal, noteProposalViewed, reviseProposal, sendProposal, updateProposal, withdrawProposal } from '../commands/proposal-writer';
 import { approveProposal, declineProposal } from '../commands/proposal-approver';
 import { readProposal } from '../services/proposals/proposal-reader';
 import { renderProposalPdfFor } from '../services/proposals/proposal-pdf';
-import { displayStatus } from '../presenters/proposal';
-import { notFound } from '../errors';
 import { todayInZone } from '../services/clock';
-import type { ProposalRowDto } from '../../shared/schemas/proposal-dto';
+import { proposalRows } from '../queries/proposals';
 
 const perProperty = defineRoutes('/properties');
 const r = defineRoutes('/proposals');
 const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
 
-/** A proposal the signed-in person may read: staff of its firm, or its client once it is sent. */
-async function readable(req: Request): Promise<Proposal> {
-  const me = actor(req);
-  const proposal = await findInFirm(Proposal, Number(req.params.id), me.firmId, 'That proposal');
-  if (me.role === 'client' && (proposal.clientId !== me.clientId || proposal.status === 'draft')) throw notFound('That proposal');
-  return proposal;
-}
-
 const ctx = (req: Request) => ({ ip: req.ip ?? null, userAgent: req.get('user-agent') ?? null });
-
-/** List rows: numbers and totals without lines. */
-async function listRows(where: WhereOptions, today: string, page?: { limit: number; offset: number }) {
-  const rows = await Proposal.findAll({ where, order: [['createdAt', 'DESC'], ['version', 'DESC'], ['id', 'DESC']], limit: page?.limit, offset: page?.offset });
-  const [properties, clients] = await Promise.all([
-    Property.findAll({ where: { id: [...new Set(rows.map((p) => p.propertyId))] }, attributes: ['id', 'name'] }),
-    Client.findAll({ where: { id: [...new Set(rows.map((p) => p.clientId))] }, attributes: ['id', 'name'] }),
-  ]);
-  const propertyName = new Map(properties.map((p) => [p.id, p.name]));
-  const clientName = new Map(clients.map((c) => [c.id, c.name]));
-  return rows.map((p): ProposalRowDto => ({
-    id: p.id,
-    seriesId: p.seriesId ?? p.id,
-    number: p.number,
-    version: p.version,
-    status: displayStatus(p, today),
-    title: p.title,
-    propertyId: p.propertyId,
-    propertyName: propertyName.get(p.propertyId) ?? '',
-    clientId: p.clientId,
-    clientName: clientName.get(p.clientId) ?? '',
-    totalCents: p.totalCents,
-    depositCents: p.depositCents,
-    expiresOn: p.expiresOn,
-    sentAt: p.sentAt?.toISOString() ?? null,
-    firstViewedAt: p.firstViewedAt?.toISOString() ?? null,
-    decidedAt: p.decidedAt?.toISOString() ?? null,
-    updatedAt: p.updatedAt.toISOString(),
-  }));
-}
 
 perProperty.get('/:id/proposals', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
   const property = await findInFirm(Property, params.id, firmId, 'That property');
-  res.json({ data: await listRows({ firmId, propertyId: property.id }, todayInZone(actor(req).firmTimezone)) });
+  res.json({ data: await proposalRows({ firmId, propertyId: property.id }, todayInZone(actor(req).firmTimezone)) });
 }));
 
 perProperty.post('/:id/proposals', STAFF, ...typed({ params: IdParamsSchema, body: ProposalCreateSchema }, async ({ params, body }, req, res) => {
@@ -86,24 +46,25 @@ r.get('/', STAFF_AND_CLIENT, ...typed({ query: ProposalListQuerySchema }, async 
     where.status = status;
     if (status === 'sent') where.expiresOn = { [Op.or]: [{ [Op.gte]: today }, { [Op.is]: null }] };
   }
-  const [total, data] = await Promise.all([Proposal.count({ where: where as WhereOptions }), listRows(where as WhereOptions, today, query)]);
+  const [total, data] = await Promise.all([Proposal.count({ where: where as WhereOptions }), proposalRows(where as WhereOptions, today, query)]);
   res.json({ data, page: pageOf(query, total) });
 }));
 
-r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const proposal = await readable(req);
-  if (actor(req).role === 'client' && !proposal.firstViewedAt) await proposal.update({ firstViewedAt: new Date() });
+r.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const proposal = await findIssuedInFirm(Proposal, params.id, actor(req), 'That proposal');
+  const me = actor(req);
+  if (me.role === 'client') await noteProposalViewed(me, proposal, req.ip ?? null);
   res.json({ data: await readProposal(proposal) });
 }));
 
 r.get('/:id/versions', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
   const { firmId } = actor(req);
   const proposal = await findInFirm(Proposal, params.id, firmId, 'That proposal');
-  res.json({ data: await listRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }, todayInZone(actor(req).firmTimezone)) });
+  res.json({ data: await proposalRows({ firmId, seriesId: proposal.seriesId ?? proposal.id }, todayInZone(actor(req).firmTimezone)) });
 }));
 
-r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const proposal = await readable(req);
+r.get('/:id/pdf', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const proposal = await findIssuedInFirm(Proposal, params.id, actor(req), 'That proposal');
   const pdf = await renderProposalPdfFor(proposal);
   res.setHeader('Content-Type', 'application/pdf');
   res.setHeader('Content-Disposition', `inline; filename="${proposal.number}-v${proposal.version}.pdf"`);

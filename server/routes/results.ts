@@ -1,8 +1,7 @@
 /** Results: camera surveys, harvest records, the season summary and the season report. */
-import type { NextFunction, Request, Response } from 'express';
+import type { Request } from 'express';
 import { defineRoutes, STAFF } from '../middlewares/access';
 import { typed } from '../middlewares/typed-route';
-import { validate } from '../middlewares/validate';
 import { waitForJob } from '../services/jobs/job-queue';
 import { presentJob } from '../presenters/job';
 import { CameraSurvey, HarvestRecord, Property, SeasonReport, SharedFile, Unit } from '../models';
@@ -12,7 +11,6 @@ import {
   HarvestUpdateSchema,
   SeasonParamsSchema,
   SeasonReportCreateSchema,
-  SurveyCreateSchema,
   SurveyUpdateSchema,
 } from '../../shared/schemas/results';
 import { actor, findInFirm } from '../policies/firm-scope';
@@ -22,7 +20,7 @@ import { deleteSeasonReport, requestSeasonReport, sendSeasonReport, withdrawSeas
 import { listHarvests, listSeasonReports, listSurveys, readableProperty, readResults, readSeasonSummary, readSurvey } from '../services/results/results-reader';
 import { presentHarvest, presentSeasonReport } from '../presenters/results';
 import { sendStoredFile } from '../services/storage/storage';
-import { isFromPhotos, SurveyFromPhotosSchema } from '../../shared/schemas/cameras';
+import { SurveyPostSchema } from '../../shared/schemas/cameras';
 import { createSurveyFromPhotos } from '../commands/photo-survey-maker';
 import { assertMayLogSits } from '../commands/hunting-writer';
 
@@ -32,12 +30,12 @@ const harvests = defineRoutes('/harvests');
 const reports = defineRoutes('/season-reports');
 const STAFF_AND_CLIENT = ['owner', 'consultant', 'client'] as const;
 
-const propertyOf = (req: Request) => readableProperty(actor(req), Number(req.params.id));
+const propertyOf = (req: Request, id: number) => readableProperty(actor(req), id);
 
 /** A record of a property the person may read (staff of its firm, or the client who owns the property). */
-async function readableRecord<M extends CameraSurvey | HarvestRecord>(req: Request, model: typeof CameraSurvey | typeof HarvestRecord, label: string): Promise<{ record: M; property: Property }> {
+async function readableRecord<M extends CameraSurvey | HarvestRecord>(req: Request, id: number, model: typeof CameraSurvey | typeof HarvestRecord, label: string): Promise<{ record: M; property: Property }> {
   const me = actor(req);
-  const record = (await findInFirm(model as typeof CameraSurvey, Number(req.params.id), me.firmId, label)) as unknown as M;
+  const record = (await findInFirm(model as typeof CameraSurvey, id, me.firmId, label)) as unknown as M;
   try {
     return { record, property: await readableProperty(me, record.propertyId) };
   } catch {
@@ -52,51 +50,50 @@ async function harvestAnswer(record: HarvestRecord) {
 }
 
 /** Harvests: staff, or a client's contacts when their consultant turned sit logging on (refused before the body is read). */
-async function mayRecordHarvest(req: Request, _res: Response, next: NextFunction) {
+async function mayRecordHarvest(params: { id: number }, req: Request) {
   const me = actor(req);
   if (me.role === 'client') {
-    await propertyOf(req);
+    await propertyOf(req, params.id);
     await assertMayLogSits(me);
   }
-  next();
 }
 
 // ---- per property ----
 
-perProperty.get('/:id/results', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const property = await propertyOf(req);
+perProperty.get('/:id/results', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const property = await propertyOf(req, params.id);
   res.json({ data: await readResults(actor(req), property) });
 }));
 
-perProperty.get('/:id/surveys', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  res.json({ data: await listSurveys(await propertyOf(req)) });
+perProperty.get('/:id/surveys', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await listSurveys(await propertyOf(req, params.id)) });
 }));
 
-perProperty.post('/:id/surveys', STAFF, validate({ params: IdParamsSchema }), (req, res, next) => validate({ body: isFromPhotos(req.body) ? SurveyFromPhotosSchema : SurveyCreateSchema })(req, res, next), async (req, res) => {
+perProperty.post('/:id/surveys', STAFF, ...typed({ params: IdParamsSchema, body: SurveyPostSchema }, async ({ params, body }, req, res) => {
   // Typed tallies, or `fromPhotos: { deploymentIds, from, to }` to tally the tagged photos.
-  const { survey, property } = isFromPhotos(req.body)
-    ? await createSurveyFromPhotos(actor(req), Number(req.params.id), req.body, req.ip ?? null)
-    : await createSurvey(actor(req), Number(req.params.id), req.body, req.ip ?? null);
+  const { survey, property } = 'fromPhotos' in body
+    ? await createSurveyFromPhotos(actor(req), params.id, body, req.ip ?? null)
+    : await createSurvey(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: await readSurvey(survey, property) });
-});
-
-perProperty.get('/:id/harvests', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  res.json({ data: await listHarvests(await propertyOf(req)) });
 }));
 
-perProperty.post('/:id/harvests', STAFF_AND_CLIENT, mayRecordHarvest, ...typed({ params: IdParamsSchema, body: HarvestCreateSchema }, async ({ params, body }, req, res) => {
+perProperty.get('/:id/harvests', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await listHarvests(await propertyOf(req, params.id)) });
+}));
+
+perProperty.post('/:id/harvests', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema, body: HarvestCreateSchema }, async ({ params, body }, req, res) => {
   const record = await createHarvest(actor(req), params.id, body, req.ip ?? null);
   res.status(201).json({ data: await harvestAnswer(record) });
-}));
+}, { before: mayRecordHarvest }));
 
 perProperty.get('/:id/seasons/:season', STAFF_AND_CLIENT, ...typed({ params: SeasonParamsSchema }, async ({ params }, req, res) => {
-  const property = await propertyOf(req);
+  const property = await propertyOf(req, params.id);
   const { photos, ...summary } = await readSeasonSummary(property, params.season);
   res.json({ data: { ...summary, photoCount: photos.length } });
 }));
 
-perProperty.get('/:id/season-reports', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  res.json({ data: await listSeasonReports(actor(req), await propertyOf(req)) });
+perProperty.get('/:id/season-reports', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  res.json({ data: await listSeasonReports(actor(req), await propertyOf(req, params.id)) });
 }));
 
 perProperty.post('/:id/season-reports', STAFF, ...typed({ params: IdParamsSchema, body: SeasonReportCreateSchema }, async ({ params, body }, req, res) => {
@@ -114,8 +111,8 @@ perProperty.post('/:id/season-reports', STAFF, ...typed({ params: IdParamsSchema
 
 // ---- surveys ----
 
-surveys.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const { record, property } = await readableRecord<CameraSurvey>(req, CameraSurvey, 'That survey');
+surveys.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const { record, property } = await readableRecord<CameraSurvey>(req, params.id, CameraSurvey, 'That survey');
   res.json({ data: await readSurvey(record, property) });
 }));
 
@@ -131,8 +128,8 @@ surveys.delete('/:id', STAFF, ...typed({ params: IdParamsSchema }, async ({ para
 
 // ---- harvest records ----
 
-harvests.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async (_input, req, res) => {
-  const { record } = await readableRecord<HarvestRecord>(req, HarvestRecord, 'That harvest record');
+harvests.get('/:id', STAFF_AND_CLIENT, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
+  const { record } = await readableRecord<HarvestRecord>(req, params.id, HarvestRecord, 'That harvest record');
   res.json({ data: await harvestAnswer(record) });
 }));
 

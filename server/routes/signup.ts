@@ -1,7 +1,7 @@
 /** Sign-up of a new firm and its owner; public, rate-limited, never telling whether an e-mail is registered. */
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { defineRoutes } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
+import { typed } from '../middlewares/typed-route';
 import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
 import { SignupSchema } from '../../shared/schemas/auth';
 import { tooManyRequests } from '../errors';
@@ -30,12 +30,12 @@ async function evenOut(startedAt: number, floorMs: number): Promise<void> {
   if (left > 0) await new Promise((resolve) => setTimeout(resolve, left));
 }
 
-r.post('/', 'public', signupLimiter, validate({ body: SignupSchema }), async (req, res) => {
+r.post('/', 'public', signupLimiter, ...typed({ body: SignupSchema }, async ({ body }, req, res) => {
   const startedAt = performance.now();
-  await signUpFirm(req.body, req.ip ?? null);
+  await signUpFirm(body, req.ip ?? null);
   // A new address makes a firm and its library; a used one only queues a note. The floor hides the difference.
   await evenOut(startedAt, config.signupAnswerFloorMs);
   res.status(202).json({ data: { message: SIGNUP_ANSWER } });
-});
+}));
 
 export const signupRouter = r.router;

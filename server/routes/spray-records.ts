@@ -1,7 +1,7 @@
 /** Spray records for the firm's staff: a season's applications as JSON, CSV or PDF. Records are never deleted here. */
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
-import { SprayRecordQuerySchema, type SprayRecordQuery } from '../../shared/schemas/spray-records';
+import { typed } from '../middlewares/typed-route';
+import { SprayRecordQuerySchema } from '../../shared/schemas/spray-records';
 import { SPRAY_RECORD_CAUTION, sprayRecordsCsv } from '../../shared/domain/spray-records';
 import { formatDate } from '../../shared/domain/clock';
 import { actor, findInFirm } from '../policies/firm-scope';
@@ -12,9 +12,8 @@ import { Firm, Property } from '../models';
 
 const r = defineRoutes('/spray-records');
 
-r.get('/', STAFF, validate({ query: SprayRecordQuerySchema }), async (req, res) => {
+r.get('/', STAFF, ...typed({ query: SprayRecordQuerySchema }, async ({ query }, req, res) => {
   const me = actor(req);
-  const query = req.validQuery as SprayRecordQuery;
   const property = query.propertyId ? await findInFirm(Property, query.propertyId, me.firmId, 'That property') : null;
   const records = await listSprayRecords(me.firmId, query.season, property?.id);
   const fileName = `spray-records-${query.season}${property ? `-property-${property.id}` : ''}`;
@@ -33,6 +32,6 @@ r.get('/', STAFF, validate({ query: SprayRecordQuerySchema }), async (req, res) 
     return;
   }
   res.json({ data: { season: query.season, caution: SPRAY_RECORD_CAUTION, records } });
-});
+}));
 
 export const sprayRecordsRouter = r.router;

@@ -1,22 +1,22 @@
 /** The work schedule: tasks (crew see only their own), completions with photos, progress and the crew's calendar feed. */
-import type { Request } from 'express';
 import { z } from 'zod';
 import { defineRoutes, STAFF } from '../middlewares/access';
-import { validate } from '../middlewares/validate';
 import { typed } from '../middlewares/typed-route';
+import { idempotencyKey } from '../middlewares/idempotency-key';
 import { arrayUpload } from '../middlewares/upload';
 import { Property, Task, TaskPhoto } from '../models';
 import { IdParamsSchema } from '../../shared/schemas/common';
-import { IDEMPOTENCY_HEADER, IdempotencyKeySchema, TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema } from '../../shared/schemas/task';
+import { TaskListQuerySchema, TaskSkipSchema, TaskUpdateSchema, TaskAssignSchema } from '../../shared/schemas/task';
 import { PHOTO_LIMITS } from '../../shared/limits';
 import { TaskCompleteWithSpraySchema } from '../../shared/schemas/spray-records';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { assignTasks, completeTask, reopenTask, skipTask, taskForActor, updateTask } from '../commands/task-writer';
+import { setUnitDoneNotice } from '../commands/property-writer';
 import { listTasks, readTask } from '../services/tasks/task-reader';
 import { inspectPhoto } from '../services/tasks/photo-intake';
 import { propertyProgress } from '../services/tasks/progress';
 import { sendStoredFile } from '../services/storage/storage';
-import { badRequest, notFound, unprocessable } from '../errors';
+import { notFound } from '../errors';
 
 const r = defineRoutes('/tasks');
 const photosRouter = defineRoutes('/task-photos');
@@ -47,34 +47,21 @@ r.post('/assign', STAFF, ...typed({ body: TaskAssignSchema }, async ({ body }, r
   res.json({ data: await Promise.all(tasks.map((t) => readTask(me, t))) });
 }));
 
-function idempotencyKey(req: Request): string {
-  const raw = req.get(IDEMPOTENCY_HEADER);
-  if (!raw) throw badRequest(`Send an ${IDEMPOTENCY_HEADER} header: one new random key per completion, reused when the same completion is sent again.`);
-  const parsed = IdempotencyKeySchema.safeParse(raw);
-  if (!parsed.success) throw unprocessable(`${IDEMPOTENCY_HEADER}: ${parsed.error.issues[0]?.message ?? 'is not valid'}.`);
-  return parsed.data;
-}
 
-r.post(
-  '/:id/complete',
-  WORKERS,
-  validate({ params: IdParamsSchema }),
-  async (req, _res, next) => {
-    // Refuse before reading any file: wrong key, someone else's task or a finished task stores nothing.
-    idempotencyKey(req);
-    await taskForActor(actor(req), Number(req.params.id));
-    next();
+r.post('/:id/complete', WORKERS, ...typed({ params: IdParamsSchema, body: TaskCompleteWithSpraySchema }, async ({ params, body }, req, res) => {
+  const files = (req.files as Express.Multer.File[] | undefined) ?? [];
+  const photos = [];
+  for (const file of files) photos.push(await inspectPhoto(file.buffer, file.originalname || null));
+  const { task, replayed } = await completeTask(actor(req), params.id, body, photos, idempotencyKey(req, 'completion'), req.ip ?? null);
+  res.status(replayed ? 200 : 201).json({ data: await readTask(actor(req), task), replayed });
+}, {
+  // Refuse before reading any file: wrong key, someone else's task or a finished task stores nothing.
+  before: async (params, req) => {
+    idempotencyKey(req, 'completion');
+    await taskForActor(actor(req), params.id);
   },
-  arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perCompletion, 'photo'),
-  validate({ body: TaskCompleteWithSpraySchema }),
-  async (req, res) => {
-    const files = (req.files as Express.Multer.File[] | undefined) ?? [];
-    const photos = [];
-    for (const file of files) photos.push(await inspectPhoto(file.buffer, file.originalname || null));
-    const { task, replayed } = await completeTask(actor(req), Number(req.params.id), req.body, photos, idempotencyKey(req), req.ip ?? null);
-    res.status(replayed ? 200 : 201).json({ data: await readTask(actor(req), task), replayed });
-  },
-);
+  upload: arrayUpload('photos', PHOTO_LIMITS.maxBytes, PHOTO_LIMITS.perCompletion, 'photo'),
+}));
 
 r.post('/:id/skip', WORKERS, ...typed({ params: IdParamsSchema, body: TaskSkipSchema }, async ({ params, body }, req, res) => {
   const task = await skipTask(actor(req), params.id, body.reason, req.ip ?? null);
@@ -112,8 +99,7 @@ perProperty.get('/:id/progress', ['owner', 'consultant', 'client'], ...typed({ p
 
 const NotifySchema = z.object({ notifyClientOnUnitDone: z.boolean() }).strict();
 perProperty.patch('/:id/progress-settings', STAFF, ...typed({ params: IdParamsSchema, body: NotifySchema }, async ({ params, body }, req, res) => {
-  const property = await findInFirm(Property, params.id, actor(req).firmId, 'That property');
-  await property.update({ notifyClientOnUnitDone: body.notifyClientOnUnitDone });
+  const property = await setUnitDoneNotice(actor(req), params.id, body.notifyClientOnUnitDone, req.ip ?? null);
   res.json({ data: { notifyClientOnUnitDone: property.notifyClientOnUnitDone } });
 }));
 

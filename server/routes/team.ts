@@ -7,9 +7,8 @@ import { InviteCreateSchema } from '../../shared/schemas/auth';
 import { IdParamsSchema } from '../../shared/schemas/common';
 import { presentTeamMember } from '../presenters/user';
 import { sendInvitation } from '../commands/invitation-sender';
-import { actor, findInFirm } from '../policies/firm-scope';
-import { forbidden } from '../errors';
-import { recordAudit } from '../commands/audit-recorder';
+import { actor } from '../policies/firm-scope';
+import { setMemberActive } from '../commands/member-writer';
 
 const r = defineRoutes('/team');
 
@@ -26,11 +25,7 @@ r.post('/invitations', STAFF, ...typed({ body: InviteCreateSchema }, async ({ bo
 const MemberPatchSchema = z.object({ active: z.boolean() });
 
 r.patch('/:id', OWNER, ...typed({ params: IdParamsSchema, body: MemberPatchSchema }, async ({ params, body }, req, res) => {
-  const me = actor(req);
-  const user = await findInFirm(User, params.id, me.firmId, 'That person');
-  if (user.id === me.id) throw forbidden('You cannot disable your own account.');
-  await user.update({ active: body.active });
-  await recordAudit({ firmId: me.firmId, userId: me.id, action: body.active ? 'user.enabled' : 'user.disabled', subjectType: 'User', subjectId: user.id, ip: req.ip ?? null });
+  const user = await setMemberActive(actor(req), params.id, body.active, req.ip ?? null);
   res.json({ data: presentTeamMember(user) });
 }));
 

@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import { IsoDateSchema, RecordIdSchema, optionalText } from './common';
+import { SurveyCreateSchema } from './results';
 import { LIMITS } from '../limits';
 import { AGE_CLASSES } from '../domain/survey-estimates';
 import { CAMERA_TAGS, SUN_PERIODS, type SunPeriod } from '../domain/camera-events';
@@ -151,6 +152,17 @@ export type SurveyFromPhotosInput = z.input<typeof SurveyFromPhotosSchema>;
 
 /** True when a survey body asks to tally tagged photos (it carries `fromPhotos`) instead of typed tallies. */
 export const isFromPhotos = (body: unknown): boolean => typeof body === 'object' && body !== null && 'fromPhotos' in body;
+
+/**
+ * POST /api/properties/:id/surveys: typed tallies (SurveyCreateSchema), or `fromPhotos` to tally the
+ * tagged photos (SurveyFromPhotosSchema); each form is checked by its own schema, with its own messages.
+ */
+export const SurveyPostSchema = z.unknown().transform((value, ctx) => {
+  const result = isFromPhotos(value) ? SurveyFromPhotosSchema.safeParse(value) : SurveyCreateSchema.safeParse(value);
+  if (result.success) return result.data;
+  for (const issue of result.error.issues) ctx.addIssue({ ...issue, input: undefined } as Parameters<typeof ctx.addIssue>[0]);
+  return z.NEVER;
+});
 
 // ---- answers ----
 

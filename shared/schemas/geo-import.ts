@@ -46,6 +46,18 @@ export const ImportFeaturesQuerySchema = z.object({
     .refine((items) => items.length <= 5_000, 'ask for at most 5,000 features at a time'),
 });
 
+/** The formats a plan exports to (GET /api/properties/:id/export?format=…). */
+export const GEO_EXPORT_FORMATS = ['geojson', 'kml', 'gpx', 'csv'] as const;
+export type GeoExportFormat = (typeof GEO_EXPORT_FORMATS)[number];
+
+/** GET /api/properties/:id/export?format=kml — one of GEO_EXPORT_FORMATS. */
+export const PlanExportQuerySchema = z.object({
+  format: z
+    .string()
+    .refine((value): value is GeoExportFormat => (GEO_EXPORT_FORMATS as readonly string[]).includes(value), { message: `choose one of ${GEO_EXPORT_FORMATS.join(', ')}` })
+    .transform((value) => value as GeoExportFormat),
+});
+
 export const ImportParamsSchema = z.object({
   id: z.coerce.number().int().positive(),
   importId: z.string().uuid('that import id is not valid'),

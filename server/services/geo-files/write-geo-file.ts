@@ -6,8 +6,9 @@ import { writeGeoJson } from './write-geojson';
 import { writeGpx } from './write-gpx';
 import { writeKml } from './write-kml';
 import type { ExportFormat, GeoFileOutput, PlanExport } from './types';
+import { GEO_EXPORT_FORMATS } from '../../../shared/schemas/geo-import';
 
-export const EXPORT_FORMATS: readonly ExportFormat[] = ['geojson', 'kml', 'gpx', 'csv'];
+export const EXPORT_FORMATS: readonly ExportFormat[] = GEO_EXPORT_FORMATS;
 
 const WRITERS: Record<ExportFormat, { contentType: string; extension: string; write: (plan: PlanExport) => string }> = {
   geojson: { contentType: 'application/geo+json', extension: 'geojson', write: writeGeoJson }, // RFC 7946 §12

@@ -100,16 +100,14 @@ export async function deliverDueMessages(limit = 20): Promise<{ sent: number; fa
   return { sent, failed };
 }
 
-/** Puts a failed (or waiting) message of the firm back in the queue now, with a fresh 3-day retry window. */
-export async function resendMessage(firmId: number, id: number): Promise<OutboxMessage | null> {
-  return sequelize.transaction(async (transaction) => {
-    const message = await OutboxMessage.findOne({ where: { id, firmId }, lock: transaction.LOCK.UPDATE, transaction });
-    if (!message) return null;
-    if (message.status === 'sent') return message;
-    const now = new Date();
-    await message.update({ status: 'pending', attempts: 0, nextAttemptAt: now, retryUntil: new Date(now.getTime() + RETRY_WINDOW_MS) }, { transaction });
-    return message;
-  });
+/** Puts a failed (or waiting) message of the firm back in the queue now, with a fresh 3-day retry window, inside the caller's transaction (null when it is not the firm's). */
+export async function resendMessage(firmId: number, id: number, transaction: Transaction): Promise<OutboxMessage | null> {
+  const message = await OutboxMessage.findOne({ where: { id, firmId }, lock: transaction.LOCK.UPDATE, transaction });
+  if (!message) return null;
+  if (message.status === 'sent') return message;
+  const now = new Date();
+  await message.update({ status: 'pending', attempts: 0, nextAttemptAt: now, retryUntil: new Date(now.getTime() + RETRY_WINDOW_MS) }, { transaction });
+  return message;
 }
 
 /** Starts polling the outbox; returns a function that stops it. */

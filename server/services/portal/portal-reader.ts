@@ -26,6 +26,16 @@ export function withoutMoney(p: Progress): PortalProgress {
 
 const num = (v: unknown): number | null => (v === null || v === undefined ? null : Number(v));
 
+/** What the portal shows of a property everywhere: its name, size, place and objectives. */
+const propertyBasics = (p: Pick<Property, 'id' | 'name' | 'acres' | 'county' | 'state' | 'objectives'>) => ({
+  id: p.id,
+  name: p.name,
+  acres: num(p.acres),
+  county: p.county,
+  state: p.state,
+  objectives: p.objectives,
+});
+
 /** The client (404 when it is not the firm's) with the firm's contact details. */
 export async function portalClient(scope: PortalScope): Promise<{ client: Client; firm: Firm | null }> {
   const [client, firm] = await Promise.all([Client.findOne({ where: { id: scope.clientId, firmId: scope.firmId } }), Firm.findByPk(scope.firmId)]);
@@ -52,12 +62,7 @@ export async function readPortalProperties(scope: PortalScope): Promise<PortalPr
     properties: properties.map((p) => {
       const own = tasks.filter((t) => t.propertyId === p.id);
       return {
-        id: p.id,
-        name: p.name,
-        acres: num(p.acres),
-        county: p.county,
-        state: p.state,
-        objectives: p.objectives,
+        ...propertyBasics(p),
         unitCount: units.filter((u) => u.propertyId === p.id).length,
         percentDone: own.length ? progressOf(own).percentByCost : null,
       };
@@ -135,12 +140,7 @@ export async function readPortalProperty(scope: PortalScope, propertyId: number)
   const p = plan.property;
   return {
     property: {
-      id: p.id,
-      name: p.name,
-      acres: num(p.acres),
-      county: p.county,
-      state: p.state,
-      objectives: p.objectives,
+      ...propertyBasics(p),
       boundary: p.boundary ? (stripCrs(p.boundary) as unknown as Record<string, unknown>) : null,
     },
     units,

@@ -10,13 +10,6 @@ import { formatDateSpan } from '../../../shared/domain/clock';
 /** SHA-256 of a feed token: the database never holds the token itself. */
 export const hashFeedToken = (token: string): string => crypto.createHash('sha256').update(token).digest('hex');
 
-/** Makes a new feed for a user; the answer holds the only copy of its secret URL. */
-export async function createFeed(userId: number, firmId: number): Promise<{ feed: CalendarFeed; url: string }> {
-  const token = crypto.randomBytes(24).toString('base64url');
-  const feed = await CalendarFeed.create({ userId, firmId, tokenHash: hashFeedToken(token) });
-  return { feed, url: `${config.publicUrl}/api/calendar/${token}.ics` };
-}
-
 /** The calendar text for a feed token, or null when the token is unknown or revoked. */
 export async function calendarForToken(token: string): Promise<string | null> {
   const feed = await CalendarFeed.findOne({ where: { tokenHash: hashFeedToken(token), revokedAt: null } });
