@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { seedDemo } from '../../server/db/seeds/demo';
 import { seedDemoPrescriptions } from '../../server/db/seeds/demo-prescriptions';
+import { seedDemoSchedule } from '../../server/db/seeds/demo-schedule';
 import { seedDemoPortal } from '../../server/db/seeds/demo-portal';
 import { SharedFile, Task, TaskPhoto } from '../../server/models';
 import { signedInAgent } from '../support/test-app';
@@ -12,6 +13,8 @@ describe('the portal demo', () => {
   it('is idempotent and gives the family files, tasks with a photo, and uploads', async () => {
     const firm = await seedDemo();
     await seedDemoPrescriptions(firm);
+    // The portal demo builds on the scheduled work, as `npm start` seeds it: this file must not rely on another having run first.
+    await seedDemoSchedule(firm);
     await seedDemoPortal(firm);
     const first = await counts();
     await seedDemoPortal(await seedDemo());
