@@ -76,7 +76,7 @@ describe('paged lists', () => {
   it("answers a week with exactly the tasks whose window overlaps it, read through the window index", async () => {
     const property = await makeProperty(ctx.firm.id, ctx.client.id);
     const base = { firmId: ctx.firm.id, propertyId: property.id, unitId: null, kind: 'planting', practiceName: 'Clover plot', unitName: 'Whole property' };
-    const cases: [name: string, dates: Partial<Record<'earliest' | 'latest' | 'startDate' | 'endDate', string>>, inWeek: boolean][] = [
+    const cases: [name: string, dates: { earliest: string; latest: string; startDate?: string; endDate?: string }, inWeek: boolean][] = [
       ['long window across the week', { earliest: '2026-06-01', latest: '2026-12-31' }, true],
       ['ends on the first day', { earliest: '2026-08-01', latest: '2026-08-15', startDate: '2026-08-14', endDate: '2026-08-17' }, true],
       ['starts on the last day', { earliest: '2026-08-23', latest: '2026-09-30' }, true],
