@@ -14,7 +14,7 @@ import { presentUnit } from '../presenters/unit';
 import { actor, findInFirm } from '../policies/firm-scope';
 import { createProperty, deleteProperty, updateProperty } from '../commands/property-writer';
 import { createUnits } from '../commands/unit-writer';
-import { loadPlan, planEtagAt, planRevision, planSummary, unitsAnswer } from '../services/plan/plan-reader';
+import { loadPlan, planEtagAt, planRevision, planSummaryOf, unitsAnswer } from '../services/plan/plan-reader';
 import { etagMatches, sendPrecompressed } from '../services/http/precompressed';
 import { writeGeoFile, isExportFormat, EXPORT_FORMATS } from '../services/geo-files';
 import { runGeoImport } from '../services/geo-work/geo-pool';
@@ -110,8 +110,7 @@ r.post('/:id/units/bulk', STAFF, validate({ params: IdParamsSchema, body: UnitBu
 
 r.get('/:id/plan', STAFF, validate({ params: IdParamsSchema }), async (req, res) => {
   const { firmId } = actor(req);
-  const plan = await loadPlan(Number(req.params.id), firmId);
-  res.json({ data: await planSummary(plan) });
+  res.json({ data: await planSummaryOf(Number(req.params.id), firmId) });
 });
 
 r.post('/:id/imports', STAFF, validate({ params: IdParamsSchema }), singleUpload('file', GEOMETRY_LIMITS.importMaxBytes, 'file'), async (req, res) => {

@@ -29,6 +29,7 @@ import * as m0085 from './0085-search-trigram';
 import * as m0086 from './0086-firm-exports';
 import * as m0090 from './0090-plant-back-days';
 import * as m0091 from './0091-task-week-window';
+import * as m0092 from './0092-plan-inputs-revision';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -61,4 +62,5 @@ export const migrations = [
   { name: '0086-firm-exports', ...m0086 },
   { name: '0090-plant-back-days', ...m0090 },
   { name: '0091-task-week-window', ...m0091 },
+  { name: '0092-plan-inputs-revision', ...m0092 },
 ];
