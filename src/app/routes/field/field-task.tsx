@@ -10,10 +10,8 @@ import { Button } from '../../../components/ui/button';
 import { useTask } from '../../../features/field/api/get-task';
 import type { FieldTask } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
-import { UnitMap } from '../../../features/field/components/unit-map';
 import { KindChip, TaskStatusChip } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
-import { Directions } from '../../../features/field/components/directions';
 import { plannedDates, windowText } from '../../../features/field/lib/task-text';
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
 import { offersChecks } from '../../../features/field/lib/check-offer';
@@ -25,6 +23,10 @@ const loadSkipForm = () => import('../../../features/field/components/skip-form'
 const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
 const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
 const CheckForm = lazy(() => import('../../../features/field/components/check-form').then((m) => ({ default: m.CheckForm })));
+// The unit's sketch and the directions come in their own small file, asked
+// for as soon as this page's code runs, so the task's words paint without waiting for them.
+const UnitMap = lazy(() => import('../../../features/field/components/unit-map').then((m) => ({ default: m.UnitMap })));
+const Directions = lazy(() => import('../../../features/field/components/directions').then((m) => ({ default: m.Directions })));
 
 function BackLink() {
   return (
@@ -159,8 +161,10 @@ export function FieldTaskPage() {
           ))}
         </ul>
       ) : null}
-      <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
-      <Directions location={t.location} label={t.unitName} />
+      <Suspense fallback={<div className="min-h-[200px]" aria-hidden="true" />}>
+        <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
+        <Directions location={t.location} label={t.unitName} />
+      </Suspense>
       <QuantitiesCard task={t} />
       {t.cautions.map((c) => (
         <CautionBox key={c.id} title={c.title}>
