@@ -152,6 +152,9 @@ export async function presentTasks(actor: SessionUser, tasks: Task[], options: {
 export const TASK_WINDOW_SQL =
   "daterange(LEAST(COALESCE(t.start_date, t.earliest), COALESCE(t.end_date, t.start_date, t.latest)), GREATEST(COALESCE(t.start_date, t.earliest), COALESCE(t.end_date, t.start_date, t.latest)), '[]')";
 
+/** The longest date range (days) read through the window index: a week or a month view. */
+const WINDOW_INDEX_MAX_DAYS = 31;
+
 /** The filter of `taskScope` as SQL over `tasks t`, with its replacements. */
 function taskScopeSql(actor: SessionUser, query: TaskListQuery): { sql: string; replacements: Record<string, unknown> } {
   const clauses = ['t.firm_id = :firmId'];
@@ -185,11 +188,12 @@ function taskScopeSql(actor: SessionUser, query: TaskListQuery): { sql: string; 
     replacements.from = query.from;
   }
   // A superset of the two date tests that the GiST index tasks_firm_window_idx (migration 0091) answers,
-  // so a week reads only the tasks overlapping it rather than every earlier task of the firm.
-  if (query.from || query.to) {
+  // so a week reads only the tasks overlapping it rather than every earlier task of the firm. Only for
+  // short ranges: over a season most tasks overlap and the date-ordered btree reads fewer rows.
+  if (query.from && query.to && Date.parse(query.to) - Date.parse(query.from) <= WINDOW_INDEX_MAX_DAYS * 86_400_000) {
     clauses.push(`${TASK_WINDOW_SQL} && daterange(CAST(:windowFrom AS date), CAST(:windowTo AS date), '[]')`);
-    replacements.windowFrom = query.from ?? null;
-    replacements.windowTo = query.to ?? null;
+    replacements.windowFrom = query.from;
+    replacements.windowTo = query.to;
   }
   return { sql: clauses.join(' AND '), replacements };
 }
@@ -199,9 +203,9 @@ type TaskListRow = TaskFields & Omit<TaskRelated, 'photos'> & { photos: (Omit<Ta
 /**
  * A page of the tasks an actor may see, filtered, in date order, with the number matching in all
  * (never cut silently). Unit outlines only when asked (`geometry=true`, the field sheet's sketches).
- * One query: the page's rows and the total (a window count over the filter; a date range is found
- * through the window index of migration 0091), then only the page's rows get their names, unit
- * points and photos; no model instances, no second trip.
+ * One query: the page's ids and the total (a window count over the filter's cheap columns; a week is
+ * found through the window index of migration 0091), then only the page's rows with their names,
+ * unit points and photos; no model instances, no second trip.
  */
 export async function listTasks(actor: SessionUser, query: TaskListQuery): Promise<{ tasks: TaskView[]; warnings: TaskWarning[]; page: PageDto }> {
   const page = { limit: query.limit ?? TASK_PAGE.defaultLimit, offset: query.offset ?? 0 };
@@ -219,15 +223,16 @@ export async function listTasks(actor: SessionUser, query: TaskListQuery): Promi
             a.name AS "assigneeName", cb.name AS "completedByName",
             COALESCE((SELECT json_agg(json_build_object('id', ph.id, 'takenAt', ${iso('ph.taken_at')}, 'latitude', ph.latitude, 'longitude', ph.longitude, 'createdAt', ${iso('ph.created_at')}) ORDER BY ph.id)
                       FROM task_photos ph WHERE ph.task_id = t.id), '[]'::json) AS photos,
-            t.total
-     FROM (SELECT t.*, count(*) OVER () AS total, row_number() OVER (ORDER BY COALESCE(t.start_date, t.earliest), t.property_id, t.unit_name, t.position, t.id) AS n
+            pg.total
+     FROM (SELECT t.id, count(*) OVER () AS total, row_number() OVER (ORDER BY COALESCE(t.start_date, t.earliest), t.property_id, t.unit_name, t.position, t.id) AS n
            FROM tasks t WHERE ${scope.sql}
-           ORDER BY n LIMIT :limit OFFSET :offset) t
+           ORDER BY n LIMIT :limit OFFSET :offset) pg
+     JOIN tasks t ON t.id = pg.id
      JOIN properties p ON p.id = t.property_id
      LEFT JOIN units u ON u.id = t.unit_id
      LEFT JOIN users a ON a.id = t.assignee_id
      LEFT JOIN users cb ON cb.id = t.completed_by_id
-     ORDER BY t.n`,
+     ORDER BY pg.n`,
     { replacements: { ...scope.replacements, limit: page.limit, offset: page.offset }, type: QueryTypes.SELECT },
   );
   // Past the last page the window count has no row to ride on: count on its own.
