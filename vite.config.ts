@@ -110,22 +110,28 @@ export default defineConfig({
               test: /[\\/]src[\\/](lib[\\/](query-client|persist-rules|query-persistence|update-state|route-params|format|quantity-format)\.ts|app[\\/](route-loaders|lazy-page)\.ts|features[\\/](field[\\/]api[\\/](get-field-home|get-my-tasks|get-task|keys)\.ts|(portal|desk)[\\/]api[\\/][^\\/]+|auth[\\/]api[\\/](get-me|login)\.ts)|components[\\/](ui[\\/](card|toast|offline-notice|update-prompt)|layouts[\\/](user-menu|require-role))\.tsx)$/,
             },
             {
-              // The field sheet's first paint: its layout, shell, home page, task cards and the completion queue.
+              // What every field page paints with: its layout, shell, task cards and the completion queue.
               name: 'field',
               includeDependenciesRecursively: false,
-              test: /[\\/]src[\\/](features[\\/]field[\\/](hooks[\\/][^\\/]+|api[\\/](complete-task|skip-task)\.ts|lib[\\/](completion-queue|completion-store|task-text)\.ts|components[\\/](task-card|queue-notice)\.tsx)|app[\\/]routes[\\/]field[\\/](field-shell|field-home)\.tsx|components[\\/]layouts[\\/]field-layout\.tsx)$/,
+              test: /[\\/]src[\\/](features[\\/]field[\\/](hooks[\\/][^\\/]+|api[\\/](complete-task|skip-task)\.ts|lib[\\/](completion-queue|completion-store|task-text)\.ts|components[\\/](task-card|queue-notice)\.tsx)|app[\\/]routes[\\/]field[\\/]field-shell\.tsx|components[\\/]layouts[\\/]field-layout\.tsx)$/,
             },
             {
-              // A task's page (its directions): loads when a task is opened, precached for no signal.
+              // The field sheet's list page apart, so that opening a task does not download it.
+              name: 'field-home',
+              includeDependenciesRecursively: false,
+              test: /[\\/]src[\\/]app[\\/]routes[\\/]field[\\/]field-home\.tsx$/,
+            },
+            {
+              // A task's page: loads when a task is opened, precached for no signal.
               name: 'field-task',
               includeDependenciesRecursively: false,
-              test: /[\\/]src[\\/](features[\\/]field[\\/](lib[\\/](geo-uri|directions)\.ts|components[\\/]directions\.tsx)|app[\\/]routes[\\/]field[\\/]field-task\.tsx)$/,
+              test: /[\\/]src[\\/](features[\\/]field[\\/]lib[\\/]geo-uri\.ts|app[\\/]routes[\\/]field[\\/]field-task\.tsx)$/,
             },
             {
-              // The task's unit sketch (it draws through d3-geo): loaded with the task page, precached for no signal.
-              name: 'unit-map',
+              // The task's unit sketch (drawn through d3-geo) and directions: one small file the task page asks for as it starts, precached for no signal.
+              name: 'field-task-place',
               includeDependenciesRecursively: false,
-              test: /[\\/](src[\\/]features[\\/]field[\\/](lib[\\/]unit-sketch\.ts|components[\\/]unit-map\.tsx)|shared[\\/]domain[\\/]map-projection\.ts)$/,
+              test: /[\\/](src[\\/]features[\\/]field[\\/](lib[\\/](unit-sketch|directions)\.ts|components[\\/](unit-map|directions)\.tsx)|shared[\\/]domain[\\/]map-projection\.ts)$/,
             },
           ],
         },

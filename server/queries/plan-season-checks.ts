@@ -1,8 +1,8 @@
 /**
  * The plan checks that read the season's work rather than the map: plant-back intervals (herbicide
  * tasks against the seedings after them on the same unit) and rotation (the crop family each unit's
- * prescriptions sow, season by season). Read fresh on every call: tasks and prescriptions change
- * without bumping the plan's revision.
+ * prescriptions sow, season by season). Its inputs bump the plan's revision (migration 0092), so the
+ * plan reader caches the answer by revision.
  */
 import { Op } from 'sequelize';
 import { Material, Practice, Prescription, Task, Unit } from '../models';

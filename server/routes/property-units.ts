@@ -6,7 +6,7 @@ import { UnitBulkCreateSchema, UnitCreateSchema } from '../../shared/schemas/uni
 import { presentUnit } from '../presenters/unit';
 import { actor } from '../policies/firm-scope';
 import { createUnits } from '../commands/unit-writer';
-import { loadPlan, planEtagAt, planRevision, planSummary, unitsAnswer } from '../services/plan/plan-reader';
+import { planEtagAt, planRevision, planSummaryOf, unitsAnswer } from '../services/plan/plan-reader';
 import { etagMatches, sendPrecompressed } from '../services/http/precompressed';
 
 const r = defineRoutes('/properties');
@@ -34,8 +34,7 @@ r.post('/:id/units/bulk', STAFF, ...typed({ params: IdParamsSchema, body: UnitBu
 }));
 
 r.get('/:id/plan', STAFF, ...typed({ params: IdParamsSchema }, async ({ params }, req, res) => {
-  const plan = await loadPlan(params.id, actor(req).firmId);
-  res.json({ data: await planSummary(plan) });
+  res.json({ data: await planSummaryOf(params.id, actor(req).firmId) });
 }));
 
 export const propertyUnitsRouter = r.router;

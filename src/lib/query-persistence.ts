@@ -86,5 +86,8 @@ export async function startQueryPersistence(queryClient: QueryClient, waitMs = 1
   // a moment after each answer): mark it stale so every page asks again as soon as there is signal.
   restored.then(() => queryClient.invalidateQueries()).catch(() => undefined);
   saveWhenLeaving(queryClient);
+  performance.mark('browseline:restore-start');
   await Promise.race([restored.catch(() => undefined), new Promise((resolve) => setTimeout(resolve, waitMs))]);
+  // Timing marks for the slow-phone bench's breakdown of a warm open (tests/bench/slow-phone.ts).
+  performance.mark('browseline:restored');
 }

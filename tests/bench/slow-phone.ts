@@ -99,6 +99,32 @@ const portalReady = (page: Page) => page.getByRole('link', { name: /See the plan
 
 type Figures = Record<string, number>;
 
+/**
+ * Where a warm open's time went (BENCH_VERBOSE=1): the page's own clock from navigation start — the
+ * HTML's first byte and end, whether a service worker served the page, scripts fetched from the
+ * network rather than a cache, the persisted cache restored, and the moment it was measured usable.
+ */
+async function warmBreakdown(page: Page, label: string): Promise<void> {
+  if (!process.env.BENCH_VERBOSE) return;
+  // A string, not a function: the TypeScript loader would wrap inner functions in a helper the page lacks.
+  const b = await page.evaluate(`(() => {
+    const nav = performance.getEntriesByType('navigation')[0];
+    const restoreStart = performance.getEntriesByName('browseline:restore-start')[0];
+    const restored = performance.getEntriesByName('browseline:restored')[0];
+    return {
+      sw: Boolean(navigator.serviceWorker && navigator.serviceWorker.controller),
+      htmlFirstByte: Math.round(nav.responseStart),
+      htmlEnd: Math.round(nav.responseEnd),
+      domContentLoaded: Math.round(nav.domContentLoadedEventEnd),
+      restoreStart: restoreStart ? Math.round(restoreStart.startTime) : -1,
+      restored: restored ? Math.round(restored.startTime) : -1,
+      now: Math.round(performance.now()),
+      network: performance.getEntriesByType('resource').filter((r) => r.transferSize > 0).map((r) => new URL(r.name).pathname.replace(/^\\/assets\\//, '') + ' ' + Math.round(r.startTime) + '-' + Math.round(r.responseEnd)),
+    };
+  })()`);
+  console.error(`  ${label}: ${JSON.stringify(b)}`);
+}
+
 async function round(browser: Browser, t: Target): Promise<Figures> {
   const f: Figures = {};
   // Sign-in form, cold then warm; then the crew member signs in: the field sheet, then reloaded.
@@ -114,6 +140,7 @@ async function round(browser: Browser, t: Target): Promise<Figures> {
     f['field sheet usable after sign-in, cold (s)'] = await timed(() => page.getByRole('button', { name: 'Sign in' }).click(), () => fieldReady(page));
     await page.waitForLoadState('load');
     f['field sheet usable, warm reload (s)'] = await timed(() => page.reload({ waitUntil: 'commit' }), () => fieldReady(page));
+    await warmBreakdown(page, `${t.name} field sheet warm`);
     await context.close();
   }
   // The landowner, signed in (through the API, not timed), opens the portal home cold, then again.
@@ -124,6 +151,7 @@ async function round(browser: Browser, t: Target): Promise<Figures> {
     f['portal home usable, cold (s)'] = await timed(() => page.goto(`${t.base}/portal`, { waitUntil: 'commit' }), () => portalReady(page));
     await page.waitForLoadState('load');
     f['portal home usable, warm reload (s)'] = await timed(() => page.reload({ waitUntil: 'commit' }), () => portalReady(page));
+    await warmBreakdown(page, `${t.name} portal home warm`);
     await context.close();
   }
   for (const k of Object.keys(f)) if (k.endsWith('(s)')) f[k] /= 1000;

@@ -39,7 +39,8 @@ describe('the firm’s clock', () => {
     await page.goto(`${baseUrl}/settings/team`);
     const select = page.getByLabel('Time zone');
     await select.waitFor(WAIT);
-    expect(await select.inputValue()).toBe('America/Chicago');
+    // The form may show before the firm's settings arrive: wait for the saved zone, not for time.
+    await expect.poll(() => select.inputValue(), WAIT).toBe('America/Chicago');
     await select.selectOption(zone);
     await page.getByRole('button', { name: 'Save firm settings' }).click();
     await page.getByText('Firm settings saved.').waitFor(WAIT);

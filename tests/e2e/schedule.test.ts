@@ -165,7 +165,8 @@ describe('the consultant’s schedule', () => {
     const again = page.getByRole('dialog', { name: second.name });
     await again.getByLabel('Notes for the crew', { exact: true }).waitFor(WAIT);
     await expect.poll(() => again.getByLabel('Crew member', { exact: true }).evaluate((el) => (el as HTMLSelectElement).selectedOptions[0]?.textContent), WAIT).toBe('Rosa Quintero');
-    expect(await again.getByLabel('Notes for the crew', { exact: true }).inputValue()).toBe(note);
+    // The kept copy may paint first; the server's answer fills the form when it arrives: wait for it.
+    await expect.poll(() => again.getByLabel('Notes for the crew', { exact: true }).inputValue(), WAIT).toBe(note);
     await screenshot(page, 'schedule-panel-after-reload');
     // Unassign it again so the later steps find the task as the seed left it.
     await again.getByLabel('Crew member', { exact: true }).selectOption({ label: 'Unassigned' });

@@ -12,6 +12,9 @@ import { LIST_PAGE } from '../../shared/schemas/common';
 import { TASK_PAGE } from '../../shared/schemas/task';
 import { INVOICE_PAGE, InvoiceListSummarySchema } from '../../shared/schemas/invoice';
 import type { Polygon } from 'geojson';
+import { QueryTypes } from 'sequelize';
+import { sequelize } from '../../server/db/sequelize';
+import { TASK_WINDOW_SQL } from '../../server/services/tasks/task-reader';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
 let consultant: Agent;
@@ -68,6 +71,39 @@ describe('paged lists', () => {
     expect(fromList.photos).toHaveLength(1);
     expect(fromList.photos[0].takenAt).toBe('2026-08-10T14:03:04.567Z');
     expect(fromList).toEqual(one.body.data);
+  });
+
+  it("answers a week with exactly the tasks whose window overlaps it, read through the window index", async () => {
+    const property = await makeProperty(ctx.firm.id, ctx.client.id);
+    const base = { firmId: ctx.firm.id, propertyId: property.id, unitId: null, kind: 'planting', practiceName: 'Clover plot', unitName: 'Whole property' };
+    const cases: [name: string, dates: { earliest: string; latest: string; startDate?: string; endDate?: string }, inWeek: boolean][] = [
+      ['long window across the week', { earliest: '2026-06-01', latest: '2026-12-31' }, true],
+      ['ends on the first day', { earliest: '2026-08-01', latest: '2026-08-15', startDate: '2026-08-14', endDate: '2026-08-17' }, true],
+      ['starts on the last day', { earliest: '2026-08-23', latest: '2026-09-30' }, true],
+      ['scheduled inside, window outside', { earliest: '2026-01-01', latest: '2026-01-31', startDate: '2026-08-19' }, true],
+      ['window inverted, inside', { earliest: '2026-08-20', latest: '2026-08-18' }, true],
+      ['ends the day before', { earliest: '2026-08-01', latest: '2026-08-16' }, false],
+      ['starts the day after', { earliest: '2026-08-24', latest: '2026-09-30' }, false],
+      ['scheduled before, window across', { earliest: '2026-08-01', latest: '2026-08-31', startDate: '2026-08-02', endDate: '2026-08-03' }, false],
+    ];
+    await Task.bulkCreate(cases.map(([name, dates], i) => ({ ...base, stepKey: `window-${i}`, name, ...dates })));
+    // The week of Monday 2026-08-17 to Sunday 2026-08-23 (dates as the week page asks for them).
+    const week = await consultant.get(`/api/tasks?propertyId=${property.id}&from=2026-08-17&to=2026-08-23&limit=50`).expect(200);
+    const names = (week.body.data.tasks as { name: string }[]).map((t) => t.name).sort();
+    expect(names).toEqual(cases.filter(([, , inWeek]) => inWeek).map(([name]) => name).sort());
+    expect(week.body.data.page.total).toBe(names.length);
+    // The index answers the list's own date predicate (same expression as migration 0091), so a week
+    // costs what the week holds, not what the firm has done before it.
+    const [plan] = await sequelize.transaction(async (transaction) => {
+      await sequelize.query('SET LOCAL enable_seqscan = off', { transaction });
+      return sequelize.query<{ 'QUERY PLAN': string }>(
+        `EXPLAIN SELECT t.id FROM tasks t WHERE t.firm_id = :firmId AND ${TASK_WINDOW_SQL} && daterange(CAST(:from AS date), CAST(:to AS date), '[]')`,
+        { replacements: { firmId: ctx.firm.id, from: '2026-08-17', to: '2026-08-23' }, type: QueryTypes.SELECT, transaction, raw: true },
+      );
+    });
+    expect(JSON.stringify(plan)).toContain('tasks_firm_window_idx');
+    await Task.destroy({ where: { propertyId: property.id } });
+    await property.destroy();
   });
 
   it('leaves unit outlines out of task lists unless asked', async () => {

@@ -28,6 +28,8 @@ import * as m0080 from './0080-list-read-indexes';
 import * as m0085 from './0085-search-trigram';
 import * as m0086 from './0086-firm-exports';
 import * as m0090 from './0090-plant-back-days';
+import * as m0091 from './0091-task-week-window';
+import * as m0092 from './0092-plan-inputs-revision';
 
 export const migrations = [
   { name: '0001-foundation', ...m0001 },
@@ -59,4 +61,6 @@ export const migrations = [
   { name: '0085-search-trigram', ...m0085 },
   { name: '0086-firm-exports', ...m0086 },
   { name: '0090-plant-back-days', ...m0090 },
+  { name: '0091-task-week-window', ...m0091 },
+  { name: '0092-plan-inputs-revision', ...m0092 },
 ];

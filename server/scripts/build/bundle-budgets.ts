@@ -96,6 +96,7 @@ export const OFFLINE_PAGES = [
   'src/app/routes/field/field-home.tsx',
   'src/app/routes/field/field-task.tsx',
   'src/features/field/components/unit-map.tsx',
+  'src/features/field/components/directions.tsx',
   'src/features/field/components/complete-form.tsx',
   'src/features/field/components/skip-form.tsx',
   'src/features/field/components/calendar-feeds-card.tsx',

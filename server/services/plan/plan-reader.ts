@@ -1,8 +1,9 @@
 /**
  * Reads a property's plan lean: one query for the property (ownership and revision), one raw query
  * for its units. Answers are cached per process keyed by the plan's revision, which every write bumps
- * in the same transaction, so a cache entry can never be stale (only unused) — several instances
- * stay consistent without sharing memory.
+ * in the same transaction (units in their commands; the summary's other inputs through the triggers
+ * of migration 0092), so a cache entry can never be stale (only unused) — several instances stay
+ * consistent without sharing memory.
  */
 import { QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
@@ -100,11 +101,25 @@ const presentWarning = (w: PlanWarning): PlanSummary['warnings'][number] => ({
 });
 
 /**
- * Share of the property by kind and the plan warnings: the map's (cached by revision and the firm's
- * route distance) and the season's — plant-back intervals and rotation — read fresh, since tasks and
- * prescriptions change without a new revision.
+ * Share of the property by kind and the plan warnings — the map's and the season's (plant-back
+ * intervals and rotation) — cached whole by the plan's revision. Every input bumps the revision in
+ * the same transaction as its write: units in their commands; tasks, prescriptions, the firm's
+ * materials, practices and settings (route buffer) through the triggers of migration 0092.
  */
-export async function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
+export function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
+  return remember(`summary:${plan.property.id}:${plan.revision}`, () => summaryOf(plan));
+}
+
+/**
+ * The plan summary of a property of the firm (404 outside it): a warm read is the one revision query;
+ * the plan itself is loaded only when the summary at that revision is not cached yet.
+ */
+export async function planSummaryOf(propertyId: number, firmId: number): Promise<PlanSummary> {
+  const revision = await planRevision(propertyId, firmId);
+  return remember(`summary:${propertyId}:${revision}`, async () => summaryOf(await loadPlan(propertyId, firmId)));
+}
+
+async function summaryOf(plan: LoadedPlan): Promise<PlanSummary> {
   const [mapped, season] = await Promise.all([mapSummary(plan), seasonPlanWarnings(plan.property.id, plan.property.firmId)]);
   return season.length ? { ...mapped, warnings: [...mapped.warnings, ...season.map(presentWarning)] } : mapped;
 }
@@ -112,18 +127,16 @@ export async function planSummary(plan: LoadedPlan): Promise<PlanSummary> {
 async function mapSummary(plan: LoadedPlan): Promise<PlanSummary> {
   const firm = await Firm.findByPk(plan.property.firmId, { attributes: ['id', 'settings'] });
   const { routeBufferYd } = huntingSettings(firm?.settings);
-  return remember(`summary:${plan.property.id}:${plan.revision}:${routeBufferYd}`, async () => {
-    const units = await plan.units();
-    const boundary = plan.property.boundary ? stripCrs(plan.property.boundary) : null;
-    const planUnits = units.map((u) => ({ id: String(u.id), name: u.name, kind: u.kind, geometry: u.geometry }));
-    const boundaryAcres = plan.property.acres;
-    return {
-      propertyId: plan.property.id,
-      revision: plan.revision,
-      boundaryAcres,
-      shareByKind: boundaryAcres ? shareByKind(boundaryAcres, planUnits) : [],
-      // Stored shapes already passed PostGIS validation: skip the quadratic crossing pre-check on large ones.
-      warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices, routeBufferYd }).map(presentWarning),
-    };
-  });
+  const units = await plan.units();
+  const boundary = plan.property.boundary ? stripCrs(plan.property.boundary) : null;
+  const planUnits = units.map((u) => ({ id: String(u.id), name: u.name, kind: u.kind, geometry: u.geometry }));
+  const boundaryAcres = plan.property.acres;
+  return {
+    propertyId: plan.property.id,
+    revision: plan.revision,
+    boundaryAcres,
+    shareByKind: boundaryAcres ? shareByKind(boundaryAcres, planUnits) : [],
+    // Stored shapes already passed PostGIS validation: skip the quadratic crossing pre-check on large ones.
+    warnings: planWarnings({ boundary, units: planUnits, maxVertices: GEOMETRY_LIMITS.boundaryMaxVertices, crossingCheckMaxVertices: GEOMETRY_LIMITS.crossingCheckMaxVertices, routeBufferYd }).map(presentWarning),
+  };
 }

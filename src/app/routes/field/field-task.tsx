@@ -12,7 +12,6 @@ import type { FieldTask } from '../../../features/field/api/get-my-tasks';
 import { useCompletionQueue } from '../../../features/field/hooks/use-completion-queue';
 import { KindChip, TaskStatusChip } from '../../../features/field/components/task-card';
 import { QueueNotice } from '../../../features/field/components/queue-notice';
-import { Directions } from '../../../features/field/components/directions';
 import { plannedDates, windowText } from '../../../features/field/lib/task-text';
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
 import { offersChecks } from '../../../features/field/lib/check-offer';
@@ -21,13 +20,15 @@ import { useMe } from '../../../features/auth/api/get-me';
 // The forms (and the shared zod schemas they check with) load after the page shows; the page asks for them at once.
 const loadCompleteForm = () => import('../../../features/field/components/complete-form');
 const loadSkipForm = () => import('../../../features/field/components/skip-form');
-// The unit's small map draws through d3-geo (shared/domain/map-projection.ts): loaded with the page
+// The unit's small map (with the directions) draws through d3-geo (shared/domain/map-projection.ts): loaded with the page
 // rather than in its first load, and precached for no signal (OFFLINE_PAGES in bundle-budgets.ts).
 const loadUnitMap = () => import('../../../features/field/components/unit-map');
 const UnitMap = lazy(() => loadUnitMap().then((m) => ({ default: m.UnitMap })));
 const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
 const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
 const CheckForm = lazy(() => import('../../../features/field/components/check-form').then((m) => ({ default: m.CheckForm })));
+// The directions come in the same small file as the unit's map, so the task's words paint without waiting for them.
+const Directions = lazy(() => import('../../../features/field/components/directions').then((m) => ({ default: m.Directions })));
 
 function BackLink() {
   return (
@@ -165,8 +166,8 @@ export function FieldTaskPage() {
       ) : null}
       <Suspense fallback={<div className="aspect-[8/5] w-full rounded border border-rule bg-paper" aria-hidden />}>
         <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
+        <Directions location={t.location} label={t.unitName} />
       </Suspense>
-      <Directions location={t.location} label={t.unitName} />
       <QuantitiesCard task={t} />
       {t.cautions.map((c) => (
         <CautionBox key={c.id} title={c.title}>
