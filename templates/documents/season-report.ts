@@ -95,7 +95,8 @@ function table(header: string[], rows: (string | Content)[][], widths: (string |
     header.map((h, i) => ({ text: h, style: 'tableHeader', alignment: numeric.includes(i) ? 'right' : 'left' }) as TableCell),
     ...rows.map((r) => r.map((c, i) => (typeof c === 'string' ? ({ text: c, style: 'tableCell', alignment: numeric.includes(i) ? 'right' : 'left' } as TableCell) : (c as TableCell)))),
   ];
-  return { table: { headerRows: 1, widths, body, dontBreakRows: true }, layout: ruledTableLayout };
+  // keepWithHeaderRows: a header is never left alone at the foot of a page, its first row goes with it.
+  return { table: { headerRows: 1, keepWithHeaderRows: 1, widths, body, dontBreakRows: true }, layout: ruledTableLayout };
 }
 
 function chart(svg: string, heightPt: number): Content {
@@ -279,6 +280,9 @@ function observationsSection(input: SeasonReportDocumentInput): Content[] {
   return out;
 }
 
+/** Up to this many stands, the pressure section is kept on one page. */
+const PRESSURE_STANDS_ON_ONE_PAGE = 20;
+
 function pressureSection(input: SeasonReportDocumentInput): Content[] {
   const p = input.pressure;
   if (!p || p.stands.length === 0) return [];
@@ -301,7 +305,8 @@ function pressureSection(input: SeasonReportDocumentInput): Content[] {
     ),
   );
   if (p.sampledHarvests > 0) out.push({ text: `${p.sampledHarvests} ${p.sampledHarvests === 1 ? 'harvest carries' : 'harvests carry'} a state disease-sampling number; results come from the state wildlife agency.`, style: 'muted', margin: [0, 6, 0, 0] });
-  return out;
+  // A property's stands fit on one page: the heading, its words and the table move to the next page together.
+  return p.stands.length <= PRESSURE_STANDS_ON_ONE_PAGE ? [{ stack: out, unbreakable: true }] : out;
 }
 
 /** The season report's document definition; throws DomainValidationError naming the field on bad input. */

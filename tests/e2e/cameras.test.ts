@@ -38,7 +38,7 @@ describe('a camera card from the field to a survey', () => {
     const setOn = addDays(today, -20);
     await page.getByLabel('Camera', { exact: true }).selectOption('new');
     await page.getByLabel('New camera’s label').fill('Cam E2E');
-    await page.getByLabel('Camera site').selectOption({ label: 'Camera 1 — ridge' });
+    await page.getByLabel('Camera site', { exact: true }).selectOption({ label: 'Camera 1 — ridge' });
     await page.getByLabel('Set on').fill(setOn);
     await page.getByRole('button', { name: 'Deploy' }).click();
     await poll(() => page.getByRole('button', { name: 'Cam E2E at Camera 1 — ridge' }).count()).toBe(1);

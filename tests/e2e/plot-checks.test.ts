@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { expectNoAxeViolations } from '../support/axe';
+import { PLOT_STATUS_LABELS } from '../../shared/schemas/checks';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser;
@@ -31,7 +32,12 @@ describe('plots that report back', () => {
     // The plan map's ledger lists the demo's checked plots with their status.
     await page.goto(`${baseUrl}/properties/${farm.id}/map`);
     const panel = page.getByRole('region', { name: 'Plot checks' });
-    await poll(() => panel.getByText('Thin stand').isVisible()).toBe(true);
+    // Each plot shows the label of its latest check's status, as the API gives it (the demo's seasons decide which).
+    const statuses = (await (await page.request.get(`${baseUrl}/api/properties/${farm.id}/plot-statuses`)).json()) as { data: { unitId: number; status: keyof typeof PLOT_STATUS_LABELS }[] };
+    const hollowStatus = statuses.data.find((s) => s.unitId === hollow.id)!;
+    const hollowRow = panel.getByRole('listitem').filter({ hasText: 'Hollow brassica plot' });
+    await poll(() => hollowRow.isVisible()).toBe(true);
+    expect(await hollowRow.textContent()).toContain(PLOT_STATUS_LABELS[hollowStatus.status]);
     await screenshot(page, 'plot-checks-plan-map');
 
     // A failed stand: one rape seedling in three square-foot frames.

@@ -40,9 +40,11 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     await form.getByLabel('P, ppm').fill('20');
     await form.getByLabel('K, ppm').fill('110');
     // The demo firm is in the Midwest: University of Missouri ENM method; 1,200 lb ENM ÷ 400 lb ENM/ton = 3 t/acre (MU Extension),
-    // to the clover's target pH 6.5 (from memory). P (30 − 20) × 18 ÷ 4 + 30 = 75; K (150 − 110) × 8 ÷ 4 + 60 = 140 (rules from memory).
+    // to the clover's target pH 6.5 (Univ. of Kentucky AGR-33: red clover pH 6.1–6.7). P: Tri-State build-up (Vitosh et al. 1995,
+    // MSU E-2567), critical 25 ppm Bray P1, 20 lb P2O5 per ppm over 4 years: (25 − 20) × 20 ÷ 4 + 30 maintenance = 55;
+    // K: (150 − 110) × 8 ÷ 4 + 60 = 140 (8 lb K2O per ppm from Tri-State; the 150 ppm critical level and maintenance from memory).
     const preview = form.getByTestId('soil-test-preview');
-    await poll(() => preview.textContent()).toMatch(/Lime 3 t\/acre to pH 6\.5.*P2O5 75 lb\/acre, K2O 140 lb\/acre/);
+    await poll(() => preview.textContent()).toMatch(/Lime 3 t\/acre to pH 6\.5.*P2O5 55 lb\/acre, K2O 140 lb\/acre/);
     // A pH outside 3–10 is refused in the form, naming the field; nothing is sent.
     await form.getByLabel('Soil pH').fill('12');
     await poll(() => preview.textContent()).toMatch(/ph must lie between 3 and 10/i);

@@ -91,7 +91,8 @@ export async function seedDemoPortal(firm: Firm): Promise<void> {
   const consultant = await User.findOne({ where: { firmId: firm.id, role: 'consultant' } });
   if (!client || !farm) return;
 
-  if ((await SharedFile.count({ where: { clientId: client.id } })) === 0) {
+  // Keyed on the demo's own file, not on any file: an upload made before the first seed must not stop it.
+  if ((await SharedFile.count({ where: { clientId: client.id, title: 'Season plan 2026' } })) === 0) {
     const files = [
       { title: 'Soil test — Ridge clover plot (April 2026)', category: 'soil-test' as const, bytes: await soilTestPdf(firm.name), propertyId: farm.id },
       { title: 'Season plan 2026', category: 'season-report' as const, bytes: await seasonMapPdf(firm.name), propertyId: farm.id },
