@@ -10,14 +10,14 @@ import { useToast } from '../../../components/ui/toast';
 import { fieldProblems, sentence } from '../../../lib/api-errors';
 import { firmToday, formatDay } from '../../../lib/firm-clock';
 import { DomainValidationError } from '../../../../shared/domain/errors';
-import { recommendSoilTest, retestDue } from '../../../../shared/domain/soil-tests';
+import { recommendSoilTest, retestDue, SOIL_LAB_METHOD_LABELS, SOIL_LAB_METHODS } from '../../../../shared/domain/soil-tests';
 import { SoilTestCreateSchema, type SoilTestContextDto } from '../../../../shared/schemas/soil-tests';
 import { useCreateSoilTest, useSoilTestContext } from '../api/soil-tests';
 
 type FormIn = z.input<typeof SoilTestCreateSchema>;
 type FormOut = z.output<typeof SoilTestCreateSchema>;
 
-const FIELDS = ['sampledOn', 'lab', 'ph', 'bufferPh', 'bufferMethod', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
+const FIELDS = ['sampledOn', 'lab', 'ph', 'bufferPh', 'bufferMethod', 'labMethod', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
 
 /** A number box: empty → null (left out), text → NaN for the schema to refuse with its sentence. */
 const optionalNumber = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(String(v).replace(/,/g, ''))) };
@@ -63,7 +63,7 @@ function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { prope
   const context = useSoilTestContext(propertyId);
   const create = useCreateSoilTest();
   const toast = useToast();
-  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(SoilTestCreateSchema), defaultValues: { sampledOn, lab, bufferMethod: null } });
+  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(SoilTestCreateSchema), defaultValues: { sampledOn, lab, bufferMethod: null, labMethod: 'bray-nh4oac' } });
   const e = form.formState.errors;
   const values = form.watch();
   const ctx = context.data;
@@ -104,6 +104,13 @@ function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { prope
         </SelectField>
         <TextField label="Buffer pH" inputMode="decimal" hint={ctx?.method === 'ncdacs' ? 'Needed below the target pH' : 'Optional'} error={errorOf(e, 'bufferPh')} {...form.register('bufferPh', optionalNumber)} />
         <TextField label="ENM, lb/acre" inputMode="decimal" hint={ctx?.method === 'missouri' ? 'The lab’s ENM recommendation' : 'Optional'} error={errorOf(e, 'enmLbPerAcre')} {...form.register('enmLbPerAcre', optionalNumber)} />
+        <SelectField label="P and K method" hint="Mehlich-3 is converted to Bray P1 and ammonium-acetate K before the Tri-State rules (Ohio State ANR-75)" error={errorOf(e, 'labMethod')} {...form.register('labMethod')}>
+          {SOIL_LAB_METHODS.map((m) => (
+            <option key={m} value={m}>
+              {SOIL_LAB_METHOD_LABELS[m]}
+            </option>
+          ))}
+        </SelectField>
         <TextField label="P, ppm" inputMode="decimal" hint="Optional" error={errorOf(e, 'pPpm')} {...form.register('pPpm', optionalNumber)} />
         <TextField label="K, ppm" inputMode="decimal" hint="Optional" error={errorOf(e, 'kPpm')} {...form.register('kPpm', optionalNumber)} />
         <TextField label="Organic matter, %" inputMode="decimal" hint="Optional" error={errorOf(e, 'organicMatterPct')} {...form.register('organicMatterPct', optionalNumber)} />
