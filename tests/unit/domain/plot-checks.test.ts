@@ -66,7 +66,7 @@ describe('establishment check', () => {
     // A Penn State wheat stand at the guide's replant line (12 plants/ft²) is not called established
     expect(establishmentResult({ frameSqFt: 1, samples: [{ species: 'wheat', plants: 12 }], groundCoverPct: 50, weedPressure: 'low' }).status).not.toBe('established');
     // Every target names a source: a guide, an analogy to one, or "from memory"
-    for (const species of ['white clover', 'oats', 'switchgrass', 'turnip']) expect(standTargetFor(species)!.source).toMatch(/Extension|OMAFRA|analogy|from memory/);
+    for (const species of ['white clover', 'oats', 'switchgrass', 'turnip', 'soybeans', 'crimson clover']) expect(standTargetFor(species)!.source).toMatch(/Extension|OMAFRA|USDA|Agricultural Council|analogy|from memory/);
     expect(standTargetFor('oats')!.source).toMatch(/analogy/);
     expect(standTargetFor('white clover')!.source).toMatch(/from memory/); // no published count found for white or red clover
   });

@@ -30,7 +30,7 @@ describe('the lab’s P and K method column', () => {
   it('finds the extractant column and reads the usual ways labs write it (common practice, no source)', () => {
     const columns = guessSoilCsvColumns(['Field ID', 'Date', 'Lab', 'Soil pH', 'Extractant', 'P (ppm)', 'K (ppm)']);
     expect(columns.labMethod).toBe('Extractant');
-    const row = (method: string) => soilCsvRowBody({ 'Field ID': 'North plot', Date: '2026-03-01', Lab: 'Lab', 'Soil pH': '6', Extractant: method, 'P (ppm)': '27', 'K (ppm)': '114' }, columns).body;
+    const row = (method: string) => soilCsvRowBody({ 'Field ID': 'North plot', Date: '2026-03-01', Lab: 'Lab', 'Soil pH': '6.6', Extractant: method, 'P (ppm)': '27', 'K (ppm)': '114' }, columns).body;
     expect(row('Mehlich-3').labMethod).toBe('mehlich-3');
     expect(row('M3').labMethod).toBe('mehlich-3');
     expect(row('Mehlich III').labMethod).toBe('mehlich-3');
