@@ -31,7 +31,7 @@ const errorOf = (errors: FieldErrors<FormIn>, name: string): string | undefined 
 type Unit = SoilTestContextDto['units'][number];
 
 /** The recommendation the fields make, worked in the browser by the same shared function the server stores with. */
-export function soilTestPreview(values: unknown, context: SoilTestContextDto, unit: Unit): { ok: true; lime: string; working: string; nutrients: string; retest: string; source: string } | { ok: false; message: string } {
+export function soilTestPreview(values: unknown, context: SoilTestContextDto, unit: Unit): { ok: true; lime: string; working: string; nutrients: string; nutrientsWorking: string; retest: string; source: string } | { ok: false; message: string } {
   const parsed = SoilTestCreateSchema.safeParse(values);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
@@ -44,6 +44,7 @@ export function soilTestPreview(values: unknown, context: SoilTestContextDto, un
       lime: r.lime.tonsPerAcre > 0 ? `Lime ${r.lime.tonsPerAcre} t/acre to pH ${r.lime.targetPh}` : `No lime: pH ${parsed.data.ph} meets the target ${r.lime.targetPh}`,
       working: r.lime.working,
       nutrients: `P2O5 ${r.nutrients.p2o5LbPerAcre} lb/acre, K2O ${r.nutrients.k2oLbPerAcre} lb/acre`,
+      nutrientsWorking: r.nutrients.working,
       retest: formatDay(retestDue(parsed.data.sampledOn, context.retestYears)),
       source: `Lime by ${r.lime.source}. P and K ${r.nutrients.source}.`,
     };
@@ -123,7 +124,7 @@ function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { prope
               <p className="font-serif font-bold text-ink">{preview.lime}</p>
               <p className="text-ink">{preview.nutrients}</p>
               <p className="mt-1 text-xs text-slate">
-                {preview.working}. {preview.source} Retest due {preview.retest}.
+                {preview.working}. {preview.nutrientsWorking}. {preview.source} Retest due {preview.retest}.
               </p>
             </>
           ) : (
