@@ -58,7 +58,7 @@ export const SOIL_LAB_METHODS = ['bray-nh4oac', 'mehlich-3'] as const;
 export type SoilLabMethod = (typeof SOIL_LAB_METHODS)[number];
 
 export const SOIL_LAB_METHOD_LABELS: Record<SoilLabMethod, string> = {
-  'bray-nh4oac': 'Bray P1 and ammonium-acetate K',
+  'bray-nh4oac': 'Bray P1, NH4OAc K',
   'mehlich-3': 'Mehlich-3',
 };
 
