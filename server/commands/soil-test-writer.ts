@@ -29,7 +29,7 @@ type SoilTestAttributes = CreationAttributes<SoilTest>;
 /** The row to store for one soil test: its recommendation worked by the shared function (throws DomainValidationError naming a field). */
 async function prepareOne(actor: SessionUser, unit: Unit, values: SoilTestCreateValues, transaction: Transaction): Promise<SoilTestAttributes> {
   const context = await soilTestContextOf(unit, transaction);
-  const test = { ...values, bufferMethod: (values.bufferMethod ?? null) as BufferMethod | null };
+  const test = { ...values, bufferMethod: (values.bufferMethod ?? null) as BufferMethod | null, labMethod: values.labMethod ?? null };
   const recommendation = recommendSoilTest(test, context);
   return {
     firmId: actor.firmId,
@@ -40,6 +40,7 @@ async function prepareOne(actor: SessionUser, unit: Unit, values: SoilTestCreate
     ph: values.ph,
     bufferPh: values.bufferPh ?? null,
     bufferMethod: values.bufferMethod ?? null,
+    labMethod: values.labMethod ?? 'bray-nh4oac',
     pPpm: values.pPpm ?? null,
     kPpm: values.kPpm ?? null,
     organicMatterPct: values.organicMatterPct ?? null,

@@ -24,6 +24,7 @@ export class SoilTest extends Model<InferAttributes<SoilTest>, InferCreationAttr
   declare ph: number;
   declare bufferPh: number | null;
   declare bufferMethod: string | null;
+  declare labMethod: CreationOptional<string>;
   declare pPpm: number | null;
   declare kPpm: number | null;
   declare organicMatterPct: number | null;
@@ -49,6 +50,7 @@ SoilTest.init(
     ph: { ...decimal('ph', 4, 2), allowNull: false },
     bufferPh: decimal('bufferPh', 4, 2),
     bufferMethod: DataTypes.TEXT,
+    labMethod: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'bray-nh4oac' },
     pPpm: decimal('pPpm', 8, 2),
     kPpm: decimal('kPpm', 8, 2),
     organicMatterPct: decimal('organicMatterPct', 5, 2),

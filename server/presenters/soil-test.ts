@@ -14,6 +14,7 @@ export function presentSoilTest(row: SoilTest, unitName: string): SoilTestDto {
     ph: row.ph,
     bufferPh: row.bufferPh,
     bufferMethod: row.bufferMethod,
+    labMethod: row.labMethod,
     pPpm: row.pPpm,
     kPpm: row.kPpm,
     organicMatterPct: row.organicMatterPct,

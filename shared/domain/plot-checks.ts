@@ -32,6 +32,18 @@ const PSU_WHEAT_ANALOGY = 'by analogy to Penn State Extension, "Wheat Stand Asse
 const CANOLA_STAND = 'OMAFRA Field Crop News, "Stand assessments and replant decisions for spring canola" (2025): optimum 5–8 plants/ft² (lower end taken); NDSU Crop & Pest Report (27 May 1999): 4 plants/ft² minimum';
 /** Penn State forage specialist M. Hall, quoted in Hay & Forage Grower, "When thin alfalfa seedings aren't worth keeping": 15 plants/ft² bare minimum in new seedings. */
 const ALFALFA_STAND = 'Penn State Extension (M. Hall), in Hay & Forage Grower, "When thin alfalfa seedings aren\'t worth keeping": 15 plants/ft² minimum in a new seeding';
+/** USDA Farmers' Bulletin "Growing Crimson Clover" (L. W. Kephart, USDA, c. 1920), "Rate of seeding": six plants to every square foot "is a satisfactory stand". */
+const CRIMSON_STAND = 'USDA Farmers\' Bulletin "Growing Crimson Clover" (L. W. Kephart), Rate of seeding: 6 plants/ft² is a satisfactory stand';
+/** Iowa State University Extension, Integrated Crop Management News (P. Pedersen, 4 June 2007, "Planting and replanting scenarios"): a final stand of about 100,000 plants/acre; 100,000 ÷ 43,560 ft² = 2.30 plants/ft². */
+const SOYBEAN_STAND = 'Iowa State Univ. Extension, ICM News (Pedersen, 2007), "Planting and replanting scenarios": final stand about 100,000 plants/acre = 2.3 plants/ft²';
+/** Univ. of Tennessee Extension, UT Crops News (2015), "Grain sorghum stand issues and replant considerations": final stands of 60–70 thousand plants/acre; 60,000 ÷ 43,560 ft² = 1.38 plants/ft² (lower end taken). */
+const SORGHUM_STAND = 'Univ. of Tennessee Extension, UT Crops News (2015), "Grain sorghum stand issues and replant considerations": final stand 60,000–70,000 plants/acre; 60,000 ÷ 43,560 = 1.4 plants/ft²';
+/**
+ * Great Plains Agricultural Council (1966): a grass seeding is successful when at least one plant per ft² becomes
+ * established — read second-hand, as cited in a Colorado Division of Reclamation, Mining and Safety revegetation
+ * report. (Oklahoma State's switchgrass guide aims higher at emergence: "at least 20 seedlings per square foot".)
+ */
+const NATIVE_GRASS_STAND = 'Great Plains Agricultural Council (1966), as cited by the Colorado Division of Reclamation, Mining and Safety: a seeding is successful with at least 1 established plant/ft² (second-hand)';
 
 /**
  * Target stands by species (the common names the library's seed materials use): seedlings per ft²
@@ -41,7 +53,7 @@ const ALFALFA_STAND = 'Penn State Extension (M. Hall), in Hay & Forage Grower, "
 export const STAND_TARGETS: Readonly<Record<string, StandTarget>> = {
   'white clover': { plantsPerSqFt: 10, source: FROM_MEMORY },
   'red clover': { plantsPerSqFt: 10, source: FROM_MEMORY },
-  'crimson clover': { plantsPerSqFt: 12, source: FROM_MEMORY },
+  'crimson clover': { plantsPerSqFt: 6, source: CRIMSON_STAND },
   alfalfa: { plantsPerSqFt: 15, source: ALFALFA_STAND },
   'forage chicory': { plantsPerSqFt: 5, source: FROM_MEMORY },
   'forage radish': { plantsPerSqFt: 4, source: FROM_MEMORY },
@@ -51,14 +63,12 @@ export const STAND_TARGETS: Readonly<Record<string, StandTarget>> = {
   wheat: { plantsPerSqFt: 20, source: PSU_WHEAT },
   'cereal rye': { plantsPerSqFt: 20, source: PSU_WHEAT_ANALOGY },
   cowpeas: { plantsPerSqFt: 2, source: FROM_MEMORY },
-  'grain sorghum': { plantsPerSqFt: 2, source: FROM_MEMORY },
-  soybeans: { plantsPerSqFt: 3, source: FROM_MEMORY },
-  // Native grasses: one plant per ft² "will in time produce a very good stand" — a seed vendor's
-  // establishment guide (Roundstone Native Seed, 2008), not an extension table: still from memory.
-  'big bluestem': { plantsPerSqFt: 1, source: FROM_MEMORY },
-  indiangrass: { plantsPerSqFt: 1, source: FROM_MEMORY },
-  'little bluestem': { plantsPerSqFt: 1, source: FROM_MEMORY },
-  switchgrass: { plantsPerSqFt: 1, source: FROM_MEMORY },
+  'grain sorghum': { plantsPerSqFt: 1.4, source: SORGHUM_STAND },
+  soybeans: { plantsPerSqFt: 2.3, source: SOYBEAN_STAND },
+  'big bluestem': { plantsPerSqFt: 1, source: NATIVE_GRASS_STAND },
+  indiangrass: { plantsPerSqFt: 1, source: NATIVE_GRASS_STAND },
+  'little bluestem': { plantsPerSqFt: 1, source: NATIVE_GRASS_STAND },
+  switchgrass: { plantsPerSqFt: 1, source: NATIVE_GRASS_STAND },
 };
 
 /** A stand at or above this share of its target is established (common practice, no source). */

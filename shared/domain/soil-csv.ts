@@ -3,9 +3,10 @@
  * (guessed from the header, changed by the person), and one row as the body `POST /api/units/:id/soil-tests`
  * takes. Pure: the browser previews with it and the server imports with it, so both read a row alike.
  */
+import type { SoilLabMethod } from './soil-tests';
 
 /** The fields a row can carry, in the order the screen lists them. */
-export const SOIL_CSV_FIELDS = ['unit', 'sampledOn', 'lab', 'ph', 'bufferPh', 'bufferMethod', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
+export const SOIL_CSV_FIELDS = ['unit', 'sampledOn', 'lab', 'ph', 'bufferPh', 'bufferMethod', 'labMethod', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
 export type SoilCsvField = (typeof SOIL_CSV_FIELDS)[number];
 
 /** Fields every row needs; the rest may be left unmapped. */
@@ -18,6 +19,7 @@ export const SOIL_CSV_FIELD_LABELS: Record<SoilCsvField, string> = {
   ph: 'Soil pH',
   bufferPh: 'Buffer pH',
   bufferMethod: 'Buffer method',
+  labMethod: 'P and K method',
   pPpm: 'P, ppm',
   kPpm: 'K, ppm',
   organicMatterPct: 'Organic matter, %',
@@ -38,6 +40,7 @@ const ALIASES: Record<SoilCsvField, string[]> = {
   ph: ['ph', 'soilph', 'phwater', 'waterph', 'saltph', 'phs'],
   bufferPh: ['bufferph', 'bph', 'buffer'],
   bufferMethod: ['buffermethod', 'bufferused'],
+  labMethod: ['labmethod', 'extractant', 'pkmethod', 'extractionmethod'],
   pPpm: ['pppm', 'p', 'phosphorus', 'phosphorusppm', 'mehlichp', 'm3p', 'bray1p', 'brayp'],
   kPpm: ['kppm', 'k', 'potassium', 'potassiumppm', 'mehlichk', 'm3k'],
   organicMatterPct: ['organicmatterpct', 'organicmatter', 'om', 'ompct', 'omp'],
@@ -74,10 +77,22 @@ function numberCell(text: string | undefined): number | string | null {
   return Number.isFinite(n) ? n : t;
 }
 
+/** How labs write their extractant (common practice, no source), compared without case, spaces or punctuation. */
+const LAB_METHOD_WORDS: Record<string, SoilLabMethod> = {
+  mehlich3: 'mehlich-3', m3: 'mehlich-3', mehlichiii: 'mehlich-3', mehlich3icp: 'mehlich-3',
+  bray: 'bray-nh4oac', bray1: 'bray-nh4oac', brayp1: 'bray-nh4oac', braynh4oac: 'bray-nh4oac', brayaa: 'bray-nh4oac', nh4oac: 'bray-nh4oac', ammoniumacetate: 'bray-nh4oac', aa: 'bray-nh4oac',
+};
+
+/** A lab's extractant cell as our method; empty → null (Bray/ammonium acetate); anything else stays text for the schema to refuse. */
+function labMethodCell(text: string): string | null {
+  if (text === '') return null;
+  return LAB_METHOD_WORDS[squash(text)] ?? text;
+}
+
 /** One file row as the unit's name and the soil-test body (before the shared schema checks it). */
 export function soilCsvRowBody(record: Record<string, string>, columns: SoilCsvColumns): { unitName: string; body: Record<string, unknown> } {
   const cell = (field: SoilCsvField) => (columns[field] ? (record[columns[field]] ?? '').trim() : '');
-  const body: Record<string, unknown> = { sampledOn: cell('sampledOn'), lab: cell('lab'), bufferMethod: cell('bufferMethod').toLowerCase() || null };
+  const body: Record<string, unknown> = { sampledOn: cell('sampledOn'), lab: cell('lab'), bufferMethod: cell('bufferMethod').toLowerCase() || null, labMethod: labMethodCell(cell('labMethod')) };
   for (const field of NUMERIC) {
     const value = numberCell(cell(field));
     if (value !== null || field !== 'ph') body[field] = value;

@@ -10,8 +10,9 @@
  *   MU measures salt pH and the Woodruff buffer's neutralizable acidity; the ENM figure is the lab's.
  *
  * Phosphate and potash: the Tri-State build-up and maintenance approach (see NUTRIENT_RULES, each
- * constant with its source; the K critical level and crop maintenance remain from memory); the
- * consultant edits the prescription, which shows the source.
+ * constant with its source; crop maintenance remains from memory), on Bray P1 and ammonium-acetate K:
+ * a Mehlich-3 report is converted first (`toTriStateBasis`, Ohio State ANR-75); the consultant edits
+ * the prescription, which shows the source.
  */
 import { DomainValidationError } from './errors';
 import { limeTonsPerAcreFromEnm } from './lime';
@@ -31,17 +32,62 @@ export const LIME_METHOD_LABELS: Record<LimeMethod, string> = {
   missouri: 'University of Missouri ENM method',
 };
 
-/** Target soil pH by crop group (from memory: common extension guidance of 6.0–6.5 for food-plot crops, legumes at the top; the legume value lies in red clover's 6.1–6.7 of Univ. of Kentucky AGR-33). */
+const TRI_STATE_PH_TABLE = 'Tri-State Fertilizer Recommendations (Vitosh et al. 1995, MSU Extension Bulletin E-2567), Table 1 "Soil pH recommended for various crops"';
+
+/**
+ * Target soil pH by crop group, each with its source. Tri-State Table 1 gives, for mineral soils with subsoil
+ * pH above 6 / below 6: alfalfa 6.5 / 6.8; other forage legumes 6.0 / 6.8; corn, soybeans, small grains and
+ * other crops 6.0 / 6.5. Brassicas and native grasses have no row there.
+ */
 export const TARGET_PH: Record<string, { ph: number; source: string }> = {
-  legume: { ph: 6.5, source: 'Univ. of Kentucky AGR-33, "Growing Red Clover in Kentucky": pH 6.1–6.7 (6.5 taken)' },
-  brassica: { ph: 6.3, source: 'from memory' },
-  grain: { ph: 6.0, source: 'from memory' },
-  'native-grass': { ph: 5.8, source: 'from memory' },
+  legume: { ph: 6.5, source: `Univ. of Kentucky AGR-33, "Growing Red Clover in Kentucky": pH 6.1–6.7 (6.5 taken); ${TRI_STATE_PH_TABLE}: alfalfa 6.5 over a subsoil above pH 6` },
+  brassica: { ph: 6.3, source: `from memory (between the "other crops" 6.0 and 6.5 of ${TRI_STATE_PH_TABLE}; no brassica row)` },
+  grain: { ph: 6.0, source: `${TRI_STATE_PH_TABLE}: small grains 6.0 over a subsoil above pH 6 (6.5 over an acid subsoil)` },
+  'native-grass': { ph: 5.8, source: 'from memory (Oklahoma State switchgrass guide: no lime for switchgrass establishment at soil pH 5.0 or above)' },
 };
 
 /** The pH a state method may be asked about; a reading outside is a typing slip. */
 export const PH_MIN = 3;
 export const PH_MAX = 10;
+
+/**
+ * The lab's extractant for P and K: Bray P1 with 1 N ammonium acetate K (what the Tri-State rules are
+ * calibrated on), or Mehlich-3 for both (what most commercial labs now run).
+ */
+export const SOIL_LAB_METHODS = ['bray-nh4oac', 'mehlich-3'] as const;
+export type SoilLabMethod = (typeof SOIL_LAB_METHODS)[number];
+
+export const SOIL_LAB_METHOD_LABELS: Record<SoilLabMethod, string> = {
+  'bray-nh4oac': 'Bray P1, NH4OAc K',
+  'mehlich-3': 'Mehlich-3',
+};
+
+/**
+ * Ohio State University Extension fact sheet ANR-75, "Converting between Mehlich-3, Bray P, and Ammonium
+ * Acetate Soil Test Values" (Culman et al., 14 June 2019), Summary of Findings: in Ohio and Indiana soils
+ * Mehlich-3 P reads 35 % higher than Bray P, and Mehlich-3 K 14 % higher than ammonium-acetate K.
+ */
+export const MEHLICH3_CONVERSION = {
+  pMehlich3PerBray: 1.35,
+  kMehlich3PerAmmoniumAcetate: 1.14,
+  source: 'Ohio State ANR-75 (Culman et al. 2019): Mehlich-3 P = 1.35 × Bray P1, Mehlich-3 K = 1.14 × ammonium-acetate K',
+} as const;
+
+/**
+ * P and K on the Tri-State rules' basis (Bray P1, ammonium-acetate K): a Mehlich-3 reading divided by ANR-75's
+ * factors, rounded to 0.1 ppm; Bray and ammonium-acetate readings pass unchanged.
+ */
+export function toTriStateBasis(test: { pPpm?: number | null; kPpm?: number | null; labMethod?: SoilLabMethod | null }): { pPpm: number | null; kPpm: number | null; converted: boolean } {
+  const p = test.pPpm ?? null;
+  const k = test.kPpm ?? null;
+  if (test.labMethod !== 'mehlich-3') return { pPpm: p, kPpm: k, converted: false };
+  const c = MEHLICH3_CONVERSION;
+  return {
+    pPpm: p === null ? null : roundHalfUp(p / c.pMehlich3PerBray, 1),
+    kPpm: k === null ? null : roundHalfUp(k / c.kMehlich3PerAmmoniumAcetate, 1),
+    converted: true,
+  };
+}
 
 export interface SoilTestValues {
   ph: number;
@@ -49,6 +95,10 @@ export interface SoilTestValues {
   bufferMethod?: BufferMethod | null;
   pPpm?: number | null;
   kPpm?: number | null;
+  /** The extractant the P and K were read with; Bray/ammonium acetate when left out. */
+  labMethod?: SoilLabMethod | null;
+  /** Cation exchange capacity, meq/100 g: sets the K critical level. */
+  cec?: number | null;
   /** The lab's own ENM recommendation, lb ENM/acre (University of Missouri reports). */
   enmLbPerAcre?: number | null;
 }
@@ -114,14 +164,22 @@ export function limeRecommendation(method: LimeMethod, test: SoilTestValues, tar
  * Phosphate and potash by the Tri-State build-up and maintenance approach (Vitosh, Johnson & Mengel
  * 1995, "Tri-State Fertilizer Recommendations for Corn, Soybeans, Wheat and Alfalfa", MSU Extension
  * Bulletin E-2567, with Ohio State and Purdue). Its lab methods: Bray P1 for P and 1 N ammonium
- * acetate for K, in ppm; a Mehlich-3 P reads about 35 % higher than Bray P1 and Mehlich-3 K about 14 %
- * higher than ammonium-acetate K (Ohio State ANR-75, Culman et al. 2019), so send Bray/AA values.
+ * acetate for K, in ppm; Mehlich-3 readings are converted first (`toTriStateBasis`, Ohio State ANR-75).
  */
 export const NUTRIENT_RULES = {
   /** Tri-State: wheat and alfalfa are more responsive to P than corn or soybeans, so their critical Bray P1 level is 25 ppm (not 15) — Ohio State agBMPs, "Soil test P levels less than 50 ppm", citing Vitosh et al. 1995. */
   pCriticalPpm: 25,
-  /** From memory: the Tri-State K critical level rises with CEC; 150 ppm is a round value for the silt loams of the demo region, not read from the bulletin. */
-  kCriticalPpm: 150,
+  /**
+   * K critical level by CEC: the 2020 Tri-State revision (Culman et al. 2020, "Tri-State Fertilizer Recommendations
+   * for Corn, Soybean, Wheat, and Alfalfa", Ohio State Extension Bulletin 974; as listed in A&L Great Lakes
+   * Laboratories' release note) sets 100 ppm Mehlich-3 K for soils of CEC 5 meq/100 g or less and 120 ppm above 5;
+   * on the ammonium-acetate basis of these rules (÷ 1.14, ANR-75): 100 ÷ 1.14 = 87.7 → 88 ppm, 120 ÷ 1.14 = 105.3 → 105 ppm.
+   * Without a CEC the higher level (CEC above 5) is taken.
+   */
+  kCriticalLowCecPpm: 88,
+  kCriticalPpm: 105,
+  /** The CEC (meq/100 g) at or below which the lower K critical level applies (2020 Tri-State). */
+  kLowCecMax: 5,
   /** Tri-State build-up equations: about 20 lb P2O5 raise soil-test P by 1 ppm (as summarised in AgProfessional, "How much fertilizer will move soil test levels"). */
   p2o5LbPerPpm: 20,
   /** Tri-State build-up equations: 6–10 lb K2O raise soil-test K by 1 ppm depending on CEC (same summary); the middle, 8, is taken. */
@@ -131,10 +189,16 @@ export const NUTRIENT_RULES = {
   /** At or above twice the critical level nothing is added: for P that is 50 ppm Bray P1, the level Ohio State agBMPs gives for no further fertilizer when every crop of the rotation is considered. */
   noneAboveCriticalTimes: 2,
   source:
-    'Tri-State build-up and maintenance (Vitosh et al. 1995, MSU E-2567): P critical 25 ppm Bray P1 (wheat/alfalfa), 20 lb P2O5 per ppm, 8 lb K2O per ppm (6–10 by CEC), built up over 4 years; K critical 150 ppm and crop maintenance from memory',
+    'Tri-State build-up and maintenance (Vitosh et al. 1995, MSU E-2567): P critical 25 ppm Bray P1 (wheat/alfalfa), 20 lb P2O5 per ppm, 8 lb K2O per ppm (6–10 by CEC), built up over 4 years; K critical 105 ppm ammonium-acetate K (88 at CEC ≤ 5) from the 2020 Tri-State 120/100 ppm Mehlich-3 ÷ 1.14 (Ohio State ANR-75); crop maintenance from memory',
 } as const;
 
-/** Maintenance by crop group, lb/acre: crop removal (from memory; the Tri-State bulletin has tables for corn, soybeans, wheat and alfalfa only). */
+/** The Tri-State K critical level (ppm ammonium-acetate K) for a soil's CEC; the higher level when the CEC is unknown. */
+export function kCriticalPpm(cec: number | null | undefined): number {
+  const r = NUTRIENT_RULES;
+  return cec !== null && cec !== undefined && cec <= r.kLowCecMax ? r.kCriticalLowCecPpm : r.kCriticalPpm;
+}
+
+/** Maintenance by crop group, lb/acre: crop removal (from memory; the Tri-State bulletin has tables for corn, soybeans, wheat and alfalfa only — MSU Extension gives alfalfa's K removal as 50 lb K2O per ton). */
 export const MAINTENANCE: Record<string, { p2o5: number; k2o: number }> = {
   legume: { p2o5: 30, k2o: 60 },
   brassica: { p2o5: 40, k2o: 60 },
@@ -149,19 +213,32 @@ export interface NutrientRecommendation {
   source: string;
 }
 
-/** P2O5 and K2O per acre: build-up toward the critical level spread over the years, plus maintenance; no maintenance well above critical. */
+/**
+ * P2O5 and K2O per acre: build-up toward the critical level spread over the years, plus maintenance; no
+ * maintenance well above critical. A Mehlich-3 report is first put on the Bray/ammonium-acetate basis.
+ */
 export function nutrientRecommendation(test: SoilTestValues, cropGroup: string): NutrientRecommendation {
   const m = MAINTENANCE[cropGroup] ?? MAINTENANCE.grain!;
   const r = NUTRIENT_RULES;
-  const part = (ppm: number | null | undefined, critical: number, perPpm: number, maintenance: number) => {
-    if (ppm === null || ppm === undefined) return maintenance;
+  const basis = toTriStateBasis(test);
+  const kCritical = kCriticalPpm(test.cec);
+  const part = (ppm: number | null, critical: number, perPpm: number, maintenance: number) => {
+    if (ppm === null) return maintenance;
     if (ppm >= critical * r.noneAboveCriticalTimes) return 0;
     const buildUp = ppm < critical ? ((critical - ppm) * perPpm) / r.buildUpYears : 0;
     return Math.round(buildUp + maintenance);
   };
-  const p2o5 = part(test.pPpm, r.pCriticalPpm, r.p2o5LbPerPpm, m.p2o5);
-  const k2o = part(test.kPpm, r.kCriticalPpm, r.k2oLbPerPpm, m.k2o);
-  return { p2o5LbPerAcre: p2o5, k2oLbPerAcre: k2o, working: `P ${test.pPpm ?? '—'} ppm, K ${test.kPpm ?? '—'} ppm against ${r.pCriticalPpm} and ${r.kCriticalPpm} ppm`, source: r.source };
+  const p2o5 = part(basis.pPpm, r.pCriticalPpm, r.p2o5LbPerPpm, m.p2o5);
+  const k2o = part(basis.kPpm, kCritical, r.k2oLbPerPpm, m.k2o);
+  const read = basis.converted
+    ? `Mehlich-3 P ${test.pPpm ?? '—'}, K ${test.kPpm ?? '—'} ppm = Bray P1 ${basis.pPpm ?? '—'}, ammonium-acetate K ${basis.kPpm ?? '—'} ppm (÷ 1.35 and ÷ 1.14)`
+    : `P ${basis.pPpm ?? '—'} ppm, K ${basis.kPpm ?? '—'} ppm`;
+  return {
+    p2o5LbPerAcre: p2o5,
+    k2oLbPerAcre: k2o,
+    working: `${read} against ${r.pCriticalPpm} and ${kCritical} ppm`,
+    source: basis.converted ? `${r.source}; ${MEHLICH3_CONVERSION.source}` : r.source,
+  };
 }
 
 /** The crop group of a practice from the species it sows (for target pH and maintenance). */

@@ -2,7 +2,7 @@
 import { z } from 'zod';
 import { IsoDateSchema } from './common';
 import { LIMITS } from '../limits';
-import { BUFFER_METHODS, PH_MAX, PH_MIN, type BufferMethod, type LimeMethod, type LimeRecommendationResult, type NutrientRecommendation } from '../domain/soil-tests';
+import { BUFFER_METHODS, PH_MAX, PH_MIN, SOIL_LAB_METHODS, type BufferMethod, type LimeMethod, type LimeRecommendationResult, type NutrientRecommendation } from '../domain/soil-tests';
 import { SOIL_CSV_FIELDS } from '../domain/soil-csv';
 
 const ph = (field: string) =>
@@ -20,6 +20,8 @@ export const SoilTestCreateSchema = z
     ph: ph('ph'),
     bufferPh: ph('bufferPh').nullish(),
     bufferMethod: z.enum(BUFFER_METHODS, { error: `bufferMethod must be one of ${BUFFER_METHODS.join(', ')}` }).nullish(),
+    /** The extractant the P and K were read with: Bray P1 + ammonium acetate (the default) or Mehlich-3 (converted before the Tri-State rules). */
+    labMethod: z.enum(SOIL_LAB_METHODS, { error: `labMethod must be one of ${SOIL_LAB_METHODS.join(', ')} (Bray P1 with ammonium-acetate K, or Mehlich-3)` }).nullish(),
     pPpm: ppm('pPpm').nullish(),
     kPpm: ppm('kPpm').nullish(),
     organicMatterPct: z.number({ error: 'organicMatterPct: enter a percentage' }).min(0, { message: 'organicMatterPct cannot be negative' }).max(100, { message: 'organicMatterPct cannot be above 100 %' }).nullish(),
@@ -34,7 +36,7 @@ export type SoilTestCreateValues = z.output<typeof SoilTestCreateSchema>;
 export const SOIL_CSV_MAX_ROWS = 500;
 export const SOIL_CSV_MAX_CHARS = 200_000;
 
-/** A lab's results as CSV text with a header row: unit, sampledOn, lab, ph, bufferPh, bufferMethod, pPpm, kPpm, organicMatterPct, cec, enmLbPerAcre. */
+/** A lab's results as CSV text with a header row: unit, sampledOn, lab, ph, bufferPh, bufferMethod, labMethod, pPpm, kPpm, organicMatterPct, cec, enmLbPerAcre. */
 export const SoilTestImportSchema = z.object({
   csv: z.string({ error: 'csv: paste the lab’s CSV text' }).min(1, { message: 'csv: paste the lab’s CSV text' }).max(SOIL_CSV_MAX_CHARS, { message: `csv: at most ${SOIL_CSV_MAX_CHARS.toLocaleString('en-US')} characters` }),
   /** Which of the file's columns holds each field; left out, columns are matched by their header names. */
@@ -69,6 +71,8 @@ export interface SoilTestDto {
   ph: number;
   bufferPh: number | null;
   bufferMethod: string | null;
+  /** The extractant of P and K ('bray-nh4oac' or 'mehlich-3'). */
+  labMethod: string;
   pPpm: number | null;
   kPpm: number | null;
   organicMatterPct: number | null;

@@ -1,4 +1,4 @@
-/** A unit's record per season: what was prescribed, what was done and used, checks and soil tests. */
+/** A unit's record per season: what was prescribed, what was done and used, checks, soil tests and how many observations were logged on it. */
 import type { UnitCheckDto } from './checks';
 import type { SoilTestDto } from './soil-tests';
 import type { TaskQuantityUsed } from '../domain/tasks';
@@ -9,6 +9,8 @@ export interface UnitHistorySeasonDto {
   work: { taskId: number; name: string; status: string; doneOn: string | null; quantitiesUsed: TaskQuantityUsed[] }[];
   checks: UnitCheckDto[];
   soilTests: SoilTestDto[];
+  /** Field observations logged on the unit that season (the year of observed_at in the firm's time zone). */
+  observations: number;
 }
 
 export interface UnitHistoryDto {

@@ -87,6 +87,7 @@ const routes: RouteObject[] = [
             { index: true, ...page(() => import('./routes/portal/portal-home'), (m) => m.PortalHomePage) },
             ...portalPages,
             { path: 'proposals', ...page(() => import('./routes/portal/preview-proposals'), (m) => m.PreviewProposalsPage) },
+            { path: 'properties/:id/seasons', ...page(() => import('./routes/portal/portal-seasons'), (m) => m.PortalSeasonsPage) },
           ],
         },
         // The plan map is its own chunk (maplibre, terra-draw) and takes the shell's full width.

@@ -65,6 +65,7 @@ export const paths = {
   /** A consultant's read-only preview of a client's portal. */
   previewClient: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}`,
   previewProperty: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}`,
+  previewPropertySeasons: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}/seasons`,
   previewPropertyProgress: (clientId: number | string = ':clientId', id: number | string = ':id') => `/preview/clients/${clientId}/properties/${id}/progress`,
   previewProgress: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/progress`,
   previewFiles: (clientId: number | string = ':clientId') => `/preview/clients/${clientId}/files`,

@@ -45,4 +45,27 @@ describe('seasons side by side in the portal', () => {
     watch.assertClean();
     await context.close();
   });
+
+  it('opens the same page from the consultant’s preview as client, staying inside the preview', async () => {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, timezoneId: 'America/Chicago' });
+    const page = await context.newPage();
+    const watch = watchPage(page);
+    await signIn(page, baseUrl, 'consultant@browseline.test');
+    await page.waitForURL(`${baseUrl}/desk`);
+    await page.goto(`${baseUrl}/clients`);
+    await page.getByRole('link', { name: 'Okonkwo-Larsen Family' }).first().click();
+    await page.waitForURL(/\/clients\/\d+$/);
+    await page.getByRole('link', { name: 'Preview as client' }).click();
+    await page.getByRole('link', { name: 'See the plan of Kettle Hollow Farm' }).click();
+    await page.waitForURL(/\/preview\/clients\/\d+\/properties\/\d+$/);
+    await page.getByRole('link', { name: 'This season and last, side by side' }).click();
+    await page.waitForURL(/\/preview\/clients\/\d+\/properties\/\d+\/seasons$/);
+    const brassica = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: 'Hollow brassica plot' }) });
+    await expect.poll(() => brassica.getByText('Established', { exact: true }).count(), { timeout: 20_000 }).toBe(1);
+    // The crumbs lead back inside the preview, not to the client's own portal.
+    expect(await page.getByRole('navigation', { name: 'Breadcrumb' }).getByRole('link', { name: 'Kettle Hollow Farm' }).getAttribute('href')).toMatch(/^\/preview\/clients\/\d+\/properties\/\d+$/);
+    await screenshot(page, 'preview-seasons');
+    watch.assertClean();
+    await context.close();
+  });
 });

@@ -40,11 +40,16 @@ describe('soil tests on screen, spray records and the EPA Reg. No.', () => {
     await form.getByLabel('P, ppm').fill('20');
     await form.getByLabel('K, ppm').fill('110');
     // The demo firm is in the Midwest: University of Missouri ENM method; 1,200 lb ENM ÷ 400 lb ENM/ton = 3 t/acre (MU Extension),
-    // to the clover's target pH 6.5 (Univ. of Kentucky AGR-33: red clover pH 6.1–6.7). P: Tri-State build-up (Vitosh et al. 1995,
-    // MSU E-2567), critical 25 ppm Bray P1, 20 lb P2O5 per ppm over 4 years: (25 − 20) × 20 ÷ 4 + 30 maintenance = 55;
-    // K: (150 − 110) × 8 ÷ 4 + 60 = 140 (8 lb K2O per ppm from Tri-State; the 150 ppm critical level and maintenance from memory).
+    // to the clover's target pH 6.5 (Univ. of Kentucky AGR-33; Tri-State Table 1). P (25 − 20) × 20 ÷ 4 + 30 = 55 (Tri-State);
+    // K 110 ≥ 105 ppm, the critical level without a CEC (2020 Tri-State 120 ppm Mehlich-3 ÷ 1.14, Ohio State ANR-75): maintenance 60 (from memory).
     const preview = form.getByTestId('soil-test-preview');
-    await poll(() => preview.textContent()).toMatch(/Lime 3 t\/acre to pH 6\.5.*P2O5 55 lb\/acre, K2O 140 lb\/acre/);
+    await poll(() => preview.textContent()).toMatch(/Lime 3 t\/acre to pH 6\.5.*P2O5 55 lb\/acre, K2O 60 lb\/acre/);
+    // The same numbers from a Mehlich-3 report are converted first (ANR-75): P 20 ÷ 1.35 = 14.8 → (25 − 14.8) × 20 ÷ 4 + 30 = 81;
+    // K 110 ÷ 1.14 = 96.5 → (105 − 96.5) × 8 ÷ 4 + 60 = 77.
+    await form.getByLabel('P and K method').selectOption('mehlich-3');
+    await poll(() => preview.textContent()).toMatch(/P2O5 81 lb\/acre, K2O 77 lb\/acre.*Bray P1 14\.8, ammonium-acetate K 96\.5/);
+    await form.getByLabel('P and K method').selectOption('bray-nh4oac');
+    await poll(() => preview.textContent()).toMatch(/P2O5 55 lb\/acre, K2O 60 lb\/acre/);
     // A pH outside 3–10 is refused in the form, naming the field; nothing is sent.
     await form.getByLabel('Soil pH').fill('12');
     await poll(() => preview.textContent()).toMatch(/ph must lie between 3 and 10/i);

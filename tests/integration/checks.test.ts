@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, propertyWithBrassicaPlot, type Agent } from '../support/test-app';
 import { makeFirm, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
-import { Prescription, Task } from '../../server/models';
+import { Observation, Prescription, Task } from '../../server/models';
 import { UnitCheck } from '../../server/models/unit-check';
 import { SoilTest } from '../../server/models/soil-test';
 import { UnitCheckDtoSchema } from '../../shared/schemas/checks';
@@ -192,6 +192,10 @@ describe('the demo seed', () => {
 describe('unit history', () => {
   it('keeps prescriptions, checks and soil tests by season under the unit’s identity, even after its outline is edited', async () => {
     await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-10', lab: 'County lab', ph: 6.6 });
+    // Two observations on the plot: 1 June 2026, and 31 Dec 2026 at 9 pm in the firm's Chicago time (already 2027 in UTC)
+    for (const [i, at] of ['2026-06-01T15:00:00Z', '2027-01-01T03:00:00Z'].entries()) {
+      await Observation.create({ firmId: ctx.firm.id, propertyId, unitId: plotId, kind: 'browse', observedAt: new Date(at), notes: null, position: { type: 'Point', coordinates: [-90.938, 43.2655] }, positionSource: 'device', insideBoundary: true, idempotencyKey: `history-observation-${i}-${Date.now()}`, createdById: null });
+    }
     const edit = await consultant.patch(`/api/units/${plotId}`).set('X-CSRF-Token', consultant.csrf).send({ geometry: rectangle(-90.938, 43.2655, 110, 80) });
     expect(edit.status).toBe(200);
     const res = await consultant.get(`/api/units/${plotId}/history`).expect(200);
@@ -199,6 +203,8 @@ describe('unit history', () => {
     const s2026 = res.body.data.seasons.find((s: { season: number }) => s.season === 2026);
     expect(s2026.checks.map((c: { kind: string }) => c.kind)).toEqual(expect.arrayContaining(['establishment', 'browse']));
     expect(s2026.soilTests).toHaveLength(1);
+    expect(s2026.observations).toBe(2); // counted by the year in the firm's time zone
+    expect(res.body.data.seasons.find((s: { season: number }) => s.season === 2027)?.observations ?? 0).toBe(0); // not 2027, as UTC would have it
     expect(res.body.data.seasons.flatMap((s: { prescriptions: unknown[] }) => s.prescriptions).length).toBeGreaterThanOrEqual(2); // the brassica plot and its re-seeding
     expect((await crew.get(`/api/units/${plotId}/history`)).status).toBe(403);
     expect((await outsider.get(`/api/units/${plotId}/history`)).status).toBe(404);

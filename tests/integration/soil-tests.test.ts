@@ -31,8 +31,10 @@ describe('a soil test by the University of Missouri ENM method (the default outs
     // 1,600 lb ENM ÷ 400 lb ENM/ton (starter library's spread lime) = 4 t/acre (University of Missouri)
     expect(data.lime.tonsPerAcre).toBe(4);
     expect(data.lime.method).toBe('missouri');
-    // Brassica plot: P (25 − 20) × 20 ÷ 4 + 40 = 65 (Tri-State: critical 25 ppm Bray P1, 20 lb P2O5/ppm, 4 years); K (150 − 110) × 8 ÷ 4 + 60 = 140 (8 lb K2O/ppm Tri-State mid-range; K critical and maintenance from memory)
-    expect(data.nutrients).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 140 });
+    // Brassica plot: P (25 − 20) × 20 ÷ 4 + 40 = 65 (Tri-State: critical 25 ppm Bray P1, 20 lb P2O5/ppm, 4 years);
+    // K 110 ≥ 105 ppm, the critical level without a CEC (2020 Tri-State 120 ppm Mehlich-3 ÷ 1.14, Ohio State ANR-75): maintenance 60 only (from memory)
+    expect(data.nutrients).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 60 });
+    expect(res.body.data.labMethod).toBe('bray-nh4oac'); // the default: what the Tri-State rules are calibrated on
     expect(data.retestDue).toBe('2029-03-10'); // 3 years by default
   });
 
@@ -42,10 +44,33 @@ describe('a soil test by the University of Missouri ENM method (the default outs
     expect(res.status).toBe(200);
     const prescription = await Prescription.findByPk(res.body.data.prescriptionId);
     expect(prescription!.parameters.steps!.lime!.limeTonsPerAcre).toBe(3); // 1,200 ÷ 400 (MU Extension)
-    expect(prescription!.parameters.steps!.fertilize).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 140 });
+    expect(prescription!.parameters.steps!.fertilize).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 60 });
     expect(prescription!.notes).toMatch(/from the soil test of Mar 11, 2026.*University of Missouri/);
     const edit = await consultant.patch(`/api/prescriptions/${prescription!.id}`).set('X-CSRF-Token', consultant.csrf).send({ parameters: { steps: { lime: { limeTonsPerAcre: 2.5 } } } });
     expect(edit.status).toBe(200);
+  });
+});
+
+describe('a Mehlich-3 soil test', () => {
+  it('stores the lab method and works P and K on the Bray/ammonium-acetate equivalents (Ohio State ANR-75)', async () => {
+    await Firm.update({ settings: {}, region: 'midwest' }, { where: { id: ctx.firm.id } });
+    // M3 P 27 ÷ 1.35 = 20 Bray P1 → (25 − 20) × 20 ÷ 4 + 40 = 65; M3 K 114 ÷ 1.14 = 100 → (105 − 100) × 8 ÷ 4 + 60 = 70 (worked by hand from ANR-75 and the Tri-State rules)
+    const res = await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-12', lab: 'Commercial lab', ph: 6.6, labMethod: 'mehlich-3', pPpm: 27, kPpm: 114 });
+    expect(res.status).toBe(201);
+    const data = SoilTestDtoSchema.parse(res.body.data);
+    expect(data.nutrients).toMatchObject({ p2o5LbPerAcre: 65, k2oLbPerAcre: 70 });
+    expect(data.nutrients.working).toMatch(/Bray P1 20, ammonium-acetate K 100/);
+    expect(res.body.data).toMatchObject({ labMethod: 'mehlich-3', pPpm: 27, kPpm: 114 }); // the lab's own numbers are kept
+    const row = await SoilTest.findByPk(data.id);
+    expect(row!.labMethod).toBe('mehlich-3');
+  });
+
+  it('refuses a method it does not know, naming the field, and saves nothing', async () => {
+    const before = await SoilTest.count({ where: { unitId: plotId } });
+    const res = await post(consultant, `/api/units/${plotId}/soil-tests`, { sampledOn: '2026-03-12', lab: 'Commercial lab', ph: 6.6, labMethod: 'olsen', pPpm: 27 });
+    expect(res.status).toBe(422);
+    expect(JSON.stringify(res.body)).toMatch(/labMethod/);
+    expect(await SoilTest.count({ where: { unitId: plotId } })).toBe(before);
   });
 });
 
@@ -119,6 +144,14 @@ describe('the lab CSV import with the lab’s own column names', () => {
     expect(res.status).toBe(201);
     const [row] = res.body.data.map((d: unknown) => SoilTestDtoSchema.parse(d));
     expect(row.lime.tonsPerAcre).toBe(3); // 1,200 lb ENM ÷ 400 lb ENM/ton (University of Missouri)
+  });
+
+  it('reads the lab’s extractant column and converts a Mehlich-3 row before the rules', async () => {
+    const csv = 'Field ID,Date,Laboratory,Soil pH,ENM,Extractant,P (ppm),K (ppm)\nNorth plot,2026-07-02,Valley lab,6.6,,Mehlich-3,27,114\n';
+    const res = await post(consultant, `/api/properties/${propertyId}/soil-tests/import`, { csv });
+    expect(res.status).toBe(201);
+    // ANR-75: 27 ÷ 1.35 = 20 Bray P1, 114 ÷ 1.14 = 100 ppm AA-K → P2O5 65, K2O 70 on the brassica plot (as worked above)
+    expect(res.body.data[0]).toMatchObject({ labMethod: 'mehlich-3', nutrients: { p2o5LbPerAcre: 65, k2oLbPerAcre: 70 } });
   });
 
   it('names every wrong row and field and stores none', async () => {

@@ -20,6 +20,7 @@ import * as m0040 from './0040-observations';
 import * as m0050 from './0050-camera-fleet';
 import * as m0060 from './0060-unit-checks';
 import * as m0061 from './0061-soil-tests';
+import * as m0097 from './0097-soil-test-lab-method';
 import * as m0062 from './0062-season-drafts';
 import * as m0063 from './0063-spray-records';
 import * as m0070 from './0070-hunting-pressure';
@@ -63,4 +64,5 @@ export const migrations = [
   { name: '0090-plant-back-days', ...m0090 },
   { name: '0091-task-week-window', ...m0091 },
   { name: '0092-plan-inputs-revision', ...m0092 },
+  { name: '0097-soil-test-lab-method', ...m0097 },
 ];

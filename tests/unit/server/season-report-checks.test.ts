@@ -61,8 +61,8 @@ describe('the season report prints the checks and the soil tests', () => {
     // BAF 10 × mean 11 in-trees = 110 ft²/acre against 70: thin 40 (standard prism cruise)
     expect(text).toMatch(/North oak slope\s+Nov 8, 2025\s+110\s+70/);
     expect(flat).toContain('Thin 40 ft²/acre');
-    // 900 lb ENM ÷ 400 per ton = 2.25 t/acre (University of Missouri); P (25 − 18) × 20 ÷ 4 + 30 = 65 (Tri-State); K (150 − 120) × 8 ÷ 4 + 60 = 120
-    expect(text).toMatch(/Ridge clover plot\s+Mar 18, 2025\s+5\.6\s+18\s+120\s+2\.25\s+65\s+120/);
+    // 900 lb ENM ÷ 400 per ton = 2.25 t/acre (University of Missouri); P (25 − 18) × 20 ÷ 4 + 30 = 65 (Tri-State); K 120 ≥ 105 ppm, the critical level without a CEC (2020 Tri-State ÷ 1.14, Ohio State ANR-75): maintenance 60 (from memory)
+    expect(text).toMatch(/Ridge clover plot\s+Mar 18, 2025\s+5\.6\s+18\s+120\s+2\.25\s+65\s+60/);
     expect(flat).toMatch(/Worked by: University of Missouri .*Tri-State/);
   });
 

@@ -116,7 +116,7 @@ export function PortalPropertyPage() {
       </Card>
 
       {scope.readOnly ? null : <Link to={paths.portalPropertyStands(d.property.id)} className="text-sm font-semibold text-moss-deep underline">Stands &amp; wind: today’s wind, the sit log and pressure</Link>}
-      {scope.mode === 'own' ? <Link to={paths.portalPropertySeasons(d.property.id)} className="text-sm font-semibold text-moss-deep underline">This season and last, side by side</Link> : null}
+      <Link to={scope.links.seasons(d.property.id)} className="text-sm font-semibold text-moss-deep underline">This season and last, side by side</Link>
       <Card
         title="The plan, place by place"
         action={

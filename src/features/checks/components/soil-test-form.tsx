@@ -10,14 +10,14 @@ import { useToast } from '../../../components/ui/toast';
 import { fieldProblems, sentence } from '../../../lib/api-errors';
 import { firmToday, formatDay } from '../../../lib/firm-clock';
 import { DomainValidationError } from '../../../../shared/domain/errors';
-import { recommendSoilTest, retestDue } from '../../../../shared/domain/soil-tests';
+import { recommendSoilTest, retestDue, SOIL_LAB_METHOD_LABELS, SOIL_LAB_METHODS } from '../../../../shared/domain/soil-tests';
 import { SoilTestCreateSchema, type SoilTestContextDto } from '../../../../shared/schemas/soil-tests';
 import { useCreateSoilTest, useSoilTestContext } from '../api/soil-tests';
 
 type FormIn = z.input<typeof SoilTestCreateSchema>;
 type FormOut = z.output<typeof SoilTestCreateSchema>;
 
-const FIELDS = ['sampledOn', 'lab', 'ph', 'bufferPh', 'bufferMethod', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
+const FIELDS = ['sampledOn', 'lab', 'ph', 'bufferPh', 'bufferMethod', 'labMethod', 'pPpm', 'kPpm', 'organicMatterPct', 'cec', 'enmLbPerAcre'] as const;
 
 /** A number box: empty → null (left out), text → NaN for the schema to refuse with its sentence. */
 const optionalNumber = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(String(v).replace(/,/g, ''))) };
@@ -31,7 +31,7 @@ const errorOf = (errors: FieldErrors<FormIn>, name: string): string | undefined 
 type Unit = SoilTestContextDto['units'][number];
 
 /** The recommendation the fields make, worked in the browser by the same shared function the server stores with. */
-export function soilTestPreview(values: unknown, context: SoilTestContextDto, unit: Unit): { ok: true; lime: string; working: string; nutrients: string; retest: string; source: string } | { ok: false; message: string } {
+export function soilTestPreview(values: unknown, context: SoilTestContextDto, unit: Unit): { ok: true; lime: string; working: string; nutrients: string; nutrientsWorking: string; retest: string; source: string } | { ok: false; message: string } {
   const parsed = SoilTestCreateSchema.safeParse(values);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
@@ -44,6 +44,7 @@ export function soilTestPreview(values: unknown, context: SoilTestContextDto, un
       lime: r.lime.tonsPerAcre > 0 ? `Lime ${r.lime.tonsPerAcre} t/acre to pH ${r.lime.targetPh}` : `No lime: pH ${parsed.data.ph} meets the target ${r.lime.targetPh}`,
       working: r.lime.working,
       nutrients: `P2O5 ${r.nutrients.p2o5LbPerAcre} lb/acre, K2O ${r.nutrients.k2oLbPerAcre} lb/acre`,
+      nutrientsWorking: r.nutrients.working,
       retest: formatDay(retestDue(parsed.data.sampledOn, context.retestYears)),
       source: `Lime by ${r.lime.source}. P and K ${r.nutrients.source}.`,
     };
@@ -63,7 +64,7 @@ function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { prope
   const context = useSoilTestContext(propertyId);
   const create = useCreateSoilTest();
   const toast = useToast();
-  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(SoilTestCreateSchema), defaultValues: { sampledOn, lab, bufferMethod: null } });
+  const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(SoilTestCreateSchema), defaultValues: { sampledOn, lab, bufferMethod: null, labMethod: 'bray-nh4oac' } });
   const e = form.formState.errors;
   const values = form.watch();
   const ctx = context.data;
@@ -104,6 +105,13 @@ function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { prope
         </SelectField>
         <TextField label="Buffer pH" inputMode="decimal" hint={ctx?.method === 'ncdacs' ? 'Needed below the target pH' : 'Optional'} error={errorOf(e, 'bufferPh')} {...form.register('bufferPh', optionalNumber)} />
         <TextField label="ENM, lb/acre" inputMode="decimal" hint={ctx?.method === 'missouri' ? 'The lab’s ENM recommendation' : 'Optional'} error={errorOf(e, 'enmLbPerAcre')} {...form.register('enmLbPerAcre', optionalNumber)} />
+        <SelectField label="P and K method" hint="Mehlich-3 is converted to Bray P1 and ammonium-acetate K before the Tri-State rules (Ohio State ANR-75)" error={errorOf(e, 'labMethod')} {...form.register('labMethod')}>
+          {SOIL_LAB_METHODS.map((m) => (
+            <option key={m} value={m}>
+              {SOIL_LAB_METHOD_LABELS[m]}
+            </option>
+          ))}
+        </SelectField>
         <TextField label="P, ppm" inputMode="decimal" hint="Optional" error={errorOf(e, 'pPpm')} {...form.register('pPpm', optionalNumber)} />
         <TextField label="K, ppm" inputMode="decimal" hint="Optional" error={errorOf(e, 'kPpm')} {...form.register('kPpm', optionalNumber)} />
         <TextField label="Organic matter, %" inputMode="decimal" hint="Optional" error={errorOf(e, 'organicMatterPct')} {...form.register('organicMatterPct', optionalNumber)} />
@@ -116,7 +124,7 @@ function SoilTestFields({ propertyId, unitId, sampledOn, lab, onSaved }: { prope
               <p className="font-serif font-bold text-ink">{preview.lime}</p>
               <p className="text-ink">{preview.nutrients}</p>
               <p className="mt-1 text-xs text-slate">
-                {preview.working}. {preview.source} Retest due {preview.retest}.
+                {preview.working}. {preview.nutrientsWorking}. {preview.source} Retest due {preview.retest}.
               </p>
             </>
           ) : (

@@ -19,7 +19,8 @@ export function SoilTestsCard({ unitId }: { unitId: number }) {
             <p>
               <strong>{formatDay(t.sampledOn)}</strong>, {t.lab}: pH {t.ph}
               {t.pPpm !== null ? `, P ${t.pPpm} ppm` : ''}
-              {t.kPpm !== null ? `, K ${t.kPpm} ppm` : ''}. Retest due {formatDay(t.retestDue)}.
+              {t.kPpm !== null ? `, K ${t.kPpm} ppm` : ''}
+              {t.labMethod === 'mehlich-3' && (t.pPpm !== null || t.kPpm !== null) ? ' (Mehlich-3)' : ''}. Retest due {formatDay(t.retestDue)}.
             </p>
             <p>
               Lime {t.lime.tonsPerAcre} t/acre to pH {t.lime.targetPh}; P2O5 {t.nutrients.p2o5LbPerAcre}, K2O {t.nutrients.k2oLbPerAcre} lb/acre.

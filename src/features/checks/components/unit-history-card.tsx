@@ -68,6 +68,12 @@ export function UnitHistoryCard({ unitId }: { unitId: number }) {
                     </dd>
                   </>
                 ) : null}
+                {s.observations ? (
+                  <>
+                    <dt className="text-slate">Observations</dt>
+                    <dd>{s.observations === 1 ? '1 observation logged' : `${s.observations} observations logged`}</dd>
+                  </>
+                ) : null}
                 {s.soilTests.length ? (
                   <>
                     <dt className="text-slate">Soil tests</dt>

@@ -24,6 +24,8 @@ export interface PortalScope {
     files: string;
     proposals: string;
     proposal: (id: number) => string;
+    /** A property's seasons side by side. */
+    seasons: (id: number) => string;
   };
 }
 
@@ -42,6 +44,7 @@ export const OWN_SCOPE: PortalScope = {
     files: paths.portalFiles,
     proposals: paths.portalProposals,
     proposal: (id) => paths.portalProposal(id),
+    seasons: (id) => paths.portalPropertySeasons(id),
   },
 };
 
@@ -62,6 +65,7 @@ export function previewScope(clientId: number): PortalScope {
       proposals: paths.previewProposals(clientId),
       // The consultant's own view of the document (the client's approval page needs a client session).
       proposal: (id) => paths.proposal(id),
+      seasons: (id) => paths.previewPropertySeasons(clientId, id),
     },
   };
 }
