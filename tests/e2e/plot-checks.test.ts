@@ -50,7 +50,8 @@ describe('plots that report back', () => {
     await form.getByRole('button', { name: 'Add a line' }).click();
     await form.getByLabel('Plants in the frame, line 2').fill('0');
     // The preview is computed in the browser with the server's function.
-    await poll(() => form.getByText(/^Failed: rape 0\.5\/ft² of 6/).isVisible()).toBe(true);
+    // Rape is canola: 5 plants/ft² is the low end of the optimum stand (OMAFRA Field Crop News 2025; NDSU Crop & Pest Report 1999: 4 minimum).
+    await poll(() => form.getByText(/^Failed: rape 0\.5\/ft² of 5/).isVisible()).toBe(true);
     // A count with a fraction is refused in the form, naming the field.
     await form.getByLabel('Plants in the frame, line 2').fill('0.5');
     await form.getByRole('button', { name: 'Save the check' }).click();
