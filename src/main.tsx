@@ -10,13 +10,11 @@ import '@fontsource/source-sans-3/latin-600.css';
 import '@fontsource/source-sans-3/latin-ext-600.css';
 import './styles.css';
 import { AppProvider } from './app/provider';
-import { AppRouter, preloadRouteCode } from './app/router';
+import { AppRouter } from './app/router';
 import { queryClient } from './lib/query-client';
 import { startQueryPersistence } from './lib/query-persistence';
 import { registerServiceWorkerAfterLoad } from './lib/register-service-worker';
 
-// The page's own code starts loading now, alongside the restore below, not after it.
-preloadRouteCode(window.location.pathname);
 // The last data this person saw comes back from IndexedDB before the first render (no signal, no blank page).
 await startQueryPersistence(queryClient);
 

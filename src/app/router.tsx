@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import { createBrowserRouter, matchRoutes, Navigate, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
+import { createBrowserRouter, Navigate, Outlet, RouterProvider, type RouteObject } from 'react-router-dom';
 import { useMe } from '../features/auth/api/get-me';
 import { homeFor, paths } from '../config/paths';
 import { RequireRole } from './layouts/require-role';
@@ -132,18 +132,6 @@ const routes: RouteObject[] = [
   ]),
   { path: '*', element: <NotFoundPage /> },
 ];
-
-/**
- * Starts loading the code of the page at `pathname` (its layouts and the page, the same chunks the
- * router asks for) at once, so that on a warm open it comes while the kept query cache is restored
- * rather than after it. The router's own calls then find the modules already loaded.
- */
-export function preloadRouteCode(pathname: string): void {
-  for (const match of matchRoutes(routes, pathname) ?? []) {
-    const lazy = match.route.lazy;
-    if (typeof lazy === 'function') void Promise.resolve(lazy()).catch(() => undefined);
-  }
-}
 
 let router: ReturnType<typeof createBrowserRouter> | null = null;
 
