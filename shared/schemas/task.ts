@@ -1,7 +1,7 @@
 /** Tasks of the work schedule: list filters, edits, completion and skipping; shared by the server and the client. */
 import { z } from 'zod';
 import type { SprayApplicationInput } from './spray-records';
-import { IdSchema, IsoDateSchema, PageLimitSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
+import { IdSchema, IsoDateSchema, LIST_PAGE, PageLimitSchema, PageQuerySchema, type PageDto, type PageQuery } from './common';
 import { TASK_STATUSES, type FieldBucket, type Progress, type TaskQuantity, type TaskQuantityUsed, type TaskWarning, type UnitWorkStatus } from '../domain/tasks';
 import type { Caution } from '../domain/cautions';
 
@@ -14,6 +14,19 @@ import type { Caution } from '../domain/cautions';
  */
 export const TASK_PAGE = { defaultLimit: 50, timelineLimit: 100 } as const;
 
+/**
+ * The week list's page, by day: `perDay` tasks of each day (and of the week's unscheduled group) —
+ * about one screen for the whole week — with every day's own total, so a day is never cut silently.
+ * "Show more" raises it by `step`; `max` keeps a whole week of days (8 groups) within one list page.
+ */
+export const WEEK_PAGE = { perDay: 3, step: 10, max: Math.floor(LIST_PAGE.maxLimit / 8) } as const;
+
+/** The per-day page of the week list after `pages` presses of "Show more" (1 = the first page). */
+export const weekPerDay = (pages: number): number => Math.min(WEEK_PAGE.max, WEEK_PAGE.perDay + WEEK_PAGE.step * Math.max(0, pages - 1));
+
+/** The list `limit` that holds `perDay` tasks of each of the week's eight groups (seven days and the unscheduled). */
+export const weekLimit = (perDay: number): number => Math.min(LIST_PAGE.maxLimit, 8 * perDay);
+
 export const TaskListQuerySchema = z
   .object({
     propertyId: IdSchema.optional(),
@@ -25,9 +38,21 @@ export const TaskListQuerySchema = z
     to: IsoDateSchema.optional(),
     /** `true` adds each task's unit outline (the field sheet's sketches); lists carry none otherwise. */
     geometry: z.enum(['true', 'false'], { message: 'geometry must be true or false' }).optional(),
+    /**
+     * The week list's page by day: at most this many tasks of each day from `from` on (a task is
+     * counted on its first day in the range) and of the unscheduled ones; the answer's `groups` give
+     * each day's total. Needs `from`.
+     */
+    perDay: z.coerce
+      .number()
+      .int({ message: 'perDay must be a whole number' })
+      .min(1, { message: 'perDay must be at least 1' })
+      .max(WEEK_PAGE.max, { message: `perDay must be at most ${WEEK_PAGE.max}` })
+      .optional(),
   })
   .extend({ ...PageQuerySchema.shape, limit: PageLimitSchema.default(TASK_PAGE.defaultLimit) })
-  .refine((q) => !q.from || !q.to || q.from <= q.to, { message: '"from" must not come after "to"', path: ['to'] });
+  .refine((q) => !q.from || !q.to || q.from <= q.to, { message: '"from" must not come after "to"', path: ['to'] })
+  .refine((q) => q.perDay === undefined || q.from !== undefined, { message: 'perDay needs "from": the days are counted from it', path: ['perDay'] });
 /** A task list filter; the page members may be left out (the server's defaults apply). */
 export type TaskListQuery = Omit<z.infer<typeof TaskListQuerySchema>, 'limit' | 'offset'> & Partial<PageQuery>;
 
@@ -154,6 +179,8 @@ export const TaskListDtoSchema = z.object({
   warnings: objects<TaskWarning>(),
   /** The tasks matching the filter in all (`tasks` holds `limit` of them from `offset`). */
   page: z.custom<PageDto>((v) => typeof v === 'object' && v !== null).optional(),
+  /** With `perDay`: every day (and null, the unscheduled) that has a matching task, with how many it has in all. */
+  groups: z.array(z.object({ date: IsoDateSchema.nullable(), total: z.number().int().min(1) })).optional(),
 });
 export type TaskListDto = z.infer<typeof TaskListDtoSchema>;
 

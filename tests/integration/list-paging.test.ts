@@ -9,7 +9,7 @@ import { signedInAgent, type Agent } from '../support/test-app';
 import { Invoice, Task, TaskPhoto, Unit } from '../../server/models';
 import { measureUnit } from '../../shared/domain/geometry';
 import { LIST_PAGE } from '../../shared/schemas/common';
-import { TASK_PAGE } from '../../shared/schemas/task';
+import { TASK_PAGE, TaskListDtoSchema, weekLimit } from '../../shared/schemas/task';
 import { INVOICE_PAGE, InvoiceListSummarySchema } from '../../shared/schemas/invoice';
 import type { Polygon } from 'geojson';
 import { QueryTypes } from 'sequelize';
@@ -102,6 +102,53 @@ describe('paged lists', () => {
       );
     });
     expect(JSON.stringify(plan)).toContain('tasks_firm_window_idx');
+    await Task.destroy({ where: { propertyId: property.id } });
+    await property.destroy();
+  });
+
+  it("answers the week list a few tasks of each day with every day's total (perDay), never cutting a day silently", async () => {
+    const property = await makeProperty(ctx.firm.id, ctx.client.id);
+    const base = { firmId: ctx.firm.id, propertyId: property.id, unitId: null, kind: 'planting', practiceName: 'Clover plot', unitName: 'Whole property' };
+    // The week of Monday 2026-09-07 to Sunday 2026-09-13.
+    const monday = Array.from({ length: 5 }, (_, i) => ({ name: `Monday ${i + 1}`, earliest: '2026-09-01', latest: '2026-09-30', startDate: '2026-09-07' }));
+    const spanning = { name: 'From the week before', earliest: '2026-09-01', latest: '2026-09-30', startDate: '2026-09-04', endDate: '2026-09-08' };
+    const wednesday = { name: 'Wednesday', earliest: '2026-09-01', latest: '2026-09-30', startDate: '2026-09-09' };
+    const open = Array.from({ length: 4 }, (_, i) => ({ name: `Open ${i + 1}`, earliest: '2026-09-01', latest: '2026-09-30' }));
+    const outside = { name: 'Next week', earliest: '2026-09-01', latest: '2026-09-30', startDate: '2026-09-14' };
+    await Task.bulkCreate([...monday, spanning, wednesday, ...open, outside].map((t, i) => ({ ...base, stepKey: `day-${i}`, position: i, ...t })));
+    const week = `propertyId=${property.id}&from=2026-09-07&to=2026-09-13`;
+
+    const res = await consultant.get(`/api/tasks?${week}&perDay=2&limit=${weekLimit(2)}`).expect(200);
+    const answer = TaskListDtoSchema.parse(res.body.data);
+    // Monday holds the task carried over from the week before (listed on its first day in the week) and five of its own.
+    expect(answer.groups).toEqual([
+      { date: '2026-09-07', total: 6 },
+      { date: '2026-09-09', total: 1 },
+      { date: null, total: 4 },
+    ]);
+    expect(answer.page?.total).toBe(11);
+    const names = answer.tasks.map((t) => t.name);
+    expect(names).toHaveLength(5);
+    expect(names.filter((n) => n.startsWith('Open'))).toHaveLength(2);
+    expect(names).toContain('Wednesday');
+    // The first two of Monday in the list's own order: the carried-over task (window start 09-04) first.
+    expect(names.filter((n) => n === 'From the week before' || n.startsWith('Monday'))).toEqual(['From the week before', 'Monday 1']);
+
+    // A page large enough for every day answers what the plain list answers.
+    const all = TaskListDtoSchema.parse((await consultant.get(`/api/tasks?${week}&perDay=50&limit=${weekLimit(50)}`).expect(200)).body.data);
+    const plain = TaskListDtoSchema.parse((await consultant.get(`/api/tasks?${week}&limit=50`).expect(200)).body.data);
+    expect(all.tasks.map((t) => t.id)).toEqual(plain.tasks.map((t) => t.id));
+    expect(plain.groups).toBeUndefined();
+
+    // Past the last row the days' totals still come.
+    const past = TaskListDtoSchema.parse((await consultant.get(`/api/tasks?${week}&perDay=2&limit=5&offset=5`).expect(200)).body.data);
+    expect(past.tasks).toHaveLength(0);
+    expect(past.groups).toEqual(answer.groups);
+
+    // perDay counts days from "from": without it the request is refused with a sentence.
+    const bad = await consultant.get(`/api/tasks?propertyId=${property.id}&perDay=2`).expect(422);
+    expect(JSON.stringify(bad.body)).toContain('perDay needs');
+    await consultant.get(`/api/tasks?${week}&perDay=0`).expect(422);
     await Task.destroy({ where: { propertyId: property.id } });
     await property.destroy();
   });

@@ -7,7 +7,7 @@ import type { Geometry } from 'geojson';
 import { sequelize } from '../../db/sequelize';
 import { Property, Task, TaskPhoto, Unit, User } from '../../models';
 import type { SessionUser } from '../../../shared/schemas/auth';
-import { TASK_PAGE, type TaskDto, type TaskListQuery } from '../../../shared/schemas/task';
+import { TASK_PAGE, type TaskDto, type TaskListDto, type TaskListQuery } from '../../../shared/schemas/task';
 import { pageOf, type PageDto } from '../../../shared/schemas/common';
 import { fieldBucket, taskWarnings, type TaskWarning } from '../../../shared/domain/tasks';
 import { stripCrs } from '../../presenters/geojson';
@@ -198,21 +198,24 @@ function taskScopeSql(actor: SessionUser, query: TaskListQuery): { sql: string; 
   return { sql: clauses.join(' AND '), replacements };
 }
 
-type TaskListRow = TaskFields & Omit<TaskRelated, 'photos'> & { photos: (Omit<TaskView['photos'][number], 'url'>)[]; total: string };
+type TaskListRow = TaskFields & Omit<TaskRelated, 'photos'> & { photos: (Omit<TaskView['photos'][number], 'url'>)[]; total: string; groups?: TaskDayGroup[] | null };
 
 /**
  * A page of the tasks an actor may see, filtered, in date order, with the number matching in all
  * (never cut silently). Unit outlines only when asked (`geometry=true`, the field sheet's sketches).
  * One query: the page's ids and the total (a window count over the filter's cheap columns; a week is
  * found through the window index of migration 0091), then only the page's rows with their names,
- * unit points and photos; no model instances, no second trip.
+ * unit points and photos; no model instances, no second trip. With `perDay` (the week list) the page
+ * holds at most that many tasks of each day and `groups` every day's total, from the same read.
  */
-export async function listTasks(actor: SessionUser, query: TaskListQuery): Promise<{ tasks: TaskView[]; warnings: TaskWarning[]; page: PageDto }> {
+export async function listTasks(actor: SessionUser, query: TaskListQuery): Promise<{ tasks: TaskView[]; warnings: TaskWarning[]; page: PageDto; groups?: TaskDayGroup[] }> {
   const page = { limit: query.limit ?? TASK_PAGE.defaultLimit, offset: query.offset ?? 0 };
   const scope = taskScopeSql(actor, query);
   const iso = (column: string) => `to_char(${column} AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
+  const byDay = query.perDay !== undefined && query.from !== undefined;
   const rows = await sequelize.query<TaskListRow>(
-    `SELECT t.id, t.property_id AS "propertyId", t.unit_id AS "unitId", t.prescription_id AS "prescriptionId", t.proposal_id AS "proposalId",
+    `${byDay ? weekGroupsSql(scope.sql) : ''}
+     SELECT t.id, t.property_id AS "propertyId", t.unit_id AS "unitId", t.prescription_id AS "prescriptionId", t.proposal_id AS "proposalId",
             t.step_key AS "stepKey", t.name, t.kind, t.practice_name AS "practiceName", t.unit_name AS "unitName", t.depends_on AS "dependsOn",
             t.earliest::text AS earliest, t.latest::text AS latest, t.start_date::text AS "startDate", t.end_date::text AS "endDate",
             t.status, t.assignee_id AS "assigneeId", t.quantities, t.cautions, t.cost_cents AS "costCents", t.done_on::text AS "doneOn",
@@ -223,25 +226,51 @@ export async function listTasks(actor: SessionUser, query: TaskListQuery): Promi
             a.name AS "assigneeName", cb.name AS "completedByName",
             COALESCE((SELECT json_agg(json_build_object('id', ph.id, 'takenAt', ${iso('ph.taken_at')}, 'latitude', ph.latitude, 'longitude', ph.longitude, 'createdAt', ${iso('ph.created_at')}) ORDER BY ph.id)
                       FROM task_photos ph WHERE ph.task_id = t.id), '[]'::json) AS photos,
-            pg.total
-     FROM (SELECT t.id, count(*) OVER () AS total, row_number() OVER (ORDER BY COALESCE(t.start_date, t.earliest), t.property_id, t.unit_name, t.position, t.id) AS n
+            pg.total${byDay ? `, (SELECT json_agg(json_build_object('date', g.grp::text, 'total', g.n) ORDER BY g.grp NULLS LAST) FROM g) AS groups` : ''}
+     FROM ${byDay ? WEEK_PAGE_SQL : `(SELECT t.id, count(*) OVER () AS total, row_number() OVER (ORDER BY COALESCE(t.start_date, t.earliest), t.property_id, t.unit_name, t.position, t.id) AS n
            FROM tasks t WHERE ${scope.sql}
-           ORDER BY n LIMIT :limit OFFSET :offset) pg
+           ORDER BY n LIMIT :limit OFFSET :offset)`} pg
      JOIN tasks t ON t.id = pg.id
      JOIN properties p ON p.id = t.property_id
      LEFT JOIN units u ON u.id = t.unit_id
      LEFT JOIN users a ON a.id = t.assignee_id
      LEFT JOIN users cb ON cb.id = t.completed_by_id
      ORDER BY pg.n`,
-    { replacements: { ...scope.replacements, limit: page.limit, offset: page.offset }, type: QueryTypes.SELECT },
+    { replacements: { ...scope.replacements, limit: page.limit, offset: page.offset, ...(byDay ? { groupFrom: query.from, perDay: query.perDay } : {}) }, type: QueryTypes.SELECT },
   );
   // Past the last page the window count has no row to ride on: count on its own.
   const total = rows.length ? Number(rows[0].total) : page.offset > 0 ? await Task.count({ where: taskScope(actor, query) }) : 0;
+  const groups = !byDay ? undefined : rows.length ? (rows[0].groups ?? []) : total > 0 ? await weekGroupTotals(scope, query.from!) : [];
   const presented = viewsOf(actor, rows, (t) => {
     const r = t as TaskListRow;
     return { ...r, photos: r.photos.map((ph) => ({ id: ph.id, url: `/api/task-photos/${ph.id}`, takenAt: ph.takenAt, latitude: ph.latitude, longitude: ph.longitude, createdAt: ph.createdAt })) };
   });
-  return { ...presented, page: pageOf(page, total) };
+  return { ...presented, page: pageOf(page, total), ...(groups ? { groups } : {}) };
+}
+
+/** A day of the week list and how many tasks it holds in all (date null: the unscheduled ones). */
+export type TaskDayGroup = NonNullable<TaskListDto['groups']>[number];
+
+/** The day a task is listed on from `:groupFrom` on: its first scheduled day in the range; null when it has no date. */
+const GROUP_DAY_SQL = 'CASE WHEN t.start_date IS NULL THEN NULL ELSE GREATEST(t.start_date, CAST(:groupFrom AS date)) END';
+
+/** The filter's tasks with their day (`m`) and each day's count (`g`), read once for the page and the totals. */
+const weekGroupsSql = (scopeSql: string) =>
+  `WITH m AS MATERIALIZED (SELECT t.id, ${GROUP_DAY_SQL} AS grp, COALESCE(t.start_date, t.earliest) AS d, t.property_id, t.unit_name, t.position FROM tasks t WHERE ${scopeSql}),
+        g AS (SELECT grp, count(*)::int AS n FROM m GROUP BY grp)`;
+
+/** The page by day: at most `:perDay` of each day (in the list's order), then the usual limit and offset. */
+const WEEK_PAGE_SQL = `(SELECT c.id, c.total, row_number() OVER (ORDER BY c.d, c.property_id, c.unit_name, c.position, c.id) AS n
+           FROM (SELECT m.*, count(*) OVER () AS total, row_number() OVER (PARTITION BY m.grp ORDER BY m.d, m.property_id, m.unit_name, m.position, m.id) AS k FROM m) c
+           WHERE c.k <= :perDay
+           ORDER BY n LIMIT :limit OFFSET :offset)`;
+
+/** Each day's total alone (a page past the last row carries none). */
+async function weekGroupTotals(scope: { sql: string; replacements: Record<string, unknown> }, from: string): Promise<TaskDayGroup[]> {
+  return sequelize.query<TaskDayGroup>(
+    `SELECT ${GROUP_DAY_SQL}::text AS date, count(*)::int AS total FROM tasks t WHERE ${scope.sql} GROUP BY 1 ORDER BY 1 NULLS LAST`,
+    { replacements: { ...scope.replacements, groupFrom: from }, type: QueryTypes.SELECT },
+  );
 }
 
 /** One task as its DTO, with the unit's geometry for the small map. */

@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { addDays, formatMonthDay } from '../../../../shared/domain/planting-windows';
 import { TASK_STATUSES, weekStart } from '../../../../shared/domain/tasks';
-import { TASK_PAGE, TaskUpdateSchema, type TaskDto } from '../../../../shared/schemas/task';
+import { TASK_PAGE, TaskUpdateSchema, weekLimit, weekPerDay, WEEK_PAGE, type TaskDto } from '../../../../shared/schemas/task';
 import { useUpdateTask } from '../../../features/schedule/api/update-task';
 import { useAssignTasks } from '../../../features/schedule/api/assign-tasks';
 import { datesText } from '../../../features/schedule/components/task-text';
@@ -94,9 +94,10 @@ export function SchedulePage() {
   const filterKey = JSON.stringify(filter);
   const [more, setMore] = useState<{ key: string; pages: number }>({ key: filterKey, pages: 1 });
   const pages = more.key === filterKey ? more.pages : 1;
-  // The week list's page is the list's default (50); the timeline asks for a longer one explicitly.
-  const pageSize = params.view === 'timeline' ? TASK_PAGE.timelineLimit : TASK_PAGE.defaultLimit;
-  const query = { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * pageSize) };
+  // The week list asks for a few tasks of each day (about one screen for the week) with every day's
+  // total; "Show more" raises that. The timeline asks for pages of its own, longer size.
+  const perDay = params.view === 'week' ? weekPerDay(pages) : undefined;
+  const query = perDay !== undefined ? { ...filter, perDay, limit: weekLimit(perDay) } : { ...filter, limit: Math.min(LIST_PAGE.maxLimit, pages * TASK_PAGE.timelineLimit) };
   const tasks = useTasks(query);
   const team = useTeam();
   const properties = useProperties();
@@ -138,6 +139,7 @@ export function SchedulePage() {
   const change = (c: Change, replace = false) => setSearch((cur) => writeScheduleParams(cur, c), { replace });
   const open = (taskId: number) => change({ task: taskId });
   const list = tasks.data?.tasks ?? [];
+  const showMore = () => setMore({ key: filterKey, pages: pages + 1 });
   const sunday = addDays(params.week, 6);
   const thisWeek = weekStart(today);
 
@@ -194,8 +196,16 @@ export function SchedulePage() {
               <span className="tabular-nums">
                 Showing {list.length.toLocaleString('en-US')} of {tasks.data.page.total.toLocaleString('en-US')} tasks
               </span>
-              {query.limit < LIST_PAGE.maxLimit ? (
-                <Button variant="secondary" size="sm" onClick={() => setMore({ key: filterKey, pages: pages + 1 })}>
+              {perDay !== undefined ? (
+                perDay < WEEK_PAGE.max ? (
+                  <Button variant="secondary" size="sm" onClick={showMore}>
+                    Show more
+                  </Button>
+                ) : (
+                  <span>Narrow the filters to see the rest.</span>
+                )
+              ) : query.limit < LIST_PAGE.maxLimit ? (
+                <Button variant="secondary" size="sm" onClick={showMore}>
                   Show more
                 </Button>
               ) : (
@@ -212,7 +222,7 @@ export function SchedulePage() {
               Tasks appear when a landowner approves a proposal. Try another week, the timeline, or clear a filter.
             </EmptyState>
           ) : params.view === 'week' ? (
-            <WeekList tasks={list} monday={params.week} today={today} onOpen={open} />
+            <WeekList tasks={list} monday={params.week} today={today} onOpen={open} dayTotals={tasks.data?.groups} onShowMore={perDay !== undefined && perDay < WEEK_PAGE.max ? showMore : undefined} />
           ) : (
             <TimelineView tasks={list} from={params.from} to={params.to} by={params.by} today={today} people={people} assigning={assign.isPending} onOpen={open} onMove={move} onAssign={assignSelected} />
           )}

@@ -1,5 +1,6 @@
-import type { TaskDto } from '../../../../shared/schemas/task';
-import { weekGroups } from '../lib/timeline';
+import type { TaskDto, TaskListDto } from '../../../../shared/schemas/task';
+import { Button } from '../../../components/ui/button';
+import { dayCountText, weekGroups } from '../lib/timeline';
 import { TaskStatusChip, WarningMarks } from './task-status-chip';
 import { datesText, dayHeading, windowText } from './task-text';
 
@@ -38,23 +39,43 @@ function TaskRow({ task, onOpen }: { task: TaskDto; onOpen: (id: number) => void
   );
 }
 
-/** The week list: each day's tasks, then the week's unscheduled tasks whose window is open. */
-export function WeekList({ tasks, monday, today, onOpen }: { tasks: readonly TaskDto[]; monday: string; today: string; onOpen: (id: number) => void }) {
+/**
+ * The week list: each day's tasks, then the week's unscheduled tasks whose window is open. With
+ * `dayTotals` (the answer's `groups`, asked with `perDay`) a day that holds more than it shows says
+ * so and offers "Show more" (`onShowMore`), so no day looks emptier than it is.
+ */
+export function WeekList({
+  tasks,
+  monday,
+  today,
+  onOpen,
+  dayTotals,
+  onShowMore,
+}: {
+  tasks: readonly TaskDto[];
+  monday: string;
+  today: string;
+  onOpen: (id: number) => void;
+  dayTotals?: TaskListDto['groups'];
+  onShowMore?: () => void;
+}) {
   const groups = weekGroups(tasks, monday);
+  const totalOf = new Map((dayTotals ?? []).map((g) => [g.date, g.total]));
   return (
     <div className="flex flex-col gap-3">
       {groups.map((g) => {
         const heading = g.date ? dayHeading(g.date) : 'Not scheduled, window open this week';
         const id = `day-${g.date ?? 'unscheduled'}`;
-        if (!g.date && g.tasks.length === 0) return null;
+        const total = totalOf.get(g.date) ?? g.tasks.length;
+        if (!g.date && total === 0) return null;
         return (
           <section key={id} aria-labelledby={id} className={`rounded-md border bg-card px-3 py-2 ${g.date === today ? 'border-moss' : 'border-rule'}`}>
             <h3 id={id} className="flex items-baseline gap-2 border-b border-rule/70 pb-1 text-sm font-bold">
               {heading}
               {g.date === today ? <span className="text-xs font-semibold text-moss-deep">today</span> : null}
-              <span className="ml-auto text-xs font-normal text-slate">{g.tasks.length === 0 ? '' : `${g.tasks.length} task${g.tasks.length === 1 ? '' : 's'}`}</span>
+              <span className="ml-auto text-xs font-normal text-slate tabular-nums">{dayCountText(g.tasks.length, total)}</span>
             </h3>
-            {g.tasks.length === 0 ? (
+            {g.tasks.length === 0 && total === 0 ? (
               <p className="px-2 py-1.5 text-xs text-slate">Nothing scheduled.</p>
             ) : (
               <ul className="divide-y divide-rule/60">
@@ -63,6 +84,20 @@ export function WeekList({ tasks, monday, today, onOpen }: { tasks: readonly Tas
                 ))}
               </ul>
             )}
+            {total > g.tasks.length ? (
+              <p className="flex flex-wrap items-center gap-2 px-2 pb-1 pt-1.5 text-xs text-slate">
+                <span>
+                  {total - g.tasks.length} more on this {g.date ? 'day' : 'list'}.
+                </span>
+                {onShowMore ? (
+                  <Button variant="ghost" size="sm" onClick={onShowMore}>
+                    Show more
+                  </Button>
+                ) : (
+                  <span>Narrow the filters to see them.</span>
+                )}
+              </p>
+            ) : null}
           </section>
         );
       })}

@@ -141,6 +141,14 @@ export function weekGroups<T extends LayoutTask>(tasks: readonly T[], monday: Is
   return [...days, { date: null, tasks: unscheduled }];
 }
 
+/** A day's heading count: "3 tasks", or "3 of 17 tasks" when the answer holds only the first of the day's tasks. */
+export function dayCountText(shown: number, total: number): string {
+  const all = Math.max(shown, total);
+  if (all === 0) return '';
+  const noun = `task${all === 1 ? '' : 's'}`;
+  return shown < all ? `${shown} of ${all} ${noun}` : `${all} ${noun}`;
+}
+
 /** The text a task's bar carries: its step, and in the by-crew view the unit too (a crew member's row holds several units). */
 export function laneText(task: Pick<LayoutTask, 'name' | 'unitName'>, by: GroupBy): string {
   return by === 'crew' ? `${task.name} · ${task.unitName}` : task.name;
