@@ -12,7 +12,7 @@
  * the plan PDF of a 500-unit property (GET …/plan.pdf), a season report PDF (charts, four photos),
  * a 10 MB KML import (POST …/imports) and a 4000 × 3000 orthophoto overlay upload (POST …/overlays).
  *
- * Run: `npx tsx tests/bench/event-loop.ts [rounds]` (also part of `npm run bench`).
+ * Run: `npx tsx tests/bench/event-loop.ts [rounds] [--only=<label text>]` (also part of `npm run bench`).
  */
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -174,7 +174,9 @@ async function main() {
       into.loopP99.push(loop.percentile(99) / 1e6);
       return ms;
     };
-    for (const work of works) {
+    // `--only=plan` runs the pieces of work whose label contains that text.
+    const only = process.argv.find((a) => a.startsWith('--only='))?.slice('--only='.length);
+    for (const work of works.filter((w) => !only || w.label.includes(only))) {
       process.stderr.write(`event-loop bench: ${work.label}\n`);
       for (let i = 0; i < 2; i++) await work.run(); // warm-up: modules, JIT, worker caches
       const baseline = emptyWindow();
