@@ -204,4 +204,6 @@ if (!process.argv.includes('--no-computations')) await computations();
 if (!process.argv.includes('--no-http')) await http();
 console.log('\nBrowseline benchmarks');
 for (const [k, v] of Object.entries(results)) console.log(`  ${k}: ${v}`);
+// The request thread's event loop during PDFs, imports and overlays (item 7), in a process of its own.
+if (!process.argv.includes('--no-event-loop')) execFileSync(tsx, [path.join(root, 'tests/bench/event-loop.ts')], { env: process.env, stdio: 'inherit' });
 process.exit(0);

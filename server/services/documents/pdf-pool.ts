@@ -7,7 +7,9 @@
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
 import { renderFailure } from './pdf';
-import type { WorkerAnswer } from './pdf-worker';
+import type { PdfTask, WorkerAnswer } from './pdf-worker';
+import type { DocumentTemplateInput, DocumentTemplateName } from './document-templates';
+import { DomainValidationError } from '../../../shared/domain/errors';
 
 /** How many PDF worker threads to run. */
 export function pdfWorkerCount(env: NodeJS.ProcessEnv = process.env): number {
@@ -41,24 +43,46 @@ export async function pdfWorkersReady(): Promise<void> {
   await renderPdf({ content: ['ready'] });
 }
 
-/** Renders a packed definition (pdf-functions.ts) in a worker thread. */
-export async function renderPacked(packed: unknown): Promise<Buffer> {
+/**
+ * Renders a task in a worker thread: a named template with its input (the definition is built in
+ * the worker) or a packed definition (pdf-functions.ts). A template's refusal of its input comes
+ * back as the same DomainValidationError (field and sentence); any other failure as a
+ * DocumentRenderError.
+ */
+export async function runPdfTask(task: PdfTask): Promise<Buffer> {
   if (pdfWorkerCount() === 0) {
-    const { renderPackedHere } = await import('./pdf-worker');
+    const { renderTaskHere } = await import('./pdf-worker');
     try {
-      return await renderPackedHere(packed);
+      return await renderTaskHere(task);
     } catch (error) {
+      if (error instanceof DomainValidationError) throw error;
       throw renderFailure(error instanceof Error ? error.message : String(error), error);
     }
   }
   let answer: WorkerAnswer;
   try {
-    answer = (await thePool().run(packed)) as WorkerAnswer;
+    answer = (await thePool().run(task)) as WorkerAnswer;
   } catch (error) {
     throw renderFailure(`the PDF worker stopped (${error instanceof Error ? error.message : String(error)})`, error);
   }
-  if (!(answer instanceof Uint8Array)) throw renderFailure(answer.message);
+  if (!(answer instanceof Uint8Array)) {
+    if (answer.field !== undefined) throw new DomainValidationError(answer.field, answer.message);
+    throw renderFailure(answer.message);
+  }
   return Buffer.from(answer.buffer, answer.byteOffset, answer.byteLength);
+}
+
+/** Renders a packed definition (pdf-functions.ts) in a worker thread. */
+export async function renderPacked(packed: unknown): Promise<Buffer> {
+  return runPdfTask({ packed });
+}
+
+/**
+ * Renders a named document template in a worker thread: only its plain-data input crosses over;
+ * the definition (map SVG, tables) is built and laid out there, off the request thread.
+ */
+export async function renderTemplate<N extends DocumentTemplateName>(name: N, input: DocumentTemplateInput<N>): Promise<Buffer> {
+  return runPdfTask({ template: name, input });
 }
 
 /** Threads running and documents rendered by the pool so far (tests, diagnostics). */
