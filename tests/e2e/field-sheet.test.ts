@@ -209,6 +209,8 @@ describe('the crew’s field sheet on a phone', () => {
     await page.waitForURL(`${baseUrl}/field`);
     const task = tasks[1];
     await openTask(page, task);
+    // The task page asks for its forms as it opens; the signal goes once they have arrived (the service worker of a fresh phone may not hold them yet).
+    await page.waitForLoadState('networkidle');
 
     await context.setOffline(true);
     await page.getByRole('button', { name: 'Mark done' }).click();
