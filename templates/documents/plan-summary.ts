@@ -4,9 +4,9 @@
  * lengths, acres by kind, cautions for the work planned, and page numbers.
  * Served later by `GET /api/properties/:id/plan.pdf`; its input is plain data.
  */
-import type { Geometry, MultiPolygon, Polygon } from 'geojson';
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { z } from 'zod';
+import { GeometrySchema, AreaGeometrySchema } from './kit/geometry-schemas';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatLatLon } from '../../shared/domain/geometry';
 import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit-kinds';
@@ -22,14 +22,6 @@ import {
   ruledTableLayout,
 } from './kit/layout';
 
-const GeometrySchema = z.custom<Geometry>(
-  (v) => typeof v === 'object' && v !== null && typeof (v as { type?: unknown }).type === 'string',
-  { message: 'must be a GeoJSON geometry' },
-);
-const AreaGeometrySchema = z.custom<Polygon | MultiPolygon>(
-  (v) => typeof v === 'object' && v !== null && ['Polygon', 'MultiPolygon'].includes((v as { type?: string }).type ?? ''),
-  { message: 'must be a GeoJSON Polygon or MultiPolygon' },
-);
 const name = (max: number) => z.string().trim().min(1, { message: 'must not be empty' }).max(max, { message: `must be at most ${max} characters` });
 const measure = z.number().finite().nonnegative({ message: 'must be zero or more' });
 

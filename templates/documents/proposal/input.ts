@@ -9,17 +9,9 @@ import { LineCategorySchema } from '../../../shared/schemas/proposal';
 import { ProposalTotalsFiguresSchema } from '../../../shared/schemas/proposal-dto';
 import { PlanMapOverlaysSchema } from '../kit/map-svg';
 import type { ProposalDocumentInput } from '../proposal-input';
-import type { Geometry, MultiPolygon, Polygon } from 'geojson';
 import { z } from 'zod';
+import { GeometrySchema, AreaGeometrySchema } from '../kit/geometry-schemas';
 
-const GeometrySchema = z.custom<Geometry>(
-  (v) => typeof v === 'object' && v !== null && typeof (v as { type?: unknown }).type === 'string',
-  { message: 'must be a GeoJSON geometry' },
-);
-const AreaGeometrySchema = z.custom<Polygon | MultiPolygon>(
-  (v) => typeof v === 'object' && v !== null && ['Polygon', 'MultiPolygon'].includes((v as { type?: string }).type ?? ''),
-  { message: 'must be a GeoJSON Polygon or MultiPolygon' },
-);
 const text = (max: number) => z.string().trim().min(1, { message: 'must not be empty' }).max(max, { message: `must be at most ${max} characters` });
 const optionalText = (max: number) => z.string().max(max, { message: `must be at most ${max} characters` }).nullish();
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, { message: 'must be a date written YYYY-MM-DD' });
