@@ -110,11 +110,14 @@ interface CleanState {
 
 function cleanPosition(value: unknown, state: CleanState): Pos {
   if (!Array.isArray(value) || value.length < 2) throw new PartError('a position is not a [longitude, latitude] pair');
-  const [lon, lat] = value;
+  const lon: unknown = value[0];
+  const lat: unknown = value[1];
   if (typeof lon !== 'number' || typeof lat !== 'number' || !Number.isFinite(lon) || !Number.isFinite(lat)) {
     throw new PartError('a coordinate is not a number');
   }
-  if (value.length > 2) state.droppedZ = true;
+  // A clean pair is kept as it is (a large file holds hundreds of thousands: no copy to collect).
+  if (value.length === 2) return value as Pos;
+  state.droppedZ = true;
   return [lon, lat];
 }
 
@@ -180,20 +183,24 @@ function cleanPart(part: Simple, state: CleanState): CleanGeometry[] {
   }
 }
 
-function* positionsOf(geometry: CleanGeometry): Generator<Position> {
+/** Call `visit` with every position of the geometry (a plain loop: it runs over every vertex of a file). */
+function eachPosition(geometry: CleanGeometry, visit: (lon: number, lat: number) => void): void {
+  const line = (positions: Position[]) => {
+    for (let i = 0; i < positions.length; i += 1) visit(positions[i][0], positions[i][1]);
+  };
   switch (geometry.type) {
     case 'Point':
-      yield geometry.coordinates;
+      visit(geometry.coordinates[0], geometry.coordinates[1]);
       return;
     case 'LineString':
-      yield* geometry.coordinates;
+      line(geometry.coordinates);
       return;
     case 'MultiLineString':
     case 'Polygon':
-      for (const line of geometry.coordinates) yield* line;
+      for (const l of geometry.coordinates) line(l);
       return;
     case 'MultiPolygon':
-      for (const polygon of geometry.coordinates) for (const ring of polygon) yield* ring;
+      for (const polygon of geometry.coordinates) for (const ring of polygon) line(ring);
   }
 }
 
@@ -203,12 +210,12 @@ function rangeProblem(geometry: CleanGeometry, projectedReason: string): string 
   let badLon: number | undefined;
   let badLat: number | undefined;
   let swapFits = true;
-  for (const [lon, lat] of positionsOf(geometry)) {
+  eachPosition(geometry, (lon, lat) => {
     maxAbs = Math.max(maxAbs, Math.abs(lon), Math.abs(lat));
     if (badLon === undefined && Math.abs(lon) > 180) badLon = lon;
     if (badLat === undefined && Math.abs(lat) > 90) badLat = lat;
     if (Math.abs(lon) > 90 || Math.abs(lat) > 180) swapFits = false;
-  }
+  });
   if (badLon === undefined && badLat === undefined) return undefined;
   if (maxAbs >= PROJECTED_MAGNITUDE) return projectedReason;
   const parts: string[] = [];

@@ -119,7 +119,12 @@ export function xmlRootOf(text: string): string | null {
  */
 export function parseKmlCoordinates(text: string): Position[] | null {
   const out: Position[] = [];
-  let tuple: number[] = [];
+  // The tuple being read, in locals: each position is then made once, at its exact size (a
+  // growing array per tuple was most of a large file's garbage).
+  let count = 0;
+  let lon = 0;
+  let lat = 0;
+  let alt = 0;
   let start = -1;
   let afterComma = false;
   const n = text.length;
@@ -130,7 +135,10 @@ export function parseKmlCoordinates(text: string): Position[] | null {
       if (start !== -1) {
         const value = parseDecimal(text, start, i);
         if (!Number.isFinite(value)) return null;
-        tuple.push(value);
+        if (count === 0) lon = value;
+        else if (count === 1) lat = value;
+        else if (count === 2) alt = value;
+        count += 1;
         start = -1;
       }
       if (c === 44) {
@@ -138,17 +146,17 @@ export function parseKmlCoordinates(text: string): Position[] | null {
         continue;
       }
       // Whitespace ends a tuple unless it follows a comma ("lon, lat").
-      if (!afterComma && tuple.length > 0) {
-        if (tuple.length < 2) return null;
-        out.push(tuple.length > 3 ? tuple.slice(0, 3) : tuple);
-        tuple = [];
+      if (!afterComma && count > 0) {
+        if (count < 2) return null;
+        out.push(count === 2 ? [lon, lat] : [lon, lat, alt]);
+        count = 0;
       }
       continue;
     }
     afterComma = false;
     if (start === -1) start = i;
   }
-  if (tuple.length > 0) return null;
+  if (count > 0) return null;
   return out;
 }
 

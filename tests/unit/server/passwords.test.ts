@@ -15,4 +15,13 @@ describe('sign-in timing', () => {
     expect(bcrypt.getRounds(await hashPassword('walnut-creek-bedding-47'))).toBe(6);
     expect(dummyHashCost()).toBe(6);
   });
+
+  it('makes the dummy comparison as a real one, and it never matches', async () => {
+    vi.stubEnv('BCRYPT_COST', '5');
+    vi.resetModules();
+    const { verifyPassword } = await import('../../../server/services/auth/passwords');
+    // A malformed dummy hash would make bcryptjs reject at once (cheaply) instead of hashing.
+    await expect(verifyPassword('walnut-creek-bedding-47', null)).resolves.toBe(false);
+    await expect(verifyPassword('', null)).resolves.toBe(false);
+  });
 });
