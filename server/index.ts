@@ -10,6 +10,7 @@ import { startJobQueue, stopJobQueue } from './services/jobs/job-queue';
 import { beginDraining, closeServerGracefully } from './lifecycle';
 import { warmGeoWorkers } from './services/geo-work/geo-pool';
 import { closePdfWorkers, warmPdfWorkers } from './services/documents/pdf-pool';
+import { closePasswordWorkers, warmPasswordWorkers } from './services/auth/passwords';
 
 const problems = configurationProblems(config);
 if (problems.length) {
@@ -28,6 +29,7 @@ const server = app.listen(config.port, config.host, () => {
   logger.info({ url: `http://${config.host}:${config.port}`, env: config.env }, 'Browseline is listening');
 });
 warmPdfWorkers();
+warmPasswordWorkers(); // the first sign-in does not wait for its worker thread to start
 const stopOutbox = startOutboxWorker();
 const stopReminders = startReminderJob();
 // The queue starts in the background: a database outage at boot is logged, never a crash.
@@ -49,6 +51,7 @@ async function shutdown(signal: string) {
   if (timedOut) logger.warn({ graceMs: config.shutdownGraceMs }, 'requests still in flight were cut at the shutdown limit');
   await stopJobQueue(config.shutdownGraceMs);
   await closePdfWorkers().catch(() => undefined);
+  await closePasswordWorkers().catch(() => undefined);
   await closeSessionPool().catch(() => undefined);
   await sequelize.close().catch(() => undefined);
   logger.info('stopped');

@@ -9,6 +9,7 @@
  *
  * It prints the work's median time, the longest and p99 event-loop delay in each window, and
  * /api/health's p99 in each window. The work: a proposal PDF (40 lines, plan map, an aerial photo),
+ * four sign-ins at once (bcrypt in the request thread as before, and in its worker as now),
  * the plan PDF of a 500-unit property (GET …/plan.pdf), a season report PDF (charts, four photos),
  * a 10 MB KML import (POST …/imports) and a 4000 × 3000 orthophoto overlay upload (POST …/overlays).
  *
@@ -142,7 +143,23 @@ async function main() {
       if (!res.ok) throw new Error(`${url}: ${res.status} ${text.slice(0, 200)}`);
     };
     const corners = JSON.stringify([[-90.96, 43.29], [-90.9, 43.29], [-90.9, 43.25], [-90.96, 43.25]]);
+    /** Four sign-ins at once (bcrypt cost 11), with the hashing in a worker thread or, as before, in this one. */
+    const signIns = async (passwordWorkers: string) => {
+      process.env.PASSWORD_WORKERS = passwordWorkers;
+      try {
+        const answers = await Promise.all(
+          Array.from({ length: 4 }, () =>
+            fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@browseline.test', password: 'bench-password-1' }) }),
+          ),
+        );
+        for (const a of answers) if (!a.ok) throw new Error(`sign-in: ${a.status}`);
+      } finally {
+        delete process.env.PASSWORD_WORKERS;
+      }
+    };
     const works: { label: string; run: () => Promise<unknown> }[] = [
+      { label: 'sign-in ×4, bcrypt in the request thread (before)', run: () => signIns('0') },
+      { label: 'sign-in ×4, bcrypt in a worker thread (now)', run: () => signIns('1') },
       { label: 'proposal PDF (40 lines, plan map, aerial photo)', run: () => renderProposalPdf(proposalInput() as never) },
       {
         label: 'plan PDF, 500 units (GET …/plan.pdf)',

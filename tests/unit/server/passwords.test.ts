@@ -24,4 +24,32 @@ describe('sign-in timing', () => {
     await expect(verifyPassword('walnut-creek-bedding-47', null)).resolves.toBe(false);
     await expect(verifyPassword('', null)).resolves.toBe(false);
   });
+
+  it('hashes and compares in a worker thread, not the calling one', async () => {
+    vi.stubEnv('BCRYPT_COST', '4');
+    vi.stubEnv('PASSWORD_WORKERS', '1');
+    vi.resetModules();
+    const bcrypt = (await import('bcryptjs')).default;
+    const spies = [vi.spyOn(bcrypt, 'hash'), vi.spyOn(bcrypt, 'compare'), vi.spyOn(bcrypt, 'hashSync'), vi.spyOn(bcrypt, 'compareSync')];
+    const { closePasswordWorkers, hashPassword, verifyPassword } = await import('../../../server/services/auth/passwords');
+    try {
+      const stored = await hashPassword('walnut-creek-bedding-47');
+      expect(bcrypt.getRounds(stored)).toBe(4);
+      await expect(verifyPassword('walnut-creek-bedding-47', stored)).resolves.toBe(true);
+      await expect(verifyPassword('walnut-creek-bedding-48', stored)).resolves.toBe(false);
+      for (const spy of spies) expect(spy).not.toHaveBeenCalled();
+    } finally {
+      await closePasswordWorkers();
+      for (const spy of spies) spy.mockRestore();
+    }
+  });
+
+  it('still hashes in the calling thread when PASSWORD_WORKERS=0', async () => {
+    vi.stubEnv('BCRYPT_COST', '4');
+    vi.stubEnv('PASSWORD_WORKERS', '0');
+    vi.resetModules();
+    const { hashPassword, verifyPassword } = await import('../../../server/services/auth/passwords');
+    const stored = await hashPassword('walnut-creek-bedding-47');
+    await expect(verifyPassword('walnut-creek-bedding-47', stored)).resolves.toBe(true);
+  });
 });
