@@ -67,20 +67,34 @@ export const overlaps = (a: Rect, b: Rect): boolean => a.x < b.x + b.w && b.x < 
 /** Whether rectangle `a` lies wholly inside rectangle `b`. */
 export const within = (a: Rect, b: Rect): boolean => a.x >= b.x && a.y >= b.y && a.x + a.w <= b.x + b.w && a.y + a.h <= b.y + b.h;
 
+// The helpers below run for every label candidate against every line of a large map: they are
+// written as plain loops over module-level functions, since a closure made per call (and named by
+// the TypeScript loader on each creation) cost a 500-unit plan's PDF most of its time.
+
+/** Twice the signed area of the triangle a, b, c (which side of a–b point c lies on). */
+function orientation(a: Pt, b: Pt, c: Pt): number {
+  return (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]);
+}
+
 /** Whether segments p1–p2 and p3–p4 cross (touching ends do not count). */
 export function segmentsCross(p1: Pt, p2: Pt, p3: Pt, p4: Pt): boolean {
-  const d = (a: Pt, b: Pt, c: Pt): number => (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]);
-  const d1 = d(p3, p4, p1);
-  const d2 = d(p3, p4, p2);
-  const d3 = d(p1, p2, p3);
-  const d4 = d(p1, p2, p4);
+  const d1 = orientation(p3, p4, p1);
+  const d2 = orientation(p3, p4, p2);
+  const d3 = orientation(p1, p2, p3);
+  const d4 = orientation(p1, p2, p4);
   return ((d1 > 0 && d2 < 0) || (d1 < 0 && d2 > 0)) && ((d3 > 0 && d4 < 0) || (d3 < 0 && d4 > 0));
+}
+
+function insideRect(p: Pt, r: Rect): boolean {
+  return p[0] >= r.x && p[0] <= r.x + r.w && p[1] >= r.y && p[1] <= r.y + r.h;
 }
 
 /** True when the segment a–b touches the rectangle (an end inside it, or crossing an edge). */
 export function segmentHitsRect(a: Pt, b: Pt, r: Rect): boolean {
-  const inside = (p: Pt): boolean => p[0] >= r.x && p[0] <= r.x + r.w && p[1] >= r.y && p[1] <= r.y + r.h;
-  if (inside(a) || inside(b)) return true;
+  if (insideRect(a, r) || insideRect(b, r)) return true;
+  // Wholly to one side of the rectangle: no crossing (the common case, answered without corners).
+  if ((a[0] < r.x && b[0] < r.x) || (a[0] > r.x + r.w && b[0] > r.x + r.w) || (a[1] < r.y && b[1] < r.y) || (a[1] > r.y + r.h && b[1] > r.y + r.h)) return false;
   const c: Pt[] = [[r.x, r.y], [r.x + r.w, r.y], [r.x + r.w, r.y + r.h], [r.x, r.y + r.h]];
-  return c.some((p, i) => segmentsCross(a, b, p, c[(i + 1) % 4]));
+  for (let i = 0; i < 4; i += 1) if (segmentsCross(a, b, c[i], c[(i + 1) % 4])) return true;
+  return false;
 }

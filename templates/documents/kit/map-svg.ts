@@ -445,7 +445,12 @@ function labelRoom(frame: MapBox, boundaryPolys: readonly Poly[], areas: readonl
   return { frameRect: { x: frame.xPt + 2, y: frame.yPt + 2, w: frame.widthPt - 4, h: frame.heightPt - 4 }, occupied, obstacles };
 }
 
-const clearOfLines = (room: LabelRoom, rect: Rect): boolean => !room.obstacles.some(([a, b]) => segmentHitsRect(a, b, rect));
+/** Whether no obstacle segment touches the rectangle (a plain loop: it runs for every label candidate against every segment). */
+function clearOfLines(room: LabelRoom, rect: Rect): boolean {
+  const { obstacles } = room;
+  for (let i = 0; i < obstacles.length; i += 1) if (segmentHitsRect(obstacles[i][0], obstacles[i][1], rect)) return false;
+  return true;
+}
 
 /**
  * Area labels at the centroid of each unit's largest polygon (the shared centroid,
