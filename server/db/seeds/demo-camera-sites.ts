@@ -32,10 +32,7 @@ export async function seedDemoCameraSites(firm: Firm): Promise<number> {
     const zone = firm.timezone || 'America/Chicago';
     for (const [i, [day, time, tag]] of SUMMER_CARD.entries()) {
       const cameraTime = `${addDays(summer.startedOn, day)}T${time}:00`;
-      await seedPhoto({
-        firmId: firm.id,
-        deploymentId: summer.id,
-        propertyId: property.id,
+      await seedPhoto(summer, {
         bytes: await tile(i),
         originalName: `SUMMER_${String(i + 1).padStart(4, '0')}.JPG`,
         cameraTime,

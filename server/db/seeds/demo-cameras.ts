@@ -61,10 +61,7 @@ export async function seedDemoCameras(firm: Firm): Promise<number> {
     const buck = buckName ? bucks.get(buckName)! : null;
     const feature = !!buck && !featured.has(buck.name);
     if (buck) featured.add(buck.name);
-    await seedPhoto({
-      firmId: firm.id,
-      deploymentId: fall.id,
-      propertyId: property.id,
+    await seedPhoto(fall, {
       bytes: await tile(i),
       originalName: `IMG_${String(i + 1).padStart(4, '0')}.JPG`,
       cameraTime,

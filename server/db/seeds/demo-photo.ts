@@ -2,17 +2,14 @@
  * One trail-camera photo of the demo scenario, written as the card intake would: the bytes and their
  * thumbnail saved to storage under random keys, then the `camera_photos` row, already tagged.
  */
-import { CameraPhoto } from '../../models';
+import { CameraPhoto, type CameraDeployment } from '../../models';
 import { saveFile } from '../../services/storage/storage';
 import { makeThumbnail } from '../../services/photos';
 import type { CameraTag } from '../../../shared/domain/camera-events';
 import { sha256Of } from './demo-camera-bytes';
 
-/** What differs from one demo photo to the next; the rest is the same for every one. */
+/** What differs from one demo photo of a deployment to the next; the rest is the same for every one. */
 export interface DemoPhoto {
-  firmId: number;
-  deploymentId: number;
-  propertyId: number;
   /** The JPEG itself. */
   bytes: Buffer;
   originalName: string;
@@ -25,11 +22,14 @@ export interface DemoPhoto {
   featured: boolean;
 }
 
-/** Saves a demo photo's file and thumbnail and writes its tagged row; answers the row. */
-export async function seedPhoto(photo: DemoPhoto): Promise<CameraPhoto> {
+/** Saves a demo photo's file and thumbnail and writes its tagged row on the deployment's card; answers the row. */
+export async function seedPhoto(deployment: CameraDeployment, photo: DemoPhoto): Promise<CameraPhoto> {
   const { bytes, ...row } = photo;
   const thumb = await makeThumbnail({ bytes, contentType: 'image/jpeg', originalName: null });
   return CameraPhoto.create({
+    firmId: deployment.firmId,
+    deploymentId: deployment.id,
+    propertyId: deployment.propertyId,
     ...row,
     sha256: sha256Of(bytes),
     storageKey: await saveFile('photos', bytes, 'jpg'),
