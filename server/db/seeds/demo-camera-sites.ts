@@ -7,7 +7,7 @@
 import sharp from 'sharp';
 import { Op } from 'sequelize';
 import { Buck, CameraDeployment, CameraPhoto, Property, Sit, type Firm } from '../../models';
-import { correctedPhotoTime, type CameraTag } from '../../../shared/domain/camera-events';
+import type { CameraTag } from '../../../shared/domain/camera-events';
 import { seedPhoto } from './demo-photo';
 
 const addDays = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
@@ -32,14 +32,11 @@ export async function seedDemoCameraSites(firm: Firm): Promise<number> {
     const zone = firm.timezone || 'America/Chicago';
     for (const [i, [day, time, tag]] of SUMMER_CARD.entries()) {
       const cameraTime = `${addDays(summer.startedOn, day)}T${time}:00`;
-      await seedPhoto(summer, {
+      await seedPhoto(summer, zone, {
         bytes: await tile(i),
         originalName: `SUMMER_${String(i + 1).padStart(4, '0')}.JPG`,
         cameraTime,
-        takenAt: correctedPhotoTime(cameraTime, null, zone, 0),
         tag,
-        buckId: null,
-        featured: false,
       });
       written++;
     }

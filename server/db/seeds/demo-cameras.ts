@@ -7,7 +7,7 @@
 import sharp from 'sharp';
 import { Buck, Camera, CameraDeployment, CardPull, Property, Unit, type Firm } from '../../models';
 import { firmToday } from '../../services/clock';
-import { correctedPhotoTime, type CameraTag } from '../../../shared/domain/camera-events';
+import type { CameraTag } from '../../../shared/domain/camera-events';
 import { seedPhoto } from './demo-photo';
 
 const addDays = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
@@ -61,11 +61,10 @@ export async function seedDemoCameras(firm: Firm): Promise<number> {
     const buck = buckName ? bucks.get(buckName)! : null;
     const feature = !!buck && !featured.has(buck.name);
     if (buck) featured.add(buck.name);
-    await seedPhoto(fall, {
+    await seedPhoto(fall, zone, {
       bytes: await tile(i),
       originalName: `IMG_${String(i + 1).padStart(4, '0')}.JPG`,
       cameraTime,
-      takenAt: correctedPhotoTime(cameraTime, null, zone, 240),
       tag,
       buckId: buck?.id ?? null,
       featured: feature,
