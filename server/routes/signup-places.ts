@@ -6,10 +6,9 @@
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { defineRoutes } from '../middlewares/access';
 import { PostgresRateLimitStore } from '../middlewares/rate-limit-store';
-import { PlaceQuerySchema, PUBLIC_PLACE_SEARCH_LIMIT } from '../../shared/schemas/places';
-import { searchPlaces } from '../services/places/place-index';
-import { badRequest, tooManyRequests } from '../errors';
-import { describeZodError } from '../middlewares/error-handler';
+import { PUBLIC_PLACE_SEARCH_LIMIT } from '../../shared/schemas/places';
+import { answerPlaceSearch } from '../services/places/place-search-answer';
+import { tooManyRequests } from '../errors';
 
 const r = defineRoutes('/signup/places');
 
@@ -24,9 +23,7 @@ const placeLimiter = rateLimit({
 });
 
 r.get('/', 'public', placeLimiter, (req, res) => {
-  const parsed = PlaceQuerySchema.safeParse(req.query);
-  if (!parsed.success) throw badRequest(describeZodError(parsed.error).message);
-  res.json({ data: searchPlaces(parsed.data.q) });
+  res.json(answerPlaceSearch(req.query));
 });
 
 export const signupPlacesRouter = r.router;

@@ -11,6 +11,7 @@ import { seedDemoCameraSites } from '../db/seeds/demo-camera-sites';
 import { seedDemoPressureHarvest } from '../db/seeds/demo-pressure-harvest';
 import { seedDemoSpray } from '../db/seeds/demo-spray';
 import { seedDemoSeasons } from '../db/seeds/demo-seasons';
+import { seedDemoSoilMehlich } from '../db/seeds/demo-soil-mehlich';
 import { startJobQueue, stopJobQueue } from '../services/jobs/job-queue';
 
 try {
@@ -27,6 +28,7 @@ try {
   await seedDemoCameraSites(firm);
   await seedDemoPressureHarvest(firm);
   await seedDemoSpray(firm);
+  await seedDemoSoilMehlich(firm);
   console.log(`demo data ready for ${firm.name}`);
 } catch (err) {
   console.error((err as Error).message);

@@ -2,19 +2,12 @@
  * Background work: the demo's sent proposal was e-mailed by a job; the owner sees it under
  * Settings · Team → Background work, done.
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('background work', () => {
   it('shows the owner the job that e-mailed the demo proposal with its PDF, done', async () => {

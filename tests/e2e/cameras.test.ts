@@ -1,23 +1,16 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { openProperty } from '../support/journey-steps';
 import { makeJpeg } from '../support/photo-fixtures';
 import { todayIn } from '../../shared/domain/clock';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 const addDays = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 const exifDay = (date: string) => date.replaceAll('-', ':');
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('a camera card from the field to a survey', () => {
   it('the consultant sets a camera, brings its card in, tags it with the keyboard and makes a survey whose estimates match the tallies', async () => {

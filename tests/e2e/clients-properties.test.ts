@@ -1,18 +1,12 @@
 import { createRequire } from 'node:module';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 
 const baseUrl = inject('baseUrl');
 const require = createRequire(import.meta.url);
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 /** The names in the first column of the visible table, top to bottom. */
 const rowNames = (page: Page) => page.locator('table tbody th[scope="row"]').allTextContents();

@@ -4,28 +4,21 @@
  * and the proposal PDF for that firm read back with pdftotext (name and address) and rendered with
  * pdftoppm (the logo's pixels on page 1).
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { decode, encode } from 'fast-png';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, SCREENSHOTS, watchPage } from '../support/browser';
+import { journeyBrowser, screenshot, SCREENSHOTS, watchPage } from '../support/browser';
 import { signUpAndSignIn } from '../support/signup';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
 const WAIT = { timeout: 20_000 };
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000 });
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 const box = (lon: number, lat: number, dLon: number, dLat: number) => ({ type: 'Polygon', coordinates: [[[lon, lat], [lon + dLon, lat], [lon + dLon, lat + dLat], [lon, lat + dLat], [lon, lat]]] });
 /** A logo of one colour no other part of the document uses (pure magenta), so its pixels can be counted. */

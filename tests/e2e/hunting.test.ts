@@ -5,9 +5,8 @@
  * sit, and once back online the sit reaches the server exactly once (the pressure answer counts it once);
  * then records the deer taken on that sit with the state's disease-sampling number.
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { apiSignIn, journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { openProperty, signInAsConsultant } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
@@ -20,15 +19,9 @@ interface PressureAnswer {
   data: { unitId: number; sits: number }[];
 }
 
-let browser: Browser;
 let propertyId = 0;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('stands, winds and the sit log', () => {
   it('the consultant sees the ridge stand’s unsuitable winds with their reasons', async () => {

@@ -5,11 +5,11 @@
  * it under the plan; then imagery that does not answer says "Imagery offline" and the base stays.
  * No request leaves the machine: the "offline" imagery is a closed port on loopback.
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import crypto from 'node:crypto';
 import { writeArrayBuffer } from 'geotiff';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, screenshot, watchPage } from '../support/browser';
+import type { Page } from 'playwright-core';
+import { journeyBrowser, screenshot, watchPage } from '../support/browser';
 import { signUpAndSignIn } from '../support/signup';
 import { addClientAndProperty } from '../support/journey-steps';
 
@@ -17,14 +17,8 @@ const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
 const WAIT = { timeout: 20_000 };
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000 });
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 
 type MapLike = {

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { apiSignIn, launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { apiSignIn, journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { expectNoAxeViolations } from '../support/axe';
 import { ellipsoidalAreaSqM, rectangle } from '../support/geodesy';
 import { SQ_M_PER_ACRE } from '../../shared/units';
@@ -8,14 +8,8 @@ import { SQ_M_PER_ACRE } from '../../shared/units';
 const baseUrl = inject('baseUrl');
 /** The map chunk and the plan load over a few requests: give the page time. */
 const WAIT = { timeout: 15_000 };
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 /** Opens a demo property's plan map the way a consultant does: Properties, then the property's "Plan map". */
 async function openPlanMap(page: Page, propertyName: string): Promise<void> {

@@ -1,20 +1,13 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { expectNoAxeViolations } from '../support/axe';
 import { PLOT_STATUS_LABELS } from '../../shared/schemas/checks';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('plots that report back', () => {
   it('the consultant records a failed establishment check and a browse check, accepts the re-seeding, and drafts next season with the shifted mix', async () => {

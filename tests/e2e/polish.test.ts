@@ -3,27 +3,20 @@
  * site (summed over deployments) with the activity-by-hour chart and the roster's age and notes; the
  * plan map's one side panel beside the map at 1280 px (folding gives the map the width back).
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import crypto from 'node:crypto';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 
 const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
 const WAIT = { timeout: 20_000 };
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 150 });
-let browser: Browser;
 
 type Summary = { id: number; to: string[] };
 const mailTo = async (address: string) => ((await (await fetch(`${mailUrl}/messages`)).json()) as { data: Summary[] }).data.filter((m) => m.to.includes(address));
 const mailText = async (id: number) => ((await (await fetch(`${mailUrl}/messages/${id}`)).json()) as { data: { text: string } }).data.text;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('home area at sign-up', () => {
   it('a new firm picks its county on the sign-up form; after confirming, the firm has it and the first step is ticked', async () => {

@@ -3,21 +3,12 @@
  * comparison, the brassica plot's failed or thin stand last season and its established stand this
  * season, the soil-test pH of both, read-only (no form, no button that writes).
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 
 const baseUrl = inject('baseUrl');
 
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('seasons side by side in the portal', () => {
   it('shows each plot’s two seasons on a 390 × 844 phone without a write control', async () => {

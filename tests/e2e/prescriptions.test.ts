@@ -1,17 +1,11 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { formatDollars } from '../../shared/domain/prescription-summary';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 async function signInAsConsultant(page: Page) {
   await signIn(page, baseUrl, 'consultant@browseline.test');

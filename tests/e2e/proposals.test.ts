@@ -1,20 +1,14 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Locator, Page } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { openProperty, signInAsConsultant } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 /** The proposal the consultant drafts and sends in the first journey and the client approves in the second. */
 let proposalId = 0;
 let sentTotalCents = 0;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 /** "$15,209.24" → 1520924 (whole cents; the page writes every amount with two decimals). */
 const cents = (text: string | null): number => {

@@ -1,20 +1,13 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { openProperty, signInAsConsultant } from '../support/journey-steps';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 let propertyId = 0;
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 describe('season results from the consultant to the landowner', () => {
   it('the consultant records a survey and a harvest on Kettle Hollow Farm, sees the estimates and charts, and sends the season report', async () => {

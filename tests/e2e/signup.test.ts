@@ -1,8 +1,7 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import crypto from 'node:crypto';
 import { encode } from 'fast-png';
-import type { Browser } from 'playwright-core';
-import { launchBrowser, screenshot, watchPage } from '../support/browser';
+import { journeyBrowser, screenshot, watchPage } from '../support/browser';
 import { confirmEmail } from '../support/signup';
 import { addClientAndProperty } from '../support/journey-steps';
 
@@ -10,14 +9,8 @@ const baseUrl = inject('baseUrl');
 const mailUrl = inject('mailUrl');
 const WAIT = { timeout: 20_000 };
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000 });
-let browser: Browser;
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 
 describe('a new firm sets itself up', () => {

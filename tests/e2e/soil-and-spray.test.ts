@@ -1,19 +1,13 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, screenshot, signIn, watchPage } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { journeyBrowser, screenshot, signIn, watchPage } from '../support/browser';
 import { expectNoAxeViolations } from '../support/axe';
 
 const baseUrl = inject('baseUrl');
-let browser: Browser;
 
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 100 });
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = journeyBrowser();
 
 async function demoFarm(page: Page) {
   const properties = (await (await page.request.get(`${baseUrl}/api/properties`)).json()) as { data: { id: number; name: string }[] };

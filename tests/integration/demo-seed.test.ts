@@ -4,7 +4,9 @@ import { seedDemo } from '../../server/db/seeds/demo';
 import { seedDemoPrescriptions } from '../../server/db/seeds/demo-prescriptions';
 import { seedDemoSchedule } from '../../server/db/seeds/demo-schedule';
 import { Client, Invoice, Prescription, Property, Proposal, Task, TaskPhoto, Unit, User } from '../../server/models';
-import { testApp } from '../support/test-app';
+import { signedInAgent, testApp } from '../support/test-app';
+import { seedDemoSoilMehlich } from '../../server/db/seeds/demo-soil-mehlich';
+import { SoilTestDtoSchema } from '../../shared/schemas/soil-tests';
 import { seedDemoSpray } from '../../server/db/seeds/demo-spray';
 import { SprayRecord } from '../../server/models/spray-record';
 
@@ -54,5 +56,25 @@ describe('the demo seed', () => {
     const record = await SprayRecord.findOne({ where: { firmId: firm.id } });
     expect(record).toMatchObject({ windDirection: 'SW', restrictedUse: false });
     expect(record!.latitude).not.toBeNull();
+  });
+
+  it('gives the Club plot one Mehlich-3 soil test, worked on the Tri-State basis after conversion, once', async () => {
+    const firm = await seedDemo();
+    await seedDemoPrescriptions(firm);
+    expect(await seedDemoSoilMehlich(firm)).toBe(1);
+    expect(await seedDemoSoilMehlich(firm)).toBe(0);
+    const plot = await Unit.findOne({ where: { firmId: firm.id, name: 'Club plot' } });
+    const consultant = await signedInAgent('consultant@browseline.test', 'demo-browseline');
+    const res = await consultant.get(`/api/units/${plot!.id}/soil-tests`);
+    expect(res.status).toBe(200);
+    const tests = (res.body.data as unknown[]).map((t) => SoilTestDtoSchema.parse(t));
+    const m3 = tests.filter((t) => t.labMethod === 'mehlich-3');
+    expect(m3).toHaveLength(1);
+    expect(m3[0]).toMatchObject({ pPpm: 24, kPpm: 115, cropGroup: 'brassica' });
+    // Worked by hand: Ohio State ANR-75 puts Mehlich-3 P 24 at Bray P1 24 ÷ 1.35 = 17.8 ppm and K 115 at ammonium-acetate
+    // K 115 ÷ 1.14 = 100.9 ppm; Tri-State build-up (Vitosh et al. 1995, MSU E-2567) then gives P2O5 (25 − 17.8) × 20 ÷ 4 + 40
+    // brassica maintenance (from memory) = 76 and K2O (105 − 100.9) × 8 ÷ 4 + 60 = 68.2 → 68 lb/acre. Unconverted it would be 45 and 60.
+    expect(m3[0]!.nutrients).toMatchObject({ p2o5LbPerAcre: 76, k2oLbPerAcre: 68 });
+    expect(m3[0]!.nutrients.source).toMatch(/ANR-75/);
   });
 });

@@ -5,13 +5,15 @@
  * on pressure and sits.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { signedInAgent, type Agent } from '../support/test-app';
-import { makeClient, makeFirm, makeProperty, PASSWORD } from '../support/factories';
+import type { Agent } from '../support/test-app';
+import { send, type FirmContext } from '../support/firm-settings';
+import { huntingSetup, STAND } from '../support/hunting-setup';
+import { makeClient, makeProperty } from '../support/factories';
 import { HarvestRecord, Sit } from '../../server/models';
 import { SitSchema } from '../../shared/schemas/hunting';
 import { buildSeasonPressure } from '../../server/queries/season-pressure';
 
-let ctx: Awaited<ReturnType<typeof makeFirm>>;
+let ctx: FirmContext;
 let consultant: Agent;
 let client: Agent;
 let crew: Agent;
@@ -21,22 +23,12 @@ let otherStandId: number;
 let plotId: number;
 let sitId: number;
 
-const STAND: [number, number] = [-90.935, 43.267];
-const send = (agent: Agent, method: 'post' | 'put' | 'patch', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
 const harvest = (over: Record<string, unknown> = {}) => ({ date: '2025-11-15', sex: 'male', ageClass: '2.5', dressedWeightLb: 131, antlerPoints: 8, hunter: 'Priya', ...over });
 
 beforeAll(async () => {
-  ctx = await makeFirm();
-  consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
-  client = await signedInAgent(ctx.users.client.email, PASSWORD);
-  crew = await signedInAgent(ctx.users.crew.email, PASSWORD);
-  propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-  const unit = async (body: object) => {
-    const res = await send(consultant, 'post', `/api/properties/${propertyId}/units`, body);
-    expect(res.status, JSON.stringify(res.body)).toBe(201);
-    return res.body.data.id as number;
-  };
-  standId = await unit({ kind: 'stand-site', name: 'Oak ladder', geometry: { type: 'Point', coordinates: STAND } });
+  const setup = await huntingSetup();
+  ({ ctx, consultant, client, crew, propertyId, standId } = setup);
+  const unit = setup.addUnit;
   otherStandId = await unit({ kind: 'stand-site', name: 'Creek hang-on', geometry: { type: 'Point', coordinates: [STAND[0] + 0.003, STAND[1]] } });
   plotId = await unit({ kind: 'food-plot', name: 'Clover', geometry: { type: 'Polygon', coordinates: [[[STAND[0], STAND[1] - 0.001], [STAND[0] + 0.0008, STAND[1] - 0.001], [STAND[0] + 0.0008, STAND[1] - 0.0005], [STAND[0], STAND[1] - 0.0005], [STAND[0], STAND[1] - 0.001]]] } });
   const sit = await consultant

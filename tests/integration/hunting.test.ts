@@ -6,12 +6,14 @@
 import { readFileSync } from 'node:fs';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, type Agent } from '../support/test-app';
-import { makeClient, makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
+import { send, type FirmContext } from '../support/firm-settings';
+import { huntingSetup, STAND } from '../support/hunting-setup';
+import { makeClient, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { rectangle } from '../support/geodesy';
 import { Sit, WindRecord } from '../../server/models';
 import { PressureAnswerSchema, SitSchema, StandWindsAnswerSchema, WindRecordSchema } from '../../shared/schemas/hunting';
 
-let ctx: Awaited<ReturnType<typeof makeFirm>>;
+let ctx: FirmContext;
 let consultant: Agent;
 let client: Agent;
 let crew: Agent;
@@ -21,10 +23,8 @@ let beddingId: number;
 let plotId: number;
 let routeId: number;
 
-const STAND: [number, number] = [-90.935, 43.267];
 const M_LAT = 1 / 111_132;
 const fixture = (name: string) => readFileSync(new URL(`../fixtures/wind/${name}`, import.meta.url));
-const send = (agent: Agent, method: 'post' | 'put' | 'patch', url: string, body: unknown = {}) => agent[method](url).set('X-CSRF-Token', agent.csrf).send(body as object);
 const sitBody = (over: Record<string, unknown> = {}) => ({
   standUnitId: standId,
   startedAt: new Date(Date.now() - 26 * 3600_000).toISOString(),
@@ -43,17 +43,9 @@ let keyN = 0;
 const newKey = () => `sit-key-${Date.now()}-${keyN++}`;
 
 beforeAll(async () => {
-  ctx = await makeFirm();
-  consultant = await signedInAgent(ctx.users.consultant.email, PASSWORD);
-  client = await signedInAgent(ctx.users.client.email, PASSWORD);
-  crew = await signedInAgent(ctx.users.crew.email, PASSWORD);
-  propertyId = (await makeProperty(ctx.firm.id, ctx.client.id)).id;
-  const unit = async (body: object) => {
-    const res = await send(consultant, 'post', `/api/properties/${propertyId}/units`, body);
-    expect(res.status, JSON.stringify(res.body)).toBe(201);
-    return res.body.data.id as number;
-  };
-  standId = await unit({ kind: 'stand-site', name: 'Oak ladder', geometry: { type: 'Point', coordinates: STAND } });
+  const setup = await huntingSetup();
+  ({ ctx, consultant, client, crew, propertyId, standId } = setup);
+  const unit = setup.addUnit;
   // Bedding area 120–180 m due north of the stand.
   beddingId = await unit({ kind: 'bedding-area', name: 'North thicket', geometry: rectangle(STAND[0] - 0.0004, STAND[1] + 120 * M_LAT, 60, 60) });
   // The watched food plot 40–100 m south.

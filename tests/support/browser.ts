@@ -2,7 +2,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { chromium, request, type APIRequestContext, type Browser, type Page } from 'playwright-core';
-import { expect } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 export const SCREENSHOTS = path.resolve(import.meta.dirname, '../.artifacts/screenshots');
@@ -14,6 +14,29 @@ export async function launchBrowser(): Promise<Browser> {
     headless: true,
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
+}
+
+/** The one thing a journey asks of its file's browser: a fresh context (cookies, viewport, offline state). */
+export type JourneyBrowser = Pick<Browser, 'newContext'>;
+
+/**
+ * One headless Chromium for a journey file: launched in the file's `beforeAll` and closed in its
+ * `afterAll`, registered where this is called. Call it once at the top level of the file.
+ */
+export function journeyBrowser(): JourneyBrowser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return {
+    newContext: (options) => {
+      if (!browser) throw new Error('journeyBrowser: the browser starts in beforeAll; open contexts inside hooks or tests');
+      return browser.newContext(options);
+    },
+  };
 }
 
 export const DEMO_PASSWORD = 'demo-browseline';

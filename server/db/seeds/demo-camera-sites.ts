@@ -7,10 +7,8 @@
 import sharp from 'sharp';
 import { Op } from 'sequelize';
 import { Buck, CameraDeployment, CameraPhoto, Property, Sit, type Firm } from '../../models';
-import { saveFile } from '../../services/storage/storage';
-import { makeThumbnail } from '../../services/photos';
-import { correctedPhotoTime, type CameraTag } from '../../../shared/domain/camera-events';
-import { sha256Of } from './demo-camera-bytes';
+import type { CameraTag } from '../../../shared/domain/camera-events';
+import { seedPhoto } from './demo-photo';
 
 const addDays = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
@@ -33,27 +31,12 @@ export async function seedDemoCameraSites(firm: Firm): Promise<number> {
   if (summer && (await CameraPhoto.count({ where: { deploymentId: summer.id } })) === 0) {
     const zone = firm.timezone || 'America/Chicago';
     for (const [i, [day, time, tag]] of SUMMER_CARD.entries()) {
-      const bytes = await tile(i);
       const cameraTime = `${addDays(summer.startedOn, day)}T${time}:00`;
-      const thumb = await makeThumbnail({ bytes, contentType: 'image/jpeg', originalName: null });
-      await CameraPhoto.create({
-        firmId: firm.id,
-        deploymentId: summer.id,
-        propertyId: property.id,
-        sha256: sha256Of(bytes),
-        storageKey: await saveFile('photos', bytes, 'jpg'),
-        thumbnailKey: thumb ? await saveFile('photos', thumb, 'jpg') : null,
-        contentType: 'image/jpeg',
-        byteSize: bytes.length,
+      await seedPhoto(summer, zone, {
+        bytes: await tile(i),
         originalName: `SUMMER_${String(i + 1).padStart(4, '0')}.JPG`,
         cameraTime,
-        cameraOffset: null,
-        takenAt: correctedPhotoTime(cameraTime, null, zone, 0),
         tag,
-        buckId: null,
-        featured: false,
-        taggedById: null,
-        taggedAt: new Date(),
       });
       written++;
     }

@@ -5,12 +5,10 @@
  * always due for a pull on the Desk. Idempotent: nothing is written when the firm has cameras.
  */
 import sharp from 'sharp';
-import { Buck, Camera, CameraDeployment, CameraPhoto, CardPull, Property, Unit, type Firm } from '../../models';
-import { saveFile } from '../../services/storage/storage';
-import { makeThumbnail } from '../../services/photos';
+import { Buck, Camera, CameraDeployment, CardPull, Property, Unit, type Firm } from '../../models';
 import { firmToday } from '../../services/clock';
-import { correctedPhotoTime, type CameraTag } from '../../../shared/domain/camera-events';
-import { sha256Of } from './demo-camera-bytes';
+import type { CameraTag } from '../../../shared/domain/camera-events';
+import { seedPhoto } from './demo-photo';
 
 const addDays = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
@@ -59,31 +57,17 @@ export async function seedDemoCameras(firm: Firm): Promise<number> {
 
   const featured = new Set<string>();
   for (const [i, [day, time, tag, buckName]] of CARD.entries()) {
-    const bytes = await tile(i);
     const cameraTime = `${addDays(setOn, day)}T${time}:00`;
-    const takenAt = correctedPhotoTime(cameraTime, null, zone, 240);
-    const thumb = await makeThumbnail({ bytes, contentType: 'image/jpeg', originalName: null });
     const buck = buckName ? bucks.get(buckName)! : null;
     const feature = !!buck && !featured.has(buck.name);
     if (buck) featured.add(buck.name);
-    await CameraPhoto.create({
-      firmId: firm.id,
-      deploymentId: fall.id,
-      propertyId: property.id,
-      sha256: sha256Of(bytes),
-      storageKey: await saveFile('photos', bytes, 'jpg'),
-      thumbnailKey: thumb ? await saveFile('photos', thumb, 'jpg') : null,
-      contentType: 'image/jpeg',
-      byteSize: bytes.length,
+    await seedPhoto(fall, zone, {
+      bytes: await tile(i),
       originalName: `IMG_${String(i + 1).padStart(4, '0')}.JPG`,
       cameraTime,
-      cameraOffset: null,
-      takenAt,
       tag,
       buckId: buck?.id ?? null,
       featured: feature,
-      taggedById: null,
-      taggedAt: new Date(),
     });
   }
   return CARD.length;

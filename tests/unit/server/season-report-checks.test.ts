@@ -3,7 +3,7 @@ import { writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { type SeasonReportDocumentInput } from '../../../templates/documents/season-report';
 import { renderSeasonReportPdf } from '../../../server/services/documents/render-documents';
-import { harvestSummary } from '../../../shared/domain/survey-estimates';
+import { onlyAHarvest } from '../../support/season-report-fixtures';
 import { browseResult, establishmentResult, timberResult } from '../../../shared/domain/plot-checks';
 import { limeRecommendation, nutrientRecommendation } from '../../../shared/domain/soil-tests';
 import { seasonChecksSection } from '../../../templates/documents/season-report-checks';
@@ -16,21 +16,7 @@ function withChecks(): SeasonReportDocumentInput {
   const lime = limeRecommendation('missouri', { ph: 5.6, enmLbPerAcre: 900 }, 6.5);
   const nutrients = nutrientRecommendation({ ph: 5.6, pPpm: 18, kPpm: 120 }, 'legume');
   return {
-    firm: { name: 'Fernhill Habitat Consulting', phone: null, email: null },
-    client: { name: 'Okonkwo-Larsen Family' },
-    property: { name: 'Kettle Hollow Farm', acres: 160, locality: null },
-    season: { label: '2025–26', startsOn: '2025-07-01', endsOn: '2026-06-30' },
-    preparedOn: '2026-07-02',
-    work: [],
-    acresEstablished: 0,
-    unitsEstablished: [],
-    photos: [],
-    surveys: [],
-    surveyTrend: [],
-    harvest: harvestSummary([{ date: '2025-12-13', sex: 'doe', ageClass: '1.5', dressedWeightLb: 81 }]),
-    harvestTrend: [],
-    recommendations: null,
-    cautions: [],
+    ...onlyAHarvest(),
     checks: {
       establishment: [{ unitName: 'Hollow brassica plot', checkedOn: '2025-09-24', status: stand.status, groundCoverPct: 45, species: stand.species }],
       browse: [{ unitName: 'Ridge clover plot', checkedOn: '2025-10-20', overallUsePct: browse.overallUsePct, species: browse.species }],

@@ -2,27 +2,8 @@ import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { type SeasonReportDocumentInput } from '../../../templates/documents/season-report';
 import { renderSeasonReportPdf } from '../../../server/services/documents/render-documents';
-import { harvestSummary } from '../../../shared/domain/survey-estimates';
+import { onlyAHarvest } from '../../support/season-report-fixtures';
 import { emptySeasonReason, establishedText, hasBars } from '../../../shared/domain/season-results';
-
-/** Invented demo content: one yearling doe taken, no finished work, no survey. */
-const onlyAHarvest = (): SeasonReportDocumentInput => ({
-  firm: { name: 'Fernhill Habitat Consulting', phone: null, email: null },
-  client: { name: 'Okonkwo-Larsen Family' },
-  property: { name: 'Kettle Hollow Farm', acres: 160, locality: null },
-  season: { label: '2025–26', startsOn: '2025-07-01', endsOn: '2026-06-30' },
-  preparedOn: '2026-07-02',
-  work: [],
-  acresEstablished: 0,
-  unitsEstablished: [],
-  photos: [],
-  surveys: [],
-  surveyTrend: [],
-  harvest: harvestSummary([{ date: '2025-12-13', sex: 'doe', ageClass: '1.5', dressedWeightLb: 81 }]),
-  harvestTrend: [],
-  recommendations: null,
-  cautions: [],
-});
 
 describe('the season report says what there is', () => {
   it('never prints "0.00 acre established": with no unit finished it says so in words', async () => {
