@@ -132,7 +132,7 @@ export function PlanMapPage() {
             <p>{editing.largeAsk?.message.replace(/;? ?to keep it anyway, confirm the large area \(confirmLargeArea: true\)\.$/, '.')}</p>
             <p className="mt-2 text-slate">Cancel leaves the plan as it was.</p>
           </ConfirmDialog>
-          <aside aria-label="Plan ledger" className="max-h-[45vh] w-full shrink-0 overflow-y-auto border-t border-rule bg-card px-4 py-4 lg:max-h-none lg:w-[20rem] lg:border-l min-[1440px]:w-[22rem] lg:border-t-0">
+          <aside aria-label="Plan ledger" className="max-h-[45vh] w-full shrink-0 overflow-y-auto border-t border-rule bg-card px-4 py-4 lg:max-h-none lg:w-[20rem] lg:border-l min-[90rem]:w-[22rem] lg:border-t-0">
             {importState && importer.importPlan ? (
               <ImportPanel
                 fileName={importState.fileName}

@@ -169,11 +169,11 @@ function MoreMenu({ tools, active, onPick }: { tools: Tool[]; active: DrawTarget
         hidden={!open}
         onKeyDown={onMenuKey}
         className="absolute right-0 top-full z-30 mt-1 w-52 overflow-y-auto rounded-md border border-rule bg-card py-1 text-sm shadow-md"
-        style={{ maxHeight: 'min(28rem, 70vh)' }}
+        style={{ maxHeight: 'min(36rem, calc(100vh - 12rem))' }}
       >
         {groups.map(({ g, list }, i) => (
           <div key={g} role="group" aria-label={GROUP_LABEL[g]} className={i > 0 ? 'mt-1 border-t border-rule pt-1' : undefined}>
-            <p aria-hidden className="px-3 pb-0.5 pt-1 text-[11px] font-semibold uppercase tracking-wide text-slate">{GROUP_LABEL[g]}</p>
+            <p aria-hidden className="px-3 pt-0.5 text-[11px] font-semibold uppercase tracking-wide text-slate">{GROUP_LABEL[g]}</p>
             {list.map((t) => {
               const on = sameTarget(active, t.target);
               return (
@@ -188,7 +188,7 @@ function MoreMenu({ tools, active, onPick }: { tools: Tool[]; active: DrawTarget
                     onPick(t);
                     close(true);
                   }}
-                  className={`flex w-full items-center gap-2 px-3 py-1.5 text-left text-ink hover:bg-paper focus:bg-paper focus:outline-none ${on ? 'font-semibold' : ''}`}
+                  className={`flex w-full items-center gap-2 px-3 py-1 text-left text-ink hover:bg-paper focus:bg-paper focus:outline-none ${on ? 'font-semibold' : ''}`}
                 >
                   {t.icon}
                   <span className="flex-1">{t.label}</span>
