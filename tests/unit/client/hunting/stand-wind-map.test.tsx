@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { geoMercator } from 'd3-geo';
-import type { Feature, FeatureCollection, Geometry, Position } from 'geojson';
+import type { Feature, FeatureCollection, Geometry, Point, Position } from 'geojson';
 import { StandWindMap } from '../../../../src/features/hunting/components/stand-wind-map';
 import type { StandWindsAnswer } from '../../../../shared/schemas/hunting';
 
@@ -55,7 +55,7 @@ describe('the stands-and-wind map on the shared projection', () => {
     const svg = svgOf(answer());
     // Stands: the old projection of each point against the drawn translate.
     const drawn = stands(svg);
-    const expected = layout.filter((u) => u.kind === 'stand-site').map((u) => old((u.geometry as { coordinates: [number, number] }).coordinates)!);
+    const expected = layout.filter((u) => u.kind === 'stand-site').map((u) => old((u.geometry as Point).coordinates as [number, number])!);
     expect(drawn).toHaveLength(2);
     drawn.forEach(([x, y], i) => {
       expect(Math.abs(x! - expected[i]![0])).toBeLessThan(2);
