@@ -188,7 +188,7 @@ function MoreMenu({ tools, active, onPick }: { tools: Tool[]; active: DrawTarget
                     onPick(t);
                     close(true);
                   }}
-                  className={`flex w-full items-center gap-2 px-3 py-1 text-left text-ink hover:bg-paper focus:bg-paper focus:outline-none ${on ? 'font-semibold' : ''}`}
+                  className={`flex w-full items-center gap-2 px-3 py-1 text-left text-ink hover:bg-paper focus:bg-paper focus:outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-moss ${on ? 'font-semibold' : ''}`}
                 >
                   {t.icon}
                   <span className="flex-1">{t.label}</span>
