@@ -119,6 +119,8 @@ describe('a new firm’s first plan map', () => {
     const tiff = Buffer.from(
       writeArrayBuffer(rgb, { width, height, SamplesPerPixel: 3, PhotometricInterpretation: 2, ModelPixelScale: [pixel, ((n - s) * 0.5) / height, 0], ModelTiepoint: [0, 0, 0, west, north, 0], GeographicTypeGeoKey: 4326, GTModelTypeGeoKey: 2 } as never),
     );
+    // Below 1440 px the map's side panel starts folded: open it for the photos.
+    await page.getByRole('button', { name: 'Show map panel' }).click();
     const photos = page.getByRole('region', { name: 'Aerial photos' });
     await expect(photos.getByText(/At most 40 MB and 40 megapixels/).count()).resolves.toBe(1);
     await page.getByTestId('overlay-file').setInputFiles({ name: 'brekke-ortho.tif', mimeType: 'image/tiff', buffer: tiff });

@@ -112,6 +112,8 @@ describe('a scrape logged offline on a phone reaches the consultant’s plan map
     await signIn(map, baseUrl, 'consultant@browseline.test');
     await map.waitForURL(`${baseUrl}/desk`);
     await map.goto(`${baseUrl}/properties/${propertyId}/map`);
+    // Below 1440 px the map's side panel starts folded: open it for the layer's controls.
+    await map.getByRole('button', { name: 'Show map panel' }).click();
     const layer = map.getByRole('region', { name: 'Observations' });
     await poll(() => layer.count()).toBe(1);
     // Only scrapes, then the month of the new one: the layer shows exactly it.

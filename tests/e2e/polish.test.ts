@@ -1,7 +1,8 @@
 /**
  * Loose ends in the browser: the firm's home area picked at sign-up; the camera page's numbers by
  * site (summed over deployments) with the activity-by-hour chart and the roster's age and notes; the
- * plan map's one side panel beside the map at 1280 px (folding gives the map the width back).
+ * plan map at 1280 px: the map wide, the drawing tools in one row with a 'More' menu, the one side panel
+ * folded at first and beside the map when opened (the choice remembered).
  */
 import { describe, expect, inject, it } from 'vitest';
 import crypto from 'node:crypto';
@@ -113,7 +114,7 @@ describe('camera numbers by site and the roster', () => {
 });
 
 describe('the plan map’s side panel', () => {
-  it('at 1280 px the photos, observations and legend sit in one panel beside the map, not over it; folding widens the map', async () => {
+  it('at 1280 × 800 the map opens wide with its tools in one row; the folded panel opens beside the map, not over it, and the choice is remembered', async () => {
     const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     const page = await context.newPage();
     const watch = watchPage(page);
@@ -124,6 +125,41 @@ describe('the plan map’s side panel', () => {
     await page.waitForURL(/\/properties\/\d+\/map$/);
     await page.locator('[data-testid=plan-map] canvas.maplibregl-canvas').waitFor(WAIT);
     const panel = page.getByRole('complementary', { name: 'Map panel' });
+    // First open below 1440 px: the panel is folded, the map has at least 60 % of the width and the
+    // drawing tools sit in one row (one chip high), the rest behind "More" (our layout target, no source).
+    expect(await panel.isVisible()).toBe(false);
+    const wide = (await page.locator('[data-testid=plan-map]').boundingBox())!;
+    expect(wide.width).toBeGreaterThanOrEqual(0.6 * 1280);
+    const toolbar = page.getByRole('toolbar', { name: 'Drawing tools' });
+    await poll(() => toolbar.getByRole('button', { name: 'More', exact: true }).count()).toBe(1);
+    expect((await toolbar.boundingBox())!.height).toBeLessThan(60);
+    expect(await toolbar.getByRole('button', { name: 'Food plot', exact: true }).count()).toBe(1);
+    await screenshot(page, 'polish-plan-map-1280-first-open');
+
+    // "More" is a menu button: arrow down opens it on the chosen tool or the first, Escape closes it
+    // and gives the focus back; a tool picked from it is checked there.
+    const more = toolbar.getByRole('button', { name: 'More', exact: true });
+    await more.focus();
+    await page.keyboard.press('ArrowDown');
+    const menu = page.getByRole('menu', { name: 'More drawing tools' });
+    await poll(() => menu.isVisible()).toBe(true);
+    expect(await more.getAttribute('aria-expanded')).toBe('true');
+    await poll(() => page.evaluate(() => document.activeElement?.getAttribute('role'))).toBe('menuitemradio');
+    await page.keyboard.press('ArrowDown');
+    await screenshot(page, 'polish-plan-map-more-menu');
+    await page.keyboard.press('Escape');
+    await poll(() => menu.isVisible()).toBe(false);
+    expect(await more.getAttribute('aria-expanded')).toBe('false');
+    expect(await page.evaluate(() => document.activeElement?.textContent?.trim())).toMatch(/^More/);
+    await more.click();
+    await menu.getByRole('menuitemradio', { name: 'Measure distance' }).click();
+    await poll(() => menu.isVisible()).toBe(false);
+    await more.click();
+    expect(await menu.getByRole('menuitemradio', { name: 'Measure distance' }).getAttribute('aria-checked')).toBe('true');
+    await page.keyboard.press('Escape');
+    await page.keyboard.press('Escape'); // the second one stops measuring
+
+    await page.getByRole('button', { name: 'Show map panel' }).click();
     await panel.getByRole('region', { name: 'Aerial photos' }).waitFor(WAIT);
     await panel.getByRole('region', { name: 'Observations' }).waitFor(WAIT);
     await panel.getByRole('group', { name: 'Legend' }).waitFor(WAIT);
@@ -132,6 +168,9 @@ describe('the plan map’s side panel', () => {
     const map = (await page.locator('[data-testid=plan-map]').boundingBox())!;
     expect(box.x + box.width).toBeLessThanOrEqual(map.x + 1);
     expect(map.width).toBeGreaterThan(450);
+    // The choice outlives a reload in this browser.
+    await page.reload();
+    await panel.getByRole('group', { name: 'Legend' }).waitFor(WAIT);
 
     await panel.getByRole('button', { name: 'Hide map panel' }).click();
     await poll(() => panel.isVisible()).toBe(false);

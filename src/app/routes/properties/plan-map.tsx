@@ -25,7 +25,7 @@ import { UnitDetail } from '../../../features/plan-map/components/unit-detail';
 import { ImportPanel } from '../../../features/plan-map/components/import-panel';
 import { MapLegend } from '../../../features/plan-map/components/map-legend';
 import { OverlayPanel } from '../../../features/plan-map/components/overlay-panel';
-import { MapSidePanel } from '../../../features/plan-map/components/map-side-panel';
+import { MapSidePanel, ShowMapPanelButton, useSidePanel } from '../../../features/plan-map/components/map-side-panel';
 import type { PlanMapCallbacks, PlanMapController } from '../../../features/plan-map/lib/plan-map-controller';
 import type { ColourBy } from '../../../features/plan-map/lib/plan-layers';
 import { usePropertyProgress } from '../../../features/schedule/api/get-property-progress';
@@ -41,6 +41,7 @@ export function PlanMapPage() {
   const [colourBy, setColourBy] = useState<ColourBy>('kind');
   const [tilesFailed, setTilesFailed] = useState(false);
   const chipsRef = useRef<HTMLDivElement>(null);
+  const sidePanel = useSidePanel();
   const valid = Number.isInteger(propertyId) && propertyId > 0;
   const progress = usePropertyProgress(propertyId, valid);
   const doneTasks = useTasks({ propertyId, status: 'done', limit: 500 }, colourBy === 'status' && valid);
@@ -69,7 +70,7 @@ export function PlanMapPage() {
         <PlanMapHeader propertyId={propertyId} property={property.data} hasBoundary={!!boundary} editing={editing} importer={importer} />
         <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
           <div className="relative flex min-h-[22rem] min-w-0 flex-1">
-            <MapSidePanel>
+            <MapSidePanel open={sidePanel.open} onOpenChange={sidePanel.setOpen}>
               <OverlayPanel overlays={data.overlays.data ?? []} uploading={photos.progress} onUpload={photos.onUpload} onPreview={photos.onPreview} onChange={photos.onChange} onDelete={photos.onDelete} />
               <PlanMapLayers>
                 {/* More map layers go here, one element each (see DEVELOPERS.md). */}
@@ -80,11 +81,14 @@ export function PlanMapPage() {
             <div className="relative min-w-0 flex-1">
               <PlanMapCanvas callbacks={callbacks} onController={setController} unitCount={unitList.length} />
               <div className="pointer-events-none absolute inset-x-2 top-2 z-10 flex flex-col items-start gap-2">
-                <div className="pointer-events-auto relative z-20 max-w-full">
-                  <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
+                <div className="pointer-events-auto relative z-20 flex max-w-full items-start gap-2">
+                  {!sidePanel.open ? <ShowMapPanelButton onOpen={() => sidePanel.setOpen(true)} /> : null}
+                  <div className="min-w-0">
+                    <PlaceSearch onPick={(place) => controller?.flyToPlace(place)} />
+                  </div>
                 </div>
-                <div ref={chipsRef} className="pointer-events-auto max-w-full">
-                  <DrawChips active={drawTarget} onChoose={editing.chooseTool} />
+                <div ref={chipsRef} className="relative z-10 w-full">
+                  <DrawChips active={drawTarget} onChoose={editing.chooseTool} hasBoundary={!!boundary} />
                 </div>
                 {drawTarget ? <DrawHint target={drawTarget} /> : null}
                 {drawTarget && !drawsPoint(drawTarget) ? (
@@ -128,7 +132,7 @@ export function PlanMapPage() {
             <p>{editing.largeAsk?.message.replace(/;? ?to keep it anyway, confirm the large area \(confirmLargeArea: true\)\.$/, '.')}</p>
             <p className="mt-2 text-slate">Cancel leaves the plan as it was.</p>
           </ConfirmDialog>
-          <aside aria-label="Plan ledger" className="max-h-[45vh] w-full shrink-0 overflow-y-auto border-t border-rule bg-card px-4 py-4 lg:max-h-none lg:w-[22rem] lg:border-l lg:border-t-0">
+          <aside aria-label="Plan ledger" className="max-h-[45vh] w-full shrink-0 overflow-y-auto border-t border-rule bg-card px-4 py-4 lg:max-h-none lg:w-[20rem] lg:border-l min-[90rem]:w-[22rem] lg:border-t-0">
             {importState && importer.importPlan ? (
               <ImportPanel
                 fileName={importState.fileName}

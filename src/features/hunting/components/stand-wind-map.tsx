@@ -1,10 +1,11 @@
 /**
  * The planner's own map: a tile-free SVG of the bedding areas, sanctuaries, food plots, access routes
- * and stands (d3-geo), with each stand's downwind scent cone for the chosen wind, or — in the season
- * view — each stand sized by its sits and coloured when it is over-pressured.
+ * and stands, drawn through the shared projection (`shared/domain/map-projection.ts`, as the PDF plan
+ * map and the field sketch are), with each stand's downwind scent cone for the chosen wind, or — in
+ * the season view — each stand sized by its sits and coloured when it is over-pressured.
  */
-import { geoMercator, geoPath } from 'd3-geo';
-import type { Feature, FeatureCollection, Geometry } from 'geojson';
+import type { Geometry } from 'geojson';
+import { extentOfPositions, fitProjection, positionsOf } from '../../../../shared/domain/map-projection';
 import { coneRing, METRES_PER_YARD } from '../../../../shared/domain/scent';
 import { downwindBearing, windDegrees, type WindName } from '../../../../shared/domain/stand-winds';
 import { KIND_STYLES, type UnitKind } from '../../../../shared/domain/unit-kinds';
@@ -12,14 +13,20 @@ import type { PressureRow, StandWindsAnswer } from '../../../../shared/schemas/h
 
 const W = 640;
 const H = 420;
+/** Room on every side of the drawing, in SVG units. */
+const PADDING = 12;
+/** A lone stand (no boundary, nothing else) still gets a map this many metres across (common practice, no source). */
+const MIN_SPAN_M = 200;
 
+/** The stands-and-wind map as an SVG figure with its caption; nothing when the property has no geometry to draw. */
 export function StandWindMap({ answer, wind, pressure, highlightRouteIds = [], title }: { answer: StandWindsAnswer; wind?: WindName | null; pressure?: PressureRow[]; highlightRouteIds?: number[]; title: string }) {
-  const feats: Feature<Geometry>[] = answer.meta.layout.map((u) => ({ type: 'Feature', properties: { id: u.id }, geometry: u.geometry }));
-  if (answer.meta.boundary) feats.push({ type: 'Feature', properties: {}, geometry: answer.meta.boundary });
-  if (feats.length === 0) return null;
-  const fc: FeatureCollection = { type: 'FeatureCollection', features: feats };
-  const projection = geoMercator().fitExtent([[12, 12], [W - 12, H - 12]], fc);
-  const path = geoPath(projection);
+  const drawn: Geometry[] = answer.meta.layout.map((u) => u.geometry);
+  if (answer.meta.boundary) drawn.push(answer.meta.boundary);
+  const extent = extentOfPositions(drawn.flatMap((g) => [...positionsOf(g)]));
+  if (!extent) return null;
+  // The shared projection (north up, one scale on both axes, rings drawn as given whatever their winding).
+  const projection = fitProjection(extent, { x: 0, y: 0, width: W, height: H }, { padding: PADDING, minSpanM: MIN_SPAN_M, digits: 3 });
+  const path = (g: Geometry) => projection.path(g);
   const s = answer.meta.settings;
   const byStand = new Map(answer.data.map((d) => [d.unitId, d]));
   const pressureBy = new Map((pressure ?? []).map((p) => [p.unitId, p]));
@@ -31,24 +38,25 @@ export function StandWindMap({ answer, wind, pressure, highlightRouteIds = [], t
   return (
     <figure className="m-0">
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="h-auto w-full rounded border border-rule bg-[#F3EEDF]">
-        {answer.meta.boundary ? <path d={path(answer.meta.boundary) ?? ''} fill="none" stroke="#1F2A24" strokeWidth={1.5} strokeDasharray="6 3" /> : null}
+        {answer.meta.boundary ? <path d={path(answer.meta.boundary)} fill="none" stroke="#1F2A24" strokeWidth={1.5} strokeDasharray="6 3" /> : null}
         {areas.map((u) => {
           const st = KIND_STYLES[u.kind as UnitKind];
-          return <path key={u.id} d={path(u.geometry) ?? ''} fill={st.fill} fillOpacity={st.fillOpacity + 0.15} stroke={st.stroke} strokeWidth={1.2} strokeDasharray={st.dash === 'dashed' ? '5 3' : undefined}><title>{`${st.label}: ${u.name}`}</title></path>;
+          return <path key={u.id} d={path(u.geometry)} fill={st.fill} fillOpacity={st.fillOpacity + 0.15} stroke={st.stroke} strokeWidth={1.2} strokeDasharray={st.dash === 'dashed' ? '5 3' : undefined}><title>{`${st.label}: ${u.name}`}</title></path>;
         })}
         {wind && !pressure
           ? stands.map((u) => {
               const judged = byStand.get(u.id)?.winds.find((w) => w.from === wind);
               const ring = coneRing({ apex: (u.geometry as unknown as { coordinates: number[] }).coordinates, bearingDeg: downwindBearing(windDegrees(wind)), halfAngleDeg: s.coneHalfAngleDeg, reachM: s.coneReachYd * METRES_PER_YARD });
-              return <path key={`cone-${u.id}`} d={path({ type: 'Polygon', coordinates: [ring] }) ?? ''} fill={judged?.suitable ? '#3F6B3A' : '#B5562B'} fillOpacity={0.18} stroke={judged?.suitable ? '#3F6B3A' : '#B5562B'} strokeWidth={0.8} />;
+              return <path key={`cone-${u.id}`} d={path({ type: 'Polygon', coordinates: [ring] })} fill={judged?.suitable ? '#3F6B3A' : '#B5562B'} fillOpacity={0.18} stroke={judged?.suitable ? '#3F6B3A' : '#B5562B'} strokeWidth={0.8} />;
             })
           : null}
         {routes.map((u) => {
           const on = highlightRouteIds.includes(u.id);
-          return <path key={u.id} d={path(u.geometry) ?? ''} fill="none" stroke={on ? '#2E5029' : '#6B4F2A'} strokeWidth={on ? 4 : 2} strokeDasharray={on ? undefined : '6 4'}><title>{`Access route: ${u.name}`}</title></path>;
+          return <path key={u.id} d={path(u.geometry)} fill="none" stroke={on ? '#2E5029' : '#6B4F2A'} strokeWidth={on ? 4 : 2} strokeDasharray={on ? undefined : '6 4'}><title>{`Access route: ${u.name}`}</title></path>;
         })}
         {stands.map((u) => {
-          const [x, y] = projection((u.geometry as unknown as { coordinates: [number, number] }).coordinates) ?? [0, 0];
+          const [lon, lat] = (u.geometry as unknown as { coordinates: [number, number] }).coordinates;
+          const [x, y] = projection.project(lon, lat);
           const p = pressureBy.get(u.id);
           const suitable = wind ? byStand.get(u.id)?.winds.find((w) => w.from === wind)?.suitable : undefined;
           const r = pressure ? 6 + 10 * Math.sqrt((p?.sits ?? 0) / maxSits) : 7;

@@ -52,11 +52,13 @@ export function DrawControls({ points, area, onFinish, onUndo, onCancel }: { poi
   );
 }
 
-/** What to do next with the tool in hand. */
+/** What to do next with the tool in hand, named first (it may sit in the toolbar's "More" menu, out of sight). */
 export function DrawHint({ target }: { target: DrawTarget }) {
   const point = target.type === 'unit' && KIND_STYLES[target.kind].family === 'point';
+  const tool = target.type === 'unit' ? KIND_STYLES[target.kind].label : target.type === 'boundary' ? 'Boundary' : target.shape === 'line' ? 'Measure distance' : 'Measure area';
   return (
     <p role="status" className="pointer-events-auto rounded bg-ink/85 px-3 py-1 text-xs text-white">
+      <strong className="font-semibold">{tool}:</strong>{' '}
       {point
         ? 'Click the map to place it. Esc to stop.'
         : target.type === 'unit' && KIND_STYLES[target.kind].family === 'line'
