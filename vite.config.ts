@@ -122,10 +122,10 @@ export default defineConfig({
               test: /[\\/]src[\\/]app[\\/]routes[\\/]field[\\/]field-home\.tsx$/,
             },
             {
-              // A task's page: loads when a task is opened, precached for no signal.
+              // A task's page (with the notice for a form whose code has not arrived): loads when a task is opened, precached for no signal.
               name: 'field-task',
               includeDependenciesRecursively: false,
-              test: /[\\/]src[\\/](features[\\/]field[\\/]lib[\\/]geo-uri\.ts|app[\\/]routes[\\/]field[\\/]field-task\.tsx)$/,
+              test: /[\\/]src[\\/](features[\\/]field[\\/]lib[\\/]geo-uri\.ts|app[\\/]routes[\\/]field[\\/]field-task\.tsx|components[\\/]ui[\\/]code-boundary\.tsx)$/,
             },
             {
               // The task's unit sketch (drawn through d3-geo) and directions: one small file the task page asks for as it starts, precached for no signal.
