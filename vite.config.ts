@@ -107,7 +107,7 @@ export default defineConfig({
               name: 'app-core',
               includeDependenciesRecursively: false,
               // Not what the sign-in page uses (api-client, paths, persisted-cache, session-requests, button, text-field, brand): that stays apart.
-              test: /[\\/]src[\\/](lib[\\/](query-client|persist-rules|query-persistence|update-state|route-params|format|quantity-format)\.ts|app[\\/](route-loaders|lazy-page)\.ts|features[\\/](field[\\/]api[\\/](get-field-home|get-my-tasks|get-task|keys)\.ts|(portal|desk)[\\/]api[\\/][^\\/]+|auth[\\/]api[\\/](get-me|login)\.ts)|components[\\/](ui[\\/](card|toast|offline-notice|update-prompt)|layouts[\\/](user-menu|require-role))\.tsx)$/,
+              test: /[\\/]src[\\/](lib[\\/](query-client|persist-rules|query-persistence|cache-saver|update-state|route-params|format|quantity-format)\.ts|app[\\/](route-loaders|lazy-page)\.ts|features[\\/](field[\\/]api[\\/](get-field-home|get-my-tasks|get-task|keys)\.ts|(portal|desk)[\\/]api[\\/][^\\/]+|auth[\\/]api[\\/](get-me|login)\.ts)|components[\\/](ui[\\/](card|toast|offline-notice|update-prompt)|layouts[\\/](user-menu|require-role))\.tsx)$/,
             },
             {
               // What every field page paints with: its layout, shell, task cards and the completion queue.
@@ -122,10 +122,10 @@ export default defineConfig({
               test: /[\\/]src[\\/]app[\\/]routes[\\/]field[\\/]field-home\.tsx$/,
             },
             {
-              // A task's page: loads when a task is opened, precached for no signal.
+              // A task's page (with the notice for a form whose code has not arrived): loads when a task is opened, precached for no signal.
               name: 'field-task',
               includeDependenciesRecursively: false,
-              test: /[\\/]src[\\/](features[\\/]field[\\/]lib[\\/]geo-uri\.ts|app[\\/]routes[\\/]field[\\/]field-task\.tsx)$/,
+              test: /[\\/]src[\\/](features[\\/]field[\\/]lib[\\/]geo-uri\.ts|app[\\/]routes[\\/]field[\\/]field-task\.tsx|components[\\/]ui[\\/]code-boundary\.tsx)$/,
             },
             {
               // The task's unit sketch (drawn through d3-geo) and directions: one small file the task page asks for as it starts, precached for no signal.

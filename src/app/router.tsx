@@ -104,7 +104,7 @@ const routes: RouteObject[] = [
           ...page(() => import('./routes/field/field-shell'), (m) => m.FieldShell),
           children: [
             { path: paths.field, loader: fieldHomeLoader, ...page(() => import('./routes/field/field-home'), (m) => m.FieldHomePage) },
-            { path: paths.fieldTask(), loader: fieldTaskLoader, ...page(() => import('./routes/field/field-task'), (m) => m.FieldTaskPage) },
+            { path: paths.fieldTask(), loader: fieldTaskLoader, ...page(() => import('./routes/field/field-task').then(async (m) => (await m.taskFormsLoaded(), m)), (m) => m.FieldTaskPage) },
             { path: paths.fieldLog, ...page(() => import('./routes/observations/field-log'), (m) => m.FieldLogPage) },
           ],
         },

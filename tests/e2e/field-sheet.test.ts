@@ -209,9 +209,8 @@ describe('the crew’s field sheet on a phone', () => {
     await page.waitForURL(`${baseUrl}/field`);
     const task = tasks[1];
     await openTask(page, task);
-    // The task page asks for its forms as it opens; the signal goes once they have arrived (the service worker of a fresh phone may not hold them yet).
-    await page.waitForLoadState('networkidle');
-
+    // The signal goes as soon as the task shows: on a fresh phone the service worker may not hold the forms yet,
+    // and the page must have them already (field-task.tsx fetches them before it shows).
     await context.setOffline(true);
     await page.getByRole('button', { name: 'Mark done' }).click();
     const form = page.getByRole('form', { name: 'Mark done' });
@@ -258,6 +257,31 @@ describe('the crew’s field sheet on a phone', () => {
     expect((await taskById(task.id)).photos).toHaveLength(1);
     await screenshot(page, 'field-back-online-360');
     assertClean();
+    await context.close();
+  });
+
+  it('says so when the Mark done form has not reached the phone and there is no signal, then opens it once it can', async () => {
+    // A fresh phone: no service worker yet, and the form's code cannot be fetched (no signal when it was asked for).
+    const context = await browser.newContext({ viewport: { width: 360, height: 740 }, isMobile: true, hasTouch: true, timezoneId: 'America/Chicago', serviceWorkers: 'block' });
+    const page = await context.newPage();
+    const { errors } = watchPage(page);
+    const blocked = /\/assets\/complete-form-[^/]+\.js$/;
+    await context.route(blocked, (route) => route.abort('internetdisconnected'));
+    await signIn(page, baseUrl, 'crew@browseline.test');
+    await page.waitForURL(`${baseUrl}/field`);
+    const task = tasks[2]; // opened only: the next journey marks it done
+    await openTask(page, task);
+    await page.getByRole('button', { name: 'Mark done' }).click();
+    const notice = page.getByRole('alert').filter({ hasText: 'The Mark done form has not reached this phone yet' });
+    await poll(() => notice.count()).toBe(1);
+    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe(task.name); // the page stays, no crash
+    await screenshot(page, 'field-form-not-loaded-360');
+
+    // The signal is back: a tap on "Try again" opens the form.
+    await context.unroute(blocked);
+    await notice.getByRole('button', { name: 'Try again' }).click();
+    await poll(() => page.getByRole('form', { name: 'Mark done' }).getByLabel('Done on').count()).toBe(1);
+    expect(errors.filter((e) => !/net::ERR_INTERNET_DISCONNECTED|ERR_FAILED|Failed to fetch|dynamically imported module/.test(e))).toEqual([]);
     await context.close();
   });
 

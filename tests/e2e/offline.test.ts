@@ -149,6 +149,8 @@ describe('the app on a phone with no signal', () => {
     await page.getByRole('button', { name: 'Sign in' }).waitFor();
     await page.waitForLoadState('load');
     expect(await persistedCache(page)).toBeNull();
+    // Nor the copy kept in localStorage as a page is left (lib/persisted-cache.ts).
+    expect(await page.evaluate(() => localStorage.getItem('browseline-cache-unload'))).toBeNull();
     expect(errors.filter((e) => !/net::ERR_INTERNET_DISCONNECTED|ERR_CONNECTION_RESET|ERR_FAILED|Failed to fetch/.test(e))).toEqual([]);
     await context.close();
   });

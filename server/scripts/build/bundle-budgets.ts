@@ -99,6 +99,7 @@ export const OFFLINE_PAGES = [
   'src/features/field/components/directions.tsx',
   'src/features/field/components/complete-form.tsx',
   'src/features/field/components/skip-form.tsx',
+  'src/features/field/components/check-form.tsx',
   'src/features/field/components/calendar-feeds-card.tsx',
   'src/app/layouts/portal-layout.tsx',
   'src/app/routes/portal/portal-home.tsx',

@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useEffect } from 'react';
 import { useFieldHome } from '../../../features/field/api/get-field-home';
 import { useMe } from '../../../features/auth/api/get-me';
 import { useMyTasks } from '../../../features/field/api/get-my-tasks';
@@ -15,6 +15,21 @@ import { formatDateWithWeekday, todayIn } from '../../../../shared/domain/clock'
 // Loaded after the sheet shows: the field sheet's first load is at its 150 KB budget.
 const DuePullsCard = lazy(() => import('../../../features/cameras/components/due-pulls-card').then((m) => ({ default: m.DuePullsCard })));
 
+/**
+ * Once the list shows and the phone is idle, fetches the task page's code, which fetches its forms as it starts
+ * (field-task.tsx): a task opened from here can be marked done even if the signal goes before the service
+ * worker has kept them. Answers a function that cancels it.
+ */
+function preloadTaskPageWhenIdle(): () => void {
+  const preload = () => void import('./field-task').then((m) => m.taskFormsLoaded()).catch(() => undefined);
+  if (typeof window.requestIdleCallback === 'function') {
+    const id = window.requestIdleCallback(preload, { timeout: 2000 });
+    return () => window.cancelIdleCallback(id);
+  }
+  const timer = window.setTimeout(preload, 300);
+  return () => window.clearTimeout(timer);
+}
+
 // Below the fold and rarely used: its code loads after the sheet shows (kept in the offline shell).
 const CalendarFeedsCard = lazy(() => import('../../../features/field/components/calendar-feeds-card').then((m) => ({ default: m.CalendarFeedsCard })));
 
@@ -22,6 +37,8 @@ const CalendarFeedsCard = lazy(() => import('../../../features/field/components/
 function TaskBuckets({ me }: { me: { id: number; role: string } }) {
   const tasks = useMyTasks(me);
   const queue = useCompletionQueue();
+  const shown = Boolean(tasks.data);
+  useEffect(() => (shown ? preloadTaskPageWhenIdle() : undefined), [shown]);
   if (tasks.isPending) return <Loading label="Loading your tasks…" />;
   if (tasks.isError && !tasks.data) return <ErrorPanel error={tasks.error} onRetry={() => tasks.refetch()} />;
   const open = tasks.data.tasks.filter((t) => t.bucket !== 'finished' || queue.waitingFor(t.id));

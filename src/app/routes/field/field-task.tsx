@@ -1,4 +1,4 @@
-import { lazy, Suspense, useEffect, useState } from 'react';
+import { Suspense, useEffect, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { paths } from '../../../config/paths';
 import { parseId } from '../../../lib/route-params';
@@ -16,19 +16,57 @@ import { plannedDates, windowText } from '../../../features/field/lib/task-text'
 import { OFFLINE_MESSAGE } from '../../../features/field/lib/completion-queue';
 import { offersChecks } from '../../../features/field/lib/check-offer';
 import { useMe } from '../../../features/auth/api/get-me';
+import { CodeBoundary, retryableLazy } from '../../../components/ui/code-boundary';
 
-// The forms (and the shared zod schemas they check with) load after the page shows; the page asks for them at once.
+// The forms (and the shared zod schemas they check with) are not in the page's first load (its 150 KB budget).
+// They are fetched when a task opens (the route waits for them: taskFormsLoaded) and by the field sheet while
+// idle (field-home.tsx), and precached for no signal (OFFLINE_PAGES in bundle-budgets.ts). The unit's small map (with the
+// directions) draws through d3-geo. Should a form still be missing with no signal, the page says so and opens it
+// when the signal is back (CodeBoundary).
 const loadCompleteForm = () => import('../../../features/field/components/complete-form');
 const loadSkipForm = () => import('../../../features/field/components/skip-form');
-// The unit's small map (with the directions) draws through d3-geo (shared/domain/map-projection.ts): loaded with the page
-// rather than in its first load, and precached for no signal (OFFLINE_PAGES in bundle-budgets.ts).
+const loadCheckForm = () => import('../../../features/field/components/check-form');
 const loadUnitMap = () => import('../../../features/field/components/unit-map');
-const UnitMap = lazy(() => loadUnitMap().then((m) => ({ default: m.UnitMap })));
-const CompleteForm = lazy(() => loadCompleteForm().then((m) => ({ default: m.CompleteForm })));
-const SkipForm = lazy(() => loadSkipForm().then((m) => ({ default: m.SkipForm })));
-const CheckForm = lazy(() => import('../../../features/field/components/check-form').then((m) => ({ default: m.CheckForm })));
+const loadDirections = () => import('../../../features/field/components/directions');
+
+/** How long opening a task waits for its forms' code before showing the page anyway (a slow phone, a direct link). */
+const TASK_FORMS_WAIT_MS = 2500;
+
+let forms: Promise<void> | null = null;
+
+/**
+ * Starts fetching every form of a task page (once; again after a failure) and answers when they are
+ * all in memory, or when one could not load. Never rejects: the page shows a notice for a missing form.
+ */
+function preloadTaskForms(): Promise<void> {
+  forms ??= Promise.all([loadCompleteForm(), loadSkipForm(), loadCheckForm(), loadUnitMap(), loadDirections()]).then(
+    () => undefined,
+    () => {
+      forms = null;
+    },
+  );
+  return forms;
+}
+
+/**
+ * Fetches the forms and answers once they are in memory, or after `TASK_FORMS_WAIT_MS` at most: the route shows
+ * the page then (router.tsx), so "Mark done" opens even if the signal goes as soon as the task shows. The field
+ * sheet calls it while idle (field-home.tsx), so a task opened from there usually waits for nothing.
+ */
+export function taskFormsLoaded(): Promise<void> {
+  return Promise.race([preloadTaskForms(), new Promise<void>((resolve) => setTimeout(resolve, TASK_FORMS_WAIT_MS))]);
+}
+
+const UnitMap = retryableLazy(() => loadUnitMap().then((m) => m.UnitMap));
+const CompleteForm = retryableLazy(() => loadCompleteForm().then((m) => m.CompleteForm));
+const SkipForm = retryableLazy(() => loadSkipForm().then((m) => m.SkipForm));
+const CheckForm = retryableLazy(() => loadCheckForm().then((m) => m.CheckForm));
 // The directions come in the same small file as the unit's map, so the task's words paint without waiting for them.
-const Directions = lazy(() => import('../../../features/field/components/directions').then((m) => ({ default: m.Directions })));
+const Directions = retryableLazy(() => loadDirections().then((m) => m.Directions));
+const retryPlace = () => {
+  UnitMap.retry();
+  Directions.retry();
+};
 
 function BackLink() {
   return (
@@ -110,9 +148,7 @@ export function FieldTaskPage() {
   const queue = useCompletionQueue();
   const [mode, setMode] = useState<'view' | 'done' | 'skip' | 'check'>('view');
   useEffect(() => {
-    void loadCompleteForm().catch(() => undefined);
-    void loadSkipForm().catch(() => undefined);
-    void loadUnitMap().catch(() => undefined);
+    void preloadTaskForms();
   }, []);
   if (!id || (task.isError && task.error instanceof ApiError && task.error.status === 404)) {
     return (
@@ -164,10 +200,12 @@ export function FieldTaskPage() {
           ))}
         </ul>
       ) : null}
-      <Suspense fallback={<div className="aspect-[8/5] w-full rounded border border-rule bg-paper" aria-hidden />}>
-        <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
-        <Directions location={t.location} label={t.unitName} />
-      </Suspense>
+      <CodeBoundary what="The unit’s map" onRetry={retryPlace}>
+        <Suspense fallback={<div className="aspect-[8/5] w-full rounded border border-rule bg-paper" aria-hidden />}>
+          <UnitMap geometry={t.unitGeometry} kind={t.unitKind} name={t.unitName} photos={t.photos} />
+          <Directions location={t.location} label={t.unitName} />
+        </Suspense>
+      </CodeBoundary>
       <QuantitiesCard task={t} />
       {t.cautions.map((c) => (
         <CautionBox key={c.id} title={c.title}>
@@ -192,23 +230,29 @@ export function FieldTaskPage() {
       ) : null}
       {mode === 'check' ? (
         <Card title="Check this plot">
-          <Suspense fallback={<Loading />}>
-            <CheckForm task={t} userId={me.data?.id ?? 0} onDone={() => setMode('view')} />
-          </Suspense>
+          <CodeBoundary what="The check form" onRetry={CheckForm.retry}>
+            <Suspense fallback={<Loading />}>
+              <CheckForm task={t} userId={me.data?.id ?? 0} onDone={() => setMode('view')} />
+            </Suspense>
+          </CodeBoundary>
         </Card>
       ) : null}
       {open && mode === 'done' ? (
         <Card title="Mark done">
-          <Suspense fallback={<Loading />}>
-            <CompleteForm task={t} onCancel={() => setMode('view')} />
-          </Suspense>
+          <CodeBoundary what="The Mark done form" onRetry={CompleteForm.retry}>
+            <Suspense fallback={<Loading />}>
+              <CompleteForm task={t} onCancel={() => setMode('view')} />
+            </Suspense>
+          </CodeBoundary>
         </Card>
       ) : null}
       {open && mode === 'skip' ? (
         <Card title="Skip this task">
-          <Suspense fallback={<Loading />}>
-            <SkipForm task={t} onCancel={() => setMode('view')} />
-          </Suspense>
+          <CodeBoundary what="The Skip form" onRetry={SkipForm.retry}>
+            <Suspense fallback={<Loading />}>
+              <SkipForm task={t} onCancel={() => setMode('view')} />
+            </Suspense>
+          </CodeBoundary>
         </Card>
       ) : null}
     </div>
