@@ -4,7 +4,7 @@ import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import session from 'express-session';
-import connectPgSimple from 'connect-pg-simple';
+import { SessionStore } from './services/auth/session-store';
 import pg from 'pg';
 import { pinoHttp } from 'pino-http';
 import { config } from './config';
@@ -74,7 +74,10 @@ export function createApp(): Express {
     }),
   );
 
-  const PgStore = connectPgSimple(session);
+  // The session's read also reads its user and firm settings (one round trip per signed-in request).
+  const sessionStore = new SessionStore({ pool: sessionStorePool(), errorLog: (...args: unknown[]) => logger.warn({ args: args.map(String) }, 'session store error'), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 });
+  // Expired rows go now and every 15 minutes after (the store's own timer starts with its first prune).
+  if (!config.isTest) sessionStore.pruneSessions();
   // Signed webhooks are verified on the exact bytes sent, so this path takes its body raw, before the JSON parser.
   app.use('/api/webhooks/payments', express.raw({ type: 'application/json', limit: LIMITS.jsonBodyBytes }));
   // API answers are about one person's data at one moment: no browser or proxy keeps them (a route may say otherwise).
@@ -86,7 +89,7 @@ export function createApp(): Express {
     session({
       name: 'browseline.sid',
       // No touch on every request: a session lasts 14 days from sign-in, and reads stay reads.
-      store: new PgStore({ pool: sessionStorePool(), errorLog: (...args: unknown[]) => logger.warn({ args: args.map(String) }, 'session store error'), tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: config.isTest ? false : 15 * 60 }),
+      store: sessionStore,
       secret: config.sessionSecret,
       resave: false,
       saveUninitialized: false,

@@ -29,8 +29,20 @@ export function contentSecurityPolicy(tileOrigins: readonly string[] = []): stri
 export const PERMISSIONS_POLICY = 'accelerometer=(), autoplay=(), camera=(self), display-capture=(), geolocation=(self), gyroscope=(), magnetometer=(), microphone=(), midi=(), payment=(), usb=(), interest-cohort=()';
 
 /** Middleware (after the session): sets the policy for the signed-in firm, or the strict one. */
+/** The policy text per tile origin, made once each (it is set on every answer). */
+const policies = new Map<string, string>();
+function policyFor(origin: string | null): string {
+  const key = origin ?? '';
+  let policy = policies.get(key);
+  if (policy === undefined) {
+    policy = contentSecurityPolicy(origin ? [origin] : []);
+    if (policies.size < 1000) policies.set(key, policy);
+  }
+  return policy;
+}
+
 export async function firmContentSecurityPolicy(req: Request, res: Response, next: NextFunction): Promise<void> {
   const origin = req.user ? (await requestFirmSettings(req, req.user.firmId)).tileOrigin : null;
-  res.setHeader('Content-Security-Policy', contentSecurityPolicy(origin ? [origin] : []));
+  res.setHeader('Content-Security-Policy', policyFor(origin));
   next();
 }

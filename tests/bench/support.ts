@@ -1,4 +1,5 @@
 /** Small helpers for benchmarks: timing, medians, a bounded HTTP load loop on loopback. */
+import http from 'node:http';
 import { performance } from 'node:perf_hooks';
 
 /** Median of numbers. */
@@ -28,10 +29,23 @@ export async function timeRuns(fn: () => unknown | Promise<unknown>, runs: numbe
 
 /**
  * Keeps `connections` requests in flight against a loopback URL for `durationMs` (and at most
- * `maxRequests`); answers completed requests per second and latency percentiles.
+ * `maxRequests`); answers completed requests per second and latency percentiles. Requests go over
+ * keep-alive connections through node:http, which reads the body's bytes as sent and does not
+ * decompress them (as a load tool does): decompressing is the phone's work, and here it would take
+ * CPU from the server being measured on the same machine.
  */
 export async function load(url: string, opts: { connections: number; durationMs: number; maxRequests: number; headers?: Record<string, string>; expectStatus?: number }) {
   if (!/^http:\/\/127\.0\.0\.1:/.test(url)) throw new Error('benchmarks only target 127.0.0.1');
+  const agent = new http.Agent({ keepAlive: true, maxSockets: opts.connections });
+  const get = () =>
+    new Promise<number>((resolve, reject) => {
+      const req = http.get(url, { agent, headers: opts.headers }, (res) => {
+        res.on('data', () => undefined);
+        res.on('end', () => resolve(res.statusCode ?? 0));
+        res.on('error', reject);
+      });
+      req.on('error', reject);
+    });
   const latencies: number[] = [];
   let done = 0;
   let failed = 0;
@@ -39,9 +53,8 @@ export async function load(url: string, opts: { connections: number; durationMs:
   const worker = async () => {
     while (performance.now() < stopAt && done + failed < opts.maxRequests) {
       const t0 = performance.now();
-      const res = await fetch(url, { headers: opts.headers });
-      await res.arrayBuffer();
-      if (res.status === (opts.expectStatus ?? 200)) done++;
+      const status = await get().catch(() => 0);
+      if (status === (opts.expectStatus ?? 200)) done++;
       else failed++;
       latencies.push(performance.now() - t0);
     }
@@ -49,5 +62,6 @@ export async function load(url: string, opts: { connections: number; durationMs:
   const t0 = performance.now();
   await Promise.all(Array.from({ length: opts.connections }, worker));
   const seconds = (performance.now() - t0) / 1000;
+  agent.destroy();
   return { rps: done / seconds, done, failed, p50: percentile(latencies, 50), p95: percentile(latencies, 95) };
 }

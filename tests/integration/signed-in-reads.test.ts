@@ -5,11 +5,12 @@
  */
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import request from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { makeFirm, makeProperty, makeUser, PASSWORD } from '../support/factories';
 import { signedInAgent, testApp, type Agent } from '../support/test-app';
 import { readSessionUser } from '../../server/services/auth/passport';
 import { User } from '../../server/models';
+import { sequelize } from '../../server/db/sequelize';
 
 let ctx: Awaited<ReturnType<typeof makeFirm>>;
 let consultant: Agent;
@@ -40,6 +41,21 @@ describe('the session user', () => {
     const user = await readSessionUser(ctx.users.consultant.id);
     expect(user).toEqual({ id: ctx.users.consultant.id, email: ctx.users.consultant.email, name: ctx.users.consultant.name, role: 'consultant', firmId: ctx.firm.id, firmName: ctx.firm.name, firmTimezone: ctx.firm.timezone, firmAreaUnit: 'acres', firmLengthUnit: 'feet', clientId: null });
     expect(Object.keys(user!)).not.toContain('passwordHash');
+  });
+
+  it('is read with the session itself: a signed-in read makes no query of its own for the user or the firm settings', async () => {
+    const spy = vi.spyOn(sequelize, 'query');
+    try {
+      const res = await consultant.get(`/api/properties/${propertyId}/units`);
+      expect(res.status).toBe(200);
+      const sqls = spy.mock.calls.map(([sql]) => String(typeof sql === 'object' && sql !== null && 'query' in sql ? (sql as { query: string }).query : sql));
+      expect(sqls.filter((q) => /FROM users u JOIN firms f/.test(q))).toEqual([]);
+      expect(sqls.filter((q) => /settings->>'idleTimeoutHours'/.test(q))).toEqual([]);
+      // The firm's answer headers still come from its settings (read along with the session).
+      expect(res.headers['content-security-policy']).toMatch(/default-src 'self'/);
+    } finally {
+      spy.mockRestore();
+    }
   });
 
   it('signs out a deactivated user on the next request, and a role change applies at once', async () => {

@@ -8,6 +8,10 @@ import { verifyPassword } from './passwords';
 import { AppError } from '../../errors';
 import { usableZone } from '../clock';
 import type { SessionUser } from '../../../shared/schemas/auth';
+import type { Request } from 'express';
+import { firmSettingsOf, sessionUnits, sessionUserOf, type SessionUserRow } from './session-user';
+import { SESSION_USER_COLUMNS, takeUserReadAlong } from './session-store';
+import { primeRequestFirmSettings } from '../firm/request-firm-settings';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -21,11 +25,6 @@ declare module 'express-session' {
   interface SessionData {
     csrfToken?: string;
   }
-}
-
-/** The firm's display units from its settings (anything unknown reads as acres and feet). */
-function sessionUnits(area: unknown, length: unknown): Pick<SessionUser, 'firmAreaUnit' | 'firmLengthUnit'> {
-  return { firmAreaUnit: area === 'hectares' ? 'hectares' : 'acres', firmLengthUnit: length === 'metres' ? 'metres' : 'feet' };
 }
 
 /** The session view of a user. */
@@ -66,22 +65,30 @@ passport.serializeUser((user, done) => done(null, user.id));
  * authorization and the answers need (never the password hash, no model instances).
  */
 export async function readSessionUser(id: number): Promise<SessionUser | null> {
-  const rows = await sequelize.query<SessionUser>(
-    `SELECT u.id, u.email, u.name, u.role, u.firm_id AS "firmId", f.name AS "firmName", f.timezone AS "firmTimezone", f.settings->>'areaUnit' AS "firmAreaUnit", f.settings->>'lengthUnit' AS "firmLengthUnit", u.client_id AS "clientId"
-     FROM users u JOIN firms f ON f.id = u.firm_id WHERE u.id = $1 AND u.active`,
-    { bind: [id], type: QueryTypes.SELECT },
-  );
-  const user = rows[0];
-  return user ? { ...user, firmTimezone: usableZone(user.firmTimezone), ...sessionUnits(user.firmAreaUnit, user.firmLengthUnit) } : null;
+  const row = await readSessionUserRow(id);
+  return row ? sessionUserOf(row) : null;
 }
 
-passport.deserializeUser((id: number, done) => {
+async function readSessionUserRow(id: number): Promise<SessionUserRow | null> {
+  const rows = await sequelize.query<SessionUserRow>(`SELECT ${SESSION_USER_COLUMNS} FROM users u JOIN firms f ON f.id = u.firm_id WHERE u.id = $1 AND u.active`, {
+    bind: [id],
+    type: QueryTypes.SELECT,
+  });
+  return rows[0] ?? null;
+}
+
+passport.deserializeUser((req: Request, id: number, done: (err: unknown, user?: Express.User | false) => void) => {
   // A session from before ids were numbers, or tampered with, is simply signed out.
   if (!Number.isSafeInteger(id)) return done(null, false);
-  readSessionUser(id).then(
-    (user) => done(null, user ?? false),
-    (err: unknown) => done(err),
-  );
+  const signedIn = (row: SessionUserRow | null) => {
+    if (!row) return done(null, false);
+    primeRequestFirmSettings(req, firmSettingsOf(row));
+    return done(null, sessionUserOf(row));
+  };
+  // Usually read along with the session itself (session-store.ts): no query of its own.
+  const along = takeUserReadAlong(req.sessionID, id);
+  if (along) return signedIn(along);
+  readSessionUserRow(id).then(signedIn, (err: unknown) => done(err));
 });
 
 export { passport };

@@ -37,6 +37,11 @@ export async function readFirmSettings(firmId: number): Promise<RequestFirmSetti
   return { tileOrigin: tileOriginOf(rows[0]?.tile), idleTimeoutHours: Number.isFinite(idle) && idle > 0 ? idle : DEFAULT_IDLE_TIMEOUT_HOURS };
 }
 
+/** Sets this request's firm settings, read along with its session user (passport.ts). */
+export function primeRequestFirmSettings(req: Request, settings: RequestFirmSettings): void {
+  memo.set(req, Promise.resolve(settings));
+}
+
 /** The signed-in user's firm settings for this request (read once, shared by the middlewares). */
 export function requestFirmSettings(req: Request, firmId: number): Promise<RequestFirmSettings> {
   let found = memo.get(req);
