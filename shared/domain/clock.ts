@@ -40,26 +40,19 @@ function partsFormatter(zone: string): Intl.DateTimeFormat {
 
 /** Intl's supported zones as a set, made once (building the list of some 400 names on every call cost each signed-in request). */
 let supportedZones: ReadonlySet<string> | null | undefined;
-/** What each zone name was found to be, where the runtime cannot list its zones. */
-const zoneVerdicts = new Map<string, boolean>();
 
 /** True when `zone` is an IANA time zone this runtime knows (Intl's supported zones, plus "UTC"). */
 export function isTimeZone(zone: unknown): zone is string {
   if (typeof zone !== 'string' || zone.length === 0 || zone.length > 64) return false;
   if (zone === 'UTC') return true;
-  if (supportedZones === undefined) supportedZones = typeof Intl.supportedValuesOf === 'function' ? new Set(Intl.supportedValuesOf('timeZone')) : null;
+  supportedZones ??= typeof Intl.supportedValuesOf === 'function' ? new Set(Intl.supportedValuesOf('timeZone')) : null;
   if (supportedZones) return supportedZones.has(zone);
-  let verdict = zoneVerdicts.get(zone);
-  if (verdict === undefined) {
-    try {
-      new Intl.DateTimeFormat('en-US', { timeZone: zone });
-      verdict = true;
-    } catch {
-      verdict = false;
-    }
-    if (zoneVerdicts.size < 1000) zoneVerdicts.set(zone, verdict);
+  try {
+    new Intl.DateTimeFormat('en-US', { timeZone: zone });
+    return true;
+  } catch {
+    return false;
   }
-  return verdict;
 }
 
 /** A usable zone: the firm's, or the default when a stored value is missing or unknown. */

@@ -19,7 +19,7 @@ import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-d
 import { freePort } from '../support/e2e-setup';
 import { shapefileBomb } from '../support/zip-bytes';
 import { tiffHeaderOnly } from '../support/tiff-bytes';
-import { median, percentile } from './support';
+import { median, percentile, waitForHealth } from './support';
 
 const root = path.resolve(import.meta.dirname, '../..');
 const tsx = path.join(root, 'node_modules/.bin/tsx');
@@ -72,14 +72,7 @@ async function main() {
   const server = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server/index.ts')], { env, stdio: process.env.BENCH_SERVER_LOG ? 'inherit' : 'ignore', cwd: root });
   const results: Record<string, string> = {};
   try {
-    for (let i = 0; i < 150; i++) {
-      try {
-        if ((await fetch(`${base}/api/health`)).ok) break;
-      } catch {
-        /* starting */
-      }
-      await sleep(200);
-    }
+    await waitForHealth(base);
     const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@browseline.test', password: 'bench-password-1' }) });
     const cookie = (login.headers.get('set-cookie') ?? '').split(';')[0];
     const csrf = ((await login.json()) as { csrfToken: string }).csrfToken;

@@ -12,7 +12,7 @@ import { readGeoFile } from '../../server/services/geo-files';
 import { generateLargeKml } from '../support/geo-fixtures-large';
 import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
-import { load, median, percentile, timeRuns } from './support';
+import { load, median, percentile, timeRuns, waitForHealth } from './support';
 import { weekLimit, weekPerDay } from '../../shared/schemas/task';
 
 type Loaded = Awaited<ReturnType<typeof load>>;
@@ -154,14 +154,7 @@ async function http() {
   if (withGrowth) execFileSync(tsx, [path.join(root, 'tests/bench/seed-scale.ts')], { env, stdio: 'inherit' });
   const server = spawn(tsx, [path.join(root, 'server/index.ts')], { env, stdio: 'ignore' });
   try {
-    for (let i = 0; i < 150; i++) {
-      try {
-        if ((await fetch(`${base}/api/health`)).ok) break;
-      } catch {
-        /* starting */
-      }
-      await new Promise((r) => setTimeout(r, 200));
-    }
+    await waitForHealth(base);
     const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@browseline.test', password: 'bench-password-1' }) });
     const cookie = (login.headers.get('set-cookie') ?? '').split(';')[0];
     const props = (await (await fetch(`${base}/api/properties`, { headers: { cookie } })).json()) as { data: { id: number }[] };

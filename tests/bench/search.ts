@@ -9,7 +9,7 @@ import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
-import { median, percentile } from './support';
+import { median, percentile, waitForHealth } from './support';
 
 const QUERIES = ['Client 017', 'clent 03', 'property 12-2', 'propety 3-1', 'INV-2026-0042', 'inv 2026 01', '0093', 'landowner', 'zzzzqq', 'Consultant'];
 const ROUNDS = 25;
@@ -43,14 +43,7 @@ async function timed(url: string, cookie?: string): Promise<{ ms: number; hits: 
 }
 
 try {
-  for (let i = 0; i < 150; i++) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) break;
-    } catch {
-      /* starting */
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
+  await waitForHealth(base);
   const one = await signIn('scale1@browseline.test');
   const ten = await signIn('scale10@browseline.test');
   const times = { health: [] as number[], one: [] as number[], ten: [] as number[] };

@@ -9,7 +9,7 @@ import crypto from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
-import { median, percentile } from './support';
+import { median, percentile, waitForHealth } from './support';
 
 const PAIRS = 20;
 const root = path.resolve(import.meta.dirname, '../..');
@@ -31,14 +31,7 @@ async function signUp(email: string): Promise<{ ms: number; status: number; body
 }
 
 try {
-  for (let i = 0; i < 150; i++) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) break;
-    } catch {
-      /* starting */
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
+  await waitForHealth(base);
   const csrf = await fetch(`${base}/api/auth/csrf`);
   session = { cookie: (csrf.headers.get('set-cookie') ?? '').split(';')[0]!, token: ((await csrf.json()) as { csrfToken: string }).csrfToken };
   const used = `used-${crypto.randomBytes(4).toString('hex')}@example.test`;

@@ -15,6 +15,18 @@ export function percentile(values: number[], p: number): number {
   return s[Math.min(s.length - 1, Math.max(0, Math.ceil((p / 100) * s.length) - 1))];
 }
 
+/** Waits until the server at `base` answers GET /api/health (at most 30 s; a bench then fails on its first request). */
+export async function waitForHealth(base: string): Promise<void> {
+  for (let i = 0; i < 150; i++) {
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return;
+    } catch {
+      /* starting */
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+}
+
 /** Runs fn `runs` times after `warmup` runs; answers the durations in ms. */
 export async function timeRuns(fn: () => unknown | Promise<unknown>, runs: number, warmup = 1): Promise<number[]> {
   for (let i = 0; i < warmup; i++) await fn();

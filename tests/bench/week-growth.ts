@@ -13,7 +13,7 @@ import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { dropDatabase, freshDatabase, startTestCluster } from '../support/test-db';
 import { freePort } from '../support/e2e-setup';
-import { median } from './support';
+import { median, waitForHealth } from './support';
 import { weekLimit, weekPerDay } from '../../shared/schemas/task';
 
 const root = path.resolve(import.meta.dirname, '../..');
@@ -39,14 +39,7 @@ async function main() {
   execFileSync(tsx, [path.join(root, 'tests/bench/seed-scale.ts')], { env, stdio: 'inherit' });
   const server = spawn(tsx, [path.join(root, 'server/index.ts')], { env, stdio: 'ignore' });
   try {
-    for (let i = 0; i < 150; i++) {
-      try {
-        if ((await fetch(`${base}/api/health`)).ok) break;
-      } catch {
-        /* starting */
-      }
-      await new Promise((r) => setTimeout(r, 200));
-    }
+    await waitForHealth(base);
     const iso = (d: Date) => d.toISOString().slice(0, 10);
     const now = new Date();
     const monday = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate() - ((now.getUTCDay() + 6) % 7)));

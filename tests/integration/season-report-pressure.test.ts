@@ -4,27 +4,14 @@
  * its heading with its table. The PDF is kept in tests/.artifacts for a look (pdftoppm → PNG).
  */
 import { describe, expect, it } from 'vitest';
-import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { seedDemo } from '../../server/db/seeds/demo';
 import { Property } from '../../server/models';
-import { signedInAgent, type Agent } from '../support/test-app';
+import { signedInAgent } from '../support/test-app';
+import { binary, textOfPdf } from '../support/firm-settings';
 
 const ARTIFACTS = path.resolve(import.meta.dirname, '../.artifacts');
-
-async function pdfBytes(agent: Agent, url: string): Promise<Buffer> {
-  const res = await agent
-    .get(url)
-    .buffer(true)
-    .parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
-  expect(res.status).toBe(200);
-  return res.body as Buffer;
-}
 
 describe('season report: hunting pressure and sits', () => {
   it('prints one line per stand with every figure, and the heading on the same page as its table', async () => {
@@ -44,10 +31,11 @@ describe('season report: hunting pressure and sits', () => {
     expect(harvest.status, JSON.stringify(harvest.body)).toBe(201);
     const made = await consultant.post(`/api/properties/${property.id}/season-reports`).set('X-CSRF-Token', consultant.csrf).send({ season });
     expect(made.status, JSON.stringify(made.body)).toBe(201);
-    const pdf = await pdfBytes(consultant, made.body.data.pdfUrl);
+    const { status, body: pdf } = await binary(consultant, made.body.data.pdfUrl);
+    expect(status).toBe(200);
     fs.mkdirSync(ARTIFACTS, { recursive: true });
     fs.writeFileSync(path.join(ARTIFACTS, 'season-report-pressure.pdf'), pdf);
-    const pages = execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString().split('\f');
+    const pages = textOfPdf(pdf).split('\f');
     const page = pages.find((p) => p.includes('Hunting pressure and sits'));
     expect(page, 'the section is printed').toBeDefined();
     const lines = page!.split('\n');

@@ -3,13 +3,12 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../db/sequelize';
-import { Firm, User } from '../../models';
+import { User } from '../../models';
 import { verifyPassword } from './passwords';
-import { AppError } from '../../errors';
-import { usableZone } from '../clock';
+import { AppError, unauthorized } from '../../errors';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { Request } from 'express';
-import { firmSettingsOf, sessionUnits, sessionUserOf, type SessionUserRow } from './session-user';
+import { firmSettingsOf, sessionUserOf, type SessionUserRow } from './session-user';
 import { SESSION_USER_COLUMNS, takeUserReadAlong } from './session-store';
 import { primeRequestFirmSettings } from '../firm/request-firm-settings';
 
@@ -27,20 +26,11 @@ declare module 'express-session' {
   }
 }
 
-/** The session view of a user. */
-export async function toSessionUser(user: User & { Firm?: Firm }): Promise<SessionUser> {
-  const firm = user.Firm ?? (await Firm.findByPk(user.firmId, { attributes: ['name', 'timezone', 'settings'] }));
-  return {
-    id: user.id,
-    email: user.email,
-    name: user.name,
-    role: user.role,
-    firmId: user.firmId,
-    firmName: firm?.name ?? '',
-    firmTimezone: usableZone(firm?.timezone),
-    ...sessionUnits(firm?.settings?.areaUnit, firm?.settings?.lengthUnit),
-    clientId: user.clientId,
-  };
+/** The session view of a signed-in user (the same read as every request's, so both agree). */
+export async function toSessionUser(user: Pick<User, 'id'>): Promise<SessionUser> {
+  const row = await readSessionUserRow(user.id);
+  if (!row) throw unauthorized('This account is not active. Ask your firm’s owner to turn it back on.');
+  return sessionUserOf(row);
 }
 
 passport.use(
@@ -77,18 +67,23 @@ async function readSessionUserRow(id: number): Promise<SessionUserRow | null> {
   return rows[0] ?? null;
 }
 
+/** Hands passport the session's user (or false when it is no longer active), priming the request's firm settings. */
+function signedIn(req: Request, row: SessionUserRow | null, done: (err: unknown, user?: Express.User | false) => void): void {
+  if (!row) return done(null, false);
+  primeRequestFirmSettings(req, firmSettingsOf(row));
+  done(null, sessionUserOf(row));
+}
+
 passport.deserializeUser((req: Request, id: number, done: (err: unknown, user?: Express.User | false) => void) => {
   // A session from before ids were numbers, or tampered with, is simply signed out.
   if (!Number.isSafeInteger(id)) return done(null, false);
-  const signedIn = (row: SessionUserRow | null) => {
-    if (!row) return done(null, false);
-    primeRequestFirmSettings(req, firmSettingsOf(row));
-    return done(null, sessionUserOf(row));
-  };
   // Usually read along with the session itself (session-store.ts): no query of its own.
   const along = takeUserReadAlong(req.sessionID, id);
-  if (along) return signedIn(along);
-  readSessionUserRow(id).then(signedIn, (err: unknown) => done(err));
+  if (along) return signedIn(req, along, done);
+  readSessionUserRow(id).then(
+    (row) => signedIn(req, row, done),
+    (err: unknown) => done(err),
+  );
 });
 
 export { passport };

@@ -1,7 +1,6 @@
 /** The signed-in user as a session carries it: the raw row read with the session, and its session view. */
 import { usableZone } from '../clock';
-import { tileOriginOf, type RequestFirmSettings } from '../firm/request-firm-settings';
-import { DEFAULT_IDLE_TIMEOUT_HOURS } from '../../../shared/schemas/firm';
+import { firmSettingsFrom, type RequestFirmSettings } from '../firm/request-firm-settings';
 import type { SessionUser } from '../../../shared/schemas/auth';
 
 /** One row of SESSION_USER_COLUMNS (session-store.ts). */
@@ -21,7 +20,7 @@ export interface SessionUserRow {
 }
 
 /** The firm's display units from its settings (anything unknown reads as acres and feet). */
-export function sessionUnits(area: unknown, length: unknown): Pick<SessionUser, 'firmAreaUnit' | 'firmLengthUnit'> {
+function sessionUnits(area: unknown, length: unknown): Pick<SessionUser, 'firmAreaUnit' | 'firmLengthUnit'> {
   return { firmAreaUnit: area === 'hectares' ? 'hectares' : 'acres', firmLengthUnit: length === 'metres' ? 'metres' : 'feet' };
 }
 
@@ -41,7 +40,4 @@ export function sessionUserOf(row: SessionUserRow): SessionUser {
 }
 
 /** The firm settings every answer needs, from a row. */
-export function firmSettingsOf(row: SessionUserRow): RequestFirmSettings {
-  const idle = Number(row.firmIdleTimeoutHours);
-  return { tileOrigin: tileOriginOf(row.firmTileUrlTemplate), idleTimeoutHours: row.firmIdleTimeoutHours !== null && Number.isFinite(idle) && idle > 0 ? idle : DEFAULT_IDLE_TIMEOUT_HOURS };
-}
+export const firmSettingsOf = (row: SessionUserRow): RequestFirmSettings => firmSettingsFrom(row.firmTileUrlTemplate, row.firmIdleTimeoutHours);

@@ -27,14 +27,19 @@ export function tileOriginOf(template: unknown): string | null {
   }
 }
 
+/** The settings from a firm's stored `tileUrlTemplate` and `idleTimeoutHours` (the JSON's text values). */
+export function firmSettingsFrom(tileUrlTemplate: string | null | undefined, idleTimeoutHours: string | null | undefined): RequestFirmSettings {
+  const idle = Number(idleTimeoutHours);
+  return { tileOrigin: tileOriginOf(tileUrlTemplate), idleTimeoutHours: Number.isFinite(idle) && idle > 0 ? idle : DEFAULT_IDLE_TIMEOUT_HOURS };
+}
+
 /** Reads the settings of a firm (one primary-key query). */
 export async function readFirmSettings(firmId: number): Promise<RequestFirmSettings> {
   const rows = await sequelize.query<{ tile: string | null; idle: string | null }>(
     `SELECT settings->>'tileUrlTemplate' AS tile, settings->>'idleTimeoutHours' AS idle FROM firms WHERE id = :firmId`,
     { replacements: { firmId }, type: QueryTypes.SELECT },
   );
-  const idle = Number(rows[0]?.idle);
-  return { tileOrigin: tileOriginOf(rows[0]?.tile), idleTimeoutHours: Number.isFinite(idle) && idle > 0 ? idle : DEFAULT_IDLE_TIMEOUT_HOURS };
+  return firmSettingsFrom(rows[0]?.tile, rows[0]?.idle);
 }
 
 /** Sets this request's firm settings, read along with its session user (passport.ts). */
@@ -42,7 +47,10 @@ export function primeRequestFirmSettings(req: Request, settings: RequestFirmSett
   memo.set(req, Promise.resolve(settings));
 }
 
-/** The signed-in user's firm settings for this request (read once, shared by the middlewares). */
+/**
+ * The signed-in user's firm settings for this request (read once, shared by the middlewares); a
+ * request whose user came through deserializeUser already has them, read with its session.
+ */
 export function requestFirmSettings(req: Request, firmId: number): Promise<RequestFirmSettings> {
   let found = memo.get(req);
   if (!found) {

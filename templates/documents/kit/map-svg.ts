@@ -22,7 +22,7 @@ import { areaPaint, fmt, labelWidthPt, lineSvg, SYMBOL_HALF_PT, symbolSvg } from
 import { insidePoly, overlaps, polyArea, rectSamples, segmentHitsRect, within, type Poly, type Pt, type Rect } from './map-planar';
 import { z } from 'zod';
 import { areaCentroid } from '../../../shared/domain/centroid';
-import { fitProjection } from '../../../shared/domain/map-projection';
+import { fitProjection, type FittedProjection } from '../../../shared/domain/map-projection';
 
 export interface PlanMapUnit {
   name: string;
@@ -72,21 +72,8 @@ export interface MapBox {
   heightPt: number;
 }
 
-export interface MapProjection {
-  /** Centre of the projection, degrees. */
-  lon0: number;
-  lat0: number;
-  /** Points of drawing per metre of ground, the same on both axes. */
-  ptPerM: number;
-  metresPerDegLon: number;
-  metresPerDegLat: number;
-  /** Longitude/latitude (degrees) to drawing [x, y] in points. */
-  project(lon: number, lat: number): [number, number];
-  /** Drawing [x, y] in points back to [longitude, latitude] in degrees. */
-  invert(xPt: number, yPt: number): [number, number];
-  /** SVG path data of a geometry's polygons (closed rings, holes included) and lines, in points. */
-  path(geometry: Geometry): string;
-}
+/** The plan map's projection: the shared fit (points are its drawing units). */
+export type MapProjection = FittedProjection;
 
 export interface ScaleBarLayout {
   x1Pt: number;
@@ -146,17 +133,7 @@ export function projectionFor(bbox: BBox, box: MapBox, marginPt = 0): MapProject
   if (!(availW > 0 && availH > 0)) {
     throw new DomainValidationError('box', 'The map box is smaller than its margins; give it more room.');
   }
-  const fitted = fitProjection([west, south, east, north], { x: box.xPt, y: box.yPt, width: box.widthPt, height: box.heightPt }, { padding: marginPt, minSpanM: MIN_SPAN_M, digits: 2 });
-  return {
-    lon0: fitted.lon0,
-    lat0: fitted.lat0,
-    ptPerM: fitted.unitsPerMetre,
-    metresPerDegLon: fitted.metresPerDegLon,
-    metresPerDegLat: fitted.metresPerDegLat,
-    project: fitted.project,
-    invert: fitted.invert,
-    path: fitted.path,
-  };
+  return fitProjection([west, south, east, north], { x: box.xPt, y: box.yPt, width: box.widthPt, height: box.heightPt }, { padding: marginPt, minSpanM: MIN_SPAN_M, digits: 2 });
 }
 
 export { escapeXml };
@@ -564,9 +541,9 @@ const arrowXOf = (widthPt: number): number => widthPt - BAND_PAD_PT - 10;
 /** The scale bar left of the north arrow: the longest round distance that fits, in four segments. */
 function scaleBar(layout: FrameLayout, widthPt: number, projection: MapProjection): { bar: ScaleBarLayout; svg: string } {
   const maxBarPt = Math.min(110, layout.frame.widthPt * 0.3);
-  const choice = chooseScaleBar(projection.ptPerM, maxBarPt);
+  const choice = chooseScaleBar(projection.unitsPerMetre, maxBarPt);
   const groundM = choice.ft * METRES_PER_FOOT;
-  const barPt = groundM * projection.ptPerM;
+  const barPt = groundM * projection.unitsPerMetre;
   const x2 = arrowXOf(widthPt) - 30;
   const x1 = x2 - barPt;
   const barY = layout.bandTop + BAND_PAD_PT + 10;

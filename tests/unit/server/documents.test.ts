@@ -221,8 +221,8 @@ describe('plan map SVG', () => {
     const [lonN, latN] = p.invert(centre[0], centre[1] - 100);
     const eastM = WGS84.Inverse(p.lat0, p.lon0, latE, lonE).s12!;
     const northM = WGS84.Inverse(p.lat0, p.lon0, latN, lonN).s12!;
-    expect(Math.abs(relDiff(eastM, 100 / p.ptPerM))).toBeLessThan(1e-6);
-    expect(Math.abs(relDiff(northM, 100 / p.ptPerM))).toBeLessThan(1e-6);
+    expect(Math.abs(relDiff(eastM, 100 / p.unitsPerMetre))).toBeLessThan(1e-6);
+    expect(Math.abs(relDiff(northM, 100 / p.unitsPerMetre))).toBeLessThan(1e-6);
     // Round trip.
     const [lon, lat] = p.invert(...p.project(-90.931, 43.268));
     expect(lon).toBeCloseTo(-90.931, 10);

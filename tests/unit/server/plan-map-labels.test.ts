@@ -27,6 +27,6 @@ describe('the plan map’s area labels', () => {
     expect(label.yPt).toBeCloseTo(y, 6);
     // Outer 640,000 m² at x = 0 less the opening's 180,000 m² at x = −200 m: (0 + 200 × 180,000) / 460,000 = 78.3 m east.
     const [middleX] = map.layout.projection.project(offset(0, 0)[0], offset(0, 0)[1]);
-    expect((label.xPt - middleX) / map.layout.projection.ptPerM).toBeCloseTo(78.3, 0);
+    expect((label.xPt - middleX) / map.layout.projection.unitsPerMetre).toBeCloseTo(78.3, 0);
   });
 });
