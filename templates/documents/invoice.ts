@@ -8,10 +8,9 @@
 import type { Content, TableCell, TDocumentDefinitions } from 'pdfmake/interfaces';
 import { DomainValidationError } from '../../shared/domain/errors';
 import { formatCents } from '../../shared/domain/money';
-import { firmBlock, type LetterheadFirm } from './firm-block';
+import { letterhead, type LetterheadFirm } from './firm-block';
 import { DOC_COLORS, FONT_HEADING, keyValueTable, neverBreakBefore, pageFrame, ruledTableLayout } from './kit/layout';
 
-const CONTENT_WIDTH_PT = 612 - 2 * 54;
 const OCHRE = '#C99A2E';
 const MOSS_TINT = '#EEF3EA';
 
@@ -66,27 +65,12 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
   const issued = invoice.issuedOn ? longDate(invoice.issuedOn) : null;
   const due = invoice.dueOn ? longDate(invoice.dueOn) : null;
 
-  const letterhead: Content = {
-    margin: [0, 0, 0, 14],
-    stack: [
-      {
-        columns: [
-          firmBlock(firm),
-          {
-            width: 'auto',
-            stack: [
-              { text: 'INVOICE', fontSize: 8, bold: true, color: DOC_COLORS.moss, characterSpacing: 1.2, alignment: 'right', margin: [0, 2, 0, 2] },
-              { text: `Invoice ${invoice.number}`, bold: true, fontSize: 10, alignment: 'right' },
-              ...(issued ? [{ text: `Issued ${issued}`, fontSize: 9, color: DOC_COLORS.slate, alignment: 'right' as const }] : []),
-              ...(due ? [{ text: `Due ${due}`, fontSize: 9, color: DOC_COLORS.slate, alignment: 'right' as const }] : []),
-            ],
-          },
-        ],
-        columnGap: 16,
-      },
-      { canvas: [{ type: 'line', x1: 0, y1: 8, x2: CONTENT_WIDTH_PT, y2: 8, lineWidth: 1, lineColor: DOC_COLORS.rule }] },
-    ],
-  };
+  const head = letterhead(firm, 'Invoice', [
+    { text: `Invoice ${invoice.number}`, bold: true },
+    ...(issued ? [{ text: `Issued ${issued}` }] : []),
+    ...(due ? [{ text: `Due ${due}` }] : []),
+  ]);
+
 
   const bannerText =
     invoice.status === 'draft' ? { head: 'DRAFT — not issued yet', color: OCHRE, tint: '#FBF5E6' } : invoice.status === 'void' ? { head: 'VOID — nothing is due on this invoice', color: DOC_COLORS.clay, tint: DOC_COLORS.clayTint } : invoice.status === 'paid' ? { head: 'PAID — thank you', color: DOC_COLORS.moss, tint: MOSS_TINT } : null;
@@ -173,7 +157,7 @@ export function invoiceDocument(input: InvoiceDocumentInput): TDocumentDefinitio
     watermark: invoice.status === 'draft' || invoice.status === 'void' ? { text: invoice.status.toUpperCase(), color: invoice.status === 'void' ? DOC_COLORS.clay : OCHRE, opacity: 0.09, bold: true, font: FONT_HEADING, fontSize: 110 } : undefined,
     info: { title: `Invoice ${invoice.number}`, author: firm.name, subject: `${KIND_TITLE[invoice.kind]} for ${input.client.name}` },
     content: [
-      letterhead,
+      head,
       ...banner,
       { text: KIND_TITLE[invoice.kind], style: 'title' },
       { text: `For ${input.client.name}${input.property ? `, ${input.property.name}` : ''}`, style: 'subtitle' },

@@ -13,14 +13,7 @@ import { KIND_STYLES, UNIT_KINDS, type UnitKind } from '../../shared/domain/unit
 import { FEET_PER_MILE, formatArea, formatLength as formatLengthIn, DEFAULT_DISPLAY_UNITS, type DisplayUnits } from '../../shared/units';
 import { firmBlock } from './firm-block';
 import { kindSwatchSvg, PlanMapOverlaysSchema, renderPlanMap } from './kit/map-svg';
-import {
-  cautionBox,
-  DOC_COLORS,
-  FONT_HEADING,
-  keyValueTable,
-  pageFrame,
-  ruledTableLayout,
-} from './kit/layout';
+import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, ruledTableLayout, CONTENT_WIDTH_PT } from './kit/layout';
 
 const name = (max: number) => z.string().trim().min(1, { message: 'must not be empty' }).max(max, { message: `must be at most ${max} characters` });
 const measure = z.number().finite().nonnegative({ message: 'must be zero or more' });
@@ -70,7 +63,6 @@ export type PlanSummaryInput = z.input<typeof PlanSummaryInputSchema>;
 type PlanSummaryData = z.output<typeof PlanSummaryInputSchema>;
 type SummaryUnit = PlanSummaryData['units'][number];
 
-const CONTENT_WIDTH_PT = 612 - 2 * 54;
 const MAP_HEIGHT_PT = 430;
 /** Height a letterhead (logo and contact lines) takes from the map, so the summary stays on two pages. */
 const LETTERHEAD_HEIGHT_PT = 90;

@@ -16,10 +16,9 @@ import { DomainValidationError } from '../../shared/domain/errors';
 import { formatArea, type AreaUnit } from '../../shared/units';
 import { AGE_CLASS_LABELS } from '../../shared/schemas/results';
 import { barChartSvg } from './kit/bar-chart-svg';
-import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, ruledTableLayout } from './kit/layout';
+import { cautionBox, DOC_COLORS, FONT_HEADING, keyValueTable, pageFrame, ruledTableLayout, CONTENT_WIDTH_PT } from './kit/layout';
 import { seasonChecksSection, type SeasonReportChecks } from './season-report-checks';
 
-const CONTENT_WIDTH_PT = 612 - 2 * 54;
 /** DESIGN.md-like chart colours: moss for bucks, clay for does, ochre for fawns. */
 const BUCK_COLOR = DOC_COLORS.moss;
 const DOE_COLOR = DOC_COLORS.clay;

@@ -78,7 +78,10 @@ export interface PageFrame {
   pageMargins: Margins;
 }
 
-const SIDE_MARGIN_PT = 54;
+/** The side margins of every document page (US Letter). */
+export const SIDE_MARGIN_PT = 54;
+/** US Letter width less the side margins. */
+export const CONTENT_WIDTH_PT = 612 - 2 * SIDE_MARGIN_PT;
 
 function frameHeader(options: PageFrameOptions): DynamicContent {
   const side = SIDE_MARGIN_PT;

@@ -3,37 +3,21 @@
  */
 import { formatCents } from '../../../shared/domain/money';
 import { formatArea } from '../../../shared/units';
-import { firmBlock } from '../firm-block';
+import { letterhead as firmLetterhead } from '../firm-block';
 import { DOC_COLORS, FONT_HEADING, keyValueTable } from '../kit/layout';
 import type { Content } from 'pdfmake/interfaces';
 import { unitsOf } from './format';
 import type { DocData } from './input';
-import { CONTENT_WIDTH_PT, MAP_MAX_HEIGHT_PT, MAP_MIN_HEIGHT_PT, PAGE_INNER_HEIGHT_PT } from './look';
+import { MAP_MAX_HEIGHT_PT, MAP_MIN_HEIGHT_PT, PAGE_INNER_HEIGHT_PT } from './look';
 
 /** Page 1's letterhead: the firm, and the proposal's number, version and dates. */
 export function letterhead(data: DocData, preparedOn: string, validUntil: string | null): Content {
   const { firm, proposal } = data;
-  return {
-    margin: [0, 0, 0, 14],
-    stack: [
-      {
-        columns: [
-          firmBlock(firm),
-          {
-            width: 'auto',
-            stack: [
-              { text: 'PROPOSAL', fontSize: 8, bold: true, color: DOC_COLORS.moss, characterSpacing: 1.2, alignment: 'right', margin: [0, 2, 0, 2] },
-              { text: `Proposal ${proposal.number} · version ${proposal.version}`, bold: true, fontSize: 10, alignment: 'right' },
-              { text: `Prepared ${preparedOn}`, fontSize: 9, color: DOC_COLORS.slate, alignment: 'right' },
-              ...(validUntil ? [{ text: `Valid until ${validUntil}`, fontSize: 9, color: DOC_COLORS.slate, alignment: 'right' as const }] : []),
-            ],
-          },
-        ],
-        columnGap: 16,
-      },
-      { canvas: [{ type: 'line', x1: 0, y1: 8, x2: CONTENT_WIDTH_PT, y2: 8, lineWidth: 1, lineColor: DOC_COLORS.rule }] },
-    ],
-  };
+  return firmLetterhead(firm, 'Proposal', [
+    { text: `Proposal ${proposal.number} · version ${proposal.version}`, bold: true },
+    { text: `Prepared ${preparedOn}` },
+    ...(validUntil ? [{ text: `Valid until ${validUntil}` }] : []),
+  ]);
 }
 
 /** The title, who it is for, and the facts (client, property, locality, dates). */

@@ -12,10 +12,7 @@ export const MOSS_TINT = '#EEF3EA';
 /** Greyed text of options that are not included (slate is the lightest text colour that passes AA). */
 export const GREYED = DOC_COLORS.slate;
 
-const PAGE_WIDTH_PT = 612;
-const SIDE_MARGIN_PT = 54;
-/** US Letter width less the side margins. */
-export const CONTENT_WIDTH_PT = PAGE_WIDTH_PT - 2 * SIDE_MARGIN_PT;
+export { CONTENT_WIDTH_PT } from '../kit/layout';
 /** US Letter height less pageFrame's top (70) and bottom (60) margins. */
 export const PAGE_INNER_HEIGHT_PT = 792 - 70 - 60;
 /** The plan map is never drawn shorter or taller than these. */
